@@ -1,0 +1,200 @@
+package org.clearance.ground;
+
+import java.util.Objects;
+import java.util.Optional;
+import java.util.function.Consumer;
+import org.clearance.InputException;
+import org.clearance.survey.PointChunk;
+
+/**
+ * Builds a {@link GroundModel} from a stream of point chunks in one pass.
+ *
+ * <p>While the survey streams by, the builder keeps only two sparse rasters: the lowest point per
+ * cell over all non-noise points, and the lowest class-2 (ground) point per cell. {@link #build()}
+ * then makes the terrain block by block (dense rasters of {@code blockSize} plus an overlap), so
+ * memory stays bounded by the corridor's area:
+ * <ul>
+ *   <li>class 2 used: the class-2 minimum surface, holes (under buildings, dense canopy) filled
+ *       by Laplace inpainting;
+ *   <li>filter used: SMRF (Pingel, Clarke &amp; McBride 2013) over the minimum surface of all points.
+ * </ul>
+ * Points of class 7 (low noise) and 18 (high noise) and withheld points are ignored.
+ *
+ * <p>Usage: {@code GroundModelBuilder b = new GroundModelBuilder(options); survey.forEach(b);
+ * GroundModel g = b.build();} or {@link #build(Iterable, GroundOptions)}.
+ */
+public final class GroundModelBuilder implements Consumer<PointChunk> {
+  /** ASPRS class 2: ground. */
+  static final int CLASS_GROUND = 2;
+  /** ASPRS class 7: low point (noise). */
+  static final int CLASS_LOW_NOISE = 7;
+  /** ASPRS class 18: high noise. */
+  static final int CLASS_HIGH_NOISE = 18;
+
+  private final GroundOptions options;
+  private SparseGrid surface;
+  private SparseGrid classified;
+  private long points;
+  private long groundPoints;
+
+  /** @throws NullPointerException when options is null */
+  public GroundModelBuilder(GroundOptions options) {
+    this.options = Objects.requireNonNull(options, "options");
+    double cell = options.smrf().cellSize();
+    this.surface = new SparseGrid(cell);
+    this.classified = options.source() == GroundOptions.Source.FILTER ? null : new SparseGrid(cell);
+  }
+
+  /** Shortcut: feeds every chunk to a new builder and builds. */
+  public static GroundModel build(Iterable<PointChunk> chunks, GroundOptions options) {
+    GroundModelBuilder b = new GroundModelBuilder(options);
+    chunks.forEach(b);
+    return b.build();
+  }
+
+  /** True for points every ground step ignores: noise classes 7 and 18, and withheld points. */
+  static boolean isIgnored(PointChunk chunk, int i) {
+    int cls = chunk.classification()[i];
+    return cls == CLASS_LOW_NOISE || cls == CLASS_HIGH_NOISE
+        || (chunk.flags()[i] & PointChunk.FLAG_WITHHELD) != 0;
+  }
+
+  /**
+   * Adds a chunk's points (coordinates in metres).
+   *
+   * @throws IllegalStateException after {@link #build()}
+   */
+  @Override
+  public void accept(PointChunk chunk) {
+    if (surface == null) {
+      throw new IllegalStateException("builder already built");
+    }
+    double[] x = chunk.x();
+    double[] y = chunk.y();
+    double[] z = chunk.z();
+    short[] cls = chunk.classification();
+    for (int i = 0, n = chunk.size(); i < n; i++) {
+      if (isIgnored(chunk, i)) {
+        continue;
+      }
+      points++;
+      surface.accumulateMin(x[i], y[i], z[i]);
+      if (cls[i] == CLASS_GROUND) {
+        groundPoints++;
+        if (classified != null) {
+          classified.accumulateMin(x[i], y[i], z[i]);
+        }
+      }
+    }
+  }
+
+  /**
+   * Makes the terrain. The builder cannot be used afterwards.
+   *
+   * @throws InputException when the options demand class-2 points and the survey has none
+   * @throws IllegalStateException when called twice
+   */
+  public GroundModel build() {
+    if (surface == null) {
+      throw new IllegalStateException("builder already built");
+    }
+    boolean useClassified = switch (options.source()) {
+      case CLASSIFIED -> true;
+      case FILTER -> false;
+      case AUTO -> points > 0 && groundPoints >= options.minGroundShare() * points;
+    };
+    if (useClassified && groundPoints == 0) {
+      throw new InputException((String) null, null, "classification",
+          "the survey has no ground (class 2) points; let the ground filter find the ground");
+    }
+    SmrfOptions smrf = options.smrf();
+    SparseGrid terrain = new SparseGrid(smrf.cellSize());
+    int margin = (int) Math.ceil(options.coverageMargin() / smrf.cellSize());
+    long surfaceCells = 0;
+    long groundCells = 0;
+    long filledCells = 0;
+    for (BlockTiling.Block b : BlockTiling.cover(surface, options.blockCells(),
+        options.overlapCells())) {
+      int side = b.readSize();
+      float[] all = surface.readBlock(b.readCol0(), b.readRow0(), side, side);
+      boolean[] covered = coverage(all, side, margin);
+      float[] dem;
+      boolean[] ground = new boolean[all.length];
+      if (useClassified) {
+        float[] g = classified.readBlock(b.readCol0(), b.readRow0(), side, side);
+        for (int i = 0; i < g.length; i++) {
+          ground[i] = !Float.isNaN(g[i]);
+        }
+        dem = Inpainter.fill(g, side, side);
+      } else {
+        SmrfRaster.Result r = SmrfRaster.run(all, side, side, smrf);
+        for (int i = 0; i < all.length; i++) {
+          ground[i] = !Float.isNaN(all[i]) && !r.object()[i] && !r.lowOutlier()[i];
+        }
+        dem = r.dem();
+      }
+      for (int r = b.overlap(); r < b.overlap() + b.size(); r++) {
+        for (int c = b.overlap(); c < b.overlap() + b.size(); c++) {
+          int i = r * side + c;
+          if (!Float.isNaN(all[i])) {
+            surfaceCells++;
+          }
+          if (covered[i] && !Float.isNaN(dem[i])) {
+            terrain.set(b.readCol0() + c, b.readRow0() + r, dem[i]);
+            if (ground[i]) {
+              groundCells++;
+            } else {
+              filledCells++;
+            }
+          }
+        }
+      }
+    }
+    GroundSource source = new GroundSource(
+        useClassified ? GroundSource.Kind.CLASSIFIED : GroundSource.Kind.FILTERED,
+        useClassified ? Optional.empty() : Optional.of(smrf),
+        points, groundPoints, surfaceCells, groundCells, filledCells);
+    surface = null;
+    classified = null;
+    return new GroundModel(terrain, smrf, source);
+  }
+
+  /** Cells with data, grown by {@code margin} cells in x and y (a square neighbourhood). */
+  static boolean[] coverage(float[] data, int side, int margin) {
+    boolean[] rows = new boolean[data.length];
+    for (int r = 0; r < side; r++) {
+      int last = Integer.MIN_VALUE / 2;
+      for (int c = 0; c < side; c++) {
+        if (!Float.isNaN(data[r * side + c])) {
+          last = c;
+        }
+        rows[r * side + c] = c - last <= margin;
+      }
+      last = Integer.MAX_VALUE / 2;
+      for (int c = side - 1; c >= 0; c--) {
+        if (!Float.isNaN(data[r * side + c])) {
+          last = c;
+        }
+        rows[r * side + c] |= last - c <= margin;
+      }
+    }
+    boolean[] out = new boolean[data.length];
+    for (int c = 0; c < side; c++) {
+      int last = Integer.MIN_VALUE / 2;
+      for (int r = 0; r < side; r++) {
+        if (rows[r * side + c]) {
+          last = r;
+        }
+        out[r * side + c] = r - last <= margin;
+      }
+      last = Integer.MAX_VALUE / 2;
+      for (int r = side - 1; r >= 0; r--) {
+        if (rows[r * side + c]) {
+          last = r;
+        }
+        out[r * side + c] |= last - r <= margin;
+      }
+    }
+    return out;
+  }
+}
