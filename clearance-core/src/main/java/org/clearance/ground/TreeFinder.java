@@ -11,9 +11,9 @@ import java.util.List;
  * <ol>
  *   <li>canopy height model (CHM) = highest vegetation return per cell minus the ground at the
  *       cell centre (methods.md 5.1);
- *   <li>pits and small holes filled: a cell more than {@link TreeOptions#pitDepth()} below the
- *       median of its eight neighbours, or empty with at least {@link #MIN_NEIGHBOURS_TO_FILL}
- *       filled neighbours, takes that median (median pit filling: common practice, no source);
+ *   <li>pits and small holes filled: a cell with at least {@link #MIN_NEIGHBOURS_TO_FILL} of its
+ *       eight neighbours in the canopy that is empty, or more than {@link TreeOptions#pitDepth()}
+ *       below their median, takes that median (median pit filling: common practice, no source);
  *   <li>tree tops: cells of at least the minimum height that no other cell within the variable
  *       window exceeds, radius 0.5 (2.51 + 0.009 h^2) m (Popescu &amp; Wynne 2004); ties go to the
  *       cell with the lower (row, column);
@@ -26,7 +26,7 @@ import java.util.List;
 final class TreeFinder {
   /** A crown may spread to this many times its predicted radius: real crowns vary about +-50 %. */
   static final double CROWN_REACH = 1.5;
-  /** Empty cells are filled only when most (5 of 8) neighbours hold canopy: a gap, not an edge. */
+  /** Cells are filled only when most (5 of 8) neighbours hold canopy: a gap, not an edge. */
   static final int MIN_NEIGHBOURS_TO_FILL = 5;
 
   private TreeFinder() {}
@@ -100,7 +100,8 @@ final class TreeFinder {
         }
         Arrays.sort(nb, 0, n);
         float median = (n % 2 == 1) ? nb[n / 2] : 0.5f * (nb[n / 2 - 1] + nb[n / 2]);
-        boolean pit = !Float.isNaN(chm[i]) && n == 8 && chm[i] < median - pitDepth;
+        boolean pit = !Float.isNaN(chm[i]) && n >= MIN_NEIGHBOURS_TO_FILL
+            && chm[i] < median - pitDepth;
         boolean gap = Float.isNaN(chm[i]) && n >= MIN_NEIGHBOURS_TO_FILL;
         if (pit || gap) {
           out[i] = median;
