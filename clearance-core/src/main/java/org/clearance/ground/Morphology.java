@@ -47,11 +47,7 @@ final class Morphology {
         }
       }
       for (int c = k; c < width - k; c++) {
-        float v = run[o + c];
-        float a = src[o + c - k];
-        float b = src[o + c + k];
-        v = a < v ? a : v;
-        run[o + c] = b < v ? b : v;
+        run[o + c] = Math.min(run[o + c], Math.min(src[o + c - k], src[o + c + k]));
       }
       for (int c = Math.max(k, width - k); c < width; c++) {
         if (src[o + c - k] < run[o + c]) {
@@ -69,9 +65,7 @@ final class Morphology {
       int o = r * width;
       int s = (r + dy) * width;
       for (int c = 0; c < width; c++) {
-        float v = run[s + c];
-        float u = out[o + c];
-        out[o + c] = v < u ? v : u;
+        out[o + c] = Math.min(out[o + c], run[s + c]);
       }
     }
   }

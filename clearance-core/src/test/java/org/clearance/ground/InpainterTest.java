@@ -9,9 +9,9 @@ import org.junit.jupiter.api.Test;
 class InpainterTest {
   /**
    * Fill accuracy asked of the membrane solve, metres: it stops once no cell moves 0.1 mm in a
-   * sweep, which leaves a few millimetres in a 65 x 50 cell hole; survey noise is ~3 cm.
+   * sweep (measured error 0.4 mm in a 65 x 50 cell hole); survey noise is ~3 cm.
    */
-  private static final double TOL = 5e-3;
+  private static final double TOL = 2e-3;
 
   @Test
   void reproducesAPlaneThroughLargeAndBorderHoles() {
