@@ -11,10 +11,10 @@ import org.apache.commons.math3.exception.TooManyEvaluationsException;
  *
  * <p>Exact catenary length (methods.md 3.3): L(H) = 2c sinh(S / 2c) with c = H / w; elastic
  * elongation integrated along the catenary dL_e(H) = H (S + c sinh(S / c)) / (2 EA). The
- * unstressed length at the known state, L_u = L(H1) - dL_e(H1), grows thermally to
- * L_u (1 + alpha (theta2 - theta1)); the new tension solves
- * f(H) = L(H) - dL_e(H) - L_u (1 + alpha (theta2 - theta1)) = 0, where f falls strictly as H
- * grows while S / c &lt; 1.9 (below that the elastic term also grows with H).
+ * unstressed length at the known state, L_u1 = L(H1) - dL_e(H1), is referred to 20 degC,
+ * L_r = L_u1 / (1 + alpha (theta1 - 20)); the new tension solves
+ * f(H) = L(H) - dL_e(H) - L_r (1 + alpha (theta2 - 20)) = 0, where f falls strictly as H grows
+ * while S / c &lt; 1.9 (beyond that the elastic term falls with H).
  *
  * <p>Parabolic cubic (methods.md 3.2, the classic textbook form):
  * H2^2 [H2 + EA w1^2 S^2 / (24 H1^2) - H1 + EA alpha (theta2 - theta1)] = EA w2^2 S^2 / 24.
@@ -34,6 +34,13 @@ final class StateEquation {
   /** Largest mean elastic strain searched: 5 %, far above the breaking strain of any conductor. */
   static final double MAX_STRAIN = 0.05;
 
+  /**
+   * Temperature at which the unstressed length is referred, degC: conductor data sheets state
+   * lengths and expansion at 20 degC (common practice, no source). A fixed reference makes chained
+   * changes of state path-independent (a round trip returns the start exactly).
+   */
+  static final double REFERENCE_TEMPERATURE = 20.0;
+
   /** Absolute accuracy of the solved tension, N: far below any physical meaning. */
   private static final double TENSION_ACCURACY = 1e-7;
 
@@ -50,7 +57,8 @@ final class StateEquation {
       double temperature, double weight) {
     double unstressed = length(from.horizontalTension(), from.weightPerLength(), span)
         - elasticElongation(from.horizontalTension(), from.weightPerLength(), span, ea);
-    double target = unstressed * (1 + alpha * (temperature - from.temperatureC()));
+    double atReference = unstressed / (1 + alpha * (from.temperatureC() - REFERENCE_TEMPERATURE));
+    double target = atReference * (1 + alpha * (temperature - REFERENCE_TEMPERATURE));
     UnivariateFunction f = h -> length(h, weight, span) - elasticElongation(h, weight, span, ea)
         - target;
     return solve(f, ea, span, weight, "exact catenary length");
