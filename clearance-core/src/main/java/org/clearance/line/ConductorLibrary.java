@@ -29,7 +29,7 @@ public final class ConductorLibrary {
   /** Classpath resource of the built-in library. */
   public static final String BUILTIN_RESOURCE = "/span-specs/conductors/acsr.csv";
 
-  /** Largest plausible expansion coefficient, 1/degC: metals are below 3e-5; above is a unit slip. */
+  /** Largest plausible expansion, 1/degC: metals are below 3e-5; above is a unit slip. */
   private static final double MAX_EXPANSION_PER_C = 1e-4;
   /** Largest plausible modulus, GPa: steel is about 200; far above is a unit slip (Pa, MPa). */
   private static final double MAX_MODULUS_GPA = 1000;

@@ -76,7 +76,8 @@ record CsvTable(String file, int headerLine, List<String> header, List<Row> rows
       }
     }
     if (header == null) {
-      throw new InputException(file, null, null, "no header row (the file is empty or all comments)");
+      throw new InputException(file, null, null,
+          "no header row (the file is empty or all comments)");
     }
     return new CsvTable(file, headerLine, header, rows);
   }
@@ -156,7 +157,8 @@ record CsvTable(String file, int headerLine, List<String> header, List<Row> rows
     return names;
   }
 
-  private static void checkCount(List<String> fields, List<String> header, String file, int lineNo) {
+  private static void checkCount(
+      List<String> fields, List<String> header, String file, int lineNo) {
     if (fields.size() < header.size()) {
       throw new InputException(file, "line " + lineNo, header.get(fields.size()),
           "row has " + fields.size() + " fields but the header has " + header.size());

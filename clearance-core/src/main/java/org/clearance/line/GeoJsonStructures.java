@@ -132,6 +132,7 @@ final class GeoJsonStructures {
     if (v instanceof Json.Str s) {
       return s.value();
     }
-    throw new InputException(file, "line " + v.line(), name, "expected a string, found " + v.kind());
+    throw new InputException(file, "line " + v.line(), name,
+        "expected a string, found " + v.kind());
   }
 }

@@ -15,7 +15,8 @@ class JsonTest {
 
   @Test
   void parsesAllValueKindsWithLines() {
-    String text = "{\n \"a\": [1, -2.5e3, 0.25E-1],\n \"b\": \"q\\\"\\\\\\/\\b\\f\\n\\r\\t\\u00e9\","
+    String text = "{\n \"a\": [1, -2.5e3, 0.25E-1],\n"
+        + " \"b\": \"q\\\"\\\\\\/\\b\\f\\n\\r\\t\\u00e9\","
         + "\n \"c\": true, \"d\": false, \"e\": null, \"f\": {}\n}";
     Json.Obj o = assertInstanceOf(Json.Obj.class, Json.parse(text, "t.json"));
     assertEquals(List.of("a", "b", "c", "d", "e", "f"), List.copyOf(o.members().keySet()));

@@ -150,7 +150,8 @@ class LineSpecReaderTest {
     return Stream.of(
         edit("unknown top key", "line_id: L1", "line_id: L1\nvoltage: 230", 2, "voltage",
             "unknown key"),
-        edit("unknown position key", "    conductor: Drake", "    conductor: Drake\n    colour: red",
+        edit("unknown position key", "    conductor: Drake",
+            "    conductor: Drake\n    colour: red",
             8, "colour", "unknown key"),
         edit("unknown condition key", "    temperature_c: 100",
             "    temperature_c: 100\n    wind_speed_ms: 3", 12, "wind_speed_ms", "unknown key"),

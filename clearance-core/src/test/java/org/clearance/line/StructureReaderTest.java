@@ -102,7 +102,8 @@ class StructureReaderTest {
         + "      \"coordinates\": [1000.5, 2000.25, 99]},\n"
         + "     \"properties\": {\"structure_id\": 17, \"line_id\": \"N\\u00e9\",\n"
         + "       \"type\": \"dead_end\", \"ground_z\": null, \"attach_z_A\": \"31.5\"}},\n"
-        + "    {\"type\": \"Feature\", \"geometry\": {\"type\": \"Point\", \"coordinates\": [0, 1]},\n"
+        + "    {\"type\": \"Feature\", \"geometry\": {\"type\": \"Point\","
+        + " \"coordinates\": [0, 1]},\n"
         + "     \"properties\": {\"structure_id\": \"18\", \"line_id\": \"N\\u00e9\"}}\n"
         + "  ]\n"
         + "}\n";
