@@ -256,18 +256,18 @@ final class Json {
       }
       char e = peek();
       pos++;
-      switch (e) {
-        case '"': sb.append('"'); break;
-        case '\\': sb.append('\\'); break;
-        case '/': sb.append('/'); break;
-        case 'b': sb.append('\b'); break;
-        case 'f': sb.append('\f'); break;
-        case 'n': sb.append('\n'); break;
-        case 'r': sb.append('\r'); break;
-        case 't': sb.append('\t'); break;
-        case 'u': sb.append(unicodeEscape()); break;
-        default: throw error("unknown escape '\\" + e + "' in a string");
-      }
+      sb.append(switch (e) {
+        case '"' -> '"';
+        case '\\' -> '\\';
+        case '/' -> '/';
+        case 'b' -> '\b';
+        case 'f' -> '\f';
+        case 'n' -> '\n';
+        case 'r' -> '\r';
+        case 't' -> '\t';
+        case 'u' -> unicodeEscape();
+        default -> throw error("unknown escape '\\" + e + "' in a string");
+      });
     }
   }
 

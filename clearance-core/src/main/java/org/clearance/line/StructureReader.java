@@ -70,7 +70,7 @@ public final class StructureReader {
     String text = TextFiles.read(file);
     String lower = name.toLowerCase(Locale.ROOT);
     boolean json = lower.endsWith(".geojson") || lower.endsWith(".json")
-        || text.stripLeading().replace("\uFEFF", "").startsWith("{");
+        || text.stripLeading().startsWith("{");
     List<RawRecord> records = json
         ? GeoJsonStructures.records(Json.parse(text, name), name)
         : csvRecords(text, name);

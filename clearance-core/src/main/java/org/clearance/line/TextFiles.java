@@ -14,15 +14,19 @@ final class TextFiles {
 
   private TextFiles() {}
 
+  /** Byte-order mark some editors write at the start of UTF-8 files; not part of the text. */
+  private static final String BOM = "\uFEFF";
+
   /**
-   * The whole file as text.
+   * The whole file as text, without a leading byte-order mark.
    *
    * @throws InputException when the file is missing, unreadable or not UTF-8
    */
   static String read(Path file) {
     try {
       byte[] bytes = Files.readAllBytes(file);
-      return StandardCharsets.UTF_8.newDecoder().decode(ByteBuffer.wrap(bytes)).toString();
+      String text = StandardCharsets.UTF_8.newDecoder().decode(ByteBuffer.wrap(bytes)).toString();
+      return text.startsWith(BOM) ? text.substring(BOM.length()) : text;
     } catch (NoSuchFileException e) {
       throw new InputException(file, null, null, "file not found");
     } catch (CharacterCodingException e) {

@@ -89,6 +89,13 @@ class LineSpecReaderTest {
   }
 
   @Test
+  void byteOrderMarkIsIgnored() {
+    LineSpec s = read("\uFEFFline_id: L\nnominal_voltage_kv: 69\nconductors:\n"
+        + "  - {position: A, role: phase, conductor: Dove}\n");
+    assertEquals("L", s.lineId());
+  }
+
+  @Test
   void swingAndExtraSagNeedNoSurveyTemperature() {
     LineSpec s = read("line_id: L\nnominal_voltage_kv: 69\nconductors:\n"
         + "  - {position: A, role: phase, conductor: Linnet, bundle: 2, bundle_spacing_m: 0.4}\n"

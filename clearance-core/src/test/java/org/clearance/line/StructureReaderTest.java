@@ -73,6 +73,17 @@ class StructureReaderTest {
   }
 
   @Test
+  void byteOrderMarkIsNotPartOfTheFirstColumnName() {
+    // Regression: spreadsheet exports start with U+FEFF; it must not turn "structure_id" into an
+    // unknown column, nor hide the '{' that marks GeoJSON.
+    assertEquals("P1", read("b.csv", "\uFEFFstructure_id,x,y\nP1,0,0\n", METRES).get(0).id());
+    String json = "\uFEFF {\"type\":\"FeatureCollection\",\"features\":[{\"type\":\"Feature\","
+        + "\"geometry\":{\"type\":\"Point\",\"coordinates\":[5,6]},"
+        + "\"properties\":{\"structure_id\":\"Q\"}}]}";
+    assertEquals(6.0, read("b.txt", json, METRES).get(0).y(), EXACT);
+  }
+
+  @Test
   void usSurveyFeetConvertToMetres() {
     // 1 US survey foot = 1200/3937 m (NIST; shared/reference/check-values.md section 1,
     // [published]); horizontal and vertical units apply separately.
