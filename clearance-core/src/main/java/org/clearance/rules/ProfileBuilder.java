@@ -29,7 +29,7 @@ final class ProfileBuilder {
   /** The chain's values merged, root first, each later file laid over the earlier ones. */
   record Merged(Map<String, YamlMap> zones, YamlMap growth, YamlMap fallIn,
       YamlMap.Entry trimCycle, YamlMap.Entry appliesFrom, YamlMap.Entry coveredLines,
-      YamlMap rootTop) {}
+      YamlMap rootTop, YamlMap.Entry zonesEntry) {}
 
   static Merged merge(List<RuleProfileReader.Layer> chain) {
     Map<String, YamlMap> zones = new LinkedHashMap<>();
@@ -38,9 +38,13 @@ final class ProfileBuilder {
     YamlMap.Entry trimCycle = null;
     YamlMap.Entry covered = null;
     YamlMap.Entry appliesFrom = null;
+    YamlMap.Entry zonesEntry = null;
     for (int i = chain.size() - 1; i >= 0; i--) {
       RuleProfileReader.Layer layer = chain.get(i);
       YamlMap top = layer.top();
+      if (zonesEntry == null) {
+        zonesEntry = top.optional("zones").orElse(null);
+      }
       for (Map.Entry<String, YamlMap> z : RuleProfileReader.zonesOf(layer).entrySet()) {
         zones.merge(z.getKey(), z.getValue(), YamlMap::mergedWith);
       }
@@ -51,7 +55,7 @@ final class ProfileBuilder {
       appliesFrom = replace(appliesFrom, top.optional("applies_from_kv").orElse(null));
     }
     return new Merged(zones, growth, fallIn, trimCycle, appliesFrom, covered,
-        chain.get(chain.size() - 1).top());
+        chain.get(chain.size() - 1).top(), zonesEntry);
   }
 
   private static YamlMap mergeMap(YamlMap base, YamlMap.Entry entry) {
@@ -95,7 +99,7 @@ final class ProfileBuilder {
       zones.add(zone);
       sources.put(zone.name(), map);
     }
-    checkReferences(zones, sources, m.rootTop());
+    checkReferences(zones, sources, m.zonesEntry());
     Set<String> covered = new LinkedHashSet<>();
     if (m.coveredLines() != null) {
       covered.addAll(m.coveredLines().texts());
@@ -227,10 +231,10 @@ final class ProfileBuilder {
 
   /** Exactly one family of violation-reference zones, whose voltage bands do not overlap. */
   private static void checkReferences(List<Zone> zones, Map<String, YamlMap> sources,
-      YamlMap rootTop) {
+      YamlMap.Entry zonesEntry) {
     List<Zone> refs = zones.stream().filter(Zone::violationReference).toList();
     if (refs.isEmpty()) {
-      throw rootTop.missing("zones", "no zone is marked violation_reference: true (the "
+      throw zonesEntry.error("no zone is marked violation_reference: true (the "
           + "governing minimum that years-to-violation count towards)");
     }
     for (int i = 1; i < refs.size(); i++) {

@@ -137,9 +137,10 @@ final class YamlMap {
       throw error("expected true or false, found '" + describe(value) + "'");
     }
 
-    /** The value as a mapping. */
+    /** The value as a mapping; a key missing from it is reported at this entry's line. */
     YamlMap map() {
-      return YamlMap.of(value, file, key);
+      YamlMap map = YamlMap.of(value, file, key);
+      return new YamlMap(file, line, key, map.entries);
     }
 
     /** The items of a list value (a single scalar counts as a list of one). */
