@@ -45,16 +45,13 @@ public record MidspanAllowance(double middleFraction, double perHundredM, double
    *
    * @param spanLengthM plan length of the span, m (&gt; 0)
    * @param stationM station of the conductor point from the span's first structure, m
-   * @return the allowance, m (0 outside the middle part or for short spans; NaN when the station
-   *     is NaN)
+   * @return the allowance, m (0 outside the middle part or for short spans; the full allowance
+   *     when the station is unknown (NaN), the conservative choice)
    */
   public double at(double spanLengthM, double stationM) {
-    if (Double.isNaN(stationM)) {
-      return Double.NaN;
-    }
     double full = fullAllowance(spanLengthM);
-    if (full == 0) {
-      return 0;
+    if (full == 0 || Double.isNaN(stationM)) {
+      return full;
     }
     double margin = spanLengthM * (1 - middleFraction) / 2;
     return stationM >= margin && stationM <= spanLengthM - margin ? full : 0;

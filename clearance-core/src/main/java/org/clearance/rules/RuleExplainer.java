@@ -46,6 +46,11 @@ public final class RuleExplainer {
           profile.coveredLines().isEmpty() ? ""
               : ", and lines " + String.join(", ", profile.coveredLines().stream().sorted()
                   .toList()));
+      if (span.nominalVoltageKv() < profile.appliesFromKv()
+          && profile.coveredLines().contains(span.lineId())) {
+        line(out, "  line %s is covered below that voltage: it is listed under covered_lines",
+            span.lineId());
+      }
     }
     line(out, "Result: %s", rules.notAssessedReason().map(r -> "NOT ASSESSED - " + r)
         .orElse("assessed"));
@@ -93,8 +98,12 @@ public final class RuleExplainer {
     if (!z.note().isEmpty()) {
       line(out, "%s%s", INDENT, oneLine(z.note()));
     }
-    line(out, "%svoltage band: %s, which holds %s", INDENT, z.voltage().describe(),
-        VoltageBand.kv(span.nominalVoltageKv()));
+    if (z.voltage().equals(VoltageBand.ALL)) {
+      line(out, "%svoltage: every voltage the profile covers", INDENT);
+    } else {
+      line(out, "%svoltage band: %s, which holds %s", INDENT, z.voltage().describe(),
+          VoltageBand.kv(span.nominalVoltageKv()));
+    }
     line(out, "%sapplies in: %s", INDENT, z.conditions().describe());
     if (rz.radial().isPresent()) {
       line(out, "%sinside when the 3D distance to a conductor is less than %s", INDENT,

@@ -46,8 +46,8 @@ public final class SpanRules {
   }
 
   static SpanRules notAssessed(RuleProfile profile, SpanContext span, String reason) {
-    return new SpanRules(profile, span, Optional.of(reason), List.of(), List.of(),
-        profile.zones(), Optional.empty(), Optional.of(reason));
+    return new SpanRules(profile, span, Optional.of(reason), List.of(), List.of(), List.of(),
+        Optional.empty(), Optional.of(reason));
   }
 
   public RuleProfile profile() {
@@ -78,7 +78,7 @@ public final class SpanRules {
     return gaps;
   }
 
-  /** Zones whose voltage band excludes the span (or all zones when the line is not covered). */
+  /** Zones whose voltage band excludes the span (empty when the profile does not cover it). */
   public List<Zone> outOfBand() {
     return outOfBand;
   }
@@ -121,8 +121,8 @@ public final class SpanRules {
       boolean matched = false;
       ZoneViolation zoneWorst = null;
       for (ConditionDistance d : point.distances()) {
-        if (!z.zone().conditions().selects(d)) {
-          continue;
+        if (!usable(z, d) || !z.zone().conditions().selects(d)) {
+          continue; // a distance not computed checks nothing
         }
         matched = true;
         ZoneViolation v = check(z, d);
@@ -159,15 +159,24 @@ public final class SpanRules {
         Optional.empty(), pointGaps);
   }
 
+  /** Whether a distance has the values a zone measures (NaN = not computed). */
+  private static boolean usable(ResolvedZone z, ConditionDistance d) {
+    if (z.radial().isPresent()) {
+      return !Double.isNaN(d.distance());
+    }
+    return !Double.isNaN(d.horizontal()) && !Double.isNaN(d.vertical());
+  }
+
   /** The violation of one zone in one condition, or null when outside. */
   private ZoneViolation check(ResolvedZone z, ConditionDistance d) {
-    Requirement req = z.at(span.lengthM(), d.station());
     if (z.radial().isPresent()) {
-      if (!(d.distance() < req.radialM())) {
+      double required = z.radial().get().at(span.lengthM(), d.station());
+      if (!(d.distance() < required)) {
         return null;
       }
-      return violation(z, d, ZoneViolation.Component.RADIAL, d.distance(), req.radialM());
+      return violation(z, d, ZoneViolation.Component.RADIAL, d.distance(), required);
     }
+    Requirement req = z.at(span.lengthM(), d.station());
     double h = Math.abs(d.horizontal());
     double v = Math.abs(d.vertical());
     if (!(h < req.horizontalM() && v < req.verticalM())) {
@@ -194,7 +203,7 @@ public final class SpanRules {
     GrowthRates.Rate rate = profile.growth().get().forClass(point.classification());
     double best = Double.POSITIVE_INFINITY;
     for (ConditionDistance d : point.distances()) {
-      if (!reference.zone().conditions().selects(d)) {
+      if (!usable(reference, d) || !reference.zone().conditions().selects(d)) {
         continue;
       }
       Requirement req = reference.at(span.lengthM(), d.station());
@@ -237,7 +246,7 @@ public final class SpanRules {
     }
     FallInFinding best = null;
     for (ConditionDistance d : fromBase) {
-      if (!profile.fallIn().conditions().selects(d)) {
+      if (Double.isNaN(d.distance()) || !profile.fallIn().conditions().selects(d)) {
         continue;
       }
       double reach = treeHeightM + fallInAllowance.orElseThrow().at(span.lengthM(), d.station());
