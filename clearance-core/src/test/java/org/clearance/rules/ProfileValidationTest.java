@@ -255,4 +255,29 @@ class ProfileValidationTest {
     RuleProfile p = RuleProfileReader.read(child);
     assertTrue(p.zone("prc4293").orElseThrow().measurement() instanceof Measurement.Components);
   }
+
+  @Test
+  void extendsByRelativePathAndHashFollowsTheParent(@TempDir Path dir) throws IOException {
+    Path sub = Files.createDirectories(dir.resolve("sub"));
+    Path parent = dir.resolve("parent.yaml");
+    String parentText = String.join("\n", "name: parent", "title: P", "source: S", "zones:",
+        "  - {name: a, priority: 1, violation_reference: true, conditions: [all], radial_m: 2}",
+        "");
+    Files.writeString(parent, parentText);
+    Path child = sub.resolve("child.yaml");
+    Files.writeString(child, "name: child\ntitle: C\nsource: S\nextends: ../parent.yaml\n");
+    RuleProfile first = RuleProfiles.byNameOrPath(child.toString());
+    assertEquals(2, first.zone("a").map(z -> ((DistanceSpec.Fixed)
+        ((Measurement.Radial) z.measurement()).radial()).metres()).orElseThrow(), 0);
+    Files.writeString(parent, parentText.replace("radial_m: 2", "radial_m: 2.5"));
+    RuleProfile second = RuleProfileReader.read(child);
+    assertTrue(!first.contentHash().equals(second.contentHash()));
+  }
+
+  @Test
+  void profileOptionNamesTheOption() {
+    InputException e = assertThrows(InputException.class,
+        () -> RuleProfiles.byNameOrPath("no-such-file.yaml"));
+    assertEquals("--profile", e.file());
+  }
 }
