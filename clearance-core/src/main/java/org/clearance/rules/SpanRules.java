@@ -106,10 +106,15 @@ public final class SpanRules {
   /**
    * Checks one vegetation point of this span.
    *
-   * @param point the point with its distances per condition (its span id is not checked)
+   * @param point the point with its distances per condition
    * @return the most urgent zone it is inside, and its years to the violation-reference zone
+   * @throws IllegalArgumentException when the point belongs to another span
    */
   public PointFinding evaluate(PointClearance point) {
+    if (!point.spanId().equals(span.spanId())) {
+      throw new IllegalArgumentException("point of span " + point.spanId()
+          + " evaluated with the rules of span " + span.spanId());
+    }
     if (notAssessedReason.isPresent()) {
       return PointFinding.notAssessed(notAssessedReason.get(), gaps);
     }
