@@ -119,6 +119,10 @@ public record Catenary(double s0, double z0, double c) {
   /** Inverse hyperbolic sine, odd-symmetric so that negative arguments keep their digits. */
   static double asinh(double x) {
     double a = Math.abs(x);
-    return Math.copySign(Math.log(a + Math.sqrt(a * a + 1)), x);
+    if (a > 1e8) { // sqrt(a^2 + 1) = a to double precision; avoids overflow of a^2
+      return Math.copySign(Math.log(2 * a), x);
+    }
+    // log(a + sqrt(a^2 + 1)) written as log1p so that small arguments keep their digits
+    return Math.copySign(Math.log1p(a + a * a / (1 + Math.sqrt(a * a + 1))), x);
   }
 }

@@ -13,8 +13,8 @@ import java.util.Optional;
  * W_ii = 1 / cosh^2 t_i, inside iteratively reweighted rounds with Tukey's biweight on
  * sigma = 1.4826 MAD (methods.md 2.3). When the robust fit fails or leaves more than
  * {@link Options#ransacTrigger()} of the points out, RANSAC on 3-point samples (methods.md 2.4)
- * finds a consensus that the same robust refinement then polishes; the result with the larger
- * consensus within {@link Options#inlierThreshold()} wins. Spans whose vertex lies outside the
+ * finds a consensus that the same robust refinement then polishes; that result is kept unless the
+ * robust one has the strictly larger consensus within {@link Options#inlierThreshold()}. Spans whose vertex lies outside the
  * data (inclined, uplift) need no special care: s0 is never constrained to the span.
  *
  * <p>Constrained fits: {@link #fitThrough} with both attachments known (only c free, Brent on ln
@@ -113,8 +113,9 @@ public final class CatenaryFitter {
     Optional<RobustLevenbergMarquardt.Outcome> robust = ParabolaStart.free(d.s, d.z, d.weights)
         .filter(p -> p[2] >= C_MIN && p[2] <= C_MAX)
         .map(p -> RobustLevenbergMarquardt.run(model, d.s, d.z, d.weights, p, C_MIN, C_MAX));
-    String why = robust.map(o -> o.failure().orElseGet(() -> boundsProblem(o.p()[2])))
-        .orElse("the least-squares parabola does not sag (opens downwards or c out of bounds)");
+    String why = robust.isEmpty()
+        ? "the least-squares parabola does not sag (opens downwards or c out of bounds)"
+        : robust.get().failure().orElseGet(() -> boundsProblem(robust.get().p()[2]));
     int iterations = robust.map(RobustLevenbergMarquardt.Outcome::iterations).orElse(0);
     boolean robustOk = why == null;
     if (robustOk && outlierShare(robust.get().robust(), d.usable) <= options.ransacTrigger()) {
@@ -131,8 +132,10 @@ public final class CatenaryFitter {
           model, d.s, d.z, w0, consensus.get().p(), C_MIN, C_MAX);
       String refinedWhy = refined.failure().orElseGet(() -> boundsProblem(refined.p()[2]));
       int total = iterations + refined.iterations();
+      // With heavy contamination the consensus result is preferred unless the robust one
+      // agrees with strictly more points.
       if (refinedWhy == null && (!robustOk || agreeing(model, refined.p(), d)
-          > agreeing(model, robust.get().p(), d))) {
+          >= agreeing(model, robust.get().p(), d))) {
         return d.result(model, refined, total, CatenaryFit.Method.RANSAC);
       }
       if (robustOk) {

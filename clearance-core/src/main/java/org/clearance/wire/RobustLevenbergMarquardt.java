@@ -66,7 +66,7 @@ final class RobustLevenbergMarquardt {
       for (double b : robust) {
         used += b > 0 ? 1 : 0;
       }
-      if (used <= model.size()) {
+      if (used < model.size()) {
         return new Outcome(p, robust, iterations, Optional.of(
             "only " + used + " points keep weight, " + model.size() + " parameters"));
       }

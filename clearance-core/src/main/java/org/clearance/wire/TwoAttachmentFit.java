@@ -1,5 +1,6 @@
 package org.clearance.wire;
 
+import java.util.Locale;
 import java.util.Optional;
 import org.apache.commons.math3.optim.MaxEval;
 import org.apache.commons.math3.optim.nonlinear.scalar.GoalType;
@@ -28,6 +29,8 @@ final class TwoAttachmentFit {
   static final double BRENT_ABSOLUTE = 1e-12;
   /** Objective evaluations per Brent search at most. */
   static final int BRENT_EVALUATIONS = 200;
+  /** Distance in ln c from a bound below which the minimum counts as lying on the bound. */
+  static final double AT_BOUND = 1e-6;
   /** Relative step of the central difference for dz/dc along the constrained family. */
   static final double DIFF_STEP = 1e-6;
 
@@ -83,6 +86,11 @@ final class TwoAttachmentFit {
       double cNew = Math.exp(u);
       double change = Double.isNaN(c) ? Double.POSITIVE_INFINITY : Math.abs(cNew / c - 1);
       c = cNew;
+      if (u - uLo < AT_BOUND || uHi - u < AT_BOUND) {
+        return new Outcome(c, robust, evaluations, Optional.of(String.format(Locale.ROOT,
+            "the best catenary constant lies at the edge of the physical range [%.0f, %.0f] m",
+            cMin, cMax)));
+      }
       Catenary curve = Catenary.through(sA, zA, sB, zB, c);
       int m = 0;
       for (int i = 0; i < n; i++) {
