@@ -23,7 +23,7 @@ public record CatenaryFit(
     Optional<Catenary> catenary,
     Optional<CatenaryCovariance> covariance,
     double rmsResidual,
-    InlierMask inliers,
+    PointMask inliers,
     int iterations,
     Method method,
     Optional<String> failure) {
@@ -54,7 +54,7 @@ public record CatenaryFit(
   /** A failed fit over {@code pointCount} points. */
   static CatenaryFit failed(String reason, int pointCount, int iterations, Method method) {
     return new CatenaryFit(Optional.empty(), Optional.empty(), Double.NaN,
-        InlierMask.none(pointCount), iterations, method, Optional.of(reason));
+        PointMask.none(pointCount), iterations, method, Optional.of(reason));
   }
 
   /** True when the fit converged to a curve within the physical bounds. */

@@ -109,7 +109,7 @@ final class Centred {
     }
     Catenary curve = new Catenary(local.s0() + sRef, local.z0() + zRef, local.c());
     return new CatenaryFit(Optional.of(curve), covariance,
-        count > 0 ? Math.sqrt(sum / count) : Double.NaN, InlierMask.of(inlier), iterations, method,
+        count > 0 ? Math.sqrt(sum / count) : Double.NaN, PointMask.of(inlier), iterations, method,
         Optional.empty());
   }
 }

@@ -147,7 +147,7 @@ class CatenaryFitterAccuracyTest {
     assertEquals(CatenaryFit.Method.RANSAC, fit.method());
     int wrong = 0;
     for (int i = 0; i < w.s.length; i++) {
-      wrong += fit.inliers().isInlier(i) == w.outlier[i] ? 1 : 0;
+      wrong += fit.inliers().contains(i) == w.outlier[i] ? 1 : 0;
     }
     // Outliers generated within a Tukey cut-off of the wire may be kept: allow 3 %.
     assertTrue(wrong <= 0.03 * w.s.length, "misclassified points: " + wrong);

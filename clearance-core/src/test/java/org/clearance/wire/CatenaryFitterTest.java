@@ -138,8 +138,8 @@ class CatenaryFitterTest {
     w.s[8] = Double.POSITIVE_INFINITY;
     CatenaryFit fit = CatenaryFitter.fit(w.s, w.z);
     assertTrue(fit.converged());
-    assertFalse(fit.inliers().isInlier(3));
-    assertFalse(fit.inliers().isInlier(8));
+    assertFalse(fit.inliers().contains(3));
+    assertFalse(fit.inliers().contains(8));
     assertEquals(0, w.sagError(fit.curve()), SAG_TOL);
   }
 
@@ -159,7 +159,7 @@ class CatenaryFitterTest {
     CatenaryFit fit = CatenaryFitter.fit(w.s, w.z);
     int missed = 0;
     for (int i = 0; i < w.s.length; i++) {
-      missed += w.outlier[i] && fit.inliers().isInlier(i) ? 1 : 0;
+      missed += w.outlier[i] && fit.inliers().contains(i) ? 1 : 0;
     }
     assertTrue(missed <= 0.02 * w.s.length, "outliers kept: " + missed);
     assertEquals(0, w.sagError(fit.curve()), SAG_TOL);

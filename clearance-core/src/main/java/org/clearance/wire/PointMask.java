@@ -3,32 +3,33 @@ package org.clearance.wire;
 import java.util.BitSet;
 
 /**
- * Which of the input points a fit kept (immutable). Indices are those of the input arrays.
+ * A subset of the input points of a fit or split (immutable): the inliers a fit kept, or the
+ * members of one sub-conductor group. Indices are those of the input arrays.
  */
-public final class InlierMask {
+public final class PointMask {
 
   private final BitSet bits;
   private final int size;
 
-  private InlierMask(BitSet bits, int size) {
+  private PointMask(BitSet bits, int size) {
     this.bits = bits;
     this.size = size;
   }
 
-  /** A mask of {@code size} points with no inlier. */
-  public static InlierMask none(int size) {
-    return new InlierMask(new BitSet(), checkSize(size));
+  /** A mask of {@code size} points containing none. */
+  public static PointMask none(int size) {
+    return new PointMask(new BitSet(), checkSize(size));
   }
 
   /** A mask from flags, one per point (copied). */
-  public static InlierMask of(boolean[] inlier) {
-    BitSet b = new BitSet(inlier.length);
-    for (int i = 0; i < inlier.length; i++) {
-      if (inlier[i]) {
+  public static PointMask of(boolean[] member) {
+    BitSet b = new BitSet(member.length);
+    for (int i = 0; i < member.length; i++) {
+      if (member[i]) {
         b.set(i);
       }
     }
-    return new InlierMask(b, inlier.length);
+    return new PointMask(b, member.length);
   }
 
   private static int checkSize(int size) {
@@ -38,36 +39,36 @@ public final class InlierMask {
     return size;
   }
 
-  /** Number of points the mask covers (inliers and outliers). */
+  /** Number of points the mask covers (members and non-members). */
   public int size() {
     return size;
   }
 
-  /** Number of inliers. */
+  /** Number of members. */
   public int count() {
     return bits.cardinality();
   }
 
   /**
-   * Whether point i is an inlier.
+   * Whether point i is a member.
    *
    * @throws IndexOutOfBoundsException when i is outside [0, size())
    */
-  public boolean isInlier(int i) {
+  public boolean contains(int i) {
     if (i < 0 || i >= size) {
       throw new IndexOutOfBoundsException("point " + i + " outside 0.." + (size - 1));
     }
     return bits.get(i);
   }
 
-  /** Indices of the inliers in increasing order (a new array). */
+  /** Indices of the members in increasing order (a new array). */
   public int[] indices() {
     return bits.stream().toArray();
   }
 
   @Override
   public boolean equals(Object o) {
-    return o instanceof InlierMask m && m.size == size && m.bits.equals(bits);
+    return o instanceof PointMask m && m.size == size && m.bits.equals(bits);
   }
 
   @Override
@@ -77,6 +78,6 @@ public final class InlierMask {
 
   @Override
   public String toString() {
-    return "InlierMask[" + count() + " of " + size + "]";
+    return "PointMask[" + count() + " of " + size + "]";
   }
 }
