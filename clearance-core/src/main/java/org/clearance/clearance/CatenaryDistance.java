@@ -207,13 +207,7 @@ public final class CatenaryDistance {
       return Double.NaN;
     }
     if (zq < convexCeiling) {
-      if (g(0, sq, zq) >= 0) {
-        return 0;
-      }
-      if (g(length, sq, zq) <= 0) {
-        return length;
-      }
-      return root(0, length, Math.min(length, Math.max(0, sq)), sq, zq);
+      return convexRoot(sq, zq);
     }
     return scan(sq, zq);
   }
@@ -249,6 +243,66 @@ public final class CatenaryDistance {
   private double squared(double s, double sq, double zq) {
     double dz = curveZ(s) - zq;
     return (s - sq) * (s - sq) + dz * dz;
+  }
+
+  /**
+   * Convex case: Newton from the point's own station, clamped to [0, L], safeguarded by
+   * bisection. g is increasing, so an end is the answer exactly when g there has the sign that
+   * pushes beyond it; ends are evaluated only when a step tries to leave the span.
+   */
+  private double convexRoot(double sq, double zq) {
+    double lo = 0;
+    double hi = length;
+    boolean loKnown = false; // g(lo) < 0 established
+    boolean hiKnown = false; // g(hi) > 0 established
+    double s = Math.min(length, Math.max(0, sq));
+    for (int i = 0; i < MAX_ITERATIONS; i++) {
+      double t = (s - s0) / c;
+      double e = Math.exp(t);
+      double ie = 1 / e;
+      double ch = 0.5 * (e + ie);
+      double sh = 0.5 * (e - ie);
+      double dz = z0 + c * (ch - 1) - zq;
+      double gs = (s - sq) + dz * sh;
+      if (gs < 0) {
+        if (s == length) {
+          return length;
+        }
+        lo = s;
+        loKnown = true;
+      } else if (gs > 0) {
+        if (s == 0) {
+          return 0;
+        }
+        hi = s;
+        hiKnown = true;
+      } else {
+        return s;
+      }
+      double next = s - gs / (ch * (ch + dz / c)); // g' > 0 in the convex case
+      if (!(next > lo)) {
+        if (!loKnown) {
+          if (g(lo, sq, zq) >= 0) {
+            return lo;
+          }
+          loKnown = true;
+        }
+        next = 0.5 * (lo + hi);
+      } else if (!(next < hi)) {
+        if (!hiKnown) {
+          if (g(hi, sq, zq) <= 0) {
+            return hi;
+          }
+          hiKnown = true;
+        }
+        next = 0.5 * (lo + hi);
+      }
+      if (Math.abs(next - s) < STATION_TOLERANCE) {
+        return next;
+      }
+      s = next;
+    }
+    return s;
   }
 
   /** Root of g in [lo, hi] with g(lo) &lt; 0 &lt;= g(hi): Newton safeguarded by bisection. */
