@@ -14,8 +14,9 @@ import java.util.Optional;
  * sigma = 1.4826 MAD (methods.md 2.3). When the robust fit fails or leaves more than
  * {@link Options#ransacTrigger()} of the points out, RANSAC on 3-point samples (methods.md 2.4)
  * finds a consensus that the same robust refinement then polishes; that result is kept unless the
- * robust one has the strictly larger consensus within {@link Options#inlierThreshold()}. Spans whose vertex lies outside the
- * data (inclined, uplift) need no special care: s0 is never constrained to the span.
+ * robust one has the strictly larger consensus within {@link Options#inlierThreshold()}. Spans
+ * whose vertex lies outside the data (inclined, uplift) need no special care: s0 is never
+ * constrained to the span.
  *
  * <p>Constrained fits: {@link #fitThrough} with both attachments known (only c free, Brent on ln
  * c) and {@link #fitFrom} with one attachment known (s0 and c free).

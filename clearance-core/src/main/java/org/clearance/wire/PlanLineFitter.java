@@ -10,9 +10,9 @@ import java.util.SplittableRandom;
  * planes of closest fit", Phil. Mag. 2(11):559; shared/reference/methods.md sections 2.1-2.2).
  * The major-axis angle has the closed form theta = atan2(2 Sxy, Sxx - Syy) / 2.
  *
- * <p>Robust option: a least-median-of-squares start, then reweighted rounds with Tukey's biweight on the perpendicular residuals at
- * sigma = 1.4826 MAD (as in {@link CatenaryFitter}), so that stray points (a branch, a crossing
- * wire) do not tilt the line. The direction is oriented so that the input order runs forwards:
+ * <p>Robust option: a least-median-of-squares start, then reweighted rounds with Tukey's biweight
+ * on the perpendicular residuals at sigma = 1.4826 MAD (as in {@link CatenaryFitter}), so that
+ * stray points (a branch, a crossing wire) do not tilt the line. The direction is oriented so that the input order runs forwards:
  * the last inlier lies ahead of the first.
  */
 public final class PlanLineFitter {

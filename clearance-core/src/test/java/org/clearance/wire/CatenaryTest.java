@@ -71,7 +71,8 @@ class CatenaryTest {
     // cosh t - 1 = 2 sinh^2(t/2) exactly (identity); the plain form loses digits at small t.
     // Series t^2/2 + t^4/24 at t = 1e-6 (Taylor, from memory of the cosh series).
     double t = 1e-6;
-    assertEquals(t * t / 2 + t * t * t * t / 24, Catenary.coshm1(t), 1e-27); // about one ulp of 5e-13
+    // tolerance about one ulp of 5e-13
+    assertEquals(t * t / 2 + t * t * t * t / 24, Catenary.coshm1(t), 1e-27);
     // reference library: commons-math3 FastMath.asinh
     assertEquals(FastMath.asinh(-3.5), Catenary.asinh(-3.5), 1e-15);
     assertEquals(FastMath.asinh(-1e-9), Catenary.asinh(-1e-9), 1e-24);
