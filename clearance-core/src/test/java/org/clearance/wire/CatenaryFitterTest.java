@@ -36,6 +36,8 @@ class CatenaryFitterTest {
     assertEquals(6.4185, fit.curve().midSpanSag(0, 300), 1e-4);
     assertEquals(5, fit.inlierCount());
     assertEquals(0, fit.rmsResidual(), 1e-6);
+    // Regression: Optional.map over a null bounds check once made every robust fit look failed,
+    // so clean data went down the RANSAC path.
     assertEquals(CatenaryFit.Method.ROBUST, fit.method());
   }
 

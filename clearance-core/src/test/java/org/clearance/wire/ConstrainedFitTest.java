@@ -61,7 +61,8 @@ class ConstrainedFitTest {
 
   @Test
   void bothAttachmentsWithPointsAboveChordFail() {
-    // Points above the chord: only an infinitely taut wire comes near them.
+    // Points above the chord: only an infinitely taut wire comes near them. Regression: the
+    // reweighting once rejected every point and reported "no point keeps weight" instead.
     double[] s = {50, 100, 150};
     double[] z = {12, 13, 12};
     CatenaryFit fit = CatenaryFitter.fitThrough(s, z, 0, 10, 200, 10);
