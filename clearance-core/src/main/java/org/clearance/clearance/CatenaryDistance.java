@@ -142,6 +142,30 @@ public final class CatenaryDistance {
   }
 
   /**
+   * Swing angle within [phiLo, phiHi] at which the swung conductor comes closest to point
+   * (x, y, z), radians: the angle of the range nearest the point's own angle about the chord (the
+   * class comment shows the distance falls monotonically towards that angle).
+   *
+   * @param phiLo smallest swing, radians, in [-pi, phiHi]
+   * @param phiHi largest swing, radians, in [phiLo, pi]
+   * @throws IllegalArgumentException when the range is empty or outside [-pi, pi]
+   */
+  public double closestSwingAngle(double x, double y, double z, double phiLo, double phiHi) {
+    if (!(phiLo >= -Math.PI && phiLo <= phiHi && phiHi <= Math.PI)) {
+      throw new IllegalArgumentException("swing range must lie in [-pi, pi]: " + phiLo + ", "
+          + phiHi);
+    }
+    double ps = plan.station(x, y);
+    double pe = plan.offset(x, y);
+    double pz = z - zA;
+    double psi = Math.atan2(pe, kz * ps - ks * pz);
+    if (psi >= phiLo && psi <= phiHi) {
+      return psi;
+    }
+    return Math.cos(psi - phiLo) >= Math.cos(psi - phiHi) ? phiLo : phiHi;
+  }
+
+  /**
    * Smallest distance from point (x, y, z) to the conductor over all swings in
    * [-phiMax, phiMax], m.
    *
