@@ -37,6 +37,10 @@ final class LasHeaderWriter {
       } else {
         out.add(new VlrBytes(Vlr.PROJECTION_USER_ID, Vlr.GEO_KEY_DIRECTORY,
             "GeoTIFF GeoKeyDirectoryTag", geoKeys(u)));
+        if (!u.crsName().isEmpty()) {
+          out.add(new VlrBytes(Vlr.PROJECTION_USER_ID, Vlr.GEO_ASCII_PARAMS,
+              "GeoTIFF GeoAsciiParamsTag", citation(u)));
+        }
       }
     }
     if (o.versionMinor() >= 4 && o.extraBytes() > 0) {
@@ -64,23 +68,38 @@ final class LasHeaderWriter {
     return all.toByteArray();
   }
 
+  /** The CRS name as GeoTIFF ASCII parameters: the text and a '|' terminator. */
+  static byte[] citation(SurveyUnits u) {
+    return (asciiName(u) + "|\0").getBytes(StandardCharsets.US_ASCII);
+  }
+
+  private static String asciiName(SurveyUnits u) {
+    return u.crsName().replaceAll("[^\\x20-\\x7e]", "?").replace('|', '/');
+  }
+
   /**
-   * GeoTIFF keys: model type projected (1024 = 1), the EPSG code (3072) when known, the
-   * horizontal (3076) and vertical (4099) unit codes; keys in ascending order as GeoTIFF
-   * requires.
+   * GeoTIFF keys: model type projected (1024 = 1), the CRS name as citation (1026, in the ASCII
+   * record) when given, the EPSG code (3072) when known, the horizontal (3076) and vertical
+   * (4099) unit codes; keys in ascending order as GeoTIFF requires.
    */
   static byte[] geoKeys(SurveyUnits u) {
     List<int[]> keys = new ArrayList<>();
-    keys.add(new int[] {GeoKeysCrs.MODEL_TYPE, GeoKeysCrs.MODEL_PROJECTED});
-    if (u.epsg().isPresent() && u.epsg().getAsInt() > 0 && u.epsg().getAsInt() < 0xFFFF) {
-      keys.add(new int[] {GeoKeysCrs.PROJECTED_CS_TYPE, u.epsg().getAsInt()});
+    keys.add(new int[] {GeoKeysCrs.MODEL_TYPE, 0, 1, GeoKeysCrs.MODEL_PROJECTED});
+    if (!u.crsName().isEmpty()) {
+      keys.add(new int[] {GeoKeysCrs.CITATION, Vlr.GEO_ASCII_PARAMS, asciiName(u).length() + 1,
+          0});
     }
-    keys.add(new int[] {GeoKeysCrs.PROJ_LINEAR_UNITS, u.horizontal().epsgCode()});
-    keys.add(new int[] {GeoKeysCrs.VERTICAL_UNITS, u.vertical().epsgCode()});
+    if (u.epsg().isPresent() && u.epsg().getAsInt() > 0 && u.epsg().getAsInt() < 0xFFFF) {
+      keys.add(new int[] {GeoKeysCrs.PROJECTED_CS_TYPE, 0, 1, u.epsg().getAsInt()});
+    }
+    keys.add(new int[] {GeoKeysCrs.PROJ_LINEAR_UNITS, 0, 1, u.horizontal().epsgCode()});
+    keys.add(new int[] {GeoKeysCrs.VERTICAL_UNITS, 0, 1, u.vertical().epsgCode()});
     ByteBuffer b = ByteBuffer.allocate(8 + 8 * keys.size()).order(ByteOrder.LITTLE_ENDIAN);
     b.putShort((short) 1).putShort((short) 1).putShort((short) 0).putShort((short) keys.size());
     for (int[] k : keys) {
-      b.putShort((short) k[0]).putShort((short) 0).putShort((short) 1).putShort((short) k[1]);
+      for (int v : k) {
+        b.putShort((short) v);
+      }
     }
     return b.array();
   }
