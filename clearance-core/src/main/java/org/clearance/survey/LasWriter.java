@@ -52,9 +52,9 @@ public final class LasWriter implements AutoCloseable {
     boolean ok = false;
     try {
       channel = FileChannel.open(temp, StandardOpenOption.WRITE);
-      writeAt(ByteBuffer.wrap(new byte[(int) LasHeader.standardHeaderSize(
-          options.versionMinor())]), 0);
-      writeAt(ByteBuffer.wrap(vlrBytes), LasHeader.standardHeaderSize(options.versionMinor()));
+      int headerSize = LasHeader.standardHeaderSize(options.versionMinor());
+      writeAt(ByteBuffer.wrap(new byte[headerSize]), 0);
+      writeAt(ByteBuffer.wrap(vlrBytes), headerSize);
       position = pointOffset;
       ok = true;
     } finally {

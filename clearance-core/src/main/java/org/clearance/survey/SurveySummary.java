@@ -26,7 +26,8 @@ import java.util.OptionalLong;
  * @param withheldCount points flagged withheld
  * @param horizontal unit of x and y, when stated or given
  * @param vertical unit of z, when stated or given
- * @param unitsSource how the units were found, or why not
+ * @param horizontalSource how the horizontal unit was found, or why it is not known
+ * @param verticalSource how the vertical unit was found, or why it is not known
  * @param crsName CRS name from the first file, or an empty string
  * @param epsg EPSG code of the projected CRS, when stated
  * @param cellSize side of the density grid cells, metres
@@ -44,7 +45,8 @@ public record SurveySummary(
     long withheldCount,
     Optional<LinearUnit> horizontal,
     Optional<LinearUnit> vertical,
-    String unitsSource,
+    String horizontalSource,
+    String verticalSource,
     String crsName,
     OptionalInt epsg,
     double cellSize,
@@ -84,7 +86,8 @@ public record SurveySummary(
     Objects.requireNonNull(extent, "extent");
     Objects.requireNonNull(horizontal, "horizontal");
     Objects.requireNonNull(vertical, "vertical");
-    Objects.requireNonNull(unitsSource, "unitsSource");
+    Objects.requireNonNull(horizontalSource, "horizontalSource");
+    Objects.requireNonNull(verticalSource, "verticalSource");
     Objects.requireNonNull(crsName, "crsName");
     Objects.requireNonNull(epsg, "epsg");
     Objects.requireNonNull(occupiedCells, "occupiedCells");
@@ -140,7 +143,8 @@ public record SurveySummary(
         : Double.NaN;
     double density = area > 0 ? all.count() / area : Double.NaN;
     return new SurveySummary(fileSummaries, all.count(), classes, all.extent(), all.gpsMin(),
-        all.gpsMax(), all.withheld(), units.horizontal(), units.vertical(), units.source(),
+        all.gpsMax(), all.withheld(), units.horizontal(), units.vertical(),
+        units.horizontalSource(), units.verticalSource(),
         units.crs().name(), units.crs().epsg(), DENSITY_CELL_M, cells, area, density);
   }
 }
