@@ -106,11 +106,11 @@ class SurveyCommandTest {
     assertEquals("m", j.get("horizontal_unit"));
     assertEquals("m", j.get("vertical_unit"));
     Map<String, Object> d = MiniJson.object(j.get("density"));
-    double cells = num(d, "occupied_cells");
-    // The corridor is a 40 m wide cut along about 415 m of line (README): between 8 x 83 = 664
-    // cells and the 28 x 83 = 2324 cells of its bounding box (139 m x 415 m in 5 m cells).
-    assertTrue(cells > 600 && cells <= 2324, "cells " + cells);
-    assertEquals(153464 / (cells * 25), num(d, "points_per_m2"), 1e-9);
+    // [computed] with numpy from the file's bytes: distinct (floor(x / 5), floor(y / 5)) over
+    // all 153464 points = 1422 cells; density = 153464 / (1422 x 25 m2) = 4.3169 points/m2.
+    assertEquals(1422, num(d, "occupied_cells"), 0);
+    assertEquals(1422 * 25.0, num(d, "occupied_area_m2"), 1e-9);
+    assertEquals(4.3169, num(d, "points_per_m2"), 1e-4);
   }
 
   @Test
