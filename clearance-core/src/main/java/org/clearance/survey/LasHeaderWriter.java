@@ -131,7 +131,8 @@ final class LasHeaderWriter {
         .order(ByteOrder.LITTLE_ENDIAN);
     for (int d = 0; d < descriptors; d++) {
       int at = d * EXTRA_BYTES_DESCRIPTOR;
-      int bytes = Math.min(MAX_UNDOCUMENTED_PER_DESCRIPTOR, n - d * MAX_UNDOCUMENTED_PER_DESCRIPTOR);
+      int bytes = Math.min(MAX_UNDOCUMENTED_PER_DESCRIPTOR,
+          n - d * MAX_UNDOCUMENTED_PER_DESCRIPTOR);
       b.put(at + 2, (byte) 0);
       b.put(at + 3, (byte) bytes);
       putText(b, at + 4, "padding " + d, 32);

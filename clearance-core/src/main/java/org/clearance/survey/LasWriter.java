@@ -22,6 +22,9 @@ import java.util.Objects;
  * reader never sees a half-written file. {@link #abort()}, or any failure in {@link #write},
  * deletes the temporary file instead, and a later {@code close()} does nothing more.
  *
+ * <p>Attributes the format does not carry are dropped; a NaN GPS time is written as 0; the
+ * overlap flag is written only by formats 6-10 (formats 0-5 express overlap as class 12).
+ *
  * <p>Usage: {@code try (LasWriter w = LasWriter.create(path, options)) { w.write(chunk); }}
  * commits on leaving the block; call {@link #abort()} in a {@code catch} to discard the file.
  */

@@ -174,4 +174,32 @@ class SurveyTest {
     assertEquals(0, s.gpsTimeMin(), 0);
     assertEquals(N_A - 1, s.gpsTimeMax(), 0);
   }
+
+  @Test
+  void emptyTileBetweenTilesIsSkipped() {
+    Path empty = dir.resolve("empty.las");
+    LasWriter.create(empty, LasWriterOptions.of(2, PointFormat.F0).withCrs(metres())).close();
+    Survey s = Survey.open(List.of(tileA, empty, tileB), UnitsChoice.fromFile(), 500);
+    List<String> order = new ArrayList<>();
+    s.read(c -> order.add(c.fileIndex() + ":" + c.firstRecord() + "+" + c.size()));
+    assertEquals(List.of("0:0+500", "0:500+500", "2:0+500", "2:500+500", "2:1000+500"), order);
+    long[] n = new long[1];
+    s.readParallel(2, () -> c -> {
+      synchronized (n) {
+        n[0] += c.size();
+      }
+    });
+    assertEquals(N_A + N_B, n[0]);
+  }
+
+  @Test
+  void fileThatShrinksAfterOpeningIsAnInputError() throws java.io.IOException {
+    Survey s = Survey.open(List.of(tileA), UnitsChoice.fromFile());
+    try (java.io.RandomAccessFile f = new java.io.RandomAccessFile(tileA.toFile(), "rw")) {
+      f.setLength(f.length() - 100);
+    }
+    InputException e = assertThrows(InputException.class, () -> s.read(c -> { }));
+    assertTrue(e.getMessage().startsWith(tileA.toString()), e.getMessage());
+    assertTrue(e.getMessage().contains("damaged or changed"), e.getMessage());
+  }
 }
