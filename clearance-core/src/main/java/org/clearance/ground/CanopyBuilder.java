@@ -4,6 +4,7 @@ import java.util.List;
 import java.util.Objects;
 import java.util.function.Consumer;
 import org.clearance.survey.PointChunk;
+import org.clearance.survey.Survey;
 
 /**
  * Collects the canopy surface from a stream of point chunks (the highest vegetation-like return
@@ -46,6 +47,14 @@ public final class CanopyBuilder implements Consumer<PointChunk> {
       TreeOptions options, PlanPredicate region) {
     CanopyBuilder b = new CanopyBuilder(options, region);
     chunks.forEach(b);
+    return b.findTrees(ground);
+  }
+
+  /** Shortcut: reads the survey (on the calling thread) and finds the trees. */
+  public static List<Tree> findTrees(Survey survey, GroundModel ground, TreeOptions options,
+      PlanPredicate region) {
+    CanopyBuilder b = new CanopyBuilder(options, region);
+    survey.read(b);
     return b.findTrees(ground);
   }
 

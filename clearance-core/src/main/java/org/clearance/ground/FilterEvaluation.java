@@ -4,6 +4,7 @@ import java.util.Objects;
 import java.util.Set;
 import java.util.function.Consumer;
 import org.clearance.survey.PointChunk;
+import org.clearance.survey.Survey;
 
 /**
  * Scores a {@link GroundModel}'s point test ({@link GroundModel#isGround}) against a survey's own
@@ -51,6 +52,13 @@ public final class FilterEvaluation implements Consumer<PointChunk> {
   public static CrossMatrix evaluate(Iterable<PointChunk> chunks, GroundModel model) {
     FilterEvaluation e = new FilterEvaluation(model);
     chunks.forEach(e);
+    return e.result();
+  }
+
+  /** Shortcut: scores every point of the survey (read on the calling thread). */
+  public static CrossMatrix evaluate(Survey survey, GroundModel model) {
+    FilterEvaluation e = new FilterEvaluation(model);
+    survey.read(e);
     return e.result();
   }
 

@@ -1,23 +1,31 @@
 package org.clearance.ground;
 
+import java.util.ArrayList;
+import java.util.List;
 import java.util.Objects;
 import java.util.Optional;
 import java.util.function.Consumer;
 import org.clearance.InputException;
 import org.clearance.survey.PointChunk;
+import org.clearance.survey.Survey;
 
 /**
  * Builds a {@link GroundModel} from a stream of point chunks in one pass.
  *
  * <p>While the survey streams by, the builder keeps only two sparse rasters: the lowest point per
- * cell over all non-noise points, and the lowest class-2 (ground) point per cell. {@link #build()}
- * then makes the terrain block by block (dense rasters of {@code blockSize} plus an overlap), so
- * memory stays bounded by the corridor's area:
+ * cell over all non-noise points, and the lowest class-2 (ground) point per cell, each with its
+ * position in the cell ({@link LowestPointGrid}). {@link #build()} then makes the terrain block
+ * by block (dense rasters of {@code blockSize} plus an overlap), so memory stays bounded by the
+ * corridor's area:
  * <ul>
  *   <li>class 2 used: the class-2 minimum surface, holes (under buildings, dense canopy) filled
  *       by Laplace inpainting;
- *   <li>filter used: SMRF (Pingel, Clarke &amp; McBride 2013) over the minimum surface of all points.
+ *   <li>filter used: SMRF (Pingel, Clarke &amp; McBride 2013) over the minimum surface of all
+ *       points; the cells it keeps as ground make the provisional DEM.
  * </ul>
+ * Finally each ground cell's lowest point is moved to the cell centre along the provisional
+ * surface's gradient (undoing the minimum surface's downhill bias on slopes) and the terrain is
+ * inpainted again from those values.
  * Points of class 7 (low noise) and 18 (high noise) and withheld points are ignored.
  *
  * <p>Usage: {@code GroundModelBuilder b = new GroundModelBuilder(options); survey.forEach(b);
@@ -32,8 +40,8 @@ public final class GroundModelBuilder implements Consumer<PointChunk> {
   static final int CLASS_HIGH_NOISE = 18;
 
   private final GroundOptions options;
-  private SparseGrid surface;
-  private SparseGrid classified;
+  private LowestPointGrid surface;
+  private LowestPointGrid classified;
   private long points;
   private long groundPoints;
 
@@ -41,8 +49,9 @@ public final class GroundModelBuilder implements Consumer<PointChunk> {
   public GroundModelBuilder(GroundOptions options) {
     this.options = Objects.requireNonNull(options, "options");
     double cell = options.smrf().cellSize();
-    this.surface = new SparseGrid(cell);
-    this.classified = options.source() == GroundOptions.Source.FILTER ? null : new SparseGrid(cell);
+    this.surface = new LowestPointGrid(cell);
+    this.classified = options.source() == GroundOptions.Source.FILTER
+        ? null : new LowestPointGrid(cell);
   }
 
   /** Shortcut: feeds every chunk to a new builder and builds. */
@@ -50,6 +59,43 @@ public final class GroundModelBuilder implements Consumer<PointChunk> {
     GroundModelBuilder b = new GroundModelBuilder(options);
     chunks.forEach(b);
     return b.build();
+  }
+
+  /**
+   * Shortcut: reads the survey on {@code threads} threads, one builder per thread, merges them
+   * and builds.
+   *
+   * @param threads reader threads, 1 to 256 (1 reads on the calling thread)
+   * @throws InputException as {@link Survey#read} and {@link #build()}
+   */
+  public static GroundModel build(Survey survey, GroundOptions options, int threads) {
+    GroundModelBuilder first = new GroundModelBuilder(options);
+    if (threads == 1) {
+      survey.read(first);
+      return first.build();
+    }
+    List<GroundModelBuilder> all = new ArrayList<>();
+    survey.readParallel(threads, () -> {
+      GroundModelBuilder b = new GroundModelBuilder(options);
+      all.add(b);
+      return b;
+    });
+    for (GroundModelBuilder b : all) {
+      first.absorb(b);
+    }
+    return first.build();
+  }
+
+  /** Adds everything another builder (same options) has collected; that builder is emptied. */
+  void absorb(GroundModelBuilder other) {
+    surface.merge(other.surface);
+    if (classified != null) {
+      classified.merge(other.classified);
+    }
+    points += other.points;
+    groundPoints += other.groundPoints;
+    other.surface = null;
+    other.classified = null;
   }
 
   /** True for points every ground step ignores: noise classes 7 and 18, and withheld points. */
@@ -78,11 +124,11 @@ public final class GroundModelBuilder implements Consumer<PointChunk> {
         continue;
       }
       points++;
-      surface.accumulateMin(x[i], y[i], z[i]);
+      surface.accept(x[i], y[i], z[i]);
       if (cls[i] == CLASS_GROUND) {
         groundPoints++;
         if (classified != null) {
-          classified.accumulateMin(x[i], y[i], z[i]);
+          classified.accept(x[i], y[i], z[i]);
         }
       }
     }
@@ -113,25 +159,36 @@ public final class GroundModelBuilder implements Consumer<PointChunk> {
     long surfaceCells = 0;
     long groundCells = 0;
     long filledCells = 0;
-    for (BlockTiling.Block b : BlockTiling.cover(surface, options.blockCells(),
+    for (BlockTiling.Block b : BlockTiling.cover(surface.elevations(), options.blockCells(),
         options.overlapCells())) {
       int side = b.readSize();
-      float[] all = surface.readBlock(b.readCol0(), b.readRow0(), side, side);
+      int col0 = b.readCol0();
+      int row0 = b.readRow0();
+      float[] all = surface.elevations().readBlock(col0, row0, side, side);
       boolean[] covered = coverage(all, side, margin);
-      float[] dem;
+      LowestPointGrid lows = useClassified ? classified : surface;
+      float[] provisional;
       boolean[] ground = new boolean[all.length];
       if (useClassified) {
-        float[] g = classified.readBlock(b.readCol0(), b.readRow0(), side, side);
+        float[] g = classified.elevations().readBlock(col0, row0, side, side);
         for (int i = 0; i < g.length; i++) {
           ground[i] = !Float.isNaN(g[i]);
         }
-        dem = Inpainter.fill(g, side, side);
+        provisional = Inpainter.fill(g, side, side);
       } else {
         SmrfRaster.Result r = SmrfRaster.run(all, side, side, smrf);
         for (int i = 0; i < all.length; i++) {
           ground[i] = !Float.isNaN(all[i]) && !r.object()[i] && !r.lowOutlier()[i];
         }
-        dem = r.dem();
+        provisional = r.dem();
+      }
+      float[] dem = provisional;
+      if (!Float.isNaN(provisional[0])) {
+        float[] centred = lows.positionCorrected(col0, row0, side, provisional);
+        for (int i = 0; i < centred.length; i++) {
+          centred[i] = ground[i] ? centred[i] : Float.NaN;
+        }
+        dem = Inpainter.fill(centred, side, side);
       }
       for (int r = b.overlap(); r < b.overlap() + b.size(); r++) {
         for (int c = b.overlap(); c < b.overlap() + b.size(); c++) {
@@ -140,7 +197,7 @@ public final class GroundModelBuilder implements Consumer<PointChunk> {
             surfaceCells++;
           }
           if (covered[i] && !Float.isNaN(dem[i])) {
-            terrain.set(b.readCol0() + c, b.readRow0() + r, dem[i]);
+            terrain.set(col0 + c, row0 + r, dem[i]);
             if (ground[i]) {
               groundCells++;
             } else {

@@ -95,14 +95,46 @@ public final class SparseGrid {
   }
 
   /**
+   * Folds another grid of the same geometry into this one, keeping the lower value of each cell
+   * (for grids filled by parallel readers).
+   *
+   * @throws IllegalArgumentException when the cell or tile sizes differ
+   */
+  public void mergeMin(SparseGrid other) {
+    merge(other, false);
+  }
+
+  /** Like {@link #mergeMin} but keeps the higher value of each cell. */
+  public void mergeMax(SparseGrid other) {
+    merge(other, true);
+  }
+
+  private void merge(SparseGrid other, boolean max) {
+    if (other.cellSize != cellSize || other.tileCells != tileCells) {
+      throw new IllegalArgumentException("grids differ in cell or tile size");
+    }
+    for (long k : other.tiles.keys()) {
+      float[] src = other.tiles.get(k);
+      float[] dst = tiles.getOrCreate(k, tileCells * tileCells);
+      for (int i = 0; i < src.length; i++) {
+        float v = src[i];
+        if (!Float.isNaN(v) && (Float.isNaN(dst[i]) || (max ? v > dst[i] : v < dst[i]))) {
+          dst[i] = v;
+        }
+      }
+    }
+  }
+
+  /**
    * Lowers the cell holding {@code (x, y)} to {@code value} when that is lower (or the cell empty).
    *
    * @param x easting, metres
    * @param y northing, metres
    * @param value any finite number, e.g. an elevation in metres
+   * @return true when the cell took the value
    * @throws IllegalArgumentException when x or y is not finite or absurdly far from the origin
    */
-  public void accumulateMin(double x, double y, double value) {
+  public boolean accumulateMin(double x, double y, double value) {
     int col = checkedIndex(x);
     int row = checkedIndex(y);
     float[] tile = tiles.getOrCreate(key(col >> shift, row >> shift), tileCells * tileCells);
@@ -110,7 +142,9 @@ public final class SparseGrid {
     float v = (float) value;
     if (!(tile[i] <= v)) {
       tile[i] = v;
+      return true;
     }
+    return false;
   }
 
   /** Like {@link #accumulateMin} but keeps the highest value. */
@@ -226,6 +260,16 @@ public final class SparseGrid {
       }
     }
     return out;
+  }
+
+  /** The tile stored under {@code key}, or null; cells row-major within the tile. */
+  float[] tile(long key) {
+    return tiles.get(key);
+  }
+
+  /** The tile stored under {@code key}, created (all NaN) when absent. */
+  float[] tileOrCreate(long key) {
+    return tiles.getOrCreate(key, tileCells * tileCells);
   }
 
   /** Number of tiles allocated. */

@@ -1,0 +1,108 @@
+package org.clearance.ground;
+
+/**
+ * The lowest point of each raster cell: its elevation and where in the cell it lies.
+ *
+ * <p>A minimum surface puts each cell's lowest point at the cell's centre. On sloping ground the
+ * lowest point sits towards the downhill edge, so the surface reads low by about the slope times
+ * a fraction of the cell (0.2 m on a 30-degree slope with 1 m cells). Knowing the point's position
+ * lets {@link #positionCorrected} move its elevation to the centre along the local gradient.
+ *
+ * <p>The position is kept as a second float per cell, packing x and y offsets quantised to
+ * 1/{@value #STEPS} of the cell (1 mm at 1 m cells); integers below 2^24 are exact in a float.
+ */
+final class LowestPointGrid {
+  /** Quantisation steps per cell side for the stored position. */
+  static final int STEPS = 1024;
+  /**
+   * Steepest gradient (rise over run) used to move a lowest point to its cell centre; beyond 45
+   * degrees the ground is a step, not a plane, and the move would be a guess.
+   */
+  static final double MAX_CORRECTION_SLOPE = 1.0;
+
+  private final SparseGrid z;
+  private final SparseGrid where;
+
+  /** @param cellSize cell side, metres, &gt; 0 */
+  LowestPointGrid(double cellSize) {
+    z = new SparseGrid(cellSize);
+    where = new SparseGrid(cellSize);
+  }
+
+  /** Offers a point (metres); kept when it is the lowest of its cell so far. */
+  void accept(double x, double y, double elevation) {
+    if (z.accumulateMin(x, y, elevation)) {
+      double cell = z.cellSize();
+      int qx = quantise(x / cell - Math.floor(x / cell));
+      int qy = quantise(y / cell - Math.floor(y / cell));
+      where.set(z.column(x), z.row(y), qx * STEPS + qy);
+    }
+  }
+
+  /** Folds another grid of the same cell size in, cell by cell keeping the lower point. */
+  void merge(LowestPointGrid other) {
+    for (long k : other.z.tileKeys()) {
+      float[] oz = other.z.tile(k);
+      float[] ow = other.where.tile(k);
+      float[] tz = z.tileOrCreate(k);
+      float[] tw = where.tileOrCreate(k);
+      for (int i = 0; i < oz.length; i++) {
+        if (!Float.isNaN(oz[i]) && !(tz[i] <= oz[i])) {
+          tz[i] = oz[i];
+          tw[i] = ow[i];
+        }
+      }
+    }
+  }
+
+  /** The elevation grid (lowest elevation per cell, metres). */
+  SparseGrid elevations() {
+    return z;
+  }
+
+  /**
+   * The lowest elevations of a block moved to their cell centres along the gradient of
+   * {@code surface}: z - (gx dx + gy dy), with (dx, dy) the point's offset from the centre and the
+   * gradient from central differences of {@code surface}, capped at {@link #MAX_CORRECTION_SLOPE}.
+   *
+   * @param col0 first column of the block
+   * @param row0 first row of the block
+   * @param side block side, cells
+   * @param surface a smooth surface over the same block (no NaN), metres
+   * @return corrected elevations, NaN where the cell holds no point
+   */
+  float[] positionCorrected(int col0, int row0, int side, float[] surface) {
+    float[] lows = z.readBlock(col0, row0, side, side);
+    float[] pos = where.readBlock(col0, row0, side, side);
+    double cell = z.cellSize();
+    for (int r = 0; r < side; r++) {
+      for (int c = 0; c < side; c++) {
+        int i = r * side + c;
+        if (Float.isNaN(lows[i])) {
+          continue;
+        }
+        int q = (int) pos[i];
+        double dx = ((q / STEPS + 0.5) / STEPS - 0.5) * cell;
+        double dy = ((q % STEPS + 0.5) / STEPS - 0.5) * cell;
+        double gx = gradient(surface, i, c, side, 1) / cell;
+        double gy = gradient(surface, i, r, side, side) / cell;
+        gx = Math.max(-MAX_CORRECTION_SLOPE, Math.min(MAX_CORRECTION_SLOPE, gx));
+        gy = Math.max(-MAX_CORRECTION_SLOPE, Math.min(MAX_CORRECTION_SLOPE, gy));
+        lows[i] = (float) (lows[i] - gx * dx - gy * dy);
+      }
+    }
+    return lows;
+  }
+
+  /** Change of {@code s} per cell along one axis: central difference, one-sided at the edge. */
+  private static double gradient(float[] s, int i, int along, int side, int step) {
+    if (along > 0 && along < side - 1) {
+      return 0.5 * (s[i + step] - s[i - step]);
+    }
+    return along == 0 ? s[i + step] - s[i] : s[i] - s[i - step];
+  }
+
+  private static int quantise(double fraction) {
+    return Math.min(STEPS - 1, Math.max(0, (int) (fraction * STEPS)));
+  }
+}
