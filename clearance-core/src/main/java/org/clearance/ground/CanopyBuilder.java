@@ -1,5 +1,6 @@
 package org.clearance.ground;
 
+import java.util.ArrayList;
 import java.util.List;
 import java.util.Objects;
 import java.util.function.Consumer;
@@ -50,12 +51,29 @@ public final class CanopyBuilder implements Consumer<PointChunk> {
     return b.findTrees(ground);
   }
 
-  /** Shortcut: reads the survey (on the calling thread) and finds the trees. */
+  /**
+   * Shortcut: reads the survey on {@code threads} threads (one builder each, merged) and finds
+   * the trees. The region is called from all reader threads at once.
+   *
+   * @param threads reader threads, 1 to 256 (1 reads on the calling thread)
+   */
   public static List<Tree> findTrees(Survey survey, GroundModel ground, TreeOptions options,
-      PlanPredicate region) {
-    CanopyBuilder b = new CanopyBuilder(options, region);
-    survey.read(b);
-    return b.findTrees(ground);
+      PlanPredicate region, int threads) {
+    CanopyBuilder first = new CanopyBuilder(options, region);
+    if (threads == 1) {
+      survey.read(first);
+    } else {
+      List<CanopyBuilder> all = new ArrayList<>();
+      survey.readParallel(threads, () -> {
+        CanopyBuilder b = new CanopyBuilder(options, region);
+        all.add(b);
+        return b;
+      });
+      for (CanopyBuilder b : all) {
+        first.surface.mergeMax(b.surface);
+      }
+    }
+    return first.findTrees(ground);
   }
 
   /** True when a point of class {@code cls} can be part of the canopy. */

@@ -28,8 +28,8 @@ import org.clearance.survey.Survey;
  * inpainted again from those values.
  * Points of class 7 (low noise) and 18 (high noise) and withheld points are ignored.
  *
- * <p>Usage: {@code GroundModelBuilder b = new GroundModelBuilder(options); survey.forEach(b);
- * GroundModel g = b.build();} or {@link #build(Iterable, GroundOptions)}.
+ * <p>Usage: {@code GroundModelBuilder b = new GroundModelBuilder(options); survey.read(b);
+ * GroundModel g = b.build();} or {@link #build(Survey, GroundOptions, int)}.
  */
 public final class GroundModelBuilder implements Consumer<PointChunk> {
   /** ASPRS class 2: ground. */

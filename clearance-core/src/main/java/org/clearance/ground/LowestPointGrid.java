@@ -29,13 +29,24 @@ final class LowestPointGrid {
     where = new SparseGrid(cellSize);
   }
 
-  /** Offers a point (metres); kept when it is the lowest of its cell so far. */
+  /**
+   * Offers a point (metres); kept when it is the lowest of its cell so far. Of points at exactly
+   * the same elevation the one with the smaller packed position is kept, so the result does not
+   * depend on the order the points arrive in (parallel readers).
+   */
   void accept(double x, double y, double elevation) {
-    if (z.accumulateMin(x, y, elevation)) {
-      double cell = z.cellSize();
-      int qx = quantise(x / cell - Math.floor(x / cell));
-      int qy = quantise(y / cell - Math.floor(y / cell));
-      where.set(z.column(x), z.row(y), qx * STEPS + qy);
+    int change = z.lower(x, y, elevation);
+    if (change < 0) {
+      return;
+    }
+    double cell = z.cellSize();
+    int qx = quantise(x / cell - Math.floor(x / cell));
+    int qy = quantise(y / cell - Math.floor(y / cell));
+    int packed = qx * STEPS + qy;
+    int col = z.column(x);
+    int row = z.row(y);
+    if (change > 0 || packed < where.get(col, row)) {
+      where.set(col, row, packed);
     }
   }
 
@@ -47,7 +58,9 @@ final class LowestPointGrid {
       float[] tz = z.tileOrCreate(k);
       float[] tw = where.tileOrCreate(k);
       for (int i = 0; i < oz.length; i++) {
-        if (!Float.isNaN(oz[i]) && !(tz[i] <= oz[i])) {
+        boolean lower = !(tz[i] <= oz[i]);
+        boolean tieWin = tz[i] == oz[i] && ow[i] < tw[i];
+        if (!Float.isNaN(oz[i]) && (lower || tieWin)) {
           tz[i] = oz[i];
           tw[i] = ow[i];
         }

@@ -135,17 +135,31 @@ public final class SparseGrid {
    * @throws IllegalArgumentException when x or y is not finite or absurdly far from the origin
    */
   public boolean accumulateMin(double x, double y, double value) {
+    return lower(x, y, value) > 0;
+  }
+
+  /**
+   * Lowers the cell holding {@code (x, y)} to {@code value} when that is lower.
+   *
+   * @return 1 when the cell took the value, 0 when it already held exactly this value, -1 when it
+   *     held a lower one
+   */
+  int lower(double x, double y, double value) {
     int col = checkedIndex(x);
     int row = checkedIndex(y);
     float[] tile = tiles.getOrCreate(key(col >> shift, row >> shift), tileCells * tileCells);
     int i = ((row & mask) << shift) | (col & mask);
     float v = (float) value;
-    if (!(tile[i] <= v)) {
-      tile[i] = v;
-      return true;
+    if (tile[i] == v) {
+      return 0;
     }
-    return false;
+    if (!(tile[i] < v)) {
+      tile[i] = v;
+      return 1;
+    }
+    return -1;
   }
+
 
   /** Like {@link #accumulateMin} but keeps the highest value. */
   public void accumulateMax(double x, double y, double value) {

@@ -94,6 +94,29 @@ class OpenFilesGroundTest {
   }
 
   @Test
+  void parallelReadingGivesTheSameTerrainAndTrees() {
+    // Two reader threads, each with its own builder, merged: the same lowest point per cell and
+    // highest canopy return per cell as one thread, so the same terrain and trees (exactly).
+    Survey survey = open("corridor_12AN2_20_thinned.las", "m");
+    GroundModel one = GroundModelBuilder.build(survey, GroundOptions.defaults(), 1);
+    GroundModel two = GroundModelBuilder.build(survey, GroundOptions.defaults(), 2);
+    Bounds b = survey.bounds();
+    java.util.Random rnd = new java.util.Random(6);
+    for (int k = 0; k < 1000; k++) {
+      double x = b.minX() + (b.maxX() - b.minX()) * rnd.nextDouble();
+      double y = b.minY() + (b.maxY() - b.minY()) * rnd.nextDouble();
+      assertEquals(one.groundZ(x, y), two.groundZ(x, y), 0);
+    }
+    assertEquals(one.source(), two.source());
+    List<Tree> t1 = CanopyBuilder.findTrees(survey, one, TreeOptions.defaults(), PlanPredicate.ALL,
+        1);
+    List<Tree> t2 = CanopyBuilder.findTrees(survey, one, TreeOptions.defaults(), PlanPredicate.ALL,
+        2);
+    assertEquals(t1, t2);
+    assertTrue(t1.size() > 0);
+  }
+
+  @Test
   @Tag("slow")
   void verySparseFileStillKeepsMostGround() {
     // mvk-thin: 6280 points over 5 km x 5 km (one per ~4000 m^2), 1:129 2:1693 4:141 5:578 9:37

@@ -29,6 +29,26 @@ class SparseGridTest {
     assertTrue(Double.isNaN(min.get(1, 0)));
   }
 
+  @Test
+  void mergeKeepsTheLowerOrHigherValuePerCell() {
+    // Hand-made: cells (0,0) 5 vs 3, (1,0) only in the first, (2,0) only in the second.
+    SparseGrid a = new SparseGrid(1.0);
+    SparseGrid b = new SparseGrid(1.0);
+    a.set(0, 0, 5);
+    a.set(1, 0, 7);
+    b.set(0, 0, 3);
+    b.set(2, 0, 9);
+    SparseGrid min = new SparseGrid(1.0);
+    min.mergeMin(a);
+    min.mergeMin(b);
+    a.mergeMax(b);
+    assertEquals(3.0, min.get(0, 0), 0);
+    assertEquals(5.0, a.get(0, 0), 0);
+    assertEquals(7.0, a.get(1, 0), 0);
+    assertEquals(9.0, a.get(2, 0), 0);
+    assertThrows(IllegalArgumentException.class, () -> a.mergeMax(new SparseGrid(0.5)));
+  }
+
   @ParameterizedTest
   @CsvSource({
     // x, cell, expected column: floor(x / cell) (hand-computed)
