@@ -161,44 +161,17 @@ public final class GroundModelBuilder implements Consumer<PointChunk> {
     long filledCells = 0;
     for (BlockTiling.Block b : BlockTiling.cover(surface.elevations(), options.blockCells(),
         options.overlapCells())) {
+      BlockTerrain t = blockTerrain(b, useClassified, margin);
       int side = b.readSize();
-      int col0 = b.readCol0();
-      int row0 = b.readRow0();
-      float[] all = surface.elevations().readBlock(col0, row0, side, side);
-      boolean[] covered = coverage(all, side, margin);
-      LowestPointGrid lows = useClassified ? classified : surface;
-      float[] provisional;
-      boolean[] ground = new boolean[all.length];
-      if (useClassified) {
-        float[] g = classified.elevations().readBlock(col0, row0, side, side);
-        for (int i = 0; i < g.length; i++) {
-          ground[i] = !Float.isNaN(g[i]);
-        }
-        provisional = Inpainter.fill(g, side, side);
-      } else {
-        SmrfRaster.Result r = SmrfRaster.run(all, side, side, smrf);
-        for (int i = 0; i < all.length; i++) {
-          ground[i] = !Float.isNaN(all[i]) && !r.object()[i] && !r.lowOutlier()[i];
-        }
-        provisional = r.dem();
-      }
-      float[] dem = provisional;
-      if (!Float.isNaN(provisional[0])) {
-        float[] centred = lows.positionCorrected(col0, row0, side, provisional);
-        for (int i = 0; i < centred.length; i++) {
-          centred[i] = ground[i] ? centred[i] : Float.NaN;
-        }
-        dem = Inpainter.fill(centred, side, side);
-      }
       for (int r = b.overlap(); r < b.overlap() + b.size(); r++) {
         for (int c = b.overlap(); c < b.overlap() + b.size(); c++) {
           int i = r * side + c;
-          if (!Float.isNaN(all[i])) {
+          if (!Float.isNaN(t.lowest()[i])) {
             surfaceCells++;
           }
-          if (covered[i] && !Float.isNaN(dem[i])) {
-            terrain.set(col0 + c, row0 + r, dem[i]);
-            if (ground[i]) {
+          if (t.covered()[i] && !Float.isNaN(t.dem()[i])) {
+            terrain.set(b.readCol0() + c, b.readRow0() + r, t.dem()[i]);
+            if (t.ground()[i]) {
               groundCells++;
             } else {
               filledCells++;
@@ -214,6 +187,48 @@ public final class GroundModelBuilder implements Consumer<PointChunk> {
     surface = null;
     classified = null;
     return new GroundModel(terrain, smrf, source);
+  }
+
+  /**
+   * Terrain of one block (read raster, row-major).
+   *
+   * @param lowest lowest point per cell of all considered points, metres, NaN where empty
+   * @param covered cells within the coverage margin of a cell with points
+   * @param ground cells whose value comes from ground points
+   * @param dem terrain, metres; NaN when the block has no ground at all
+   */
+  private record BlockTerrain(float[] lowest, boolean[] covered, boolean[] ground, float[] dem) {}
+
+  private BlockTerrain blockTerrain(BlockTiling.Block b, boolean useClassified, int margin) {
+    int side = b.readSize();
+    int col0 = b.readCol0();
+    int row0 = b.readRow0();
+    float[] all = surface.elevations().readBlock(col0, row0, side, side);
+    boolean[] ground = new boolean[all.length];
+    float[] provisional;
+    if (useClassified) {
+      float[] g = classified.elevations().readBlock(col0, row0, side, side);
+      for (int i = 0; i < g.length; i++) {
+        ground[i] = !Float.isNaN(g[i]);
+      }
+      provisional = Inpainter.fill(g, side, side);
+    } else {
+      SmrfRaster.Result r = SmrfRaster.run(all, side, side, options.smrf());
+      for (int i = 0; i < all.length; i++) {
+        ground[i] = !Float.isNaN(all[i]) && !r.object()[i] && !r.lowOutlier()[i];
+      }
+      provisional = r.dem();
+    }
+    float[] dem = provisional;
+    if (!Float.isNaN(provisional[0])) {
+      LowestPointGrid lows = useClassified ? classified : surface;
+      float[] centred = lows.positionCorrected(col0, row0, side, provisional);
+      for (int i = 0; i < centred.length; i++) {
+        centred[i] = ground[i] ? centred[i] : Float.NaN;
+      }
+      dem = Inpainter.fill(centred, side, side);
+    }
+    return new BlockTerrain(all, coverage(all, side, margin), ground, dem);
   }
 
   /** Cells with data, grown by {@code margin} cells in x and y (a square neighbourhood). */
