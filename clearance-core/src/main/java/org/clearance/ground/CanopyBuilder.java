@@ -70,10 +70,25 @@ public final class CanopyBuilder implements Consumer<PointChunk> {
         return b;
       });
       for (CanopyBuilder b : all) {
-        first.surface.mergeMax(b.surface);
+        first.absorb(b);
       }
     }
     return first.findTrees(ground);
+  }
+
+  /**
+   * Adds one point the caller has already judged to be vegetation (class and any other tests
+   * done), if it lies in the region; coordinates in metres.
+   */
+  public void add(double x, double y, double z) {
+    if (region.test(x, y)) {
+      surface.accumulateMax(x, y, z);
+    }
+  }
+
+  /** Adds everything another builder (same options) has collected. */
+  public void absorb(CanopyBuilder other) {
+    surface.mergeMax(other.surface);
   }
 
   /** True when a point of class {@code cls} can be part of the canopy. */

@@ -92,7 +92,7 @@ class ClearanceEngineTest {
     Path file = dir.resolve(NearPointFile.FILE_NAME);
     List<SpanClearance> result;
     try (NearPointWriter w = new NearPointWriter(file, engine.nearPointLayout())) {
-      result = engine.measure(points(pts), w);
+      result = engine.measure(points(pts), w).spans();
     }
     ConditionMinimum m = result.get(0).minima().get(0);
     // The lowest point of a level catenary is at mid-span, so a point straight below it is at
@@ -116,12 +116,12 @@ class ClearanceEngineTest {
     ConductorCurve b = conductor(5);
     SpanModel model = span(set, List.of(hangingOnly("A", a, 1), hangingOnly("B", b, 1)));
     ClearanceEngine engine = new ClearanceEngine(List.of(model), set, (x, y, z) -> 1.0,
-        classified(), new ClearanceEngine.Options(3.0, 1, 0.5, 8.0));
+        classified(), new ClearanceEngine.Options(3.0, 1, 0.5, 8.0, 50.0));
     double[][] pts = {{100, 7, a.z(100), 5}, {100, 0, a.z(100) - 20, 5}};
     Path file = dir.resolve(NearPointFile.FILE_NAME);
     List<SpanClearance> result;
     try (NearPointWriter w = new NearPointWriter(file, engine.nearPointLayout())) {
-      result = engine.measure(points(pts), w);
+      result = engine.measure(points(pts), w).spans();
     }
     ConditionMinimum m = result.get(0).minima().get(0);
     assertEquals("B", m.conductor());
@@ -147,7 +147,7 @@ class ClearanceEngineTest {
     double sideY = sag * Math.sin(phi) + 1.0;
     double sideZ = Z_ATTACH - sag * Math.cos(phi);
     List<SpanClearance> result = engine.measure(points(new double[][] {{sideX, sideY, sideZ, 4}}),
-        null);
+        null).spans();
     double survey = result.get(0).minima().get(0).distance();
     double swung = result.get(0).minima().get(1).distance();
     assertEquals(1.0, swung, 1e-6);
@@ -167,7 +167,7 @@ class ClearanceEngineTest {
       {2, 1, 25, 1}, // on the tower
       {150, 3, a.z(150) - 3, 1}, // a tree top
     };
-    SpanClearance r = engine.measure(points(pts), null).get(0);
+    SpanClearance r = engine.measure(points(pts), null).spans().get(0);
     assertEquals(1, r.pointsMeasured());
     assertEquals(1, r.excludedAsConductor());
     assertEquals(1, r.excludedAsStructure());
