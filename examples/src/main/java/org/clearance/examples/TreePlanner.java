@@ -25,6 +25,7 @@ final class TreePlanner {
   /** Planted-tree distance bands from a conductor, m. */
   static final double GROW_IN_MIN_M = 1.0;
   static final double GROW_IN_MAX_M = 5.0;
+  static final double CLOSE_GROW_IN_MAX_M = 3.0;
   static final double NEAR_MISS_MIN_M = 5.5;
   static final double NEAR_MISS_MAX_M = 9.0;
   /** Tallest planted fall-in tree, m. */
@@ -57,7 +58,9 @@ final class TreePlanner {
   List<DemoTree> plan() {
     int n = corridor.spanCount();
     for (int i = 0; i < n; i++) {
-      if (i != ravineSpan && (i % 3 == 1 || rng.nextDouble() < 0.4)) {
+      if (i != ravineSpan && i % 3 == 1) { // every third span: a close one, under 3 m
+        plantNear(i, DemoTree.Role.GROW_IN, GROW_IN_MIN_M, CLOSE_GROW_IN_MAX_M);
+      } else if (i != ravineSpan && rng.nextDouble() < 0.4) {
         plantNear(i, DemoTree.Role.GROW_IN, GROW_IN_MIN_M, GROW_IN_MAX_M);
       }
       if (i != ravineSpan && rng.nextDouble() < 0.6) {

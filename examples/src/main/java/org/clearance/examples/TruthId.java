@@ -10,6 +10,7 @@ package org.clearance.examples;
 public final class TruthId {
   private static final int INDEX_BITS = 24;
   private static final int INDEX_MASK = (1 << INDEX_BITS) - 1;
+  private static final Kind[] KINDS = Kind.values();
   /** Wires (and positions) per span or structure in the packed index. */
   public static final int WIRES_PER_SPAN = 16;
 
@@ -49,7 +50,7 @@ public final class TruthId {
 
   /** The kind of a packed id. */
   public static Kind kind(int id) {
-    return Kind.values()[id >>> INDEX_BITS];
+    return KINDS[id >>> INDEX_BITS];
   }
 
   /** The index of a packed id. */
