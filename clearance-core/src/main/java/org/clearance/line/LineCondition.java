@@ -9,9 +9,12 @@ import java.util.Objects;
  * @param name unique name used in reports, e.g. {@code hot}
  * @param kind what changes relative to the surveyed state
  * @param temperatureC conductor temperature, degC, or NaN
- * @param creepAllowanceC future creep as an equivalent temperature increase, degC (0 if none)
- * @param iceThicknessM radial ice thickness, m, or NaN (0 allowed)
- * @param iceDensityKgM3 ice density, kg/m^3 (913 glaze by default), or NaN when no ice
+ * @param creepAllowanceC future creep as an equivalent temperature increase, degC (&ge; 0; 0 if
+ *     none) for TEMPERATURE, ICE and WIND; NaN for SWING and EXTRA_SAG
+ * @param iceThicknessM radial ice thickness, m (&ge; 0): given for ICE; given or 0 (bare
+ *     conductor) for WIND; NaN for the other kinds
+ * @param iceDensityKgM3 ice density, kg/m^3 (913 glaze by default) for ICE and WIND (so
+ *     thickness times density is always defined there); NaN for the other kinds
  * @param windPressurePa wind pressure on the projected conductor area, Pa, or NaN
  * @param swingAngleRad explicit swing angle from vertical, radians in [0, pi/2], or NaN
  * @param extraSagM extra mid-span sag over the surveyed sag, m, or NaN
@@ -27,7 +30,7 @@ public record LineCondition(
     double swingAngleRad,
     double extraSagM) {
 
-  /** Glaze ice density, kg/m^3 (shared/reference/methods.md section 3.7: 913 kg/m^3, 57 lb/ft^3). */
+  /** Glaze ice density, kg/m^3 (shared/reference/methods.md section 3.7: 913, 57 lb/ft^3). */
   public static final double GLAZE_ICE_DENSITY = 913.0;
 
   /** What a condition changes relative to the surveyed state. */

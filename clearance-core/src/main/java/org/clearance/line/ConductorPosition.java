@@ -1,0 +1,56 @@
+package org.clearance.line;
+
+import java.util.Objects;
+
+/**
+ * One conductor position on a line's structures (a phase or a shield wire), as the line
+ * specification gives it. Values not given are NaN.
+ *
+ * @param position unique position name within the line, e.g. {@code A} or {@code SW1}; matches
+ *     {@code attach_z_<position>} in the structures file
+ * @param role phase conductor or shield (earth) wire
+ * @param circuit circuit number, &ge; 1 (1 when not given)
+ * @param conductor the conductor type hung at this position
+ * @param offsetM nominal horizontal offset of the attachment from the structure centre line, m,
+ *     positive to the left looking along increasing sequence, or NaN
+ * @param attachHeightM nominal attachment height above the structure's ground, m (&gt; 0), or NaN
+ * @param bundle sub-conductors per phase, &ge; 1
+ * @param bundleSpacingM sub-conductor spacing, m (&gt; 0), or NaN when {@code bundle} is 1
+ * @param insulatorLengthM suspension string length, m (&ge; 0), or NaN
+ */
+public record ConductorPosition(
+    String position,
+    Role role,
+    int circuit,
+    ConductorType conductor,
+    double offsetM,
+    double attachHeightM,
+    int bundle,
+    double bundleSpacingM,
+    double insulatorLengthM) {
+
+  /** What a conductor position carries. */
+  public enum Role {
+    /** A phase conductor (ASPRS LAS class 14, wire - conductor). */
+    PHASE,
+    /** A shield (guard, earth) wire (ASPRS LAS class 13, wire - guard). */
+    SHIELD
+  }
+
+  public ConductorPosition {
+    Objects.requireNonNull(position, "position");
+    Objects.requireNonNull(role, "role");
+    Objects.requireNonNull(conductor, "conductor");
+    if (circuit < 1) {
+      throw new IllegalArgumentException("circuit must be at least 1: " + circuit);
+    }
+    if (bundle < 1) {
+      throw new IllegalArgumentException("bundle must be at least 1: " + bundle);
+    }
+  }
+
+  /** True for a phase conductor. */
+  public boolean isPhase() {
+    return role == Role.PHASE;
+  }
+}
