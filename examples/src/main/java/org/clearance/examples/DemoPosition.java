@@ -2,6 +2,7 @@ package org.clearance.examples;
 
 import java.util.List;
 import java.util.Objects;
+import org.clearance.line.ConductorLibrary;
 import org.clearance.line.ConductorType;
 
 /**
@@ -36,21 +37,16 @@ public record DemoPosition(
     Objects.requireNonNull(type, "type");
   }
 
-  /**
-   * ACSR Drake (795 kcmil 26/7). Values: shared/reference/check-values.md section 3 [from memory,
-   * mutually consistent to about 0.1 %]; modulus and expansion "about" values of the same section.
-   */
-  public static final ConductorType DRAKE = new ConductorType("Drake", 28.14e-3, 468.6e-6, 1.628,
-      138.8e3, 75.0e9, 18.9e-6, Double.NaN, Double.NaN, Double.NaN,
-      "check-values.md section 3 [from memory]");
+  /** ACSR Drake (795 kcmil 26/7) from the built-in conductor library (span-specs acsr.csv). */
+  public static final ConductorType DRAKE = builtin("Drake");
 
-  /**
-   * ACSR Partridge (266.8 kcmil 26/7), used as the shield wire. Values: check-values.md section 3
-   * [from memory].
-   */
-  public static final ConductorType PARTRIDGE = new ConductorType("Partridge", 16.31e-3, 157.2e-6,
-      0.546, 50.3e3, 75.0e9, 18.9e-6, Double.NaN, Double.NaN, Double.NaN,
-      "check-values.md section 3 [from memory]");
+  /** ACSR Partridge (266.8 kcmil 26/7), the shield wire, from the built-in library. */
+  public static final ConductorType PARTRIDGE = builtin("Partridge");
+
+  private static ConductorType builtin(String code) {
+    return ConductorLibrary.builtin().find(code)
+        .orElseThrow(() -> new IllegalStateException("built-in library lacks " + code));
+  }
 
   /** Height of the phase cross arm above a standard (no extension) tower's ground, m. */
   static final double ARM_HEIGHT_M = 24.0;
