@@ -5,6 +5,7 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import org.clearance.InputException;
+import org.clearance.io.Json;
 import org.clearance.line.StructureReader.Field;
 import org.clearance.line.StructureReader.RawRecord;
 

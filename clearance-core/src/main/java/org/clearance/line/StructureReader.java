@@ -11,6 +11,7 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 import org.clearance.InputException;
+import org.clearance.io.Json;
 import org.clearance.survey.LinearUnit;
 import org.clearance.survey.SurveyUnits;
 

@@ -37,7 +37,7 @@ public record Catenary(double s0, double z0, double c) {
     double h = sB - sA;
     double v = zB - zA;
     double s0 = 0.5 * (sA + sB) - c * asinh(v / (2 * c * Math.sinh(h / (2 * c))));
-    double z0 = zA - c * (Math.cosh((sA - s0) / c) - 1);
+    double z0 = zA - c * coshm1((sA - s0) / c);
     return new Catenary(s0, z0, c);
   }
 
@@ -71,7 +71,7 @@ public record Catenary(double s0, double z0, double c) {
 
   /** Elevation at station s, m. */
   public double z(double s) {
-    return z0 + c * (Math.cosh((s - s0) / c) - 1);
+    return z0 + c * coshm1((s - s0) / c);
   }
 
   /** Slope dz/ds at station s (dimensionless) = sinh((s - s0) / c). */
@@ -107,7 +107,22 @@ public record Catenary(double s0, double z0, double c) {
     return Math.min(sB, Math.max(sA, s));
   }
 
+  /**
+   * cosh(t) - 1 without cancellation: 2 sinh^2(t / 2). Near the vertex t is small and the plain
+   * form would lose digits relative to c.
+   */
+  static double coshm1(double t) {
+    double h = Math.sinh(0.5 * t);
+    return 2 * h * h;
+  }
+
+  /** Inverse hyperbolic sine, odd-symmetric so that negative arguments keep their digits. */
   static double asinh(double x) {
-    return Math.log(x + Math.sqrt(x * x + 1));
+    double a = Math.abs(x);
+    if (a > 1e8) { // sqrt(a^2 + 1) = a to double precision; avoids overflow of a^2
+      return Math.copySign(Math.log(2 * a), x);
+    }
+    // log(a + sqrt(a^2 + 1)) written as log1p so that small arguments keep their digits
+    return Math.copySign(Math.log1p(a + a * a / (1 + Math.sqrt(a * a + 1))), x);
   }
 }

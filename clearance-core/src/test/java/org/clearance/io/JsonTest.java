@@ -1,4 +1,4 @@
-package org.clearance.line;
+package org.clearance.io;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertInstanceOf;

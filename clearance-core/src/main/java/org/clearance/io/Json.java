@@ -1,4 +1,4 @@
-package org.clearance.line;
+package org.clearance.io;
 
 import java.util.ArrayList;
 import java.util.Collections;
@@ -10,16 +10,16 @@ import org.clearance.InputException;
 /**
  * A minimal strict JSON parser (RFC 8259: objects, arrays, strings with escapes, numbers,
  * {@code true}, {@code false}, {@code null}) that remembers the line of every value, so errors in
- * a GeoJSON structures file can name the line. Duplicate object keys, trailing commas, comments
+ * a file (a GeoJSON structures file, a run model) can name the line. Duplicate object keys, trailing commas, comments
  * and text after the top-level value are errors.
  */
-final class Json {
+public final class Json {
 
   /** Deepest nesting accepted; a GeoJSON point file nests 4 deep, this guards the stack. */
   private static final int MAX_DEPTH = 64;
 
   /** A parsed value and the 1-based line where it starts. */
-  sealed interface Value permits Obj, Arr, Str, Num, Bool, Null {
+  public sealed interface Value permits Obj, Arr, Str, Num, Bool, Null {
     /** 1-based line where the value starts. */
     int line();
 
@@ -28,47 +28,47 @@ final class Json {
   }
 
   /** An object; members in file order, unmodifiable. */
-  record Obj(Map<String, Value> members, int line) implements Value {
+  public record Obj(Map<String, Value> members, int line) implements Value {
     public String kind() {
       return "an object";
     }
   }
 
   /** An array, unmodifiable. */
-  record Arr(List<Value> items, int line) implements Value {
+  public record Arr(List<Value> items, int line) implements Value {
     public String kind() {
       return "an array";
     }
   }
 
   /** A string, escapes resolved. */
-  record Str(String value, int line) implements Value {
+  public record Str(String value, int line) implements Value {
     public String kind() {
       return "a string";
     }
   }
 
   /** A number as written in the file. */
-  record Num(String text, int line) implements Value {
+  public record Num(String text, int line) implements Value {
     public String kind() {
       return "a number";
     }
 
     /** The value as a double (may be infinite for an out-of-range exponent). */
-    double value() {
+    public double value() {
       return Double.parseDouble(text);
     }
   }
 
   /** {@code true} or {@code false}. */
-  record Bool(boolean value, int line) implements Value {
+  public record Bool(boolean value, int line) implements Value {
     public String kind() {
       return "a boolean";
     }
   }
 
   /** {@code null}. */
-  record Null(int line) implements Value {
+  public record Null(int line) implements Value {
     public String kind() {
       return "null";
     }
@@ -91,7 +91,7 @@ final class Json {
    * @param file file name for error messages
    * @throws InputException naming the file and line of the first syntax error
    */
-  static Value parse(String text, String file) {
+  public static Value parse(String text, String file) {
     Json p = new Json(text, file);
     if (!text.isEmpty() && text.charAt(0) == '\uFEFF') {
       p.pos = 1;

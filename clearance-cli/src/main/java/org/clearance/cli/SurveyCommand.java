@@ -1,0 +1,256 @@
+package org.clearance.cli;
+
+import java.io.PrintWriter;
+import java.math.BigDecimal;
+import java.nio.file.Path;
+import java.util.List;
+import java.util.Locale;
+import java.util.Optional;
+import java.util.concurrent.Callable;
+import org.clearance.survey.Bounds;
+import org.clearance.survey.LinearUnit;
+import org.clearance.survey.SurveySummary;
+import picocli.CommandLine;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
+
+/**
+ * {@code clearance survey FILE...}: what a lidar survey holds, read from all its points.
+ *
+ * <p>Prints the files, point count, points per ASPRS class, extent and GPS time range in the
+ * files' own units, the units and CRS as far as the files state them, and point density over the
+ * occupied 5 m cells. Works without a units option (units the files do not state are reported as
+ * such); with {@code --json} prints one JSON object instead.
+ */
+@Command(
+    name = "survey",
+    description = {
+      "Summarises a lidar survey (one or more uncompressed LAS tiles read as one): points, "
+          + "classes, extent, units and CRS, point density.",
+      "Extent is in the files' own units. Density counts only occupied 5 m plan cells."
+    },
+    mixinStandardHelpOptions = true)
+public final class SurveyCommand implements Callable<Integer> {
+  /** Reading threads unless told: the machine's cores, at most 4 (the disk is the limit). */
+  static final int DEFAULT_MAX_THREADS = 4;
+
+  @Parameters(arity = "1..*", paramLabel = "FILE", description = "LAS files (tiles) of the survey.")
+  List<Path> files;
+
+  @Option(names = "--json", description = "Print one JSON object instead of text.")
+  boolean json;
+
+  @Option(names = "--threads", paramLabel = "N",
+      description = "Reading threads, 1 to 256 (default: cores, at most 4).")
+  Integer threads;
+
+  @Mixin UnitsOptions units;
+
+  @CommandLine.Spec CommandLine.Model.CommandSpec spec;
+
+  @Override
+  public Integer call() {
+    int n = threads != null ? threads
+        : Math.min(DEFAULT_MAX_THREADS, Runtime.getRuntime().availableProcessors());
+    if (n < 1 || n > 256) {
+      throw new CommandLine.ParameterException(spec.commandLine(),
+          "--threads must be 1 to 256: " + n);
+    }
+    SurveySummary s = SurveySummary.compute(files, units.choice(), n);
+    PrintWriter out = spec.commandLine().getOut();
+    out.print(json ? json(s) : text(s));
+    out.flush();
+    return ClearanceCommand.EXIT_OK;
+  }
+
+  // ---------------------------------------------------------------- text
+
+  static String text(SurveySummary s) {
+    StringBuilder b = new StringBuilder();
+    line(b, "%d point%s in %d file%s", s.pointCount(), s.pointCount() == 1 ? "" : "s",
+        s.files().size(), s.files().size() == 1 ? "" : "s");
+    b.append('\n');
+    line(b, "  %-44s %4s %7s %7s %12s", "file", "LAS", "format", "record", "points");
+    for (SurveySummary.FileSummary f : s.files()) {
+      line(b, "  %-44s %4s %7d %7d %12d", shortName(f.path()), f.version(), f.pointFormat(),
+          f.recordLength(), f.pointCount());
+    }
+    b.append('\n');
+    line(b, "units and CRS");
+    line(b, "  x, y     %s", unitText(s.horizontal(), s.horizontalSource(), "--survey-units",
+        "--horizontal-units"));
+    line(b, "  z        %s", unitText(s.vertical(), s.verticalSource(), "--survey-units",
+        "--vertical-units"));
+    String crs = s.crsName().isEmpty() ? "not named in the files" : s.crsName();
+    if (s.epsg().isPresent()) {
+      crs += ", EPSG:" + s.epsg().getAsInt();
+    }
+    line(b, "  CRS      %s", crs);
+    for (SurveySummary.FileSummary f : s.files()) {
+      line(b, "  records  %s: %s", shortName(f.path()), f.crsRecords());
+    }
+    b.append('\n');
+    Bounds e = s.extent();
+    line(b, "extent (file units)");
+    if (e.isEmpty()) {
+      line(b, "  no points");
+    } else {
+      line(b, "  x  %s .. %s  (%s across)", fixed(e.minX(), 3), fixed(e.maxX(), 3),
+          fixed(e.maxX() - e.minX(), 3));
+      line(b, "  y  %s .. %s  (%s across)", fixed(e.minY(), 3), fixed(e.maxY(), 3),
+          fixed(e.maxY() - e.minY(), 3));
+      line(b, "  z  %s .. %s  (%s range)", fixed(e.minZ(), 3), fixed(e.maxZ(), 3),
+          fixed(e.maxZ() - e.minZ(), 3));
+    }
+    if (Double.isNaN(s.gpsTimeMin())) {
+      line(b, "GPS time: not recorded by these point formats");
+    } else {
+      line(b, "GPS time: %s .. %s s", fixed(s.gpsTimeMin(), 6), fixed(s.gpsTimeMax(), 6));
+    }
+    if (s.occupiedCells().isPresent()) {
+      line(b, "density: %s points per square metre over %d occupied %s m cells (%s ha)",
+          fixed(s.density(), 2), s.occupiedCells().getAsLong(), fixed(s.cellSize(), 0),
+          fixed(s.occupiedArea() / 10_000, 2));
+    } else {
+      line(b, "density: not computed, the horizontal unit is not known");
+    }
+    line(b, "withheld: %d point%s", s.withheldCount(), s.withheldCount() == 1 ? "" : "s");
+    b.append('\n');
+    line(b, "  %5s  %-44s %12s %8s", "class", "ASPRS name", "points", "share");
+    for (SurveySummary.ClassCount c : s.classCounts()) {
+      line(b, "  %5d  %-44s %12d %7s%%", c.code(), c.name(), c.count(),
+          fixed(100.0 * c.count() / s.pointCount(), 1));
+    }
+    return b.toString();
+  }
+
+  private static String unitText(Optional<LinearUnit> unit, String source, String both,
+      String axis) {
+    if (unit.isEmpty()) {
+      return "not stated (" + source + "); give " + both + " or " + axis + " to set it";
+    }
+    return unitName(unit.get()) + " (" + source + ")";
+  }
+
+  private static String unitName(LinearUnit u) {
+    switch (u) {
+      case METRE:
+        return "metre";
+      case FOOT:
+        return "international foot";
+      default:
+        return "US survey foot";
+    }
+  }
+
+  private static String shortName(Path p) {
+    Path name = p.getFileName();
+    return name == null ? p.toString() : name.toString();
+  }
+
+  private static void line(StringBuilder b, String format, Object... args) {
+    b.append(String.format(Locale.ROOT, format, args)).append('\n');
+  }
+
+  private static String fixed(double v, int decimals) {
+    return String.format(Locale.ROOT, "%." + decimals + "f", v);
+  }
+
+  // ---------------------------------------------------------------- JSON
+
+  /** The summary as one JSON object (RFC 8259), built by hand. */
+  static String json(SurveySummary s) {
+    StringBuilder b = new StringBuilder("{\n");
+    b.append("  \"files\": [");
+    for (int i = 0; i < s.files().size(); i++) {
+      SurveySummary.FileSummary f = s.files().get(i);
+      b.append(i == 0 ? "\n" : ",\n").append("    {\"path\": ").append(str(f.path().toString()))
+          .append(", \"las_version\": ").append(str(f.version()))
+          .append(", \"point_format\": ").append(f.pointFormat())
+          .append(", \"record_length\": ").append(f.recordLength())
+          .append(", \"point_count\": ").append(f.pointCount())
+          .append(", \"crs_records\": ").append(str(f.crsRecords())).append('}');
+    }
+    b.append("\n  ],\n");
+    field(b, "point_count", Long.toString(s.pointCount()));
+    StringBuilder counts = new StringBuilder("{");
+    StringBuilder names = new StringBuilder("{");
+    for (int i = 0; i < s.classCounts().size(); i++) {
+      SurveySummary.ClassCount c = s.classCounts().get(i);
+      String sep = i == 0 ? "" : ", ";
+      counts.append(sep).append(str(Integer.toString(c.code()))).append(": ").append(c.count());
+      names.append(sep).append(str(Integer.toString(c.code()))).append(": ")
+          .append(str(c.name()));
+    }
+    field(b, "class_counts", counts.append('}').toString());
+    field(b, "class_names", names.append('}').toString());
+    Bounds e = s.extent();
+    field(b, "min", e.isEmpty() ? "null" : xyz(e.minX(), e.minY(), e.minZ()));
+    field(b, "max", e.isEmpty() ? "null" : xyz(e.maxX(), e.maxY(), e.maxZ()));
+    field(b, "horizontal_unit", s.horizontal().map(u -> str(u.symbol())).orElse("null"));
+    field(b, "vertical_unit", s.vertical().map(u -> str(u.symbol())).orElse("null"));
+    field(b, "horizontal_unit_source", str(s.horizontalSource()));
+    field(b, "vertical_unit_source", str(s.verticalSource()));
+    field(b, "crs_name", s.crsName().isEmpty() ? "null" : str(s.crsName()));
+    field(b, "epsg", s.epsg().isPresent() ? Integer.toString(s.epsg().getAsInt()) : "null");
+    field(b, "gps_time", Double.isNaN(s.gpsTimeMin()) ? "null"
+        : "{\"min\": " + num(s.gpsTimeMin()) + ", \"max\": " + num(s.gpsTimeMax()) + "}");
+    field(b, "withheld_count", Long.toString(s.withheldCount()));
+    b.append("  \"density\": {\"cell_size_m\": ").append(num(s.cellSize()))
+        .append(", \"occupied_cells\": ").append(s.occupiedCells().isPresent()
+            ? Long.toString(s.occupiedCells().getAsLong()) : "null")
+        .append(", \"occupied_area_m2\": ").append(num(s.occupiedArea()))
+        .append(", \"points_per_m2\": ").append(num(s.density())).append("}\n}\n");
+    return b.toString();
+  }
+
+  private static void field(StringBuilder b, String name, String value) {
+    b.append("  ").append(str(name)).append(": ").append(value).append(",\n");
+  }
+
+  private static String xyz(double x, double y, double z) {
+    return "{\"x\": " + num(x) + ", \"y\": " + num(y) + ", \"z\": " + num(z) + "}";
+  }
+
+  /** A number in plain decimal notation (shortest exact form), or null when not finite. */
+  static String num(double v) {
+    if (!Double.isFinite(v)) {
+      return "null";
+    }
+    return BigDecimal.valueOf(v).stripTrailingZeros().toPlainString();
+  }
+
+  /** A JSON string literal. */
+  static String str(String s) {
+    StringBuilder b = new StringBuilder("\"");
+    for (int i = 0; i < s.length(); i++) {
+      char c = s.charAt(i);
+      switch (c) {
+        case '"':
+          b.append("\\\"");
+          break;
+        case '\\':
+          b.append("\\\\");
+          break;
+        case '\n':
+          b.append("\\n");
+          break;
+        case '\r':
+          b.append("\\r");
+          break;
+        case '\t':
+          b.append("\\t");
+          break;
+        default:
+          if (c < 0x20) {
+            b.append(String.format(Locale.ROOT, "\\u%04x", (int) c));
+          } else {
+            b.append(c);
+          }
+      }
+    }
+    return b.append('"').toString();
+  }
+}

@@ -1,0 +1,144 @@
+package org.clearance.clearance;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Optional;
+import org.clearance.line.SpanFrame;
+import org.clearance.wire.Catenary;
+import org.clearance.wire.ConductorCurve;
+
+/**
+ * A span made ready for the engine's inner loop: its measuring box in the span frame and one
+ * distance kernel per conductor per condition. Immutable; shared between worker threads.
+ */
+final class PreparedSpan {
+
+  final int index;
+  final SpanModel model;
+  final SpanFrame frame;
+  final double sMin;
+  final double sMax;
+  final double eMin;
+  final double eMax;
+  final double zMin;
+  final double zMax;
+  /** [condition][conductor]; null where the condition is not available for the conductor. */
+  final CatenaryDistance[][] kernels;
+  final double[][] swingMin;
+  final double[][] swingMax;
+  final String[] names;
+
+  PreparedSpan(int index, SpanModel model, int conditions, double reach) {
+    this.index = index;
+    this.model = model;
+    this.frame = model.span().frame();
+    int n = model.conductors().size();
+    kernels = new CatenaryDistance[conditions][n];
+    swingMin = new double[conditions][n];
+    swingMax = new double[conditions][n];
+    names = new String[n];
+    double lo = Double.POSITIVE_INFINITY;
+    double hi = Double.NEGATIVE_INFINITY;
+    double zLo = Double.POSITIVE_INFINITY;
+    double zHi = Double.NEGATIVE_INFINITY;
+    double sLo = 0;
+    double sHi = model.span().lengthM();
+    for (int j = 0; j < n; j++) {
+      ConductorModel conductor = model.conductors().get(j);
+      names[j] = conductor.name();
+      for (int k = 0; k < conditions; k++) {
+        Optional<ConductorState> state = k < conductor.states().size()
+            ? conductor.states().get(k) : Optional.empty();
+        if (state.isEmpty()) {
+          continue;
+        }
+        ConductorState st = state.get();
+        ConductorCurve curve = st.curve();
+        kernels[k][j] = new CatenaryDistance(curve);
+        swingMin[k][j] = st.swingMin();
+        swingMax[k][j] = st.swingMax();
+        double sag = maxSag(curve);
+        double sideways = st.swings() ? sag : 0;
+        for (double s : new double[] {0, curve.length()}) {
+          double x = curve.x(s);
+          double y = curve.y(s);
+          double e = frame.offset(x, y);
+          double st0 = frame.station(x, y);
+          lo = Math.min(lo, e - sideways);
+          hi = Math.max(hi, e + sideways);
+          sLo = Math.min(sLo, st0);
+          sHi = Math.max(sHi, st0);
+          zHi = Math.max(zHi, curve.z(s));
+        }
+        zLo = Math.min(zLo, lowestZ(curve));
+      }
+    }
+    sMin = sLo - reach;
+    sMax = sHi + reach;
+    eMin = lo - reach;
+    eMax = hi + reach;
+    zMin = zLo - reach;
+    zMax = zHi + reach;
+  }
+
+  /** True when the span has at least one conductor to measure to. */
+  boolean measurable() {
+    return Double.isFinite(eMin);
+  }
+
+  /** Whether a point lies in the measuring box. */
+  boolean inBox(double s, double e, double z) {
+    return s >= sMin && s <= sMax && e >= eMin && e <= eMax && z >= zMin && z <= zMax;
+  }
+
+  /** Cell keys of the plan grid that the box touches. */
+  List<Long> cells(double cell) {
+    List<Long> out = new ArrayList<>();
+    if (!measurable()) {
+      return out;
+    }
+    double minX = Double.POSITIVE_INFINITY;
+    double maxX = Double.NEGATIVE_INFINITY;
+    double minY = Double.POSITIVE_INFINITY;
+    double maxY = Double.NEGATIVE_INFINITY;
+    for (double s : new double[] {sMin, sMax}) {
+      for (double e : new double[] {eMin, eMax}) {
+        minX = Math.min(minX, frame.x(s, e));
+        maxX = Math.max(maxX, frame.x(s, e));
+        minY = Math.min(minY, frame.y(s, e));
+        maxY = Math.max(maxY, frame.y(s, e));
+      }
+    }
+    double halfDiagonal = cell * Math.sqrt(0.5);
+    for (long cx = (long) Math.floor(minX / cell); cx <= (long) Math.floor(maxX / cell); cx++) {
+      for (long cy = (long) Math.floor(minY / cell); cy <= (long) Math.floor(maxY / cell); cy++) {
+        double x = (cx + 0.5) * cell;
+        double y = (cy + 0.5) * cell;
+        double s = frame.station(x, y);
+        double e = frame.offset(x, y);
+        if (s >= sMin - halfDiagonal && s <= sMax + halfDiagonal
+            && e >= eMin - halfDiagonal && e <= eMax + halfDiagonal) {
+          out.add(SpanIndex.cellKey(x, y));
+        }
+      }
+    }
+    return out;
+  }
+
+  /** Largest vertical sag below the chord, m. */
+  static double maxSag(ConductorCurve curve) {
+    Catenary cat = curve.curve();
+    double s = cat.maxSagStation(0, curve.length());
+    return Math.max(0, cat.sagBelowChord(0, curve.length(), s));
+  }
+
+  /** Lowest elevation of the curve between its attachments, m. */
+  static double lowestZ(ConductorCurve curve) {
+    double s0 = curve.curve().s0();
+    double low = Math.min(curve.zA(), curve.zB());
+    if (s0 > 0 && s0 < curve.length()) {
+      low = Math.min(low, curve.z(s0));
+    }
+    return low;
+  }
+}

@@ -1,0 +1,44 @@
+package org.clearance.rules;
+
+import java.util.Objects;
+
+/**
+ * One clearance zone of a rule profile.
+ *
+ * @param name unique name within the profile
+ * @param priority 1 = most urgent; unique within the profile
+ * @param violationReference whether the zone is the profile's governing minimum: being inside it
+ *     is a violation, and years-to-violation count towards it
+ * @param voltage the line voltages the zone applies to
+ * @param conditions the line conditions in which the zone applies
+ * @param measurement how distances are measured and the distances required
+ * @param allowance extra clearance towards mid-span ({@link MidspanAllowance#NONE} for none)
+ * @param note what the zone is for, in the profile author's words (empty when none)
+ */
+public record Zone(
+    String name,
+    int priority,
+    boolean violationReference,
+    VoltageBand voltage,
+    ConditionSelector conditions,
+    Measurement measurement,
+    MidspanAllowance allowance,
+    String note) {
+
+  public Zone {
+    Objects.requireNonNull(name, "name");
+    Objects.requireNonNull(voltage, "voltage");
+    Objects.requireNonNull(conditions, "conditions");
+    Objects.requireNonNull(measurement, "measurement");
+    Objects.requireNonNull(allowance, "allowance");
+    Objects.requireNonNull(note, "note");
+    if (priority < 1) {
+      throw new IllegalArgumentException("priority must be >= 1: " + priority);
+    }
+  }
+
+  /** Whether the zone measures the radial distance. */
+  public boolean radial() {
+    return measurement instanceof Measurement.Radial;
+  }
+}
