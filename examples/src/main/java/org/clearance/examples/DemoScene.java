@@ -31,11 +31,15 @@ public final class DemoScene {
   public static final double NOMINAL_VOLTAGE_KV = 230;
   /** EPSG code of the CRS the coordinates are given in: WGS 84 / UTM zone 11S. */
   public static final int EPSG = 32711;
+  /** Name of the compound CRS: the projected CRS plus gravity-related heights in metres. */
+  public static final String CRS_NAME = "WGS 84 / UTM zone 11S + EGM96 height";
   /**
-   * OGC WKT of EPSG:32711, WGS 84 / UTM zone 11S (metres). The invented site lies in the open South
-   * Pacific, far from any real line.
+   * OGC WKT (OGC 01-009 COMPD_CS) of EPSG:32711, WGS 84 / UTM zone 11S, with EGM96 heights
+   * (EPSG:5773), both in metres, so the file states its vertical unit too. The invented site lies
+   * in the open South Pacific, far from any real line. EPSG codes and parameters from memory.
    */
-  public static final String CRS_WKT = "PROJCS[\"WGS 84 / UTM zone 11S\","
+  public static final String CRS_WKT = "COMPD_CS[\"" + CRS_NAME + "\","
+      + "PROJCS[\"WGS 84 / UTM zone 11S\","
       + "GEOGCS[\"WGS 84\",DATUM[\"WGS_1984\",SPHEROID[\"WGS 84\",6378137,298.257223563,"
       + "AUTHORITY[\"EPSG\",\"7030\"]],AUTHORITY[\"EPSG\",\"6326\"]],"
       + "PRIMEM[\"Greenwich\",0,AUTHORITY[\"EPSG\",\"8901\"]],"
@@ -44,7 +48,10 @@ public final class DemoScene {
       + "PARAMETER[\"latitude_of_origin\",0],PARAMETER[\"central_meridian\",-117],"
       + "PARAMETER[\"scale_factor\",0.9996],PARAMETER[\"false_easting\",500000],"
       + "PARAMETER[\"false_northing\",10000000],UNIT[\"metre\",1,AUTHORITY[\"EPSG\",\"9001\"]],"
-      + "AXIS[\"Easting\",EAST],AXIS[\"Northing\",NORTH],AUTHORITY[\"EPSG\",\"32711\"]]";
+      + "AXIS[\"Easting\",EAST],AXIS[\"Northing\",NORTH],AUTHORITY[\"EPSG\",\"32711\"]],"
+      + "VERT_CS[\"EGM96 height\",VERT_DATUM[\"EGM96 geoid\",2005,AUTHORITY[\"EPSG\",\"5171\"]],"
+      + "UNIT[\"metre\",1,AUTHORITY[\"EPSG\",\"9001\"]],AXIS[\"Gravity-related height\",UP],"
+      + "AUTHORITY[\"EPSG\",\"5773\"]]]";
 
   private final DemoOptions options;
   private final RoutePlan route;
@@ -156,9 +163,9 @@ public final class DemoScene {
     return options;
   }
 
-  /** Units and CRS of the survey: metres, EPSG:32711 with its WKT. */
+  /** Units and CRS of the survey: metres, EPSG:32711 plus EGM96 heights, with the WKT. */
   public SurveyUnits units() {
-    return new SurveyUnits(LinearUnit.METRE, LinearUnit.METRE, "WGS 84 / UTM zone 11S",
+    return new SurveyUnits(LinearUnit.METRE, LinearUnit.METRE, CRS_NAME,
         OptionalInt.of(EPSG), CRS_WKT, "demo generator");
   }
 
