@@ -63,7 +63,7 @@ final class SceneryPlanner {
       double e = rng.nextDouble(minE, maxE) * (rng.nextBoolean() ? 1 : -1);
       double x = corridor.x(span, s, e);
       double y = corridor.y(span, s, e);
-      if (!clear(x, y, half, out) || corridor.owner(x, y, span) != span) {
+      if (corridor.owner(x, y, span) != span || !clear(x, y, half, span, out)) {
         continue;
       }
       double lineAz = Math.atan2(corridor.x(span, 1, 0) - corridor.x(span, 0, 0),
@@ -83,12 +83,13 @@ final class SceneryPlanner {
     return out;
   }
 
-  private boolean clear(double x, double y, double half, List<DemoBuilding> placed) {
+  private boolean clear(double x, double y, double half, int span, List<DemoBuilding> placed) {
     if (road.distance(x, y) < 0.5 * road.widthM() + half + BUILDING_ROAD_CLEAR_M) {
       return false;
     }
-    for (DemoStructure t : layout.structures()) {
-      if (Math.hypot(t.x() - x, t.y() - y) < BUILDING_TOWER_CLEAR_M) {
+    List<DemoStructure> st = layout.structures();
+    for (int k = Math.max(0, span - 1); k <= Math.min(st.size() - 1, span + 2); k++) {
+      if (Math.hypot(st.get(k).x() - x, st.get(k).y() - y) < BUILDING_TOWER_CLEAR_M) {
         return false;
       }
     }

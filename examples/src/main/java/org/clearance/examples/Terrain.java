@@ -3,10 +3,10 @@ package org.clearance.examples;
 import java.util.SplittableRandom;
 
 /**
- * Ground elevation of the demo scene, m: a base level, a gentle trend, smooth relief (a sum of
- * plane waves of random direction and phase), a meandering ravine with a plateau step across it
- * (the line crosses it, climbing from the low rim to the high rim), and a road graded level
- * across its width. Deterministic for a given random stream.
+ * Ground elevation of the demo scene, m: a base level, a gentle trend levelling off over a few
+ * kilometres, smooth relief (a sum of plane waves of random direction and phase), a meandering
+ * ravine with a plateau step across it (the line crosses it, climbing from the low rim to the
+ * high rim), and a road graded level across its width. Deterministic for a given random stream.
  */
 final class Terrain {
   /** Relief components: from 1100 m down to about 40 m wavelength. */
@@ -28,13 +28,16 @@ final class Terrain {
   /** Meander amplitude and wavelength of the ravine axis, m. */
   private static final double MEANDER_M = 14.0;
   private static final double MEANDER_WAVE_M = 260.0;
+  /** Distance over which the regional trend levels off, m: keeps long lines at sane heights. */
+  private static final double TREND_LENGTH_M = 3000.0;
   /** Width of the road shoulders over which the graded surface blends into the terrain, m. */
   private static final double SHOULDER_M = 4.0;
 
   private final double originX;
   private final double originY;
-  private final double trendX;
-  private final double trendY;
+  private final double trendSlope;
+  private final double trendUx;
+  private final double trendUy;
   private final double[] kx = new double[WAVES];
   private final double[] ky = new double[WAVES];
   private final double[] amplitude = new double[WAVES];
@@ -58,9 +61,9 @@ final class Terrain {
     this.originX = ravineX;
     this.originY = ravineY;
     double trendAz = rng.nextDouble(2 * Math.PI);
-    double trend = rng.nextDouble(0.002, 0.01);
-    this.trendX = trend * Math.sin(trendAz);
-    this.trendY = trend * Math.cos(trendAz);
+    this.trendSlope = rng.nextDouble(0.002, 0.01);
+    this.trendUx = Math.sin(trendAz);
+    this.trendUy = Math.cos(trendAz);
     double wave = LONGEST_WAVE_M;
     for (int k = 0; k < WAVES; k++) {
       double dir = rng.nextDouble(2 * Math.PI);
@@ -100,7 +103,8 @@ final class Terrain {
   private double natural(double x, double y) {
     double dx = x - originX;
     double dy = y - originY;
-    double z = BASE_Z + trendX * dx + trendY * dy;
+    double a = trendUx * dx + trendUy * dy;
+    double z = BASE_Z + trendSlope * TREND_LENGTH_M * Math.tanh(a / TREND_LENGTH_M);
     for (int k = 0; k < WAVES; k++) {
       z += amplitude[k] * Math.cos(kx[k] * dx + ky[k] * dy + phase[k]);
     }

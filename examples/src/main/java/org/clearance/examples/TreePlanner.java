@@ -42,6 +42,8 @@ final class TreePlanner {
   private final DemoRoad road;
   private final int ravineSpan;
   private final List<double[]> drafts = new ArrayList<>(); // x, y, h, shape, r, base, role, span
+  /** Planted drafts are added span by span: the first draft index of each span, and the end. */
+  private int[] plantedStart;
 
   TreePlanner(SplittableRandom rng, Corridor corridor, Terrain terrain, Stands stands,
       LineBuilder.Layout layout, List<DemoBuilding> buildings, DemoRoad road, int ravineSpan) {
@@ -57,7 +59,9 @@ final class TreePlanner {
 
   List<DemoTree> plan() {
     int n = corridor.spanCount();
+    plantedStart = new int[n + 1];
     for (int i = 0; i < n; i++) {
+      plantedStart[i] = drafts.size();
       if (i != ravineSpan && i % 3 == 1) { // every third span: a close one, under 3 m
         plantNear(i, DemoTree.Role.GROW_IN, GROW_IN_MIN_M, CLOSE_GROW_IN_MAX_M);
       } else if (i != ravineSpan && rng.nextDouble() < 0.4) {
@@ -70,9 +74,9 @@ final class TreePlanner {
         plantFallIn(i);
       }
     }
-    int planted = drafts.size();
+    plantedStart[n] = drafts.size();
     for (int i = 0; i < n; i++) {
-      forest(i, planted);
+      forest(i);
       shrubs(i);
     }
     List<DemoTree> trees = new ArrayList<>(drafts.size());
@@ -98,7 +102,8 @@ final class TreePlanner {
       double ax = c.x(s) + d * Math.sin(phi) * nx;
       double ay = c.y(s) + d * Math.sin(phi) * ny;
       double h = c.z(s) - d * Math.cos(phi) - terrain.z(ax, ay);
-      if (h < 3 || h > MAX_TREE_M || blocked(ax, ay, 2) || corridor.owner(ax, ay, span) != span) {
+      if (h < 3 || h > MAX_TREE_M || blocked(ax, ay, 2, span)
+          || corridor.owner(ax, ay, span) != span) {
         continue;
       }
       drafts.add(new double[] {ax, ay, h, DemoTree.Shape.CONE.ordinal(),
@@ -116,7 +121,7 @@ final class TreePlanner {
       double s = rng.nextDouble(0.2, 0.8) * len;
       double x = corridor.x(span, s, e);
       double y = corridor.y(span, s, e);
-      if (blocked(x, y, 3) || corridor.owner(x, y, span) != span
+      if (blocked(x, y, 3, span) || corridor.owner(x, y, span) != span
           || corridor.inRow(span, x, y)) {
         continue;
       }
@@ -133,7 +138,7 @@ final class TreePlanner {
     }
   }
 
-  private void forest(int span, int planted) {
+  private void forest(int span) {
     double w = corridor.halfWidth();
     double len = layout.spans().get(span).lengthM();
     for (double s = -w; s < len + w; s += FOREST_SPACING_M) {
@@ -144,7 +149,7 @@ final class TreePlanner {
         double y = corridor.y(span, js, je);
         if (!stands.forest(x, y) || corridor.owner(x, y, span) != span
             || corridor.segmentDistance(span, x, y) < Corridor.ROW_HALF_WIDTH_M + 0.5
-            || blocked(x, y, 3) || nearPlanted(x, y, planted, 4)) {
+            || blocked(x, y, 3, span) || nearPlanted(x, y, span, 4)) {
           continue;
         }
         double h = stands.meanHeight(x, y) + 2.5 * rng.nextGaussian();
@@ -174,7 +179,7 @@ final class TreePlanner {
       boolean row = corridor.inRow(span, x, y);
       double keep = row ? ROW_SHRUB_DENSITY : stands.forest(x, y) ? 0 : OPEN_SHRUB_DENSITY;
       if (rng.nextDouble() * (ROW_SHRUB_DENSITY + OPEN_SHRUB_DENSITY) >= keep
-          || corridor.owner(x, y, span) != span || blocked(x, y, 1.5)) {
+          || corridor.owner(x, y, span) != span || blocked(x, y, 1.5, span)) {
         continue;
       }
       double h = rng.nextDouble(0.5, 3.0);
@@ -183,8 +188,11 @@ final class TreePlanner {
     }
   }
 
-  private boolean nearPlanted(double x, double y, int planted, double r) {
-    for (int k = 0; k < planted; k++) {
+  /** True when a planted tree of span-1..span+1 stands within r of (x, y). */
+  private boolean nearPlanted(double x, double y, int span, double r) {
+    int from = plantedStart[Math.max(0, span - 1)];
+    int to = plantedStart[Math.min(corridor.spanCount(), span + 2)];
+    for (int k = from; k < to; k++) {
       if (Math.hypot(drafts.get(k)[0] - x, drafts.get(k)[1] - y) < r) {
         return true;
       }
@@ -192,17 +200,20 @@ final class TreePlanner {
     return false;
   }
 
-  private boolean blocked(double x, double y, double margin) {
+  /** True when (x, y), owned by span, is on the road, a building or a tower site. */
+  private boolean blocked(double x, double y, double margin, int span) {
     if (road.distance(x, y) < 0.5 * road.widthM() + margin) {
       return true;
     }
     for (DemoBuilding b : buildings) {
-      if (Math.hypot(b.x() - x, b.y() - y) < b.halfDiagonalM() + margin) {
+      if (Math.abs(b.span() - span) <= 1
+          && Math.hypot(b.x() - x, b.y() - y) < b.halfDiagonalM() + margin) {
         return true;
       }
     }
-    for (DemoStructure t : layout.structures()) {
-      if (Math.hypot(t.x() - x, t.y() - y) < TOWER_CLEAR_M) {
+    List<DemoStructure> st = layout.structures();
+    for (int k = Math.max(0, span - 1); k <= Math.min(st.size() - 1, span + 2); k++) {
+      if (Math.hypot(st.get(k).x() - x, st.get(k).y() - y) < TOWER_CLEAR_M) {
         return true;
       }
     }
