@@ -41,9 +41,13 @@ final class TreePlanner {
   private final List<DemoBuilding> buildings;
   private final DemoRoad road;
   private final int ravineSpan;
-  private final List<double[]> drafts = new ArrayList<>(); // x, y, h, shape, r, base, role, span
+  private final List<Draft> drafts = new ArrayList<>();
   /** Planted drafts are added span by span: the first draft index of each span, and the end. */
   private int[] plantedStart;
+
+  /** A tree placed but not yet measured against the conductors (lengths in m). */
+  private record Draft(double x, double y, double height, DemoTree.Shape shape, double radius,
+      double crownBase, DemoTree.Role role, int span) {}
 
   TreePlanner(SplittableRandom rng, Corridor corridor, Terrain terrain, Stands stands,
       LineBuilder.Layout layout, List<DemoBuilding> buildings, DemoRoad road, int ravineSpan) {
@@ -80,7 +84,7 @@ final class TreePlanner {
       shrubs(i);
     }
     List<DemoTree> trees = new ArrayList<>(drafts.size());
-    for (double[] d : drafts) {
+    for (Draft d : drafts) {
       trees.add(finish(trees.size(), d));
     }
     return trees;
@@ -106,8 +110,8 @@ final class TreePlanner {
           || corridor.owner(ax, ay, span) != span) {
         continue;
       }
-      drafts.add(new double[] {ax, ay, h, DemoTree.Shape.CONE.ordinal(),
-          h * rng.nextDouble(0.12, 0.18), h * rng.nextDouble(0.2, 0.4), role.ordinal(), span});
+      drafts.add(new Draft(ax, ay, h, DemoTree.Shape.CONE, h * rng.nextDouble(0.12, 0.18),
+          h * rng.nextDouble(0.2, 0.4), role, span));
       return;
     }
   }
@@ -131,9 +135,9 @@ final class TreePlanner {
         continue;
       }
       boolean cone = rng.nextBoolean();
-      drafts.add(new double[] {x, y, h, cone ? 0 : 1,
+      drafts.add(new Draft(x, y, h, cone ? DemoTree.Shape.CONE : DemoTree.Shape.ELLIPSOID,
           h * (cone ? rng.nextDouble(0.12, 0.16) : rng.nextDouble(0.2, 0.26)),
-          h * rng.nextDouble(0.35, 0.5), DemoTree.Role.FALL_IN.ordinal(), span});
+          h * rng.nextDouble(0.35, 0.5), DemoTree.Role.FALL_IN, span));
       return;
     }
   }
@@ -158,10 +162,10 @@ final class TreePlanner {
         }
         h = Math.max(MIN_TREE_M, Math.min(MAX_FALL_IN_M, h));
         boolean conifer = stands.conifer(x, y) ^ rng.nextDouble() < 0.15;
-        drafts.add(new double[] {x, y, h, conifer ? 0 : 1,
+        drafts.add(new Draft(x, y, h, conifer ? DemoTree.Shape.CONE : DemoTree.Shape.ELLIPSOID,
             h * (conifer ? rng.nextDouble(0.12, 0.18) : rng.nextDouble(0.2, 0.3)),
             h * (conifer ? rng.nextDouble(0.25, 0.45) : rng.nextDouble(0.3, 0.5)),
-            DemoTree.Role.FOREST.ordinal(), span});
+            DemoTree.Role.FOREST, span));
       }
     }
   }
@@ -183,8 +187,8 @@ final class TreePlanner {
         continue;
       }
       double h = rng.nextDouble(0.5, 3.0);
-      drafts.add(new double[] {x, y, h, 1, rng.nextDouble(0.5, 1.6), 0.05 * h,
-          DemoTree.Role.SHRUB.ordinal(), span});
+      drafts.add(new Draft(x, y, h, DemoTree.Shape.ELLIPSOID, rng.nextDouble(0.5, 1.6), 0.05 * h,
+          DemoTree.Role.SHRUB, span));
     }
   }
 
@@ -193,7 +197,7 @@ final class TreePlanner {
     int from = plantedStart[Math.max(0, span - 1)];
     int to = plantedStart[Math.min(corridor.spanCount(), span + 2)];
     for (int k = from; k < to; k++) {
-      if (Math.hypot(drafts.get(k)[0] - x, drafts.get(k)[1] - y) < r) {
+      if (Math.hypot(drafts.get(k).x() - x, drafts.get(k).y() - y) < r) {
         return true;
       }
     }
@@ -235,14 +239,12 @@ final class TreePlanner {
     return best;
   }
 
-  private DemoTree finish(int id, double[] d) {
-    int span = (int) d[7];
-    double baseZ = terrain.z(d[0], d[1]);
-    double[] apex = nearest(span, d[0], d[1], baseZ + d[2]);
-    double[] base = nearest(span, d[0], d[1], baseZ);
+  private DemoTree finish(int id, Draft d) {
+    double baseZ = terrain.z(d.x(), d.y());
+    double[] apex = nearest(d.span(), d.x(), d.y(), baseZ + d.height());
+    double[] base = nearest(d.span(), d.x(), d.y(), baseZ);
     String position = layout.spans().get((int) apex[1]).wires().get((int) apex[2]).position();
-    return new DemoTree(id, d[0], d[1], baseZ, d[2], DemoTree.Shape.values()[(int) d[3]], d[4],
-        d[5], DemoTree.Role.values()[(int) d[6]], span, (int) apex[1], position, apex[0],
-        base[0]);
+    return new DemoTree(id, d.x(), d.y(), baseZ, d.height(), d.shape(), d.radius(),
+        d.crownBase(), d.role(), d.span(), (int) apex[1], position, apex[0], base[0]);
   }
 }
