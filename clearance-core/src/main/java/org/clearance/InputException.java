@@ -19,7 +19,7 @@ public final class InputException extends RuntimeException {
   private final String problem;
 
   /**
-   * @param file the file at fault (or an option name such as {@code --units}); may be null
+   * @param file the file at fault (or an option name such as {@code --survey-units}); may be null
    * @param location record or line within the file, e.g. {@code "line 12"} or {@code "point 1045"};
    *     may be null
    * @param field the field, column or key at fault; may be null

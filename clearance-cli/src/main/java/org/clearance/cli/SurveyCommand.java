@@ -79,9 +79,9 @@ public final class SurveyCommand implements Callable<Integer> {
     }
     b.append('\n');
     line(b, "units and CRS");
-    line(b, "  x, y     %s", unitText(s.horizontal(), s.horizontalSource(), "--units",
+    line(b, "  x, y     %s", unitText(s.horizontal(), s.horizontalSource(), "--survey-units",
         "--horizontal-units"));
-    line(b, "  z        %s", unitText(s.vertical(), s.verticalSource(), "--units",
+    line(b, "  z        %s", unitText(s.vertical(), s.verticalSource(), "--survey-units",
         "--vertical-units"));
     String crs = s.crsName().isEmpty() ? "not named in the files" : s.crsName();
     if (s.epsg().isPresent()) {

@@ -101,7 +101,7 @@ class SurveyCommandTest {
 
   @Test
   void unitsOptionFillsInAndGivesDensity() {
-    Map<String, Object> j = json(run("survey", "--json", "--units", "m",
+    Map<String, Object> j = json(run("survey", "--json", "--survey-units", "m",
         SurveyTestFiles.open("corridor_12AN2_20_thinned.las").toString()));
     assertEquals("m", j.get("horizontal_unit"));
     assertEquals("m", j.get("vertical_unit"));
@@ -119,7 +119,7 @@ class SurveyCommandTest {
     assertEquals(0, r.exit(), r.err());
     assertTrue(r.out().contains("not stated (WKT record 2112 holds no CRS definition)"),
         r.out());
-    assertTrue(r.out().contains("give --units or --horizontal-units"), r.out());
+    assertTrue(r.out().contains("give --survey-units or --horizontal-units"), r.out());
     assertTrue(r.out().contains("density: not computed"), r.out());
     assertTrue(r.out().contains("never classified"), r.out());
   }
@@ -136,7 +136,7 @@ class SurveyCommandTest {
   void twoTilesAreSummarisedTogether() {
     Path a = tile("a.las", 2, PointFormat.F1, 0);
     Path b = tile("b.las", 4, PointFormat.F6, 100);
-    Map<String, Object> j = json(run("survey", "--json", "--units", "m", a.toString(),
+    Map<String, Object> j = json(run("survey", "--json", "--survey-units", "m", a.toString(),
         b.toString()));
     assertEquals(2, ((List<?>) j.get("files")).size());
     assertEquals(20, num(j, "point_count"), 0);
@@ -224,16 +224,16 @@ class SurveyCommandTest {
   @Test
   void contradictoryUnitsAreInputErrors() {
     String mvk = SurveyTestFiles.open("mvk-thin.las").toString();
-    Run conflict = run("survey", "--units", "m", mvk);
+    Run conflict = run("survey", "--survey-units", "m", mvk);
     assertEquals(ClearanceCommand.EXIT_INPUT, conflict.exit());
     assertTrue(conflict.err().contains("the file states US survey foot"), conflict.err());
-    Run both = run("survey", "--units", "m", "--vertical-units", "ft", mvk);
+    Run both = run("survey", "--survey-units", "m", "--vertical-units", "ft", mvk);
     assertEquals(ClearanceCommand.EXIT_INPUT, both.exit());
     assertTrue(both.err().contains("not both"), both.err());
-    Run unknown = run("survey", "--units", "furlong", mvk);
+    Run unknown = run("survey", "--survey-units", "furlong", mvk);
     assertEquals(ClearanceCommand.EXIT_INPUT, unknown.exit());
     assertTrue(unknown.err().contains("'furlong' is not a unit"), unknown.err());
-    Run replaced = run("survey", "--json", "--units", "m", "--override-file-units", mvk);
+    Run replaced = run("survey", "--json", "--survey-units", "m", "--override-file-units", mvk);
     assertEquals("m", json(replaced).get("horizontal_unit"));
   }
 

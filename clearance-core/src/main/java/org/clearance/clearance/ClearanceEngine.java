@@ -1,13 +1,15 @@
 package org.clearance.clearance;
 
-import java.io.IOException;
-import java.io.UncheckedIOException;
 import java.util.ArrayList;
 import java.util.Collections;
 import java.util.List;
 import java.util.Objects;
 import java.util.function.Consumer;
 import java.util.function.Supplier;
+import org.clearance.ground.CanopyBuilder;
+import org.clearance.ground.GroundModel;
+import org.clearance.ground.Tree;
+import org.clearance.ground.TreeOptions;
 import org.clearance.survey.PointChunk;
 
 /**
@@ -21,6 +23,11 @@ import org.clearance.survey.PointChunk;
  * their swing range. Points near a structure fall in the boxes of both adjacent spans and are
  * measured to both. Points within the keep radius of a conductor in any condition go to the
  * {@link NearPointWriter}; memory is bounded by the spans, never by the survey.
+ *
+ * <p>When trees are wanted, the vegetation points within the tree reach of the line also build a
+ * canopy surface; after the pass the trees are found in it ({@link CanopyBuilder}, Popescu and
+ * Wynne 2004) and each tree's base is measured to the nearest span's conductors for the fall-in
+ * check.
  */
 public final class ClearanceEngine {
 
@@ -37,17 +44,21 @@ public final class ClearanceEngine {
    *     in the surveyed state are taken to be the conductor itself, m (&gt;= 0)
    * @param structureExclusion in an unclassified survey, points closer than this in plan to a
    *     structure centre are taken to be the structure, m (&gt;= 0)
+   * @param treeReach trees are collected up to this plan distance from the conductors' envelope,
+   *     m (&gt;= keepRadius)
    */
   public record Options(
-      double keepRadius, int threads, double conductorExclusion, double structureExclusion) {
+      double keepRadius, int threads, double conductorExclusion, double structureExclusion,
+      double treeReach) {
 
     /**
      * Keep radius 15 m (wider than any built-in zone, with room for several years of growth),
      * conductor exclusion 0.5 m (a twin bundle's half spacing plus lidar noise), structure
-     * exclusion 8 m (a lattice tower's half cross-arm length; common practice, no source).
+     * exclusion 8 m (a lattice tower's half cross-arm length), tree reach 50 m (taller than
+     * almost any tree near a line; common practice, no source).
      */
     public static Options defaults(int threads) {
-      return new Options(15.0, threads, 0.5, 8.0);
+      return new Options(15.0, threads, 0.5, 8.0, 50.0);
     }
 
     public Options {
@@ -59,6 +70,10 @@ public final class ClearanceEngine {
       }
       if (!(conductorExclusion >= 0 && structureExclusion >= 0)) {
         throw new IllegalArgumentException("exclusions must be >= 0");
+      }
+      if (!(treeReach >= keepRadius)) {
+        throw new IllegalArgumentException("tree reach must be at least the keep radius: "
+            + treeReach);
       }
     }
   }
@@ -76,8 +91,12 @@ public final class ClearanceEngine {
   private final VegetationSelector vegetation;
   private final Options options;
   private final SpanIndex index;
+  private final GroundModel ground;
+  private final TreeOptions treeOptions;
 
   /**
+   * An engine that measures distances only (no trees).
+   *
    * @param models spans with their conductors in every condition of {@code conditions}
    * @param conditions the run's conditions, the surveyed state first
    * @param heights heights above ground
@@ -86,13 +105,34 @@ public final class ClearanceEngine {
    */
   public ClearanceEngine(List<SpanModel> models, ConditionSet conditions, HeightModel heights,
       VegetationSelector vegetation, Options options) {
+    this(models, conditions, heights, vegetation, options, null, null);
+  }
+
+  /**
+   * An engine that also finds trees for the fall-in check.
+   *
+   * @param ground the ground model (heights above ground and tree bases); null for no trees
+   * @param treeOptions tree-finding options; null for no trees
+   */
+  public ClearanceEngine(List<SpanModel> models, ConditionSet conditions, GroundModel ground,
+      VegetationSelector vegetation, Options options, TreeOptions treeOptions) {
+    this(models, conditions, ground::heightAboveGround, vegetation, options, ground,
+        treeOptions);
+  }
+
+  private ClearanceEngine(List<SpanModel> models, ConditionSet conditions, HeightModel heights,
+      VegetationSelector vegetation, Options options, GroundModel ground,
+      TreeOptions treeOptions) {
     this.conditions = Objects.requireNonNull(conditions, "conditions");
     this.heights = Objects.requireNonNull(heights, "heights");
     this.vegetation = Objects.requireNonNull(vegetation, "vegetation");
     this.options = Objects.requireNonNull(options, "options");
+    this.ground = ground;
+    this.treeOptions = ground == null ? null : treeOptions;
     List<PreparedSpan> prepared = new ArrayList<>();
     for (int i = 0; i < models.size(); i++) {
-      prepared.add(new PreparedSpan(i, models.get(i), conditions.size(), options.keepRadius()));
+      prepared.add(new PreparedSpan(i, models.get(i), conditions.size(), options.keepRadius(),
+          treeOptions == null ? options.keepRadius() : options.treeReach()));
     }
     this.spans = List.copyOf(prepared);
     this.index = new SpanIndex(spans);
@@ -119,22 +159,25 @@ public final class ClearanceEngine {
    * @param source the survey
    * @param out where near points go (its layout from {@link #nearPointLayout()}), or null to keep
    *     only the per-span minima
-   * @return per span what was measured, in the order of the models
+   * @return per span what was measured (in the order of the models) and the trees near the line
    */
-  public List<SpanClearance> measure(ChunkSource source, NearPointWriter out) {
-    List<Worker> workers = Collections.synchronizedList(new ArrayList<>());
+  public Measurement measure(ChunkSource source, NearPointWriter out) {
+    List<EngineWorker> workers = Collections.synchronizedList(new ArrayList<>());
     source.readParallel(options.threads(), () -> {
-      Worker w = new Worker(out);
+      CanopyBuilder canopy = treeOptions == null ? null
+          : new CanopyBuilder(treeOptions, (x, y) -> true);
+      EngineWorker w = new EngineWorker(spans, index, conditions, heights, vegetation, options,
+          out, canopy);
       workers.add(w);
       return w;
     });
-    for (Worker w : workers) {
+    for (EngineWorker w : workers) {
       w.flush();
     }
-    return merge(workers);
+    return new Measurement(merge(workers), trees(workers));
   }
 
-  private List<SpanClearance> merge(List<Worker> workers) {
+  private List<SpanClearance> merge(List<EngineWorker> workers) {
     int nc = conditions.size();
     List<SpanClearance> result = new ArrayList<>();
     for (PreparedSpan p : spans) {
@@ -144,7 +187,7 @@ public final class ClearanceEngine {
       long kept = 0;
       long exConductor = 0;
       long exStructure = 0;
-      for (Worker w : workers) {
+      for (EngineWorker w : workers) {
         measured += w.measured[i];
         kept += w.kept[i];
         exConductor += w.excludedConductor[i];
@@ -152,7 +195,7 @@ public final class ClearanceEngine {
       }
       for (int k = 0; k < nc; k++) {
         ConditionMinimum best = null;
-        for (Worker w : workers) {
+        for (EngineWorker w : workers) {
           ConditionMinimum m = w.minimum[i][k];
           if (m != null && (best == null || m.distance() < best.distance())) {
             best = m;
@@ -168,165 +211,69 @@ public final class ClearanceEngine {
     return result;
   }
 
-  /** One worker thread's state: its buffers and per-span minima. */
-  private final class Worker implements Consumer<PointChunk> {
-    private final NearPointWriter out;
-    private final List<PointClearance> buffer = new ArrayList<>();
-    private final ConditionMinimum[][] minimum;
-    private final long[] measured;
-    private final long[] kept;
-    private final long[] excludedConductor;
-    private final long[] excludedStructure;
-    private final double[] best;
-    private final int[] bestConductor;
-    private final double[] bestAngle;
-
-    Worker(NearPointWriter out) {
-      this.out = out;
-      int n = spans.size();
-      minimum = new ConditionMinimum[n][conditions.size()];
-      measured = new long[n];
-      kept = new long[n];
-      excludedConductor = new long[n];
-      excludedStructure = new long[n];
-      best = new double[conditions.size()];
-      bestConductor = new int[conditions.size()];
-      bestAngle = new double[conditions.size()];
+  private List<TreeClearance> trees(List<EngineWorker> workers) {
+    if (treeOptions == null || workers.isEmpty()) {
+      return List.of();
     }
+    CanopyBuilder all = workers.get(0).canopy;
+    for (int i = 1; i < workers.size(); i++) {
+      all.absorb(workers.get(i).canopy);
+    }
+    List<TreeClearance> out = new ArrayList<>();
+    for (Tree tree : all.findTrees(ground)) {
+      TreeClearance t = measureTree(tree);
+      if (t != null) {
+        out.add(t);
+      }
+    }
+    out.sort((a, b) -> Double.compare(a.baseDistances().get(0), b.baseDistances().get(0)));
+    return out;
+  }
 
-    @Override
-    public void accept(PointChunk chunk) {
-      double[] xs = chunk.x();
-      double[] ys = chunk.y();
-      double[] zs = chunk.z();
-      short[] cls = chunk.classification();
-      byte[] flags = chunk.flags();
-      for (int i = 0; i < chunk.size(); i++) {
-        if (!vegetation.candidateClass(cls[i])
-            || (flags[i] & PointChunk.FLAG_WITHHELD) != 0) {
+  /** The tree's base distances to the spans near it; null when no span is near. */
+  private TreeClearance measureTree(Tree tree) {
+    PreparedSpan nearest = null;
+    double nearestDistance = Double.POSITIVE_INFINITY;
+    String nearestConductor = "";
+    for (int sp : index.spansAt(tree.x(), tree.y())) {
+      PreparedSpan p = spans.get(sp);
+      if (!p.inTreeRegion(p.frame.station(tree.x(), tree.y()),
+          p.frame.offset(tree.x(), tree.y()))) {
+        continue;
+      }
+      CatenaryDistance[] row = p.kernels[0];
+      for (int j = 0; j < row.length; j++) {
+        if (row[j] == null) {
           continue;
         }
-        int[] candidates = index.spansAt(xs[i], ys[i]);
-        if (candidates.length == 0) {
+        double d = row[j].distance(tree.x(), tree.y(), tree.baseZ());
+        if (d < nearestDistance) {
+          nearestDistance = d;
+          nearest = p;
+          nearestConductor = p.names[j];
+        }
+      }
+    }
+    if (nearest == null) {
+      return null;
+    }
+    List<Double> ds = new ArrayList<>();
+    for (int k = 0; k < conditions.size(); k++) {
+      double best = Double.NaN;
+      CatenaryDistance[] row = nearest.kernels[k];
+      for (int j = 0; j < row.length; j++) {
+        if (row[j] == null) {
           continue;
         }
-        double hag = Double.NaN;
-        boolean hagDone = false;
-        for (int sp : candidates) {
-          PreparedSpan p = spans.get(sp);
-          double s = p.frame.station(xs[i], ys[i]);
-          double e = p.frame.offset(xs[i], ys[i]);
-          if (!p.inBox(s, e, zs[i])) {
-            continue;
-          }
-          if (!hagDone) {
-            hag = heights.heightAboveGround(xs[i], ys[i], zs[i]);
-            hagDone = true;
-          }
-          measure(p, xs[i], ys[i], zs[i], cls[i], hag);
+        double phi = row[j].closestSwingAngle(tree.x(), tree.y(), tree.baseZ(),
+            nearest.swingMin[k][j], nearest.swingMax[k][j]);
+        double d = row[j].distance(tree.x(), tree.y(), tree.baseZ(), phi);
+        if (!(d >= best)) {
+          best = d;
         }
       }
-      if (buffer.size() >= FLUSH_POINTS) {
-        flush();
-      }
+      ds.add(best);
     }
-
-    private void measure(PreparedSpan p, double x, double y, double z, int cls, double hag) {
-      int sp = p.index;
-      if (vegetation.inferred()) {
-        if (!(hag >= VegetationSelector.UNCLASSIFIED_MIN_HEIGHT)) {
-          return;
-        }
-        if (nearStructure(p, x, y)) {
-          excludedStructure[sp]++;
-          return;
-        }
-      }
-      int nc = conditions.size();
-      double nearest = Double.POSITIVE_INFINITY;
-      for (int k = 0; k < nc; k++) {
-        best[k] = Double.POSITIVE_INFINITY;
-        bestConductor[k] = -1;
-        CatenaryDistance[] row = p.kernels[k];
-        for (int j = 0; j < row.length; j++) {
-          CatenaryDistance kernel = row[j];
-          if (kernel == null) {
-            continue;
-          }
-          double phi = 0;
-          double d;
-          if (p.swingMin[k][j] < 0 || p.swingMax[k][j] > 0) {
-            phi = kernel.closestSwingAngle(x, y, z, p.swingMin[k][j], p.swingMax[k][j]);
-            d = kernel.distance(x, y, z, phi);
-          } else {
-            d = kernel.distance(x, y, z);
-          }
-          if (d < best[k]) {
-            best[k] = d;
-            bestConductor[k] = j;
-            bestAngle[k] = phi;
-          }
-        }
-        nearest = Math.min(nearest, best[k]);
-      }
-      if (vegetation.inferred() && best[0] < options.conductorExclusion()) {
-        excludedConductor[sp]++;
-        return;
-      }
-      measured[sp]++;
-      boolean keep = nearest <= options.keepRadius();
-      List<ConditionDistance> details = keep ? new ArrayList<>(nc) : null;
-      for (int k = 0; k < nc; k++) {
-        int j = bestConductor[k];
-        String name = conditions.names().get(k);
-        String group = conditions.groups().get(k);
-        if (j < 0) {
-          if (keep) {
-            details.add(new ConditionDistance(name, group, Double.NaN, Double.NaN, Double.NaN, "",
-                Double.NaN));
-          }
-          continue;
-        }
-        ConditionMinimum current = minimum[sp][k];
-        boolean newMinimum = current == null || best[k] < current.distance();
-        if (!keep && !newMinimum) {
-          continue;
-        }
-        ConductorDistance cd = p.kernels[k][j].closest(x, y, z, bestAngle[k]);
-        if (newMinimum) {
-          minimum[sp][k] = new ConditionMinimum(name, group, cd.distance(), cd.horizontal(),
-              cd.vertical(), p.names[j], x, y, z);
-        }
-        if (keep) {
-          double station = p.frame.station(cd.closestX(), cd.closestY());
-          details.add(new ConditionDistance(name, group, cd.distance(), cd.horizontal(),
-              cd.vertical(), p.names[j], station));
-        }
-      }
-      if (keep) {
-        kept[sp]++;
-        buffer.add(new PointClearance(p.model.span().id(), x, y, z, cls, hag, details));
-      }
-    }
-
-    private boolean nearStructure(PreparedSpan p, double x, double y) {
-      double r2 = options.structureExclusion() * options.structureExclusion();
-      double ax = p.model.span().from().x() - x;
-      double ay = p.model.span().from().y() - y;
-      double bx = p.model.span().to().x() - x;
-      double by = p.model.span().to().y() - y;
-      return ax * ax + ay * ay < r2 || bx * bx + by * by < r2;
-    }
-
-    void flush() {
-      if (out != null && !buffer.isEmpty()) {
-        try {
-          out.write(buffer);
-        } catch (IOException e) {
-          throw new UncheckedIOException(e);
-        }
-      }
-      buffer.clear();
-    }
+    return new TreeClearance(tree, nearest.model.span().id(), ds, nearestConductor);
   }
 }

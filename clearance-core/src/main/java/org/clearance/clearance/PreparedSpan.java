@@ -22,13 +22,19 @@ final class PreparedSpan {
   final double eMax;
   final double zMin;
   final double zMax;
+  /** Extra plan margin of the tree region beyond the measuring box, m. */
+  final double treePad;
   /** [condition][conductor]; null where the condition is not available for the conductor. */
   final CatenaryDistance[][] kernels;
   final double[][] swingMin;
   final double[][] swingMax;
   final String[] names;
 
-  PreparedSpan(int index, SpanModel model, int conditions, double reach) {
+  /**
+   * @param reach measuring box margin around the conductors in every condition, m
+   * @param treeReach plan margin of the region where trees are collected, m (&gt;= reach)
+   */
+  PreparedSpan(int index, SpanModel model, int conditions, double reach, double treeReach) {
     this.index = index;
     this.model = model;
     this.frame = model.span().frame();
@@ -79,6 +85,7 @@ final class PreparedSpan {
     eMax = hi + reach;
     zMin = zLo - reach;
     zMax = zHi + reach;
+    treePad = Math.max(0, treeReach - reach);
   }
 
   /** True when the span has at least one conductor to measure to. */
@@ -91,7 +98,13 @@ final class PreparedSpan {
     return s >= sMin && s <= sMax && e >= eMin && e <= eMax && z >= zMin && z <= zMax;
   }
 
-  /** Cell keys of the plan grid that the box touches. */
+  /** Whether a plan position lies in the tree region (the box widened by the tree pad). */
+  boolean inTreeRegion(double s, double e) {
+    return s >= sMin - treePad && s <= sMax + treePad && e >= eMin - treePad
+        && e <= eMax + treePad;
+  }
+
+  /** Cell keys of the plan grid that the tree region (which holds the box) touches. */
   List<Long> cells(double cell) {
     List<Long> out = new ArrayList<>();
     if (!measurable()) {
@@ -101,8 +114,8 @@ final class PreparedSpan {
     double maxX = Double.NEGATIVE_INFINITY;
     double minY = Double.POSITIVE_INFINITY;
     double maxY = Double.NEGATIVE_INFINITY;
-    for (double s : new double[] {sMin, sMax}) {
-      for (double e : new double[] {eMin, eMax}) {
+    for (double s : new double[] {sMin - treePad, sMax + treePad}) {
+      for (double e : new double[] {eMin - treePad, eMax + treePad}) {
         minX = Math.min(minX, frame.x(s, e));
         maxX = Math.max(maxX, frame.x(s, e));
         minY = Math.min(minY, frame.y(s, e));
@@ -116,8 +129,8 @@ final class PreparedSpan {
         double y = (cy + 0.5) * cell;
         double s = frame.station(x, y);
         double e = frame.offset(x, y);
-        if (s >= sMin - halfDiagonal && s <= sMax + halfDiagonal
-            && e >= eMin - halfDiagonal && e <= eMax + halfDiagonal) {
+        double pad = treePad + halfDiagonal;
+        if (s >= sMin - pad && s <= sMax + pad && e >= eMin - pad && e <= eMax + pad) {
           out.add(SpanIndex.cellKey(x, y));
         }
       }

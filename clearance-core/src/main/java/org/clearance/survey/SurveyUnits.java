@@ -13,7 +13,7 @@ import java.util.OptionalInt;
  * @param wkt OGC WKT of the CRS when the files carry it, else an empty string
  * @param source how the units were determined, e.g. {@code "WKT record 2112"},
  *     {@code "GeoTIFF ProjLinearUnitsGeoKey"}, {@code "EPSG:2949 via proj4j"},
- *     {@code "option --units"}
+ *     {@code "option --survey-units"}
  */
 public record SurveyUnits(
     LinearUnit horizontal,

@@ -24,7 +24,7 @@ public record UnitsChoice(
     boolean overrideFile) {
 
   /** Command-line option setting both units (named in error messages). */
-  public static final String UNITS_OPTION = "--units";
+  public static final String UNITS_OPTION = "--survey-units";
   /** Command-line option setting the horizontal unit. */
   public static final String HORIZONTAL_OPTION = "--horizontal-units";
   /** Command-line option setting the vertical unit. */

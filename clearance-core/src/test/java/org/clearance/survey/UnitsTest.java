@@ -123,7 +123,7 @@ class UnitsTest {
         () -> Survey.open(List.of(corridor), UnitsChoice.fromFile()));
     assertEquals("horizontal unit", e.field());
     assertTrue(e.getMessage().startsWith(corridor.toString()), e.getMessage());
-    assertTrue(e.getMessage().contains("--units m|ft|usft"), e.getMessage());
+    assertTrue(e.getMessage().contains("--survey-units m|ft|usft"), e.getMessage());
     assertTrue(e.getMessage().contains("--horizontal-units"), e.getMessage());
     Survey s = Survey.open(List.of(corridor), UnitsChoice.of(LinearUnit.METRE));
     assertEquals(LinearUnit.METRE, s.units().vertical());

@@ -1,0 +1,212 @@
+package org.clearance.clearance;
+
+import java.io.IOException;
+import java.io.UncheckedIOException;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.function.Consumer;
+import org.clearance.ground.CanopyBuilder;
+import org.clearance.survey.PointChunk;
+
+/**
+ * One worker thread of the {@link ClearanceEngine}: measures the chunks it is given and keeps its
+ * own per-span minima, counts, near-point buffer and canopy, merged after the pass.
+ */
+final class EngineWorker implements Consumer<PointChunk> {
+
+  /** Points buffered before they are handed to the writer. */
+  private static final int FLUSH_POINTS = 4096;
+
+  /** What happened to a point in one span. */
+  private enum Outcome { MEASURED, CONDUCTOR, STRUCTURE }
+
+  private final List<PreparedSpan> spans;
+  private final SpanIndex index;
+  private final ConditionSet conditions;
+  private final HeightModel heights;
+  private final VegetationSelector vegetation;
+  private final ClearanceEngine.Options options;
+  private final NearPointWriter out;
+  final CanopyBuilder canopy;
+
+  private final List<PointClearance> buffer = new ArrayList<>();
+  final ConditionMinimum[][] minimum;
+  final long[] measured;
+  final long[] kept;
+  final long[] excludedConductor;
+  final long[] excludedStructure;
+  private final double[] best;
+  private final int[] bestConductor;
+  private final double[] bestAngle;
+
+  EngineWorker(List<PreparedSpan> spans, SpanIndex index, ConditionSet conditions,
+      HeightModel heights, VegetationSelector vegetation, ClearanceEngine.Options options,
+      NearPointWriter out, CanopyBuilder canopy) {
+    this.spans = spans;
+    this.index = index;
+    this.conditions = conditions;
+    this.heights = heights;
+    this.vegetation = vegetation;
+    this.options = options;
+    this.out = out;
+    this.canopy = canopy;
+    int n = spans.size();
+    int nc = conditions.size();
+    minimum = new ConditionMinimum[n][nc];
+    measured = new long[n];
+    kept = new long[n];
+    excludedConductor = new long[n];
+    excludedStructure = new long[n];
+    best = new double[nc];
+    bestConductor = new int[nc];
+    bestAngle = new double[nc];
+  }
+
+  @Override
+  public void accept(PointChunk chunk) {
+    double[] xs = chunk.x();
+    double[] ys = chunk.y();
+    double[] zs = chunk.z();
+    short[] cls = chunk.classification();
+    byte[] flags = chunk.flags();
+    for (int i = 0; i < chunk.size(); i++) {
+      if (!vegetation.candidateClass(cls[i]) || (flags[i] & PointChunk.FLAG_WITHHELD) != 0) {
+        continue;
+      }
+      int[] candidates = index.spansAt(xs[i], ys[i]);
+      if (candidates.length == 0) {
+        continue;
+      }
+      point(candidates, xs[i], ys[i], zs[i], cls[i]);
+    }
+    if (buffer.size() >= FLUSH_POINTS) {
+      flush();
+    }
+  }
+
+  private void point(int[] candidates, double x, double y, double z, int cls) {
+    double hag = Double.NaN;
+    boolean hagDone = false;
+    boolean inTreeRegion = false;
+    boolean notVegetation = false;
+    for (int sp : candidates) {
+      PreparedSpan p = spans.get(sp);
+      double s = p.frame.station(x, y);
+      double e = p.frame.offset(x, y);
+      if (!p.inTreeRegion(s, e)) {
+        continue;
+      }
+      if (!hagDone) {
+        hag = heights.heightAboveGround(x, y, z);
+        hagDone = true;
+        if (vegetation.inferred() && !(hag >= VegetationSelector.UNCLASSIFIED_MIN_HEIGHT)) {
+          return;
+        }
+      }
+      inTreeRegion = true;
+      if (vegetation.inferred() && nearStructure(p, x, y)) {
+        if (p.inBox(s, e, z)) {
+          excludedStructure[sp]++;
+        }
+        notVegetation = true;
+        continue;
+      }
+      if (p.inBox(s, e, z) && measure(p, x, y, z, cls, hag) == Outcome.CONDUCTOR) {
+        notVegetation = true;
+      }
+    }
+    if (canopy != null && inTreeRegion && !notVegetation) {
+      canopy.add(x, y, z);
+    }
+  }
+
+  private Outcome measure(PreparedSpan p, double x, double y, double z, int cls, double hag) {
+    int sp = p.index;
+    int nc = conditions.size();
+    double nearest = Double.POSITIVE_INFINITY;
+    for (int k = 0; k < nc; k++) {
+      best[k] = Double.POSITIVE_INFINITY;
+      bestConductor[k] = -1;
+      CatenaryDistance[] row = p.kernels[k];
+      for (int j = 0; j < row.length; j++) {
+        CatenaryDistance kernel = row[j];
+        if (kernel == null) {
+          continue;
+        }
+        double phi = 0;
+        double d;
+        if (p.swingMin[k][j] < 0 || p.swingMax[k][j] > 0) {
+          phi = kernel.closestSwingAngle(x, y, z, p.swingMin[k][j], p.swingMax[k][j]);
+          d = kernel.distance(x, y, z, phi);
+        } else {
+          d = kernel.distance(x, y, z);
+        }
+        if (d < best[k]) {
+          best[k] = d;
+          bestConductor[k] = j;
+          bestAngle[k] = phi;
+        }
+      }
+      nearest = Math.min(nearest, best[k]);
+    }
+    if (vegetation.inferred() && best[0] < options.conductorExclusion()) {
+      excludedConductor[sp]++;
+      return Outcome.CONDUCTOR;
+    }
+    measured[sp]++;
+    boolean keep = nearest <= options.keepRadius();
+    List<ConditionDistance> details = keep ? new ArrayList<>(nc) : null;
+    for (int k = 0; k < nc; k++) {
+      int j = bestConductor[k];
+      String name = conditions.names().get(k);
+      String group = conditions.groups().get(k);
+      if (j < 0) {
+        if (keep) {
+          details.add(new ConditionDistance(name, group, Double.NaN, Double.NaN, Double.NaN, "",
+              Double.NaN));
+        }
+        continue;
+      }
+      ConditionMinimum current = minimum[sp][k];
+      boolean newMinimum = current == null || best[k] < current.distance();
+      if (!keep && !newMinimum) {
+        continue;
+      }
+      ConductorDistance cd = p.kernels[k][j].closest(x, y, z, bestAngle[k]);
+      if (newMinimum) {
+        minimum[sp][k] = new ConditionMinimum(name, group, cd.distance(), cd.horizontal(),
+            cd.vertical(), p.names[j], x, y, z);
+      }
+      if (keep) {
+        double station = p.frame.station(cd.closestX(), cd.closestY());
+        details.add(new ConditionDistance(name, group, cd.distance(), cd.horizontal(),
+            cd.vertical(), p.names[j], station));
+      }
+    }
+    if (keep) {
+      kept[sp]++;
+      buffer.add(new PointClearance(p.model.span().id(), x, y, z, cls, hag, details));
+    }
+    return Outcome.MEASURED;
+  }
+
+  private boolean nearStructure(PreparedSpan p, double x, double y) {
+    double r2 = options.structureExclusion() * options.structureExclusion();
+    double ax = p.model.span().from().x() - x;
+    double ay = p.model.span().from().y() - y;
+    double bx = p.model.span().to().x() - x;
+    double by = p.model.span().to().y() - y;
+    return ax * ax + ay * ay < r2 || bx * bx + by * by < r2;
+  }
+
+  void flush() {
+    if (out != null && !buffer.isEmpty()) {
+      try {
+        out.write(buffer);
+      } catch (IOException e) {
+        throw new UncheckedIOException(e);
+      }
+    }
+    buffer.clear();
+  }
+}

@@ -1,0 +1,186 @@
+package org.clearance.ground;
+
+import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.List;
+
+/**
+ * Finds individual trees in a canopy surface, one block at a time.
+ *
+ * <p>For each block (read with an overlap of twice the largest search window):
+ * <ol>
+ *   <li>canopy height model (CHM) = highest vegetation return per cell minus the ground at the
+ *       cell centre (methods.md 5.1);
+ *   <li>pits and small holes filled: a cell with at least {@link #MIN_NEIGHBOURS_TO_FILL} of its
+ *       eight neighbours in the canopy that is empty, or more than {@link TreeOptions#pitDepth()}
+ *       below their median, takes that median (median pit filling: common practice, no source);
+ *   <li>tree tops: cells of at least the minimum height that no other cell within the variable
+ *       window exceeds, radius 0.5 (2.51 + 0.009 h^2) m (Popescu &amp; Wynne 2004); ties go to the
+ *       cell with the lower (row, column);
+ *   <li>crowns: marker-controlled watershed from the tops, flooding the CHM from the top down
+ *       (Meyer's priority flooding, 1994), only over cells of at least the minimum height and
+ *       within {@link #CROWN_REACH} predicted crown radii of their top.
+ * </ol>
+ * Only tops in the block's core are reported, so every tree is reported once.
+ */
+final class TreeFinder {
+  /** A crown may spread to this many times its predicted radius: real crowns vary about +-50 %. */
+  static final double CROWN_REACH = 1.5;
+  /** Cells are filled only when most (5 of 8) neighbours hold canopy: a gap, not an edge. */
+  static final int MIN_NEIGHBOURS_TO_FILL = 5;
+
+  private TreeFinder() {}
+
+  static List<Tree> find(SparseGrid dsm, GroundModel ground, TreeOptions options) {
+    int window = options.maxWindowCells();
+    int overlap = (int) Math.ceil(2 * CROWN_REACH * window) + 1;
+    Offsets offsets = new Offsets(window);
+    List<Tree> trees = new ArrayList<>();
+    for (BlockTiling.Block b : BlockTiling.cover(dsm, options.blockCells(), overlap)) {
+      findInBlock(dsm, ground, options, b, offsets, trees);
+    }
+    return trees;
+  }
+
+  private static void findInBlock(SparseGrid dsm, GroundModel ground, TreeOptions o,
+      BlockTiling.Block b, Offsets offsets, List<Tree> out) {
+    int side = b.readSize();
+    float[] top = dsm.readBlock(b.readCol0(), b.readRow0(), side, side);
+    float[] chm = new float[top.length];
+    boolean tall = false;
+    for (int r = 0; r < side; r++) {
+      for (int c = 0; c < side; c++) {
+        int i = r * side + c;
+        double g = Float.isNaN(top[i]) ? Double.NaN
+            : ground.groundZ(dsm.centreX(b.readCol0() + c), dsm.centreY(b.readRow0() + r));
+        chm[i] = (float) (top[i] - g);
+        tall |= chm[i] >= o.minHeight();
+      }
+    }
+    if (!tall) {
+      return;
+    }
+    chm = fillPits(chm, side, o.pitDepth());
+    int[] tops = findTops(chm, side, o, offsets);
+    int[] area = CrownSegmenter.crownCells(chm, side, tops, o);
+    for (int t = 0; t < tops.length; t++) {
+      int i = tops[t];
+      int c = i % side;
+      int r = i / side;
+      if (!b.inCore(c, r)) {
+        continue;
+      }
+      double x = dsm.centreX(b.readCol0() + c);
+      double y = dsm.centreY(b.readRow0() + r);
+      double base = ground.groundZ(x, y);
+      double h = chm[i];
+      double radius = Math.sqrt(area[t] * o.cellSize() * o.cellSize() / Math.PI);
+      out.add(new Tree(x, y, base + h, base, h, radius));
+    }
+  }
+
+  /** Median pit filling (see the class comment); returns a new raster. */
+  static float[] fillPits(float[] chm, int side, double pitDepth) {
+    float[] out = chm.clone();
+    float[] nb = new float[8];
+    for (int r = 1; r < side - 1; r++) {
+      for (int c = 1; c < side - 1; c++) {
+        int i = r * side + c;
+        int n = 0;
+        for (int dr = -1; dr <= 1; dr++) {
+          for (int dc = -1; dc <= 1; dc++) {
+            float v = chm[i + dr * side + dc];
+            if ((dr != 0 || dc != 0) && !Float.isNaN(v)) {
+              nb[n++] = v;
+            }
+          }
+        }
+        if (n == 0) {
+          continue;
+        }
+        Arrays.sort(nb, 0, n);
+        float median = (n % 2 == 1) ? nb[n / 2] : 0.5f * (nb[n / 2 - 1] + nb[n / 2]);
+        boolean pit = !Float.isNaN(chm[i]) && n >= MIN_NEIGHBOURS_TO_FILL
+            && chm[i] < median - pitDepth;
+        boolean gap = Float.isNaN(chm[i]) && n >= MIN_NEIGHBOURS_TO_FILL;
+        if (pit || gap) {
+          out[i] = median;
+        }
+      }
+    }
+    return out;
+  }
+
+  /** Indices of the variable-window local maxima of at least the minimum height. */
+  static int[] findTops(float[] chm, int side, TreeOptions o, Offsets offsets) {
+    int[] tops = new int[64];
+    int n = 0;
+    double capRadius = TreeOptions.windowRadius(o.maxHeight());
+    for (int r = 0; r < side; r++) {
+      for (int c = 0; c < side; c++) {
+        int i = r * side + c;
+        float h = chm[i];
+        if (!(h >= o.minHeight())) {
+          continue;
+        }
+        double radius = Math.min(TreeOptions.windowRadius(h), capRadius) / o.cellSize();
+        if (isTop(chm, side, c, r, radius * radius, offsets)) {
+          if (n == tops.length) {
+            tops = Arrays.copyOf(tops, 2 * n);
+          }
+          tops[n++] = i;
+        }
+      }
+    }
+    return Arrays.copyOf(tops, n);
+  }
+
+  private static boolean isTop(float[] chm, int side, int c, int r, double radius2,
+      Offsets offsets) {
+    int i = r * side + c;
+    float h = chm[i];
+    for (int k = 0; k < offsets.size && offsets.d2[k] <= radius2; k++) {
+      int cc = c + offsets.dc[k];
+      int rr = r + offsets.dr[k];
+      if (cc < 0 || rr < 0 || cc >= side || rr >= side) {
+        continue;
+      }
+      int j = rr * side + cc;
+      float v = chm[j];
+      if (v > h || (v == h && j < i)) {
+        return false;
+      }
+    }
+    return true;
+  }
+
+  /** Cell offsets within a disk (centre excluded), nearest first, so a higher cell is met soon. */
+  static final class Offsets {
+    final int[] dc;
+    final int[] dr;
+    final int[] d2;
+    final int size;
+
+    Offsets(int radius) {
+      List<int[]> list = new ArrayList<>();
+      for (int r = -radius; r <= radius; r++) {
+        for (int c = -radius; c <= radius; c++) {
+          int d = r * r + c * c;
+          if (d > 0 && d <= radius * radius) {
+            list.add(new int[] {c, r, d});
+          }
+        }
+      }
+      list.sort((p, q) -> Integer.compare(p[2], q[2]));
+      size = list.size();
+      dc = new int[size];
+      dr = new int[size];
+      d2 = new int[size];
+      for (int k = 0; k < size; k++) {
+        dc[k] = list.get(k)[0];
+        dr[k] = list.get(k)[1];
+        d2[k] = list.get(k)[2];
+      }
+    }
+  }
+}

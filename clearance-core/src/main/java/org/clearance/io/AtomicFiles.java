@@ -1,0 +1,46 @@
+package org.clearance.io;
+
+import java.io.IOException;
+import java.io.OutputStream;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.nio.file.StandardCopyOption;
+
+/**
+ * Writes output files so that a reader never sees half a file: the content goes to a temporary
+ * file in the same folder, which is then moved over the target in one step.
+ */
+public final class AtomicFiles {
+
+  private AtomicFiles() {}
+
+  /** Writer of a file's content to a stream. */
+  @FunctionalInterface
+  public interface Content {
+    /** Writes the whole content. */
+    void writeTo(OutputStream out) throws IOException;
+  }
+
+  /** Writes text as UTF-8. */
+  public static void writeString(Path target, String text) throws IOException {
+    write(target, out -> out.write(text.getBytes(StandardCharsets.UTF_8)));
+  }
+
+  /** Writes the content through a temporary file and moves it into place. */
+  public static void write(Path target, Content content) throws IOException {
+    Path dir = target.toAbsolutePath().getParent();
+    Files.createDirectories(dir);
+    Path temp = Files.createTempFile(dir, "." + target.getFileName().toString(), ".part");
+    try {
+      try (OutputStream out = Files.newOutputStream(temp)) {
+        content.writeTo(out);
+      }
+      Files.move(temp, target, StandardCopyOption.REPLACE_EXISTING,
+          StandardCopyOption.ATOMIC_MOVE);
+    } catch (IOException | RuntimeException e) {
+      Files.deleteIfExists(temp);
+      throw e;
+    }
+  }
+}

@@ -1,0 +1,198 @@
+package org.clearance.clearance;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Map;
+import java.util.Optional;
+import java.util.function.Consumer;
+import org.clearance.line.ConductorLibrary;
+import org.clearance.line.ConductorPosition;
+import org.clearance.line.ConductorType;
+import org.clearance.line.LineCondition;
+import org.clearance.line.LineSpec;
+import org.clearance.line.Span;
+import org.clearance.line.SpanFrame;
+import org.clearance.line.Structure;
+import org.clearance.line.StructureType;
+import org.clearance.survey.PointChunk;
+import org.clearance.wire.Catenary;
+import org.clearance.wire.ConductorCurve;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+class ClearanceEngineTest {
+
+  /** Pure geometry: the engine must agree with the kernel to float precision. */
+  private static final double GEOMETRY_TOL = 1e-9;
+
+  // A level 300 m span along +x, attachments at 30 m, c = 1753.812 m: the check-values.md
+  // section 2 level case (sag 6.4185 m) [computed there].
+  private static final double C = 1753.812;
+  private static final double L = 300.0;
+  private static final double Z_ATTACH = 30.0;
+
+  @TempDir Path dir;
+
+  private static Structure structure(String id, double x, double y) {
+    return new Structure(id, "", 0, StructureType.SUSPENSION, x, y, 0.0, Map.of(), "test", 1);
+  }
+
+  private static ConductorCurve conductor(double offset) {
+    SpanFrame plan = SpanFrame.between(0, offset, L, offset);
+    return new ConductorCurve(plan, Catenary.through(0, Z_ATTACH, L, Z_ATTACH, C));
+  }
+
+  private static SpanModel span(ConditionSet set, List<ConductorModel> conductors) {
+    Span span = new Span("T1-T2", "L1", structure("T1", 0, 0), structure("T2", L, 0),
+        SpanFrame.between(0, 0, L, 0), L, 0);
+    return new SpanModel(span, new SpanContext("T1-T2", "L1", 230, 0, L), conductors);
+  }
+
+  private static ConductorModel hangingOnly(String name, ConductorCurve curve, int conditions) {
+    List<Optional<ConductorState>> states = new ArrayList<>();
+    List<Optional<String>> failures = new ArrayList<>();
+    for (int k = 0; k < conditions; k++) {
+      states.add(Optional.of(ConductorState.hanging(curve)));
+      failures.add(Optional.empty());
+    }
+    return new ConductorModel(name, "phase", states, failures);
+  }
+
+  private static ClearanceEngine.ChunkSource points(double[][] xyzc) {
+    return (threads, consumers) -> {
+      Consumer<PointChunk> c = consumers.get();
+      PointChunk chunk = new PointChunk(xyzc.length);
+      chunk.reset(0, 0);
+      for (double[] p : xyzc) {
+        chunk.add(p[0], p[1], p[2], (int) p[3]);
+      }
+      c.accept(chunk);
+    };
+  }
+
+  private static VegetationSelector classified() {
+    long[] counts = new long[256];
+    counts[5] = 1;
+    return VegetationSelector.forSurvey(counts, null);
+  }
+
+  @Test
+  void pointBelowMidSpanIsMeasuredExactly() throws Exception {
+    ConditionSet set = new ConditionSet(List.of("survey"), List.of("survey"));
+    ConductorCurve a = conductor(0);
+    SpanModel model = span(set, List.of(hangingOnly("A", a, 1)));
+    ClearanceEngine engine = new ClearanceEngine(List.of(model), set, (x, y, z) -> z,
+        classified(), ClearanceEngine.Options.defaults(1));
+    double zMid = a.z(L / 2); // 30 - 6.4185 m
+    double[][] pts = {{150, 0, zMid - 4.0, 5}, {150, 0, zMid - 2.0, 2}, {10, 40, 5, 5}};
+    Path file = dir.resolve(NearPointFile.FILE_NAME);
+    List<SpanClearance> result;
+    try (NearPointWriter w = new NearPointWriter(file, engine.nearPointLayout())) {
+      result = engine.measure(points(pts), w).spans();
+    }
+    ConditionMinimum m = result.get(0).minima().get(0);
+    // The lowest point of a level catenary is at mid-span, so a point straight below it is at
+    // exactly the vertical gap (geometry, no source needed).
+    assertEquals(4.0, m.distance(), GEOMETRY_TOL);
+    assertEquals(-4.0, m.vertical(), GEOMETRY_TOL);
+    assertEquals(0.0, m.horizontal(), GEOMETRY_TOL);
+    assertEquals("A", m.conductor());
+    assertEquals(1, result.get(0).pointsMeasured(), "ground class 2 point is not vegetation");
+    List<PointClearance> back = new ArrayList<>();
+    NearPointReader.forEach(file, back::add);
+    assertEquals(1, back.size());
+    assertEquals(4.0, back.get(0).distances().get(0).distance(), 1e-5, "float32 storage");
+    assertEquals(150.0, back.get(0).distances().get(0).station(), 1e-3);
+  }
+
+  @Test
+  void nearestOfTwoConductorsAndKeepRadius() throws Exception {
+    ConditionSet set = new ConditionSet(List.of("survey"), List.of("survey"));
+    ConductorCurve a = conductor(-5);
+    ConductorCurve b = conductor(5);
+    SpanModel model = span(set, List.of(hangingOnly("A", a, 1), hangingOnly("B", b, 1)));
+    ClearanceEngine engine = new ClearanceEngine(List.of(model), set, (x, y, z) -> 1.0,
+        classified(), new ClearanceEngine.Options(3.0, 1, 0.5, 8.0, 50.0));
+    double[][] pts = {{100, 7, a.z(100), 5}, {100, 0, a.z(100) - 20, 5}};
+    Path file = dir.resolve(NearPointFile.FILE_NAME);
+    List<SpanClearance> result;
+    try (NearPointWriter w = new NearPointWriter(file, engine.nearPointLayout())) {
+      result = engine.measure(points(pts), w).spans();
+    }
+    ConditionMinimum m = result.get(0).minima().get(0);
+    assertEquals("B", m.conductor());
+    assertEquals(2.0, m.distance(), GEOMETRY_TOL);
+    assertEquals(1, result.get(0).pointsKept(), "only the point within 3 m is stored");
+  }
+
+  @Test
+  void swingRangeBringsTheConductorToASidePoint() {
+    // A swing of 30 degrees moves the mid-span of a 6.4185 m sag sideways by sag sin 30
+    // (check-values.md section 2 swing geometry: 5 m at 30 deg -> 2.5 m) [computed].
+    ConditionSet set = new ConditionSet(List.of("survey", "wind"), List.of("survey", "blowout"));
+    ConductorCurve a = conductor(0);
+    double phi = Math.toRadians(30);
+    ConductorModel m = new ConductorModel("A", "phase",
+        List.of(Optional.of(ConductorState.hanging(a)),
+            Optional.of(new ConductorState(a, -phi, phi))),
+        List.of(Optional.empty(), Optional.empty()));
+    ClearanceEngine engine = new ClearanceEngine(List.of(span(set, List.of(m))), set,
+        (x, y, z) -> 1.0, classified(), ClearanceEngine.Options.defaults(1));
+    double sag = a.midSpanSag();
+    double sideX = 150;
+    double sideY = sag * Math.sin(phi) + 1.0;
+    double sideZ = Z_ATTACH - sag * Math.cos(phi);
+    List<SpanClearance> result = engine.measure(points(new double[][] {{sideX, sideY, sideZ, 4}}),
+        null).spans();
+    double survey = result.get(0).minima().get(0).distance();
+    double swung = result.get(0).minima().get(1).distance();
+    assertEquals(1.0, swung, 1e-6);
+    assertTrue(survey > swung + 1.0, "hanging conductor is farther: " + survey);
+    assertEquals(survey, new CatenaryDistance(a).distance(sideX, sideY, sideZ), GEOMETRY_TOL);
+  }
+
+  @Test
+  void unclassifiedSurveyExcludesConductorAndStructurePoints() {
+    ConditionSet set = new ConditionSet(List.of("survey"), List.of("survey"));
+    ConductorCurve a = conductor(0);
+    ClearanceEngine engine = new ClearanceEngine(List.of(span(set, List.of(hangingOnly("A", a,
+        1)))), set, (x, y, z) -> z, VegetationSelector.forSurvey(new long[256], null),
+        ClearanceEngine.Options.defaults(1));
+    double[][] pts = {
+      {150, 0.1, a.z(150), 1}, // on the wire
+      {2, 1, 25, 1}, // on the tower
+      {150, 3, a.z(150) - 3, 1}, // a tree top
+    };
+    SpanClearance r = engine.measure(points(pts), null).spans().get(0);
+    assertEquals(1, r.pointsMeasured());
+    assertEquals(1, r.excludedAsConductor());
+    assertEquals(1, r.excludedAsStructure());
+    assertEquals(Math.hypot(3, 3), r.minima().get(0).distance(), 1e-3);
+  }
+
+  @Test
+  void conditionSetSplitsWindOnlyWhenStringsAreGiven() {
+    LineCondition hot = new LineCondition("hot", LineCondition.Kind.TEMPERATURE, 100, 10,
+        Double.NaN, Double.NaN, Double.NaN, Double.NaN, Double.NaN);
+    LineCondition wind = new LineCondition("blow", LineCondition.Kind.WIND, 15, 0, 0, 913, 300,
+        Double.NaN, Double.NaN);
+    ConductorType drake = ConductorLibrary.builtin().find("Drake").orElseThrow();
+    ConductorPosition fixed = new ConductorPosition("A", ConductorPosition.Role.PHASE, 1, drake,
+        0, 20, 1, Double.NaN, Double.NaN);
+    ConductorPosition hung = new ConductorPosition("A", ConductorPosition.Role.PHASE, 1, drake,
+        0, 20, 1, Double.NaN, 2.4);
+    LineSpec plain = new LineSpec("L1", "", 230, 0, 15, List.of(fixed), List.of(hot, wind), "x");
+    LineSpec strings = new LineSpec("L2", "", 230, 0, 15, List.of(hung), List.of(hot, wind),
+        "y");
+    assertEquals(List.of("survey", "hot", "blow"),
+        ConditionModels.conditionSet(List.of(plain)).names());
+    ConditionSet split = ConditionModels.conditionSet(List.of(strings));
+    assertEquals(List.of("survey", "hot", "blow@left", "blow@right"), split.names());
+    assertEquals(List.of("survey", "hot", "blowout", "blowout"), split.groups());
+    assertEquals("blow", ConditionModels.baseName("blow@right"));
+  }
+}

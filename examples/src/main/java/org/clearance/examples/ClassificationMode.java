@@ -1,0 +1,49 @@
+package org.clearance.examples;
+
+/**
+ * How the demo survey's points are classified (ASPRS LAS 1.4 R15 class codes).
+ */
+public enum ClassificationMode {
+  /**
+   * Everything labelled: ground 2, vegetation 3/4/5 by height, buildings 6, noise 7/18,
+   * shield wires 13, phase conductors and jumpers 14, towers 15, insulators 16; birds stay 1.
+   * A few stray class-14 labels sit on one roof and in one tree crown, as vendors' mistakes do.
+   */
+  FULL,
+  /** As {@link #FULL} but wires (13, 14) stay unclassified (1) and there are no stray labels. */
+  WIRES_UNLABELLED,
+  /** Every point class 1, not even ground. */
+  UNCLASSIFIED;
+
+  /** ASPRS class 1, unclassified. */
+  static final int UNCLASSIFIED_CLASS = 1;
+  /** ASPRS class 13, wire - guard (shield). */
+  static final int SHIELD_CLASS = 13;
+  /** ASPRS class 14, wire - conductor (phase). */
+  static final int CONDUCTOR_CLASS = 14;
+
+  /**
+   * The class a point gets in this mode.
+   *
+   * @param fullClass the class the point has in {@link #FULL} mode, 0-255
+   * @return the class written in this mode
+   */
+  public int label(int fullClass) {
+    switch (this) {
+      case FULL:
+        return fullClass;
+      case WIRES_UNLABELLED:
+        return fullClass == SHIELD_CLASS || fullClass == CONDUCTOR_CLASS
+            ? UNCLASSIFIED_CLASS : fullClass;
+      case UNCLASSIFIED:
+        return UNCLASSIFIED_CLASS;
+      default:
+        throw new AssertionError(this);
+    }
+  }
+
+  /** True when this mode carries the vendors' stray class-14 labels. */
+  public boolean hasStrayLabels() {
+    return this == FULL;
+  }
+}
