@@ -1,0 +1,103 @@
+package org.clearance.wire;
+
+import java.util.List;
+import java.util.Objects;
+import java.util.function.Consumer;
+import org.clearance.clearance.HeightModel;
+import org.clearance.line.SpanFrame;
+import org.clearance.survey.PointChunk;
+
+/**
+ * Keeps, per span, the survey points that may lie on a wire while the survey streams by
+ * (package-private). One collector per reading thread; {@link #absorb} merges them.
+ *
+ * <p>Kept: points labelled as wires (ASPRS class 13 or 14) anywhere in a span's corridor, and
+ * points never classified or unclassified (class 0 or 1) at least the corridor's minimum height
+ * above ground. Every other class was given a meaning by the survey's classifier (ground,
+ * vegetation, building, noise, tower, ...) and is not a wire; withheld points are skipped.
+ */
+final class CandidateCollector implements Consumer<PointChunk> {
+  /** ASPRS class 0: created, never classified. */
+  static final int NEVER_CLASSIFIED = 0;
+  /** ASPRS class 1: unclassified. */
+  static final int UNCLASSIFIED = 1;
+
+  private final List<SpanCorridor> corridors;
+  private final CorridorIndex index;
+  private final HeightModel heights;
+  private final SpanPoints[] points;
+  private final long[] seen;
+
+  CandidateCollector(List<SpanCorridor> corridors, CorridorIndex index, HeightModel heights) {
+    this.corridors = List.copyOf(corridors);
+    this.index = Objects.requireNonNull(index, "index");
+    this.heights = Objects.requireNonNull(heights, "heights");
+    this.points = new SpanPoints[corridors.size()];
+    this.seen = new long[corridors.size()];
+    for (int k = 0; k < points.length; k++) {
+      points[k] = new SpanPoints(corridors.get(k).zRef());
+    }
+  }
+
+  @Override
+  public void accept(PointChunk chunk) {
+    double[] x = chunk.x();
+    double[] y = chunk.y();
+    double[] z = chunk.z();
+    short[] cls = chunk.classification();
+    byte[] flags = chunk.flags();
+    for (int i = 0, n = chunk.size(); i < n; i++) {
+      if ((flags[i] & PointChunk.FLAG_WITHHELD) != 0) {
+        continue;
+      }
+      int[] near = index.at(x[i], y[i]);
+      if (near.length == 0) {
+        continue;
+      }
+      int k = cls[i];
+      boolean label = k == SpanPoints.SHIELD_CLASS || k == SpanPoints.CONDUCTOR_CLASS;
+      boolean open = k == NEVER_CLASSIFIED || k == UNCLASSIFIED;
+      double hag = Double.NaN;
+      boolean hagDone = false;
+      for (int c : near) {
+        SpanCorridor corridor = corridors.get(c);
+        SpanFrame f = corridor.frame();
+        double s = f.station(x[i], y[i]);
+        double e = f.offset(x[i], y[i]);
+        if (!corridor.contains(s, e)) {
+          continue;
+        }
+        seen[c]++;
+        if (!label && !open) {
+          continue;
+        }
+        if (!hagDone) {
+          hag = heights.heightAboveGround(x[i], y[i], z[i]);
+          hagDone = true;
+        }
+        if (label || hag >= corridor.minHeightM()) {
+          points[c].add(s, e, z[i], hag, k);
+        }
+      }
+    }
+  }
+
+  /** Moves everything another collector (same corridors) holds into this one. */
+  void absorb(CandidateCollector other) {
+    for (int k = 0; k < points.length; k++) {
+      points[k].addAll(other.points[k]);
+      seen[k] += other.seen[k];
+    }
+  }
+
+  /** The candidates of corridor k, sorted by station (sorts in place). */
+  SpanPoints sorted(int k) {
+    points[k].sort();
+    return points[k];
+  }
+
+  /** Number of survey points of any class that fell inside corridor k. */
+  long seen(int k) {
+    return seen[k];
+  }
+}

@@ -1,0 +1,44 @@
+package org.clearance.wire;
+
+import java.util.Objects;
+import org.clearance.line.Span;
+import org.clearance.line.SpanFrame;
+
+/**
+ * The box in a span's frame inside which survey points are kept for the span (package-private):
+ * stations from {@code -stationMargin} to {@code length + stationMargin}, offsets within the
+ * half-width, and the height rule for unlabelled points.
+ *
+ * @param span the span
+ * @param halfWidthM largest |offset| kept, m
+ * @param stationMarginM how far beyond each structure points are kept, m
+ * @param minHeightM lowest height above ground of an unlabelled candidate, m
+ * @param zRef reference elevation for compact storage, m
+ */
+record SpanCorridor(Span span, double halfWidthM, double stationMarginM, double minHeightM,
+    double zRef) {
+
+  SpanCorridor {
+    Objects.requireNonNull(span, "span");
+  }
+
+  SpanFrame frame() {
+    return span.frame();
+  }
+
+  /** True when the plan point at station s and offset e lies in the corridor. */
+  boolean contains(double s, double e) {
+    return s >= -stationMarginM && s <= span.lengthM() + stationMarginM
+        && Math.abs(e) <= halfWidthM;
+  }
+
+  /** The four plan corners of the corridor, x0 y0 x1 y1 ..., m. */
+  double[] corners() {
+    SpanFrame f = frame();
+    double s0 = -stationMarginM;
+    double s1 = span.lengthM() + stationMarginM;
+    double w = halfWidthM;
+    return new double[] {f.x(s0, -w), f.y(s0, -w), f.x(s1, -w), f.y(s1, -w), f.x(s1, w),
+        f.y(s1, w), f.x(s0, w), f.y(s0, w)};
+  }
+}

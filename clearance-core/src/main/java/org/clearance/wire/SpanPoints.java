@@ -1,0 +1,160 @@
+package org.clearance.wire;
+
+import java.util.Arrays;
+
+/**
+ * The wire candidate points of one span in the span's frame, in compact growable arrays
+ * (package-private): station s along the span and offset e across it (m, {@link
+ * org.clearance.line.SpanFrame}), elevation z (m, stored relative to a reference elevation so
+ * that floats keep millimetres), height above ground (m, NaN where unknown) and ASPRS class.
+ *
+ * <p>18 bytes a point: memory follows the number of candidates, never the survey. Not
+ * thread-safe; one instance per reading thread, merged with {@link #addAll}.
+ */
+final class SpanPoints {
+  /** ASPRS class 13: wire - guard (shield). */
+  static final int SHIELD_CLASS = 13;
+  /** ASPRS class 14: wire - conductor (phase). */
+  static final int CONDUCTOR_CLASS = 14;
+  /** Initial capacity; grows by half each time it fills. */
+  private static final int INITIAL = 64;
+
+  private final double zRef;
+  private float[] s = new float[INITIAL];
+  private float[] e = new float[INITIAL];
+  private float[] z = new float[INITIAL];
+  private float[] h = new float[INITIAL];
+  private byte[] c = new byte[INITIAL];
+  private int n;
+
+  /** @param zRef reference elevation subtracted before storing, m, finite */
+  SpanPoints(double zRef) {
+    if (!Double.isFinite(zRef)) {
+      throw new IllegalArgumentException("zRef must be finite: " + zRef);
+    }
+    this.zRef = zRef;
+  }
+
+  /** Adds one point: station, offset, elevation (all m), height above ground (m or NaN), class. */
+  void add(double station, double offset, double elevation, double hag, int cls) {
+    if (n == s.length) {
+      grow(n + (n >> 1) + 1);
+    }
+    s[n] = (float) station;
+    e[n] = (float) offset;
+    z[n] = (float) (elevation - zRef);
+    h[n] = (float) hag;
+    c[n] = (byte) cls;
+    n++;
+  }
+
+  private void grow(int capacity) {
+    s = Arrays.copyOf(s, capacity);
+    e = Arrays.copyOf(e, capacity);
+    z = Arrays.copyOf(z, capacity);
+    h = Arrays.copyOf(h, capacity);
+    c = Arrays.copyOf(c, capacity);
+  }
+
+  /** Appends every point of another buffer with the same reference elevation. */
+  void addAll(SpanPoints other) {
+    if (other.zRef != zRef) {
+      throw new IllegalArgumentException("reference elevations differ");
+    }
+    if (n + other.n > s.length) {
+      grow(n + other.n);
+    }
+    System.arraycopy(other.s, 0, s, n, other.n);
+    System.arraycopy(other.e, 0, e, n, other.n);
+    System.arraycopy(other.z, 0, z, n, other.n);
+    System.arraycopy(other.h, 0, h, n, other.n);
+    System.arraycopy(other.c, 0, c, n, other.n);
+    n += other.n;
+  }
+
+  /**
+   * Sorts the points by station, then offset, elevation and class, so that the order (and every
+   * result computed from it) does not depend on the order the survey was read in.
+   */
+  void sort() {
+    Integer[] order = new Integer[n];
+    for (int i = 0; i < n; i++) {
+      order[i] = i;
+    }
+    Arrays.sort(order, (a, b) -> {
+      int k = Float.compare(s[a], s[b]);
+      k = k != 0 ? k : Float.compare(e[a], e[b]);
+      k = k != 0 ? k : Float.compare(z[a], z[b]);
+      k = k != 0 ? k : Float.compare(h[a], h[b]);
+      return k != 0 ? k : Byte.compare(c[a], c[b]);
+    });
+    float[] s2 = new float[n];
+    float[] e2 = new float[n];
+    float[] z2 = new float[n];
+    float[] h2 = new float[n];
+    byte[] c2 = new byte[n];
+    for (int i = 0; i < n; i++) {
+      int j = order[i];
+      s2[i] = s[j];
+      e2[i] = e[j];
+      z2[i] = z[j];
+      h2[i] = h[j];
+      c2[i] = c[j];
+    }
+    s = s2;
+    e = e2;
+    z = z2;
+    h = h2;
+    c = c2;
+  }
+
+  int size() {
+    return n;
+  }
+
+  /** Station along the span, m. */
+  double s(int i) {
+    return s[i];
+  }
+
+  /** Offset across the span, m, positive to the left. */
+  double e(int i) {
+    return e[i];
+  }
+
+  /** Elevation, m. */
+  double z(int i) {
+    return z[i] + zRef;
+  }
+
+  /** Height above ground, m, or NaN. */
+  double hag(int i) {
+    return h[i];
+  }
+
+  /** ASPRS class, 0-255. */
+  int cls(int i) {
+    return c[i] & 0xFF;
+  }
+
+  /** True for a point the survey labelled as a wire (class 13 or 14). */
+  boolean labelled(int i) {
+    int k = cls(i);
+    return k == SHIELD_CLASS || k == CONDUCTOR_CLASS;
+  }
+
+  /** Index of the first point with station &gt;= s (points sorted), in [0, size()]. */
+  int firstAtOrAfter(double station) {
+    int lo = 0;
+    int hi = n;
+    while (lo < hi) {
+      int mid = (lo + hi) >>> 1;
+      if (s[mid] < station) {
+        lo = mid + 1;
+      } else {
+        hi = mid;
+      }
+    }
+    return lo;
+  }
+}

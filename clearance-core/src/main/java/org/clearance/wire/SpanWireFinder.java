@@ -1,0 +1,172 @@
+package org.clearance.wire;
+
+import java.util.ArrayList;
+import java.util.Comparator;
+import java.util.List;
+import java.util.Locale;
+import java.util.Optional;
+import org.clearance.line.ConductorPosition;
+import org.clearance.line.LineSpec;
+import org.clearance.line.Span;
+
+/**
+ * Finds, fits and names the conductors of one span from its candidate points (package-private):
+ * seeds (labelled points and points with linear evidence), DBSCAN pieces, growth along the
+ * model, one fit per wire, matching to the specification, bundle split, attachment constraints,
+ * quality thresholds.
+ */
+final class SpanWireFinder {
+
+  /** Fewest class 13/14 points for a span to count as labelled. */
+  static final int MIN_LABELLED = 10;
+  /** Share of a wire's points that must carry a wire label for the label to set its role. */
+  static final double LABEL_SHARE = 0.5;
+  /** A wire's fit counts at a structure when its points come within this share of the span
+   * length of it: extrapolated farther, a curve says little about where it hangs there. */
+  static final double NEAR_END_SHARE = 0.35;
+
+  private final WireFinderOptions options;
+
+  SpanWireFinder(WireFinderOptions options) {
+    this.options = options;
+  }
+
+  /**
+   * The span's conductors.
+   *
+   * @param p the span's candidate points, sorted by station
+   * @param seen survey points of any class that fell in the corridor
+   * @param groundA ground elevation at the first structure, m, or NaN; groundB at the second
+   */
+  SpanWires find(SpanPoints p, long seen, Span span, LineSpec spec, double groundA,
+      double groundB) {
+    List<ConductorPosition> positions = spec.conductors();
+    if (p.size() == 0) {
+      String why = seen == 0
+          ? "no survey points in the span's corridor (the span lies outside the survey)"
+          : String.format(Locale.ROOT, "no wire candidates among the %d survey points in the"
+              + " span's corridor", seen);
+      List<FittedConductor> all = positions.stream()
+          .map(pos -> FittedConductor.missing(pos, why)).toList();
+      return new SpanWires(span, WireStatus.NOT_ASSESSED, Optional.of(why), all, 0, false);
+    }
+    double length = span.lengthM();
+    int labelledCount = 0;
+    for (int i = 0; i < p.size(); i++) {
+      labelledCount += p.labelled(i) ? 1 : 0;
+    }
+    boolean labelled = labelledCount >= MIN_LABELLED;
+    boolean[] linear = new WireEvidence(options.evidence()).evaluate(p);
+    IntList seeds = new IntList();
+    for (int i = 0; i < p.size(); i++) {
+      if ((p.labelled(i) || linear[i]) && p.s(i) >= 0 && p.s(i) <= length) {
+        seeds.add(i);
+      }
+    }
+    WireFinderOptions.Growth g = options.growth();
+    List<int[]> clusters = WireClusters.of(p, seeds.toArray(), g.stationStretch(),
+        g.clusterRadiusM(), g.clusterMinPoints());
+    double[] tube = tube(spec);
+    List<int[]> wires = WireGrowth.grow(p, clusters, 0, length, g, tube[0], tube[1]);
+    List<ConductorFit.Result> fits = new ArrayList<>();
+    List<ConductorFit.Result> failed = new ArrayList<>();
+    for (int[] w : wires) {
+      ConductorFit.Result r = ConductorFit.fit(p, w, span, false, Double.NaN, Double.NaN);
+      (r.curve().isPresent() ? fits : failed).add(r);
+    }
+    List<PositionMatcher.Slot> slots = positions.stream().map(pos -> new PositionMatcher.Slot(
+        pos, span.from().attachmentZ(pos.position()), span.to().attachmentZ(pos.position())))
+        .toList();
+    List<PositionMatcher.Wire> summaries = new ArrayList<>();
+    for (ConductorFit.Result r : fits) {
+      summaries.add(summary(p, r, span));
+    }
+    int[] slotOf = PositionMatcher.match(summaries, slots, groundA, groundB);
+    ConductorNaming naming = new ConductorNaming(options.quality(), span);
+    for (int j = 0; j < positions.size(); j++) {
+      ConductorPosition pos = positions.get(j);
+      for (int i = 0; i < fits.size(); i++) {
+        if (slotOf[i] == j) {
+          naming.addPosition(pos, BundleSplit.split(p, fits.get(i), span, pos.position(),
+              pos.bundle(), pos.bundleSpacingM(), slots.get(j).attachZA(),
+              slots.get(j).attachZB()));
+        }
+      }
+      naming.closePosition(pos, where(pos));
+    }
+    List<Integer> extras = new ArrayList<>();
+    for (int i = 0; i < fits.size(); i++) {
+      if (slotOf[i] < 0) {
+        extras.add(i);
+      }
+    }
+    extras.sort(Comparator.comparingDouble(i -> -(summaries.get(i).offsetA()
+        + summaries.get(i).offsetB())));
+    for (int i : extras) {
+      String name = naming.nextExtraName();
+      naming.addExtra(summaries.get(i).role().orElse(ConductorPosition.Role.PHASE),
+          BundleSplit.split(p, fits.get(i), span, name, 1, Double.NaN, Double.NaN,
+              Double.NaN));
+    }
+    for (ConductorFit.Result r : failed) {
+      naming.addFailedExtra(roleHint(p, r.members()).orElse(ConductorPosition.Role.PHASE), r);
+    }
+    return naming.spanWires(p.size(), labelled);
+  }
+
+  /** Tube half-width and half-height, m, widened for the specification's bundles. */
+  private double[] tube(LineSpec spec) {
+    double lat = options.growth().tubeLateralM();
+    double vert = options.growth().tubeVerticalM();
+    double extraLat = 0;
+    double extraVert = 0;
+    for (ConductorPosition pos : spec.conductors()) {
+      if (pos.bundle() > 1 && Double.isFinite(pos.bundleSpacingM())) {
+        extraLat = Math.max(extraLat, pos.bundleSpacingM() / 2);
+        if (pos.bundle() > 2) {
+          extraVert = Math.max(extraVert, pos.bundleSpacingM() / 2);
+        }
+      }
+    }
+    return new double[] {lat + extraLat, vert + extraVert};
+  }
+
+  private static String where(ConductorPosition pos) {
+    StringBuilder b = new StringBuilder("no wire found");
+    if (Double.isFinite(pos.offsetM())) {
+      b.append(String.format(Locale.ROOT, " near offset %.1f m", pos.offsetM()));
+    }
+    if (Double.isFinite(pos.attachHeightM())) {
+      b.append(String.format(Locale.ROOT, "%s %.1f m above the structures' ground",
+          Double.isFinite(pos.offsetM()) ? "," : " at", pos.attachHeightM()));
+    }
+    return b.toString();
+  }
+
+  private static PositionMatcher.Wire summary(SpanPoints p, ConductorFit.Result r, Span span) {
+    ConductorCurve c = r.curve().orElseThrow();
+    double eA = span.frame().offset(c.x(0), c.y(0));
+    double eB = span.frame().offset(c.x(c.length()), c.y(c.length()));
+    int[] m = r.members();
+    double reach = NEAR_END_SHARE * span.lengthM();
+    boolean nearA = p.s(m[0]) <= reach;
+    boolean nearB = p.s(m[m.length - 1]) >= span.lengthM() - reach;
+    return new PositionMatcher.Wire(eA, eB, c.zA(), c.zB(), roleHint(p, m),
+        nearA || !nearB, nearB || !nearA);
+  }
+
+  /** The role the members' labels show, when at least half of them carry one. */
+  static Optional<ConductorPosition.Role> roleHint(SpanPoints p, int[] members) {
+    int shield = 0;
+    int phase = 0;
+    for (int i : members) {
+      shield += p.cls(i) == SpanPoints.SHIELD_CLASS ? 1 : 0;
+      phase += p.cls(i) == SpanPoints.CONDUCTOR_CLASS ? 1 : 0;
+    }
+    if (shield + phase < LABEL_SHARE * members.length) {
+      return Optional.empty();
+    }
+    return Optional.of(shield > phase ? ConductorPosition.Role.SHIELD
+        : ConductorPosition.Role.PHASE);
+  }
+}

@@ -1,0 +1,41 @@
+package org.clearance.wire;
+
+import java.util.Objects;
+
+/**
+ * One change the wire finder made to the structures file's positions, from tower points in the
+ * survey.
+ *
+ * @param lineId line of the structure
+ * @param structureId id of the structure (for an added one, the automatic id given to it)
+ * @param kind moved or added
+ * @param fromX easting the structures file gave, m; NaN for an added structure
+ * @param fromY northing the structures file gave, m; NaN for an added structure
+ * @param toX easting used from now on (centre of the tower points), m
+ * @param toY northing used from now on, m
+ * @param evidencePoints survey points in the tower the position was taken from
+ * @param evidence what the position was taken from, in plain words
+ */
+public record StructureChange(String lineId, String structureId, Kind kind, double fromX,
+    double fromY, double toX, double toY, int evidencePoints, String evidence) {
+
+  /** What was changed. */
+  public enum Kind {
+    /** The structures file's position was more than the tolerance away from the tower. */
+    MOVED,
+    /** A tower stands between two consecutive structures of the file and was added. */
+    ADDED
+  }
+
+  public StructureChange {
+    Objects.requireNonNull(lineId, "lineId");
+    Objects.requireNonNull(structureId, "structureId");
+    Objects.requireNonNull(kind, "kind");
+    Objects.requireNonNull(evidence, "evidence");
+  }
+
+  /** Plan distance moved, m; NaN for an added structure. */
+  public double shiftM() {
+    return Math.hypot(toX - fromX, toY - fromY);
+  }
+}

@@ -1,0 +1,248 @@
+package org.clearance.wire;
+
+import java.util.ArrayList;
+import java.util.Collections;
+import java.util.Comparator;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import org.clearance.clearance.HeightModel;
+import org.clearance.line.ConductorPosition;
+import org.clearance.line.LineLayout;
+import org.clearance.line.LineSpec;
+import org.clearance.line.Span;
+import org.clearance.line.SpanFrame;
+import org.clearance.line.SpanLayout;
+import org.clearance.line.Structure;
+import org.clearance.line.StructureType;
+
+/**
+ * Checks the structures file's positions against the towers the survey shows, and moves or adds
+ * structures (package-private). Towers are compact groups of {@link TowerGrid} cells: with
+ * ASPRS class-15 points when the survey has any, else with tall columns of unclassified points
+ * whose one-metre slices fill most of the height from near the ground to at least
+ * {@link #TOP_SHARE} of the highest nominal attachment (lattice steel is seen at every height;
+ * a crown is not, below its crown base). Pylon localisation from point evidence: Sohn, Jwa and
+ * Kim (2012); Munir et al. (2019) (methods.md 1.2, 1.4).
+ */
+final class StructureRefiner {
+
+  /** Half-width of the band along each span searched for a structure the file lacks, m. */
+  static final double BAND_M = 12.0;
+  /** A tower nearer than this to a span's end belongs to the end structure, m. */
+  static final double END_CLEARANCE_M = 40.0;
+  /** Tower top as a share of the highest nominal attachment height. */
+  static final double TOP_SHARE = 0.9;
+  /** Tower top when the specifications give no heights, m. */
+  static final double DEFAULT_TOP_M = 15.0;
+  /** Lowest slice that must be occupied at the foot of a tower column, m. */
+  static final int FOOT_SLICE = 4;
+  /** Share of the slices from the foot to the top a tower must occupy. */
+  static final double FILL_SHARE = 0.6;
+  /** Widest tower footprint, m: lattice bases run to about 15 m. */
+  static final double MAX_FOOTPRINT_M = 25.0;
+
+  /** The refined layout and the changes made. */
+  record Refined(SpanLayout layout, List<StructureChange> changes) {}
+
+  /** One tower found: plan centre, m, point count and how it was recognised. */
+  record Tower(double x, double y, int points, String evidence) {}
+
+  private final WireFinderOptions.Structures options;
+
+  StructureRefiner(WireFinderOptions.Structures options) {
+    this.options = options;
+  }
+
+  /** Reads the source once for tower evidence and refines the layout. */
+  Refined refine(PointSource source, SpanLayout layout, HeightModel heights) {
+    List<TowerGrid.Area> areas = areas(layout);
+    CorridorIndex index = TowerGrid.index(areas);
+    List<TowerGrid> grids = Collections.synchronizedList(new ArrayList<>());
+    source.stream(() -> {
+      TowerGrid g = new TowerGrid(areas, index, heights);
+      grids.add(g);
+      return g;
+    });
+    if (grids.isEmpty()) {
+      return new Refined(layout, List.of());
+    }
+    TowerGrid all = grids.get(0);
+    for (int k = 1; k < grids.size(); k++) {
+      all.absorb(grids.get(k));
+    }
+    List<Tower> towers = TowerFinder.towers(all.cells(), options.minTowerPoints(),
+        topMin(layout));
+    return apply(layout, towers);
+  }
+
+  /** Refines the layout with the towers found. */
+  Refined apply(SpanLayout layout, List<Tower> towers) {
+    boolean[] used = new boolean[towers.size()];
+    List<StructureChange> changes = new ArrayList<>();
+    List<Structure> structures = new ArrayList<>();
+    List<LineSpec> specs = new ArrayList<>();
+    for (LineLayout line : layout.lines()) {
+      specs.add(line.spec());
+      List<Structure> refined = new ArrayList<>();
+      for (Structure s : line.structures()) {
+        int t = nearest(towers, used, s.x(), s.y(), options.searchRadiusM());
+        if (t < 0) {
+          refined.add(s);
+          continue;
+        }
+        used[t] = true;
+        Tower tw = towers.get(t);
+        if (Math.hypot(tw.x() - s.x(), tw.y() - s.y()) <= options.toleranceM()) {
+          refined.add(s);
+          continue;
+        }
+        refined.add(new Structure(s.id(), s.lineId(), s.sequence(), s.type(), tw.x(), tw.y(),
+            s.groundZ(), s.attachZ(), s.sourceFile(), s.sourceLine()));
+        changes.add(new StructureChange(line.spec().lineId(), s.id(),
+            StructureChange.Kind.MOVED, s.x(), s.y(), tw.x(), tw.y(), tw.points(),
+            tw.evidence()));
+      }
+      structures.addAll(added(line, refined, towers, used, changes));
+    }
+    if (changes.isEmpty()) {
+      return new Refined(layout, List.of());
+    }
+    return new Refined(SpanLayout.build(structures, specs), changes);
+  }
+
+  /** The line's structures with the towers standing inside its spans added, renumbered if need. */
+  private List<Structure> added(LineLayout line, List<Structure> refined, List<Tower> towers,
+      boolean[] used, List<StructureChange> changes) {
+    List<Structure> out = new ArrayList<>();
+    List<Integer> addedAt = new ArrayList<>();
+    int found = 0;
+    for (int k = 0; k < refined.size(); k++) {
+      Structure a = refined.get(k);
+      out.add(a);
+      if (k + 1 == refined.size()) {
+        break;
+      }
+      Structure b = refined.get(k + 1);
+      SpanFrame f = SpanFrame.between(a.x(), a.y(), b.x(), b.y());
+      List<Integer> inside = new ArrayList<>();
+      for (int t = 0; t < towers.size(); t++) {
+        Tower tw = towers.get(t);
+        double s = f.station(tw.x(), tw.y());
+        if (!used[t] && s >= END_CLEARANCE_M && s <= f.length() - END_CLEARANCE_M
+            && Math.abs(f.offset(tw.x(), tw.y())) <= BAND_M) {
+          inside.add(t);
+        }
+      }
+      inside.sort(Comparator.comparingDouble(t -> f.station(towers.get(t).x(),
+          towers.get(t).y())));
+      for (int t : inside) {
+        used[t] = true;
+        Tower tw = towers.get(t);
+        String id = freshId(line, ++found);
+        out.add(new Structure(id, a.lineId(), a.sequence(), StructureType.SUSPENSION, tw.x(),
+            tw.y(), Double.NaN, Map.of(), "(tower found in the survey)", 0));
+        addedAt.add(out.size() - 1);
+        changes.add(new StructureChange(line.spec().lineId(), id, StructureChange.Kind.ADDED,
+            Double.NaN, Double.NaN, tw.x(), tw.y(), tw.points(), tw.evidence()));
+      }
+    }
+    if (addedAt.isEmpty()) {
+      return out;
+    }
+    List<Structure> renumbered = new ArrayList<>();
+    for (int k = 0; k < out.size(); k++) {
+      Structure s = out.get(k);
+      renumbered.add(new Structure(s.id(), s.lineId(), k + 1, s.type(), s.x(), s.y(),
+          s.groundZ(), s.attachZ(), s.sourceFile(), s.sourceLine()));
+    }
+    return renumbered;
+  }
+
+  private static String freshId(LineLayout line, int n) {
+    int k = n;
+    while (true) {
+      String id = String.format(Locale.ROOT, "found%d", k);
+      if (line.structures().stream().noneMatch(s -> s.id().equals(id))) {
+        return id;
+      }
+      k++;
+    }
+  }
+
+  private static int nearest(List<Tower> towers, boolean[] used, double x, double y,
+      double radius) {
+    int best = -1;
+    double bestD = radius;
+    for (int t = 0; t < towers.size(); t++) {
+      double d = Math.hypot(towers.get(t).x() - x, towers.get(t).y() - y);
+      if (!used[t] && d <= bestD) {
+        best = t;
+        bestD = d;
+      }
+    }
+    return best;
+  }
+
+  /** The discs around the structures and the bands along the spans. */
+  private List<TowerGrid.Area> areas(SpanLayout layout) {
+    List<TowerGrid.Area> areas = new ArrayList<>();
+    double r = options.searchRadiusM();
+    for (LineLayout line : layout.lines()) {
+      for (Structure s : line.structures()) {
+        areas.add(new Disc(s.x(), s.y(), r));
+      }
+      for (Span span : line.spans()) {
+        areas.add(new Band(span.frame(), BAND_M));
+      }
+    }
+    return areas;
+  }
+
+  /** Lowest top of a tower column: a share of the highest nominal attachment height. */
+  private static double topMin(SpanLayout layout) {
+    double top = Double.NaN;
+    for (LineLayout line : layout.lines()) {
+      for (ConductorPosition p : line.spec().conductors()) {
+        if (Double.isFinite(p.attachHeightM())) {
+          top = Double.isNaN(top) ? p.attachHeightM() : Math.max(top, p.attachHeightM());
+        }
+      }
+    }
+    return Double.isNaN(top) ? DEFAULT_TOP_M : TOP_SHARE * top;
+  }
+
+  /** A disc in plan. */
+  private record Disc(double x, double y, double r) implements TowerGrid.Area {
+    @Override
+    public boolean contains(double px, double py) {
+      return Math.hypot(px - x, py - y) <= r;
+    }
+
+    @Override
+    public double[] box() {
+      return new double[] {x - r, y - r, x + r, y + r};
+    }
+  }
+
+  /** A band along a span frame, structure to structure. */
+  private record Band(SpanFrame f, double half) implements TowerGrid.Area {
+    @Override
+    public boolean contains(double px, double py) {
+      double s = f.station(px, py);
+      return s >= 0 && s <= f.length() && Math.abs(f.offset(px, py)) <= half;
+    }
+
+    @Override
+    public double[] box() {
+      double[] xs = {f.x(0, -half), f.x(0, half), f.x(f.length(), -half),
+          f.x(f.length(), half)};
+      double[] ys = {f.y(0, -half), f.y(0, half), f.y(f.length(), -half),
+          f.y(f.length(), half)};
+      return new double[] {Math.min(Math.min(xs[0], xs[1]), Math.min(xs[2], xs[3])),
+          Math.min(Math.min(ys[0], ys[1]), Math.min(ys[2], ys[3])),
+          Math.max(Math.max(xs[0], xs[1]), Math.max(xs[2], xs[3])),
+          Math.max(Math.max(ys[0], ys[1]), Math.max(ys[2], ys[3]))};
+    }
+  }
+}

@@ -1,0 +1,125 @@
+package org.clearance.wire;
+
+import java.util.ArrayDeque;
+import java.util.ArrayList;
+import java.util.Comparator;
+import java.util.HashSet;
+import java.util.List;
+import java.util.Map;
+import java.util.Set;
+
+/**
+ * Groups the cells of a {@link TowerGrid} into towers (package-private): connected groups of
+ * cells (8-neighbourhood) that hold class-15 points, or, in a survey without any, that hold tall
+ * columns of unclassified points. See {@link StructureRefiner} for the tests a column passes.
+ */
+final class TowerFinder {
+
+  /** Fewest occupied one-metre slices for a cell to count as part of a column. */
+  static final int MIN_CELL_SLICES = 6;
+
+  private TowerFinder() {}
+
+  /**
+   * The towers, in a deterministic order (by x, then y).
+   *
+   * @param cells the grid's cells by key
+   * @param minPoints fewest points of a tower
+   * @param topMin lowest tower top above ground for column evidence, m
+   */
+  static List<StructureRefiner.Tower> towers(Map<Long, TowerGrid.Cell> cells, int minPoints,
+      double topMin) {
+    boolean labelled = cells.values().stream().anyMatch(c -> c.towerPoints > 0);
+    Set<Long> evidence = new HashSet<>();
+    for (Map.Entry<Long, TowerGrid.Cell> e : cells.entrySet()) {
+      TowerGrid.Cell c = e.getValue();
+      if (labelled ? c.towerPoints > 0 : Long.bitCount(c.slices) >= MIN_CELL_SLICES) {
+        evidence.add(e.getKey());
+      }
+    }
+    List<Long> keys = new ArrayList<>(evidence);
+    keys.sort(Comparator.naturalOrder());
+    Set<Long> done = new HashSet<>();
+    List<StructureRefiner.Tower> out = new ArrayList<>();
+    for (long start : keys) {
+      if (!done.add(start)) {
+        continue;
+      }
+      List<TowerGrid.Cell> group = new ArrayList<>();
+      ArrayDeque<Long> queue = new ArrayDeque<>();
+      queue.add(start);
+      while (!queue.isEmpty()) {
+        TowerGrid.Cell c = cells.get(queue.poll());
+        group.add(c);
+        for (long dx = -1; dx <= 1; dx++) {
+          for (long dy = -1; dy <= 1; dy++) {
+            long k = TowerGrid.key(c.cx + dx, c.cy + dy);
+            if (evidence.contains(k) && done.add(k)) {
+              queue.add(k);
+            }
+          }
+        }
+      }
+      StructureRefiner.Tower t = labelled ? labelledTower(group, minPoints)
+          : columnTower(group, minPoints, topMin);
+      if (t != null) {
+        out.add(t);
+      }
+    }
+    out.sort(Comparator.comparingDouble(StructureRefiner.Tower::x)
+        .thenComparingDouble(StructureRefiner.Tower::y));
+    return out;
+  }
+
+  private static StructureRefiner.Tower labelledTower(List<TowerGrid.Cell> group,
+      int minPoints) {
+    int n = 0;
+    double sx = 0;
+    double sy = 0;
+    for (TowerGrid.Cell c : group) {
+      n += c.towerPoints;
+      sx += c.towerSumX;
+      sy += c.towerSumY;
+    }
+    if (n < minPoints) {
+      return null;
+    }
+    return new StructureRefiner.Tower(sx / n, sy / n, n, "ASPRS class 15 (tower) points");
+  }
+
+  private static StructureRefiner.Tower columnTower(List<TowerGrid.Cell> group, int minPoints,
+      double topMin) {
+    int n = 0;
+    double sx = 0;
+    double sy = 0;
+    long slices = 0;
+    long minX = Long.MAX_VALUE;
+    long maxX = Long.MIN_VALUE;
+    long minY = Long.MAX_VALUE;
+    long maxY = Long.MIN_VALUE;
+    for (TowerGrid.Cell c : group) {
+      n += c.openPoints;
+      sx += c.openSumX;
+      sy += c.openSumY;
+      slices |= c.slices;
+      minX = Math.min(minX, c.cx);
+      maxX = Math.max(maxX, c.cx);
+      minY = Math.min(minY, c.cy);
+      maxY = Math.max(maxY, c.cy);
+    }
+    double wide = TowerGrid.CELL_M * Math.max(maxX - minX + 1, maxY - minY + 1);
+    int top = 63 - Long.numberOfLeadingZeros(slices);
+    if (n < minPoints || top < topMin || wide > StructureRefiner.MAX_FOOTPRINT_M) {
+      return null;
+    }
+    int filled = 0;
+    for (int k = StructureRefiner.FOOT_SLICE; k <= top; k++) {
+      filled += (slices >>> k & 1L) != 0 ? 1 : 0;
+    }
+    if (filled < StructureRefiner.FILL_SHARE * (top - StructureRefiner.FOOT_SLICE + 1)) {
+      return null;
+    }
+    return new StructureRefiner.Tower(sx / n, sy / n, n,
+        "column of unclassified points from near the ground to " + top + " m");
+  }
+}

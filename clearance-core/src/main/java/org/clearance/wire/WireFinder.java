@@ -1,0 +1,167 @@
+package org.clearance.wire;
+
+import java.util.ArrayList;
+import java.util.Collections;
+import java.util.List;
+import java.util.Objects;
+import java.util.concurrent.ExecutionException;
+import java.util.concurrent.ExecutorService;
+import java.util.concurrent.Executors;
+import java.util.concurrent.Future;
+import org.clearance.clearance.HeightModel;
+import org.clearance.line.ConductorPosition;
+import org.clearance.line.LineLayout;
+import org.clearance.line.LineSpec;
+import org.clearance.line.Span;
+import org.clearance.line.SpanLayout;
+import org.clearance.line.Structure;
+import org.clearance.survey.Survey;
+
+/**
+ * The wire finder: one fitted catenary per conductor per span from survey points and structure
+ * locations, whether or not the survey labelled its wires (docs/wire-finder.md).
+ *
+ * <p>Steps: (1) optionally, the structures are checked against tower points and moved or added
+ * ({@link StructureRefiner}); (2) one streaming pass keeps, per span, only the wire candidates
+ * inside the span's corridor ({@link CandidateCollector}): memory follows the candidates, never
+ * the survey; (3) each span, on its own worker thread: seeds from ASPRS class 13/14 labels and
+ * from covariance linearity (methods.md 1.2), DBSCAN clusters under a metric stretched along the
+ * span (1.5), growth along the model to whole wires (1.7), a plan line and a catenary per wire
+ * (2.1-2.5), bundle split (1.6), matching to the specification's positions, attachment
+ * constraints from the structures file, quality thresholds.
+ */
+public final class WireFinder {
+
+  private final WireFinderOptions options;
+
+  /** A finder with the given options. */
+  public WireFinder(WireFinderOptions options) {
+    this.options = Objects.requireNonNull(options, "options");
+  }
+
+  /**
+   * Finds the wires of every span in a survey, reading it on {@code options.threads()} threads.
+   *
+   * @param survey the survey (coordinates in metres)
+   * @param layout the spans, with the line specifications
+   * @param heights heights above ground of survey points (a ground model)
+   * @throws org.clearance.InputException when the survey cannot be read
+   */
+  public static WireResult find(Survey survey, SpanLayout layout, HeightModel heights,
+      WireFinderOptions options) {
+    return new WireFinder(options).find(PointSource.of(survey, options.threads()), layout,
+        heights);
+  }
+
+  /**
+   * Finds the wires of every span from any point source.
+   *
+   * @param source the points (read once, or twice when structures are refined)
+   * @param layout the spans, with the line specifications
+   * @param heights heights above ground of survey points (a ground model)
+   */
+  public WireResult find(PointSource source, SpanLayout layout, HeightModel heights) {
+    Objects.requireNonNull(source, "source");
+    Objects.requireNonNull(layout, "layout");
+    Objects.requireNonNull(heights, "heights");
+    SpanLayout used = layout;
+    List<StructureChange> changes = List.of();
+    if (options.structures().refine()) {
+      StructureRefiner.Refined r = new StructureRefiner(options.structures()).refine(source,
+          layout, heights);
+      used = r.layout();
+      changes = r.changes();
+    }
+    List<Span> spans = used.spans();
+    List<LineSpec> specs = new ArrayList<>();
+    List<SpanCorridor> corridors = new ArrayList<>();
+    for (LineLayout line : used.lines()) {
+      for (Span span : line.spans()) {
+        specs.add(line.spec());
+        corridors.add(corridor(span, line.spec(), heights));
+      }
+    }
+    CorridorIndex index = new CorridorIndex(corridors.stream().map(SpanCorridor::corners)
+        .toList());
+    List<CandidateCollector> collectors = Collections.synchronizedList(new ArrayList<>());
+    source.stream(() -> {
+      CandidateCollector c = new CandidateCollector(corridors, index, heights);
+      collectors.add(c);
+      return c;
+    });
+    CandidateCollector all = collectors.isEmpty()
+        ? new CandidateCollector(corridors, index, heights) : collectors.get(0);
+    for (int k = 1; k < collectors.size(); k++) {
+      all.absorb(collectors.get(k));
+    }
+    collectors.clear();
+    return new WireResult(used, processSpans(spans, specs, all, heights), changes);
+  }
+
+  private List<SpanWires> processSpans(List<Span> spans, List<LineSpec> specs,
+      CandidateCollector all, HeightModel heights) {
+    SpanWireFinder finder = new SpanWireFinder(options);
+    ExecutorService pool = Executors.newFixedThreadPool(options.threads());
+    try {
+      List<Future<SpanWires>> futures = new ArrayList<>();
+      for (int k = 0; k < spans.size(); k++) {
+        int idx = k;
+        futures.add(pool.submit(() -> {
+          Span span = spans.get(idx);
+          return finder.find(all.sorted(idx), all.seen(idx), span, specs.get(idx),
+              groundAt(span.from(), heights), groundAt(span.to(), heights));
+        }));
+      }
+      List<SpanWires> out = new ArrayList<>();
+      for (Future<SpanWires> f : futures) {
+        out.add(f.get());
+      }
+      return out;
+    } catch (InterruptedException e) {
+      Thread.currentThread().interrupt();
+      throw new IllegalStateException("interrupted while fitting spans", e);
+    } catch (ExecutionException e) {
+      Throwable cause = e.getCause();
+      if (cause instanceof RuntimeException re) {
+        throw re;
+      }
+      throw new IllegalStateException(cause);
+    } finally {
+      pool.shutdownNow();
+    }
+  }
+
+  /** The corridor of a span: half-width from the specification's offsets, minimum height. */
+  SpanCorridor corridor(Span span, LineSpec spec, HeightModel heights) {
+    WireFinderOptions.Collection c = options.collection();
+    double widest = Double.NaN;
+    double lowest = Double.NaN;
+    for (ConductorPosition p : spec.conductors()) {
+      if (Double.isFinite(p.offsetM())) {
+        widest = Double.isNaN(widest) ? Math.abs(p.offsetM())
+            : Math.max(widest, Math.abs(p.offsetM()));
+      }
+      if (Double.isFinite(p.attachHeightM())) {
+        lowest = Double.isNaN(lowest) ? p.attachHeightM() : Math.min(lowest, p.attachHeightM());
+      }
+    }
+    double half = Double.isNaN(widest) ? c.defaultHalfWidthM() : widest + c.lateralMarginM();
+    double minHeight = c.minHeightM();
+    if (Double.isFinite(lowest)) {
+      minHeight = Math.max(minHeight, Math.min(WireFinderOptions.Collection.MAX_DERIVED_HEIGHT_M,
+          WireFinderOptions.Collection.ATTACH_SHARE * lowest));
+    }
+    double g = groundAt(span.from(), heights);
+    return new SpanCorridor(span, half, c.stationMarginM(), minHeight,
+        Double.isFinite(g) ? g : 0);
+  }
+
+  /** Ground elevation at a structure: the file's ground_z, else the height model's, else NaN. */
+  static double groundAt(Structure s, HeightModel heights) {
+    if (Double.isFinite(s.groundZ())) {
+      return s.groundZ();
+    }
+    double h = heights.heightAboveGround(s.x(), s.y(), 0);
+    return Double.isFinite(h) ? -h : Double.NaN;
+  }
+}

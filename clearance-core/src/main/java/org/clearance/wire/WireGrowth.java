@@ -1,0 +1,141 @@
+package org.clearance.wire;
+
+import java.util.ArrayList;
+import java.util.List;
+
+/**
+ * Grows wire pieces along their own model into whole wires (package-private): hypothesis and
+ * verification after Sohn, Jwa and Kim (2012), ISPRS Annals I-3 (methods.md 1.7).
+ *
+ * <p>Clusters are taken largest first. A cluster's model ({@link TubeModel}) is extended a step
+ * beyond the piece's ends; every candidate point of the span not yet taken by a wire that falls in
+ * the tube joins, the model is refitted, and so on. When a step finds nothing the next step is
+ * twice as long, so gaps in the points are bridged along the model; growth stops when the piece
+ * reaches both ends of the span and a last sweep over its whole length adds nothing. Candidates
+ * include every kept point, not only the seeds: unlabelled points on a labelled wire and points
+ * without linear evidence (beside a tree) join this way. A grown piece is kept as a wire only
+ * when it is long enough, runs along the span in plan, and has enough points left after a final
+ * check against the tube without extrapolation; otherwise its points stay free for later pieces.
+ */
+final class WireGrowth {
+
+  /** Growth rounds at most per piece; a 1 km span in 15 m steps needs about 70. */
+  static final int MAX_ROUNDS = 400;
+
+  private WireGrowth() {}
+
+  /**
+   * Grows the clusters.
+   *
+   * @param p the span's points (sorted by station)
+   * @param clusters seed clusters, largest first
+   * @param sLo smallest station a wire point may have, m; sHi largest, m
+   * @param growth the growth options
+   * @param tolLateral tube half-width, m; tolVertical tube half-height, m
+   * @return the wires' members (sorted indices), in the order found
+   */
+  static List<int[]> grow(SpanPoints p, List<int[]> clusters, double sLo, double sHi,
+      WireFinderOptions.Growth growth, double tolLateral, double tolVertical) {
+    int n = p.size();
+    int[] owner = new int[n];
+    java.util.Arrays.fill(owner, -1);
+    List<int[]> wires = new ArrayList<>();
+    double maxSlope = Math.tan(Math.toRadians(growth.maxAngleDeg()));
+    for (int[] cluster : clusters) {
+      boolean[] in = new boolean[n];
+      IntList members = new IntList();
+      for (int i : cluster) {
+        double s = p.s(i);
+        if (owner[i] < 0 && s >= sLo && s <= sHi) {
+          in[i] = true;
+          members.add(i);
+        }
+      }
+      if (members.size() < growth.clusterMinPoints()) {
+        continue;
+      }
+      extend(p, members, in, owner, sLo, sHi, growth, tolLateral, tolVertical);
+      int[] wire = verify(p, members, growth, maxSlope, tolLateral, tolVertical);
+      if (wire != null) {
+        for (int i : wire) {
+          owner[i] = wires.size();
+        }
+        wires.add(wire);
+      }
+    }
+    return wires;
+  }
+
+  private static void extend(SpanPoints p, IntList members, boolean[] in, int[] owner,
+      double sLo, double sHi, WireFinderOptions.Growth growth, double tolLateral,
+      double tolVertical) {
+    double step = growth.stepM();
+    boolean swept = false;
+    for (int round = 0; round < MAX_ROUNDS; round++) {
+      TubeModel m = TubeModel.fit(p, members, tolLateral, tolVertical);
+      if (m == null) {
+        return;
+      }
+      double nlo = Math.max(sLo, m.lo - step);
+      double nhi = Math.min(sHi, m.hi + step);
+      int added = take(p, m, nlo, m.lo, members, in, owner)
+          + take(p, m, m.hi, nhi, members, in, owner);
+      if (added > 0) {
+        step = growth.stepM();
+        swept = false;
+        continue;
+      }
+      if (nlo > sLo || nhi < sHi) {
+        step = Math.min(2 * step, sHi - sLo);
+        continue;
+      }
+      if (swept) {
+        return;
+      }
+      swept = true;
+      if (take(p, m, m.lo, m.hi, members, in, owner) == 0) {
+        return;
+      }
+    }
+  }
+
+  /** Adds the free points with station in [from, to] that lie in the tube; returns how many. */
+  private static int take(SpanPoints p, TubeModel m, double from, double to, IntList members,
+      boolean[] in, int[] owner) {
+    int added = 0;
+    for (int i = p.firstAtOrAfter(from); i < p.size() && p.s(i) <= to; i++) {
+      if (!in[i] && owner[i] < 0 && m.contains(p, i)) {
+        in[i] = true;
+        members.add(i);
+        added++;
+      }
+    }
+    return added;
+  }
+
+  /** The members inside the final tube, or null when they do not make a wire. */
+  private static int[] verify(SpanPoints p, IntList members, WireFinderOptions.Growth growth,
+      double maxSlope, double tolLateral, double tolVertical) {
+    TubeModel m = TubeModel.fit(p, members, tolLateral, tolVertical);
+    if (m == null || m.hi - m.lo < growth.minLengthM() || Math.abs(m.planSlope()) > maxSlope) {
+      return null;
+    }
+    IntList kept = new IntList();
+    double lo = Double.POSITIVE_INFINITY;
+    double hi = Double.NEGATIVE_INFINITY;
+    for (int k = 0; k < members.size(); k++) {
+      int i = members.get(k);
+      if (m.contains(p, i)) {
+        kept.add(i);
+        lo = Math.min(lo, p.s(i));
+        hi = Math.max(hi, p.s(i));
+      }
+    }
+    if (kept.size() < 2 * growth.clusterMinPoints() || hi - lo < growth.minLengthM()) {
+      return null;
+    }
+    int[] out = kept.toArray();
+    java.util.Arrays.sort(out);
+    return out;
+  }
+}
