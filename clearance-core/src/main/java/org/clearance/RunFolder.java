@@ -6,6 +6,8 @@ import java.nio.file.DirectoryStream;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.nio.file.StandardCopyOption;
+import java.nio.file.attribute.PosixFileAttributeView;
+import java.nio.file.attribute.PosixFilePermissions;
 import java.util.Comparator;
 import java.util.stream.Stream;
 import org.clearance.report.RunRecord;
@@ -36,7 +38,11 @@ public final class RunFolder {
     }
     Path parent = abs.getParent();
     Files.createDirectories(parent);
-    return Files.createTempDirectory(parent, "." + abs.getFileName() + ".staging-");
+    Path staging = Files.createTempDirectory(parent, "." + abs.getFileName() + ".staging-");
+    if (Files.getFileStore(staging).supportsFileAttributeView(PosixFileAttributeView.class)) {
+      Files.setPosixFilePermissions(staging, PosixFilePermissions.fromString("rwxr-xr-x"));
+    }
+    return staging;
   }
 
   /** Moves every file of the staging folder into the run folder, replacing a previous run. */
