@@ -87,7 +87,7 @@ final class GpkgLayers {
           u.length(r.minimumOfGroup("blowout")), u.length(r.minimumOfGroup("ice")),
           r.governingMinimum().map(ConditionMinimum::condition).orElse(null),
           ruled ? r.worst().map(CutSite::zone).orElse(null) : null,
-          ruled ? (Object) (long) r.sites().size() : null,
+          r.sitesCounted() ? (Object) (long) r.sites().size() : null,
           r.rank().isPresent() ? (Object) (long) r.rank().getAsInt() : null)));
     }
     return new Layer("spans", "Spans from structure to structure, with their status and rank",
