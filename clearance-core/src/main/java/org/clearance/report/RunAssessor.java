@@ -175,6 +175,12 @@ public final class RunAssessor {
       for (ZoneGap g : rules.gaps()) {
         partial.add("zone " + g.zone() + " not checked: " + g.reason());
       }
+      for (ResolvedZone z : rules.zones()) {
+        if (!z.zone().violationReference() && !selectsAny(z, model)) {
+          partial.add("zone " + z.zone().name() + " not checked: the run computed no "
+              + "condition it applies in (" + z.zone().conditions().describe() + ")");
+        }
+      }
       if (notAssessed > 0) {
         partial.add(notAssessed + " vegetation point" + (notAssessed == 1 ? "" : "s")
             + " not checked: " + firstNotAssessed);
@@ -207,20 +213,28 @@ public final class RunAssessor {
           OptionalInt.empty(), checked, notAssessed);
     }
 
-    /** Whether the run has no condition the violation-reference zone applies in. */
+    /** Why the violation-reference zone cannot apply to the run, if it cannot. */
     private Optional<String> referenceConditionMissing(RunModel model) {
       ResolvedZone ref = rules.reference().orElseThrow();
-      for (int k = 0; k < model.conditions().size(); k++) {
-        ConditionDistance probe = new ConditionDistance(model.conditions().names().get(k),
-            model.conditions().groups().get(k), Double.NaN, Double.NaN, Double.NaN, "",
-            Double.NaN);
-        if (ref.zone().conditions().selects(probe)) {
-          return Optional.empty();
-        }
+      if (selectsAny(ref, model)) {
+        return Optional.empty();
       }
       return Optional.of("the run computed no condition the violation-reference zone "
           + ref.zone().name() + " applies in (" + ref.zone().conditions().describe() + ")");
     }
+  }
+
+  /** Whether a zone applies in at least one of the run's conditions. */
+  private static boolean selectsAny(ResolvedZone z, RunModel model) {
+    for (int k = 0; k < model.conditions().size(); k++) {
+      ConditionDistance probe = new ConditionDistance(model.conditions().names().get(k),
+          model.conditions().groups().get(k), Double.NaN, Double.NaN, Double.NaN, "",
+          Double.NaN);
+      if (z.zone().conditions().selects(probe)) {
+        return true;
+      }
+    }
+    return false;
   }
 
   /** The span's plan frame from its first structure to its second, or null. */
