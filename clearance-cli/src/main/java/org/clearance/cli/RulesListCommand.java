@@ -1,6 +1,7 @@
 package org.clearance.cli;
 
 import java.io.PrintWriter;
+import java.util.Locale;
 import java.util.concurrent.Callable;
 import org.clearance.rules.RuleProfile;
 import org.clearance.rules.RuleProfiles;
@@ -19,7 +20,7 @@ public final class RulesListCommand implements Callable<Integer> {
     PrintWriter out = spec.commandLine().getOut();
     for (String name : RuleProfiles.names()) {
       RuleProfile p = RuleProfiles.builtin(name);
-      out.printf("%-28s %s%n", name, p.title());
+      out.print(String.format(Locale.ROOT, "%-28s %s%n", name, p.title()));
     }
     out.println();
     out.println("Show one with 'clearance rules show NAME'; any of them can be copied and "

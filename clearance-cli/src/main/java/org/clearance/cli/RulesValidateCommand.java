@@ -2,6 +2,7 @@ package org.clearance.cli;
 
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.Locale;
 import java.util.concurrent.Callable;
 import org.clearance.InputException;
 import org.clearance.rules.RuleProfile;
@@ -29,9 +30,9 @@ public final class RulesValidateCommand implements Callable<Integer> {
       throw new InputException(file, null, null, "no such file");
     }
     RuleProfile p = RuleProfileReader.read(file);
-    spec.commandLine().getOut().printf("%s: valid rule profile %s (%d zone%s; content SHA-256 "
-        + "%s)%n", file, p.name(), p.zones().size(), p.zones().size() == 1 ? "" : "s",
-        p.contentHash());
+    spec.commandLine().getOut().print(String.format(Locale.ROOT, "%s: valid rule profile %s "
+        + "(%d zone%s; content SHA-256 %s)%n", file, p.name(), p.zones().size(),
+        p.zones().size() == 1 ? "" : "s", p.contentHash()));
     spec.commandLine().getOut().flush();
     return ClearanceCommand.EXIT_OK;
   }

@@ -56,6 +56,19 @@ class HtmlReportTest {
   }
 
   @Test
+  void spansBeyondTheDrawingLimitAreListedNotDrawn() throws IOException {
+    RunFixture f = RunFixture.metric();
+    ReportOptions none = new ReportOptions(org.clearance.survey.LinearUnit.METRE, 1.5, 10, 0,
+        600);
+    RunAssessment a = RunAssessor.assess(f.model(), dir.resolve("near-points.bin"),
+        RuleProfiles.builtin("example-utility"), none);
+    String page = HtmlReport.page(a, none, java.time.Instant.EPOCH);
+    assertEquals(0, count(page, "<svg "));
+    assertTrue(page.contains("Only the first 0 spans with findings are drawn"));
+    assertTrue(a.drawings().isEmpty());
+  }
+
+  @Test
   void chromiumRendersTheSummaryProfileCautionsAndNotAssessedSpans() throws Exception {
     Assumptions.assumeTrue(Files.isExecutable(CHROMIUM), "chromium is not installed");
     Path profileDir = Files.createTempDirectory(dir, "chromium-user");
