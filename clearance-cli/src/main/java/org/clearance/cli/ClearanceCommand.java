@@ -29,9 +29,11 @@ import picocli.CommandLine.Command;
     },
     subcommands = {
       CommandLine.HelpCommand.class,
-      SurveyCommand.class,
       DemoCommand.class,
-      CheckCommand.class
+      CheckCommand.class,
+      SurveyCommand.class,
+      EvaluateCommand.class,
+      RulesCommand.class
     })
 public final class ClearanceCommand implements Runnable {
   /** The work was done. */

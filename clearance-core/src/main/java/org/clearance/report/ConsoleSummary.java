@@ -69,8 +69,9 @@ public final class ConsoleSummary {
           case INCOMPLETE -> "INCOMPLETE";
           default -> r.sites().isEmpty() ? "clear" : "findings";
         };
-        line(b, "  %4d  %-12s %-13s %-16s %5d  %s", r.rank().orElse(0), r.id(), status,
-            r.worst().map(CutSite::zone).orElse("-"), r.sites().size(),
+        line(b, "  %4d  %-12s %-13s %-16s %5s  %s", r.rank().orElse(0), r.id(), status,
+            r.worst().map(CutSite::zone).orElse("-"),
+            r.sitesCounted() ? Integer.toString(r.sites().size()) : "-",
             r.worst().map(w -> u.lengthText(w.deficitM())).orElse("-"));
       }
     }

@@ -95,11 +95,11 @@ public final class CsvOutputs {
       }
       f.add(r.governingMinimum().map(ConditionMinimum::condition).orElse(""));
       f.add(ruled ? r.worst().map(CutSite::zone).orElse("") : "");
-      f.add(ruled ? Integer.toString(r.sites().size()) : "");
+      f.add(r.sitesCounted() ? Integer.toString(r.sites().size()) : "");
       f.add(r.rank().isPresent() ? Integer.toString(r.rank().getAsInt()) : "");
       f.add(r.worst().map(w -> Integer.toString(w.priority())).orElse(""));
       f.add(u.lengthText(r.worst().map(CutSite::deficitM).orElse(Double.NaN)));
-      f.add(OutputUnit.fixed(s.context().nominalVoltageKv(), LENGTH_DECIMALS));
+      f.add(OutputUnit.plain(s.context().nominalVoltageKv()));
       f.add(ruled ? Long.toString(r.pointsChecked()) : "");
       f.add(ruled ? Long.toString(r.pointsNotAssessed()) : "");
       row(b, f);

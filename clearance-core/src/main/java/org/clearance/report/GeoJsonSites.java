@@ -36,7 +36,8 @@ public final class GeoJsonSites {
       w.name("geometry");
       if (Double.isFinite(s.lon()) && Double.isFinite(s.lat())) {
         w.beginObject().member("type", "Point").name("coordinates").beginArray()
-            .value(round(s.lon(), DEGREE_SCALE)).value(round(s.lat(), DEGREE_SCALE)).endArray().endObject();
+            .value(round(s.lon(), DEGREE_SCALE)).value(round(s.lat(), DEGREE_SCALE))
+            .endArray().endObject();
       } else {
         w.value((String) null);
       }

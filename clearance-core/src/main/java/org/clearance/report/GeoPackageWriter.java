@@ -109,7 +109,8 @@ public final class GeoPackageWriter {
             + "CONSTRAINT pk_geom_cols PRIMARY KEY (table_name, column_name), "
             + "CONSTRAINT uk_gc_table_name UNIQUE (table_name), "
             + "CONSTRAINT fk_gc_tn FOREIGN KEY (table_name) REFERENCES gpkg_contents(table_name), "
-            + "CONSTRAINT fk_gc_srs FOREIGN KEY (srs_id) REFERENCES gpkg_spatial_ref_sys (srs_id))");
+            + "CONSTRAINT fk_gc_srs FOREIGN KEY (srs_id) "
+            + "REFERENCES gpkg_spatial_ref_sys (srs_id))");
       }
       insertSrs(c, "Undefined cartesian SRS", -1, "NONE", -1, "undefined",
           "undefined cartesian coordinate reference system");

@@ -44,7 +44,8 @@ final class GpkgLayers {
       if (located) {
         e.add(x, y);
       }
-      features.add(new Feature(located ? GpkgGeometry.point(srs, x, y) : null, values(s.siteId(), s.spanId(),
+      byte[] geometry = located ? GpkgGeometry.point(srs, x, y) : null;
+      features.add(new Feature(geometry, values(s.siteId(), s.spanId(),
           s.kind().name().toLowerCase(java.util.Locale.ROOT).replace('_', '-'),
           (long) s.priority(), s.zone(), s.condition(), u.length(s.minClearanceM()),
           u.length(s.requiredM()), u.length(s.deficitM()), v.fromMetres(s.z()), s.lon(),
@@ -87,7 +88,7 @@ final class GpkgLayers {
           u.length(r.minimumOfGroup("blowout")), u.length(r.minimumOfGroup("ice")),
           r.governingMinimum().map(ConditionMinimum::condition).orElse(null),
           ruled ? r.worst().map(CutSite::zone).orElse(null) : null,
-          ruled ? (Object) (long) r.sites().size() : null,
+          r.sitesCounted() ? (Object) (long) r.sites().size() : null,
           r.rank().isPresent() ? (Object) (long) r.rank().getAsInt() : null)));
     }
     return new Layer("spans", "Spans from structure to structure, with their status and rank",

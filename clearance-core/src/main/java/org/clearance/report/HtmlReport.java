@@ -132,7 +132,7 @@ public final class HtmlReport {
           .append(statusBadge(r)).append("</td><td>")
           .append(r.worst().map(w -> swatch(w) + Html.esc(w.zone())).orElse("&ndash;"))
           .append("</td><td class=\"num\">")
-          .append(run.profile().isPresent() ? Integer.toString(r.sites().size()) : "&ndash;")
+          .append(r.sitesCounted() ? Integer.toString(r.sites().size()) : "&ndash;")
           .append("</td><td class=\"num\">")
           .append(Html.len(u, r.worst().map(CutSite::deficitM).orElse(Double.NaN)))
           .append("</td><td class=\"num\">").append(Html.len(u, gov == null ? Double.NaN

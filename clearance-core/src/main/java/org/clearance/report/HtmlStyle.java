@@ -38,6 +38,7 @@ final class HtmlStyle {
       "table{border-collapse:collapse;width:100%;margin:8px 0;background:#fff;font-size:13px}",
       "th{text-align:left;font-weight:600;border-bottom:2px solid var(--ink);padding:4px 6px}",
       "td{border-bottom:1px solid #ebe7dd;padding:3px 6px;vertical-align:top}",
+      "table.sites td:first-child,table.spans td:nth-child(2){white-space:nowrap}",
       "td.num{text-align:right;font-variant-numeric:tabular-nums;white-space:nowrap}",
       "tr.na td{background:#eceef2}tr.inc td{background:#f6f0df}",
       ".badge{display:inline-block;font-size:11px;font-weight:700;letter-spacing:.05em;"

@@ -55,6 +55,14 @@ final class OutputUnit {
     return fixed(area(squareMetres), 2);
   }
 
+  /** A finite number in its shortest plain decimal form ({@code 115}, {@code 2.4}). */
+  static String plain(double v) {
+    if (!Double.isFinite(v)) {
+      return fixed(v, 0);
+    }
+    return java.math.BigDecimal.valueOf(v).stripTrailingZeros().toPlainString();
+  }
+
   /** A number with fixed decimals, {@link Locale#ROOT}; empty for NaN, signed words never. */
   static String fixed(double v, int decimals) {
     if (Double.isNaN(v)) {

@@ -23,10 +23,10 @@ public record ReportOptions(
   public static final double DEFAULT_LINK_M = 1.5;
   /** Console lines for spans: a screenful. */
   public static final int DEFAULT_CONSOLE_SPANS = 10;
-  /** Drawn spans: keeps the report below a few megabytes on a whole network. */
-  public static final int DEFAULT_DRAWN_SPANS = 200;
-  /** Drawn points per span and view: enough to show the vegetation's shape. */
-  public static final int DEFAULT_DRAWN_POINTS = 1500;
+  /** Drawn spans: with the points below, keeps the report under about 5 MB on any network. */
+  public static final int DEFAULT_DRAWN_SPANS = 100;
+  /** Drawn points per span, view and kind (inside a zone, other): shows the vegetation's shape. */
+  public static final int DEFAULT_DRAWN_POINTS = 600;
 
   public ReportOptions {
     Objects.requireNonNull(outputUnit, "outputUnit");
@@ -41,7 +41,7 @@ public record ReportOptions(
     }
   }
 
-  /** Metres, 1.5 m link, 10 console spans, 200 drawn spans, 1500 points per view. */
+  /** Metres, 1.5 m link, 10 console spans, 100 drawn spans, 600 points per kind. */
   public static ReportOptions defaults() {
     return new ReportOptions(LinearUnit.METRE, DEFAULT_LINK_M, DEFAULT_CONSOLE_SPANS,
         DEFAULT_DRAWN_SPANS, DEFAULT_DRAWN_POINTS);

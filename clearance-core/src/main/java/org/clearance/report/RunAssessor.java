@@ -27,9 +27,10 @@ import org.clearance.rules.ZoneGap;
 /**
  * Evaluates a finished run under a rule profile: streams {@code near-points.bin} once, checks
  * every point with {@link SpanRules#evaluate}, groups the encroaching points of each span into
- * sites, adds fall-in sites, decides each span's status and ranks the spans. Reads only the run
- * model and the stored distances, never the survey. Memory grows with the number of encroaching
- * points and spans, not with the survey.
+ * sites, adds fall-in sites, decides each span's status and ranks the spans; a second pass
+ * samples the points of the spans the report draws. Reads only the run model and the stored
+ * distances, never the survey. Memory grows with the number of encroaching points and spans
+ * (plus a bounded sample per drawn span), not with the survey.
  */
 public final class RunAssessor {
 
@@ -72,8 +73,7 @@ public final class RunAssessor {
     ZoneEvaluator evaluator = new ZoneEvaluator(profile);
     Map<String, SpanState> states = new LinkedHashMap<>();
     for (SpanRecord s : model.spans()) {
-      states.put(s.id(), new SpanState(s, evaluator.forSpan(s.context()),
-          new SpanPoints(options.drawnPointsPerSpan())));
+      states.put(s.id(), new SpanState(s, evaluator.forSpan(s.context())));
     }
     NearPointFile layout = NearPointReader.header(nearPoints);
     if (!layout.conditions().equals(model.conditions().names())) {
@@ -99,16 +99,43 @@ public final class RunAssessor {
     }
     SiteBuilder builder = new SiteBuilder(options.linkDistanceM());
     List<SpanResult> results = new ArrayList<>();
-    Map<String, SpanPoints> drawings = new HashMap<>();
     for (SpanState st : states.values()) {
       results.add(st.result(model, builder, trees.getOrDefault(st.span.id(), List.of()),
           geo.transform()));
-      if (st.points.insideCount() + st.points.otherCount() > 0) {
-        drawings.put(st.span.id(), st.points);
+    }
+    List<SpanResult> ranked = SpanRanking.rank(results);
+    return new RunAssessment(model, Optional.of(profile), ranked,
+        drawings(nearPoints, states, ranked), geo.note(), geo.transform().isPresent());
+  }
+
+  /**
+   * Point samples of the spans the report draws (the first spans with sites in ranking
+   * order), from a second pass over the file, so that memory stays bounded by the drawn spans.
+   */
+  private Map<String, SpanPoints> drawings(Path nearPoints, Map<String, SpanState> states,
+      List<SpanResult> ranked) throws IOException {
+    Map<String, SpanPoints> out = new HashMap<>();
+    for (SpanResult r : ranked) {
+      if (out.size() < options.drawnSpans() && !r.sites().isEmpty()) {
+        out.put(r.id(), new SpanPoints(options.drawnPointsPerSpan()));
       }
     }
-    return new RunAssessment(model, Optional.of(profile), SpanRanking.rank(results), drawings,
-        geo.note(), geo.transform().isPresent());
+    if (out.isEmpty() || options.drawnPointsPerSpan() == 0) {
+      return out;
+    }
+    NearPointReader.forEach(nearPoints, p -> {
+      SpanPoints sample = out.get(p.spanId());
+      if (sample == null) {
+        return;
+      }
+      PointFinding f = states.get(p.spanId()).rules.evaluate(p);
+      if (f.violation().isPresent()) {
+        sample.addInside(p.x(), p.y(), p.z(), f.violation().get().zone().priority());
+      } else {
+        sample.addOther(p.x(), p.y(), p.z());
+      }
+    });
+    return out;
   }
 
   /** Site order within a span: priority, then deficit (largest first), then chainage. */
@@ -120,35 +147,24 @@ public final class RunAssessor {
   private final class SpanState {
     final SpanRecord span;
     final SpanRules rules;
-    final SpanPoints points;
     final List<EncroachingPoint> inside = new ArrayList<>();
     long checked;
     long notAssessed;
     String firstNotAssessed = "";
 
-    SpanState(SpanRecord span, SpanRules rules, SpanPoints points) {
+    SpanState(SpanRecord span, SpanRules rules) {
       this.span = span;
       this.rules = rules;
-      this.points = points;
     }
 
     void add(PointClearance p) {
       checked++;
       PointFinding f = rules.evaluate(p);
-      switch (f.verdict()) {
-        case INSIDE_ZONE -> {
-          var v = f.violation().orElseThrow();
-          inside.add(new EncroachingPoint(p.x(), p.y(), p.z(), p.heightAboveGround(), v,
-              f.yearsToViolation(), CutHeight.allowedTop(rules, p)));
-          points.addInside(p.x(), p.y(), p.z(), v.zone().priority());
-        }
-        case CLEAR -> points.addOther(p.x(), p.y(), p.z());
-        default -> {
-          if (notAssessed++ == 0) {
-            firstNotAssessed = f.notAssessedReason().orElse("");
-          }
-          points.addOther(p.x(), p.y(), p.z());
-        }
+      if (f.verdict() == PointFinding.Verdict.INSIDE_ZONE) {
+        inside.add(new EncroachingPoint(p.x(), p.y(), p.z(), p.heightAboveGround(),
+            f.violation().orElseThrow(), f.yearsToViolation(), CutHeight.allowedTop(rules, p)));
+      } else if (f.verdict() == PointFinding.Verdict.NOT_ASSESSED && notAssessed++ == 0) {
+        firstNotAssessed = f.notAssessedReason().orElse("");
       }
     }
 
@@ -174,6 +190,12 @@ public final class RunAssessor {
       List<String> partial = new ArrayList<>();
       for (ZoneGap g : rules.gaps()) {
         partial.add("zone " + g.zone() + " not checked: " + g.reason());
+      }
+      for (ResolvedZone z : rules.zones()) {
+        if (!z.zone().violationReference() && !selectsAny(z, model)) {
+          partial.add("zone " + z.zone().name() + " not checked: the run computed no "
+              + "condition it applies in (" + z.zone().conditions().describe() + ")");
+        }
       }
       if (notAssessed > 0) {
         partial.add(notAssessed + " vegetation point" + (notAssessed == 1 ? "" : "s")
@@ -207,20 +229,28 @@ public final class RunAssessor {
           OptionalInt.empty(), checked, notAssessed);
     }
 
-    /** Whether the run has no condition the violation-reference zone applies in. */
+    /** Why the violation-reference zone cannot apply to the run, if it cannot. */
     private Optional<String> referenceConditionMissing(RunModel model) {
       ResolvedZone ref = rules.reference().orElseThrow();
-      for (int k = 0; k < model.conditions().size(); k++) {
-        ConditionDistance probe = new ConditionDistance(model.conditions().names().get(k),
-            model.conditions().groups().get(k), Double.NaN, Double.NaN, Double.NaN, "",
-            Double.NaN);
-        if (ref.zone().conditions().selects(probe)) {
-          return Optional.empty();
-        }
+      if (selectsAny(ref, model)) {
+        return Optional.empty();
       }
       return Optional.of("the run computed no condition the violation-reference zone "
           + ref.zone().name() + " applies in (" + ref.zone().conditions().describe() + ")");
     }
+  }
+
+  /** Whether a zone applies in at least one of the run's conditions. */
+  private static boolean selectsAny(ResolvedZone z, RunModel model) {
+    for (int k = 0; k < model.conditions().size(); k++) {
+      ConditionDistance probe = new ConditionDistance(model.conditions().names().get(k),
+          model.conditions().groups().get(k), Double.NaN, Double.NaN, Double.NaN, "",
+          Double.NaN);
+      if (z.zone().conditions().selects(probe)) {
+        return true;
+      }
+    }
+    return false;
   }
 
   /** The span's plan frame from its first structure to its second, or null. */

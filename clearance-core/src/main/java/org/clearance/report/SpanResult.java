@@ -81,6 +81,14 @@ public record SpanResult(
     return best;
   }
 
+  /**
+   * Whether the span's number of sites means anything: a profile was applied and the span was
+   * at least partly assessed (a NOT ASSESSED span without sites has no count, not zero).
+   */
+  public boolean sitesCounted() {
+    return rank.isPresent() && (status != SpanStatus.NOT_ASSESSED || !sites.isEmpty());
+  }
+
   /** Conductors fitted in the span. */
   public int conductorsFitted() {
     return (int) span.conductors().stream().filter(ConductorRecord::fitted).count();

@@ -175,6 +175,7 @@ class ReportStageTest {
     assertEquals("", na.get("min_clearance_survey_m"));
     assertEquals("", na.get("min_clearance_ice_m"), "no ice condition in the run");
     assertEquals("0", na.get("n_conductors_fitted"));
+    assertEquals("", na.get("n_sites"), "a NOT ASSESSED span has no site count, not zero");
     Map<String, String> found = spans.get(1);
     assertEquals("ASSESSED", found.get("status"));
     assertEquals("prc4293", found.get("worst_zone"));

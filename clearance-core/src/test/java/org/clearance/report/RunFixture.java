@@ -33,7 +33,7 @@ import org.clearance.wire.ConductorCurve;
  * left of the line (fall-in); span KV-11-12 is NOT ASSESSED by the engine (no conductor found);
  * span KV-12-13 has only distant vegetation.
  */
-final class RunFixture {
+public final class RunFixture {
 
   static final List<String> CONDITIONS = List.of("survey", "hot-75C", "gale");
   static final List<String> GROUPS = List.of("survey", "hot", "blowout");
@@ -59,7 +59,7 @@ final class RunFixture {
   final List<TreeRecord> trees = new ArrayList<>();
 
   /** The standard run at an origin (metres) in a CRS. */
-  RunFixture(double x0, double y0, SurveyUnits units) {
+  public RunFixture(double x0, double y0, SurveyUnits units) {
     this.x0 = x0;
     this.y0 = y0;
     this.units = units;
@@ -94,21 +94,21 @@ final class RunFixture {
   }
 
   /** The standard run with metric units and no CRS. */
-  static RunFixture metric() {
+  public static RunFixture metric() {
     return new RunFixture(0, 0, SurveyUnits.metres("test"));
   }
 
-  static String spanId(int k) {
+  public static String spanId(int k) {
     return "KV-" + (10 + k) + "-" + (11 + k);
   }
 
-  RunModel model() {
+  public RunModel model() {
     return new RunModel("test", units, new ConditionSet(CONDITIONS, GROUPS), 15, "ASPRS 3-5",
         "test ground", spans, trees);
   }
 
   /** Writes model.json and near-points.bin into a folder. */
-  Path write(Path dir) throws IOException {
+  public Path write(Path dir) throws IOException {
     RunModelJson.write(model(), dir.resolve(RunModel.FILE_NAME));
     List<String> ids = spans.stream().map(SpanRecord::id).toList();
     try (NearPointWriter w = new NearPointWriter(dir.resolve(NearPointFile.FILE_NAME),
