@@ -34,6 +34,7 @@ import org.clearance.line.StructureReader;
 import org.clearance.report.ConductorsCsv;
 import org.clearance.report.ReportStage;
 import org.clearance.report.RunModel;
+import org.clearance.report.RunAssessment;
 import org.clearance.report.RunModelJson;
 import org.clearance.report.RunRecord;
 import org.clearance.report.RunRecordJson;
@@ -58,8 +59,19 @@ import org.clearance.wire.WireResult;
  */
 public final class ClearanceCheck {
 
+  /** Told when each stage ends; the benchmark uses it to read the heap. */
+  @FunctionalInterface
+  public interface StageObserver {
+    /**
+     * @param stage the stage that ended (as in run.json's timings)
+     * @param seconds how long it took, s
+     */
+    void stageEnded(String stage, double seconds);
+  }
+
   private final CheckOptions options;
   private final PrintWriter console;
+  private final StageObserver observer;
   private final Map<String, Double> timings = new LinkedHashMap<>();
   private long stageStart;
 
@@ -68,8 +80,14 @@ public final class ClearanceCheck {
    * @param console where progress and the summary go (never null; use a null writer to mute)
    */
   public ClearanceCheck(CheckOptions options, PrintWriter console) {
+    this(options, console, (stage, seconds) -> { });
+  }
+
+  /** A check that also tells {@code observer} when each stage ends. */
+  public ClearanceCheck(CheckOptions options, PrintWriter console, StageObserver observer) {
     this.options = options;
     this.console = console;
+    this.observer = observer;
   }
 
   /**
@@ -165,9 +183,10 @@ public final class ClearanceCheck {
     RunModel model = RunModels.of(toolVersion, survey.units(), conditions, options, vegetation,
         scan.ground, wires, spanModels, measured);
     RunModelJson.write(model, dir.resolve(RunModel.FILE_NAME));
-    ReportStage.Outcome outcome = ReportStage.run(dir, model, profile, options.report(),
-        console);
-    stop("rules_and_report");
+    RunAssessment assessed = ReportStage.assess(dir, model, profile, options.report());
+    stop("rules");
+    ReportStage.Outcome outcome = ReportStage.write(dir, assessed, options.report(), console);
+    stop("report");
 
     record.parameter("threads", Integer.toString(options.threads()))
         .parameter("keep_radius_m", Double.toString(options.engine().keepRadius()))
@@ -255,6 +274,7 @@ public final class ClearanceCheck {
     long now = System.nanoTime();
     double s = (now - stageStart) / 1e9;
     timings.put(stage, s);
+    observer.stageEnded(stage, s);
     console.printf(Locale.ROOT, "  [%s %.1f s]%n", stage, s);
     console.flush();
     stageStart = now;

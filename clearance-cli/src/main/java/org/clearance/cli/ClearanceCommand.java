@@ -33,7 +33,8 @@ import picocli.CommandLine.Command;
       CheckCommand.class,
       SurveyCommand.class,
       EvaluateCommand.class,
-      RulesCommand.class
+      RulesCommand.class,
+      BenchCommand.class
     })
 public final class ClearanceCommand implements Runnable {
   /** The work was done. */
