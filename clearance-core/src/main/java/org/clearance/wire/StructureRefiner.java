@@ -29,6 +29,14 @@ final class StructureRefiner {
 
   /** Half-width of the band along each span searched for a structure the file lacks, m. */
   static final double BAND_M = 12.0;
+  /** A span this many times longer than its line's median span may hide an angle structure
+   * the file lacks: its band is widened. */
+  static final double LONG_SPAN_FACTOR = 1.6;
+  /** Half-width of a widened band as a share of the span length: an angle structure missing
+   * from a line turning by up to 60 degrees stands within a quarter of the span of the chord. */
+  static final double WIDE_BAND_SHARE = 0.3;
+  /** Fewest spans in a line for its median span to tell a long span. */
+  static final int MEDIAN_SPANS = 3;
   /** A tower nearer than this to a span's end belongs to the end structure, m. */
   static final double END_CLEARANCE_M = 40.0;
   /** Tower top as a share of the highest nominal attachment height. */
@@ -125,12 +133,13 @@ final class StructureRefiner {
       }
       Structure b = refined.get(k + 1);
       SpanFrame f = SpanFrame.between(a.x(), a.y(), b.x(), b.y());
+      double half = bandHalfWidth(line, f.length());
       List<Integer> inside = new ArrayList<>();
       for (int t = 0; t < towers.size(); t++) {
         Tower tw = towers.get(t);
         double s = f.station(tw.x(), tw.y());
         if (!used[t] && s >= END_CLEARANCE_M && s <= f.length() - END_CLEARANCE_M
-            && Math.abs(f.offset(tw.x(), tw.y())) <= BAND_M) {
+            && Math.abs(f.offset(tw.x(), tw.y())) <= half) {
           inside.add(t);
         }
       }
@@ -193,10 +202,27 @@ final class StructureRefiner {
         areas.add(new Disc(s.x(), s.y(), r));
       }
       for (Span span : line.spans()) {
-        areas.add(new Band(span.frame(), BAND_M));
+        areas.add(new Band(span.frame(), bandHalfWidth(line, span.lengthM())));
       }
     }
     return areas;
+  }
+
+  /**
+   * Half-width of the band searched for a missing structure along a span of this length, m:
+   * {@link #BAND_M}, widened for a span much longer than its line's median (or in a line too
+   * short to tell).
+   */
+  static double bandHalfWidth(LineLayout line, double length) {
+    List<Span> spans = line.spans();
+    if (spans.size() >= MEDIAN_SPANS) {
+      double[] lengths = spans.stream().mapToDouble(Span::lengthM).sorted().toArray();
+      double median = lengths[lengths.length / 2];
+      if (length <= LONG_SPAN_FACTOR * median) {
+        return BAND_M;
+      }
+    }
+    return Math.max(BAND_M, WIDE_BAND_SHARE * length);
   }
 
   /** Lowest top of a tower column: a share of the highest nominal attachment height. */
