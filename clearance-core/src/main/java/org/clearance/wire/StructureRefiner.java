@@ -53,8 +53,11 @@ final class StructureRefiner {
   /** The refined layout and the changes made. */
   record Refined(SpanLayout layout, List<StructureChange> changes) {}
 
-  /** One tower found: plan centre, m, point count and how it was recognised. */
-  record Tower(double x, double y, int points, String evidence) {}
+  /**
+   * One tower found: plan centre, m, point count, how it was recognised, and whether from
+   * class-15 labels (else from a column of unclassified points).
+   */
+  record Tower(double x, double y, int points, String evidence, boolean labelled) {}
 
   private final WireFinderOptions.Structures options;
 
@@ -134,11 +137,13 @@ final class StructureRefiner {
       Structure b = refined.get(k + 1);
       SpanFrame f = SpanFrame.between(a.x(), a.y(), b.x(), b.y());
       double half = bandHalfWidth(line, f.length());
+      Boolean longSpan = isLong(line, f.length());
       List<Integer> inside = new ArrayList<>();
       for (int t = 0; t < towers.size(); t++) {
         Tower tw = towers.get(t);
         double s = f.station(tw.x(), tw.y());
-        if (!used[t] && s >= END_CLEARANCE_M && s <= f.length() - END_CLEARANCE_M
+        boolean may = longSpan == null ? tw.labelled() : longSpan;
+        if (!used[t] && may && s >= END_CLEARANCE_M && s <= f.length() - END_CLEARANCE_M
             && Math.abs(f.offset(tw.x(), tw.y())) <= half) {
           inside.add(t);
         }
@@ -193,7 +198,7 @@ final class StructureRefiner {
     return best;
   }
 
-  /** The discs around the structures and the bands along the spans. */
+  /** The discs around the structures and the bands along the spans that may hide one. */
   private List<TowerGrid.Area> areas(SpanLayout layout) {
     List<TowerGrid.Area> areas = new ArrayList<>();
     double r = options.searchRadiusM();
@@ -202,7 +207,9 @@ final class StructureRefiner {
         areas.add(new Disc(s.x(), s.y(), r));
       }
       for (Span span : line.spans()) {
-        areas.add(new Band(span.frame(), bandHalfWidth(line, span.lengthM())));
+        if (!Boolean.FALSE.equals(isLong(line, span.lengthM()))) {
+          areas.add(new Band(span.frame(), bandHalfWidth(line, span.lengthM())));
+        }
       }
     }
     return areas;
@@ -214,15 +221,23 @@ final class StructureRefiner {
    * short to tell).
    */
   static double bandHalfWidth(LineLayout line, double length) {
+    return Boolean.FALSE.equals(isLong(line, length)) ? BAND_M
+        : Math.max(BAND_M, WIDE_BAND_SHARE * length);
+  }
+
+  /**
+   * Whether a span of this length is much longer than its line's median span (one structure
+   * missing makes a span about twice as long); null when the line has too few spans to tell.
+   * Structures are only added inside long spans, or, in a line too short to tell, from class-15
+   * points: a tall tree in an ordinary span must never split it.
+   */
+  static Boolean isLong(LineLayout line, double length) {
     List<Span> spans = line.spans();
-    if (spans.size() >= MEDIAN_SPANS) {
-      double[] lengths = spans.stream().mapToDouble(Span::lengthM).sorted().toArray();
-      double median = lengths[lengths.length / 2];
-      if (length <= LONG_SPAN_FACTOR * median) {
-        return BAND_M;
-      }
+    if (spans.size() < MEDIAN_SPANS) {
+      return null;
     }
-    return Math.max(BAND_M, WIDE_BAND_SHARE * length);
+    double[] lengths = spans.stream().mapToDouble(Span::lengthM).sorted().toArray();
+    return length > LONG_SPAN_FACTOR * lengths[lengths.length / 2];
   }
 
   /** Lowest top of a tower column: a share of the highest nominal attachment height. */

@@ -84,7 +84,8 @@ final class TowerFinder {
     if (n < minPoints) {
       return null;
     }
-    return new StructureRefiner.Tower(sx / n, sy / n, n, "ASPRS class 15 (tower) points");
+    return new StructureRefiner.Tower(sx / n, sy / n, n, "ASPRS class 15 (tower) points",
+        true);
   }
 
   private static StructureRefiner.Tower columnTower(List<TowerGrid.Cell> group, int minPoints,
@@ -120,6 +121,6 @@ final class TowerFinder {
       return null;
     }
     return new StructureRefiner.Tower(sx / n, sy / n, n,
-        "column of unclassified points from near the ground to " + top + " m");
+        "column of unclassified points from near the ground to " + top + " m", false);
   }
 }

@@ -14,13 +14,20 @@ import java.util.List;
  * reaches both ends of the span and a last sweep over its whole length adds nothing. Candidates
  * include every kept point, not only the seeds: unlabelled points on a labelled wire and points
  * without linear evidence (beside a tree) join this way. A grown piece is kept as a wire only
- * when it is long enough, runs along the span in plan, and has enough points left after a final
- * check against the tube without extrapolation; otherwise its points stay free for later pieces.
+ * when it is long enough, runs along the span in plan, has enough points left after a final
+ * check against the tube without extrapolation, and does not fill the tube as a hedge or a crown
+ * would; otherwise its points stay free for later pieces.
  */
 final class WireGrowth {
 
   /** Growth rounds at most per piece; a 1 km span in 15 m steps needs about 70. */
   static final int MAX_ROUNDS = 400;
+  /**
+   * Largest RMS spread about the model, as a share of the tube's half-size: points filling the
+   * tube evenly spread over 0.58 of it (1 / sqrt 3), a wire's 3-5 cm noise or a twin bundle's
+   * half spacing far less.
+   */
+  static final double SPREAD_SHARE = 0.5;
 
   private WireGrowth() {}
 
@@ -134,8 +141,23 @@ final class WireGrowth {
     if (kept.size() < 2 * growth.clusterMinPoints() || hi - lo < growth.minLengthM()) {
       return null;
     }
+    double lat = 0;
+    double vert = 0;
+    for (int k = 0; k < kept.size(); k++) {
+      int i = kept.get(k);
+      lat += sq(p.e(i) - m.e(p.s(i)));
+      vert += sq(p.z(i) - m.z(p.s(i)));
+    }
+    if (Math.sqrt(lat / kept.size()) > SPREAD_SHARE * tolLateral
+        || Math.sqrt(vert / kept.size()) > SPREAD_SHARE * tolVertical) {
+      return null; // points filling the tube: a hedge or a crown, not a wire
+    }
     int[] out = kept.toArray();
     java.util.Arrays.sort(out);
     return out;
+  }
+
+  private static double sq(double v) {
+    return v * v;
   }
 }
