@@ -43,10 +43,12 @@ final class StructureRefiner {
   static final double TOP_SHARE = 0.9;
   /** Tower top when the specifications give no heights, m. */
   static final double DEFAULT_TOP_M = 15.0;
-  /** Lowest slice that must be occupied at the foot of a tower column, m. */
-  static final int FOOT_SLICE = 4;
-  /** Share of the slices from the foot to the top a tower must occupy. */
-  static final double FILL_SHARE = 0.6;
+  /** Highest slice, m, by which a tower's legs must show: steel stands on the ground, a crown
+   * on a trunk that airborne lidar barely sees. */
+  static final int FOOT_SLICE = 6;
+  /** Share of the slices from the foot to the top a tower must occupy: lattice steel is seen
+   * at almost every metre of height. */
+  static final double FILL_SHARE = 0.75;
   /** Widest tower footprint, m: lattice bases run to about 15 m. */
   static final double MAX_FOOTPRINT_M = 25.0;
 

@@ -24,9 +24,11 @@ import org.clearance.wire.ConductorCurve;
 import org.clearance.wire.FittedConductor;
 import org.clearance.wire.PointSource;
 import org.clearance.wire.SpanWires;
+import org.clearance.wire.StructureChange;
 import org.clearance.wire.WireFinder;
 import org.clearance.wire.WireFinderOptions;
 import org.clearance.wire.WireResult;
+import org.clearance.wire.WireStatus;
 import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.io.TempDir;
 import org.junit.jupiter.params.ParameterizedTest;
@@ -84,6 +86,35 @@ class WireAccuracyTest {
   })
   void fullLengthDemosMeetTheAccuracyTargets(long seed, ClassificationMode mode) {
     check(DemoOptions.defaults().withSeed(seed).withMode(mode));
+  }
+
+  /**
+   * The demo's structures.csv with one structure moved 30 m or left out: the finder moves it
+   * back to, or adds it at, its tower, from class-15 points or (unclassified) from the column
+   * of tower points, within 2 m (a lattice tower's points centre on its body to about a metre).
+   */
+  @ParameterizedTest(name = "{0} structure {1}, {2}")
+  @CsvSource({
+    "offset, 3, FULL", "offset, 3, UNCLASSIFIED", "omit, 4, FULL", "omit, 4, UNCLASSIFIED"
+  })
+  void editedStructuresAreRepaired(String kind, int index, ClassificationMode mode) {
+    StructureEdit edit = kind.equals("omit") ? StructureEdit.omit(index)
+        : StructureEdit.offset(index, 30);
+    DemoScene scene = DemoScene.create(DemoOptions.defaults().withSeed(230017).withSpanCount(6)
+        .withMode(mode).withStructureEdit(edit));
+    WireResult r = find(scene, dir);
+    assertEquals(1, r.structureChanges().size(), r.structureChanges().toString());
+    StructureChange c = r.structureChanges().get(0);
+    DemoStructure truth = scene.structures().get(index);
+    assertEquals(kind.equals("omit") ? StructureChange.Kind.ADDED : StructureChange.Kind.MOVED,
+        c.kind());
+    assertEquals(0, Math.hypot(c.toX() - truth.x(), c.toY() - truth.y()), 2.0);
+    assertEquals(scene.spans().size(), r.spans().size());
+    long fitted = r.spans().stream().filter(s -> s.status() == WireStatus.FITTED).count();
+    long truthFull = scene.spans().stream().filter(s -> s.wires().stream()
+        .allMatch(w -> w.role() == DemoPosition.Role.SHIELD || w.coverage() >= FIT_COVERAGE))
+        .count();
+    assertEquals(truthFull, fitted);
   }
 
   private void check(DemoOptions options) {
