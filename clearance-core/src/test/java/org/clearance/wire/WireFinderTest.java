@@ -146,6 +146,32 @@ class WireFinderTest {
     assertTrue(r.structureChanges().isEmpty(), r.structureChanges().toString());
   }
 
+  /** attach_z in the structures file pins the curve: only c is left to fit (methods.md 2.5). */
+  @ParameterizedTest
+  @EnumSource(SyntheticCorridor.Mode.class)
+  void attachmentElevationsFromTheStructuresFileAreKept(SyntheticCorridor.Mode mode) {
+    SyntheticCorridor c = SyntheticCorridor.standard(mode, 12);
+    SyntheticCorridor.Position b = c.positions.get(1);
+    List<org.clearance.line.Structure> s = new java.util.ArrayList<>();
+    for (int i = 0; i < c.tx.length; i++) {
+      double z = c.groundZ(c.tx[i], c.ty[i]) + c.towerHeight[i] + b.height();
+      s.add(new org.clearance.line.Structure("S" + (i + 1), "", i + 1,
+          org.clearance.line.StructureType.SUSPENSION, c.tx[i], c.ty[i], Double.NaN,
+          java.util.Map.of("B", z), "test.csv", i + 2));
+    }
+    var layout = org.clearance.line.SpanLayout.build(s, List.of(Fixtures.spec(c.positions)));
+    WireResult r = new WireFinder(Fixtures.options(false)).find(c, layout, c);
+    for (int k = 0; k < 3; k++) {
+      ConductorCurve truth = c.truth(k, b);
+      FittedConductor f = r.spans().get(k).conductor("B").orElseThrow();
+      ConductorCurve fit = f.curve().orElseThrow();
+      assertEquals(truth.zA(), fit.zA(), 1e-6);
+      assertEquals(truth.zB(), fit.zB(), 1e-6);
+      assertEquals(truth.midSpanSag(), fit.midSpanSag(), SAG_TOL);
+      assertTrue(f.isFitted(), f.reason().toString());
+    }
+  }
+
   private static String names(SpanWires sw) {
     return sw.conductors().stream().map(FittedConductor::name).toList().toString();
   }
