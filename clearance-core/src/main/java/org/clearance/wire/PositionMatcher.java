@@ -19,9 +19,9 @@ import org.clearance.line.ConductorPosition;
  * body extensions and a ground model error; it is tried at every value one wire-position pair
  * implies and costs (shift / {@link #SIGMA_SHIFT_M})^2. A wire whose points are labelled as a
  * shield (class 13) or phase (class 14) pays {@link #ROLE_MISMATCH} at a position of the other
- * role: labels are a hint, vendors label earth wires as conductors too. The assignment is the Hungarian
- * method ({@link Hungarian}) with every wire and position free to stay unmatched at half the
- * gate each, so no pair costing more than {@link #GATE} is ever made.
+ * role: labels are a hint, vendors label earth wires as conductors too. The assignment is the
+ * Hungarian method ({@link Hungarian}) with every wire and position free to stay unmatched at
+ * half the gate each, so no pair costing more than {@link #GATE} is ever made.
  */
 final class PositionMatcher {
 
