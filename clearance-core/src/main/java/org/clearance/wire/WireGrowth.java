@@ -15,8 +15,9 @@ import java.util.List;
  * include every kept point, not only the seeds: unlabelled points on a labelled wire and points
  * without linear evidence (beside a tree) join this way. A grown piece is kept as a wire only
  * when it is long enough, runs along the span in plan, has enough points left after a final
- * check against the tube without extrapolation, and does not fill the tube as a hedge or a crown
- * would; otherwise its points stay free for later pieces.
+ * check against the tube without extrapolation, and does not fill the tube evenly as a hedge or
+ * a crown would (a bundle's separate sub-conductors may spread as widely); otherwise its points
+ * stay free for later pieces.
  */
 final class WireGrowth {
 
@@ -141,23 +142,28 @@ final class WireGrowth {
     if (kept.size() < 2 * growth.clusterMinPoints() || hi - lo < growth.minLengthM()) {
       return null;
     }
-    double lat = 0;
-    double vert = 0;
+    double[] lat = new double[kept.size()];
+    double[] vert = new double[kept.size()];
+    double sumLat = 0;
+    double sumVert = 0;
     for (int k = 0; k < kept.size(); k++) {
       int i = kept.get(k);
-      lat += sq(p.e(i) - m.e(p.s(i)));
-      vert += sq(p.z(i) - m.z(p.s(i)));
+      lat[k] = p.e(i) - m.e(p.s(i));
+      vert[k] = p.z(i) - m.z(p.s(i));
+      sumLat += lat[k] * lat[k];
+      sumVert += vert[k] * vert[k];
     }
-    if (Math.sqrt(lat / kept.size()) > SPREAD_SHARE * tolLateral
-        || Math.sqrt(vert / kept.size()) > SPREAD_SHARE * tolVertical) {
-      return null; // points filling the tube: a hedge or a crown, not a wire
+    boolean spread = Math.sqrt(sumLat / kept.size()) > SPREAD_SHARE * tolLateral
+        || Math.sqrt(sumVert / kept.size()) > SPREAD_SHARE * tolVertical;
+    if (spread && !BundleCheck.of(lat, vert).likelyBundle()) {
+      // points filling the tube evenly: a hedge or a crown. A bundle's sub-conductors spread
+      // as widely but in separate tight groups, which an even fill never splits into (an even
+      // spread cut in two is 2 sqrt 3 = 3.5 of its halves' deviations apart, the check wants 4).
+      return null;
     }
     int[] out = kept.toArray();
     java.util.Arrays.sort(out);
     return out;
   }
 
-  private static double sq(double v) {
-    return v * v;
-  }
 }

@@ -80,4 +80,15 @@ class PositionMatcherTest {
     assertArrayEquals(new int[] {1},
         PositionMatcher.match(List.of(piece), DEMO_LIKE, GROUND_A, GROUND_B));
   }
+
+  @Test
+  void structureCentreAFewMetresOffShiftsEveryOffsetAlike() {
+    // the structures file puts both towers 2.5 m to the right of their centres: every wire
+    // appears 2.5 m further left (A at 10.5 would cost (2.5 / 1)^2 = 6.25 without the shift)
+    List<PositionMatcher.Wire> w = List.of(wire(10.5, 21.6, 0, Optional.empty()),
+        wire(2.5, 21.6, 0, Optional.empty()), wire(-5.5, 21.6, 0, Optional.empty()),
+        wire(8.0, 31, 0, Optional.empty()), wire(-3.0, 31, 0, Optional.empty()));
+    assertArrayEquals(new int[] {0, 1, 2, 3, 4},
+        PositionMatcher.match(w, DEMO_LIKE, GROUND_A, GROUND_B));
+  }
 }

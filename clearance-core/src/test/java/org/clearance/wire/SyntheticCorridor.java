@@ -28,7 +28,7 @@ final class SyntheticCorridor implements PointSource, HeightModel {
    * @param height attachment height above the structure's ground, m
    * @param c catenary constant, m
    * @param perMetre points per metre of wire
-   * @param bundle sub-conductors (1 or 2, side by side)
+   * @param bundle sub-conductors (1; 2 side by side; 4 in a square)
    * @param spacing sub-conductor spacing, m
    */
   record Position(String name, boolean shield, double offset, double height, double c,
@@ -183,12 +183,14 @@ final class SyntheticCorridor implements PointSource, HeightModel {
       }
       double d = t.curve().sagBelowChord(0, len, s);
       double sub = p.bundle() > 1 ? (r.nextBoolean() ? 0.5 : -0.5) * p.spacing() : 0;
+      // a quad bundle is a square: sub-conductors also half a spacing above and below
+      double up = p.bundle() == 4 ? (r.nextBoolean() ? 0.5 : -0.5) * p.spacing() : 0;
       double lateral = sub + d * Math.sin(phi);
       double chordZ = t.zA() + (t.zB() - t.zA()) * s / len;
       double z = chordZ - d * Math.cos(phi);
       double x = t.plan().x(s, lateral) + NOISE * r.nextGaussian();
       double y = t.plan().y(s, lateral) + NOISE * r.nextGaussian();
-      e.emit(x, y, z + NOISE * r.nextGaussian(), p.shield() ? 13 : 14);
+      e.emit(x, y, z + up + NOISE * r.nextGaussian(), p.shield() ? 13 : 14);
     }
   }
 

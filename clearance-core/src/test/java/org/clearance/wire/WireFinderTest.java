@@ -172,6 +172,38 @@ class WireFinderTest {
     }
   }
 
+  /** Quad bundles (a 0.45 m square) split into four sub-conductors, with or without the spec. */
+  @ParameterizedTest
+  @EnumSource(SyntheticCorridor.Mode.class)
+  void quadBundlesSplitIntoFour(SyntheticCorridor.Mode mode) {
+    List<SyntheticCorridor.Position> pos = List.of(
+        new SyntheticCorridor.Position("A", false, 8.0, 22.0, 1500, 8, 4, 0.45),
+        new SyntheticCorridor.Position("B", false, -8.0, 22.0, 1500, 8, 4, 0.45));
+    double[] x = {500_000, 500_280, 500_560};
+    double[] y = {4_000_000, 4_000_210, 4_000_420};
+    SyntheticCorridor c = new SyntheticCorridor(x, y, new double[3], pos, mode, 13,
+        new double[2][2][0], new double[2]);
+    List<SyntheticCorridor.Position> unbundledSpec = List.of(
+        new SyntheticCorridor.Position("A", false, 8.0, 22.0, 1500, 8, 1, 0),
+        new SyntheticCorridor.Position("B", false, -8.0, 22.0, 1500, 8, 1, 0));
+    for (List<SyntheticCorridor.Position> spec : List.of(pos, unbundledSpec)) {
+      WireResult r = new WireFinder(Fixtures.options(false)).find(c, Fixtures.layout(c, spec),
+          c);
+      for (int k = 0; k < 2; k++) {
+        SpanWires sw = r.spans().get(k);
+        assertEquals(8, sw.conductors().size(), names(sw));
+        for (FittedConductor f : sw.conductors()) {
+          assertTrue(f.isFitted(), f.name() + " " + f.reason());
+          assertEquals(4, f.bundle().orElseThrow().count(), f.name());
+          // diagonal of the 0.45 m square
+          assertEquals(0.45 * Math.sqrt(2), f.bundle().get().spreadM(), 0.05, f.name());
+          ConductorCurve truth = c.truth(k, pos.get(f.name().startsWith("A") ? 0 : 1));
+          assertEquals(truth.midSpanSag(), f.curve().orElseThrow().midSpanSag(), SAG_TOL);
+        }
+      }
+    }
+  }
+
   private static String names(SpanWires sw) {
     return sw.conductors().stream().map(FittedConductor::name).toList().toString();
   }
