@@ -27,7 +27,8 @@ import picocli.CommandLine.Command;
       "A screening aid: the utility's rules, the local regulator and qualified line-clearance "
           + "personnel govern."
     },
-    subcommands = {CommandLine.HelpCommand.class, SurveyCommand.class, WiresCommand.class})
+    subcommands = {CommandLine.HelpCommand.class, SurveyCommand.class, EvaluateCommand.class,
+        RulesCommand.class, WiresCommand.class})
 public final class ClearanceCommand implements Runnable {
   /** The work was done. */
   public static final int EXIT_OK = 0;

@@ -13,6 +13,7 @@ import java.nio.file.StandardCopyOption;
 import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
+import org.clearance.io.AtomicFiles;
 
 /**
  * Writes {@link NearPointFile near-points.bin}. Thread-safe: workers may write concurrently (each
@@ -36,8 +37,7 @@ public final class NearPointWriter implements Closeable {
   public NearPointWriter(Path target, NearPointFile layout) throws IOException {
     this.layout = layout;
     this.target = target;
-    Path dir = target.toAbsolutePath().getParent();
-    this.temp = Files.createTempFile(dir, target.getFileName().toString(), ".part");
+    this.temp = AtomicFiles.tempFileBeside(target);
     this.out = new BufferedOutputStream(Files.newOutputStream(temp), BUFFER_BYTES);
     for (int i = 0; i < layout.spanIds().size(); i++) {
       spanIndex.put(layout.spanIds().get(i), i);

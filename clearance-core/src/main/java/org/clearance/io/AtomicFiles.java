@@ -6,6 +6,8 @@ import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.nio.file.StandardCopyOption;
+import java.nio.file.attribute.PosixFileAttributeView;
+import java.nio.file.attribute.PosixFilePermissions;
 
 /**
  * Writes output files so that a reader never sees half a file: the content goes to a temporary
@@ -27,11 +29,24 @@ public final class AtomicFiles {
     write(target, out -> out.write(text.getBytes(StandardCharsets.UTF_8)));
   }
 
-  /** Writes the content through a temporary file and moves it into place. */
-  public static void write(Path target, Content content) throws IOException {
+  /**
+   * A new empty temporary file in the target's folder (created if needed), readable by all like
+   * an ordinary output file (rw-r--r-- where the file system has POSIX permissions; temporary
+   * files are otherwise created owner-only).
+   */
+  public static Path tempFileBeside(Path target) throws IOException {
     Path dir = target.toAbsolutePath().getParent();
     Files.createDirectories(dir);
-    Path temp = Files.createTempFile(dir, "." + target.getFileName().toString(), ".part");
+    Path temp = Files.createTempFile(dir, "." + target.getFileName().toString() + ".", ".part");
+    if (Files.getFileStore(temp).supportsFileAttributeView(PosixFileAttributeView.class)) {
+      Files.setPosixFilePermissions(temp, PosixFilePermissions.fromString("rw-r--r--"));
+    }
+    return temp;
+  }
+
+  /** Writes the content through a temporary file and moves it into place. */
+  public static void write(Path target, Content content) throws IOException {
+    Path temp = tempFileBeside(target);
     try {
       try (OutputStream out = Files.newOutputStream(temp)) {
         content.writeTo(out);

@@ -13,6 +13,7 @@ import java.nio.file.StandardOpenOption;
 import java.util.Arrays;
 import java.util.List;
 import java.util.Objects;
+import org.clearance.io.AtomicFiles;
 
 /**
  * Writes a LAS 1.2 or 1.4 file from {@link PointChunk}s (coordinates in metres).
@@ -50,8 +51,7 @@ public final class LasWriter implements AutoCloseable {
     byte[] vlrBytes = LasHeaderWriter.vlrBytes(vlrs);
     this.vlrCount = vlrs.size();
     this.pointOffset = LasHeader.standardHeaderSize(options.versionMinor()) + vlrBytes.length;
-    Path dir = target.toAbsolutePath().getParent();
-    this.temp = Files.createTempFile(dir, "." + target.getFileName() + ".", ".part");
+    this.temp = AtomicFiles.tempFileBeside(target);
     boolean ok = false;
     try {
       channel = FileChannel.open(temp, StandardOpenOption.WRITE);

@@ -1,0 +1,143 @@
+package org.clearance.report;
+
+import java.io.IOException;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import org.clearance.clearance.ConditionMinimum;
+import org.clearance.io.AtomicFiles;
+import org.clearance.survey.SurveyUnits;
+
+/**
+ * Writes {@code worklist.csv} (one line per site) and {@code spans.csv} (one line per span) of a
+ * run folder: UTF-8, comma-separated, a header line, fields quoted as RFC 4180 asks when they
+ * hold a comma, quote or line break. Every length column names its unit ({@code _m} or
+ * {@code _ft}); x, y and z are in the survey CRS's own units. An empty field is a value not
+ * computed; {@code years_to_violation} is {@code never} when growth never brings the site in.
+ */
+public final class CsvOutputs {
+
+  /** Work-list file name. */
+  public static final String WORKLIST = "worklist.csv";
+  /** Span table file name. */
+  public static final String SPANS = "spans.csv";
+
+  /** Decimals of lengths and coordinates: millimetres. */
+  private static final int LENGTH_DECIMALS = 3;
+  /** Decimals of longitude and latitude: 1e-8 degree is about a millimetre. */
+  private static final int DEGREE_DECIMALS = 8;
+  /** Decimals of years. */
+  private static final int YEAR_DECIMALS = 2;
+
+  private CsvOutputs() {}
+
+  /** The work-list header for an output unit. */
+  public static List<String> worklistHeader(ReportOptions options) {
+    OutputUnit u = new OutputUnit(options.outputUnit());
+    return List.of("site_id", "span_id", "priority", "zone", "condition",
+        u.column("min_clearance"), u.column("required"), u.column("deficit"), "x", "y", "z",
+        "lon", "lat", u.column("chainage"), "side", u.column("offset"), u.column("veg_height"),
+        u.column("cut_to_height"), "n_points", u.areaColumn(), "years_to_violation");
+  }
+
+  /** The span-table header for an output unit. */
+  public static List<String> spansHeader(ReportOptions options) {
+    OutputUnit u = new OutputUnit(options.outputUnit());
+    return List.of("span_id", "line_id", "from_structure", "to_structure", u.column("length"),
+        "status", "reason", "n_conductors_fitted", u.column("min_clearance_survey"),
+        u.column("min_clearance_hot"), u.column("min_clearance_blowout"),
+        u.column("min_clearance_ice"), "governing_condition", "worst_zone", "n_sites", "rank",
+        "worst_priority", u.column("worst_deficit"), "nominal_voltage_kv", "points_checked",
+        "points_not_assessed");
+  }
+
+  /** The work list's text. */
+  public static String worklist(RunAssessment run, ReportOptions options) {
+    OutputUnit u = new OutputUnit(options.outputUnit());
+    SurveyUnits su = run.model().units();
+    StringBuilder b = new StringBuilder();
+    row(b, worklistHeader(options));
+    for (CutSite s : run.sites()) {
+      row(b, List.of(s.siteId(), s.spanId(), Integer.toString(s.priority()), s.zone(),
+          s.condition(), u.lengthText(s.minClearanceM()), u.lengthText(s.requiredM()),
+          u.lengthText(s.deficitM()),
+          OutputUnit.fixed(su.horizontal().fromMetres(s.x()), LENGTH_DECIMALS),
+          OutputUnit.fixed(su.horizontal().fromMetres(s.y()), LENGTH_DECIMALS),
+          OutputUnit.fixed(su.vertical().fromMetres(s.z()), LENGTH_DECIMALS),
+          OutputUnit.fixed(s.lon(), DEGREE_DECIMALS), OutputUnit.fixed(s.lat(), DEGREE_DECIMALS),
+          u.lengthText(s.chainageM()), s.side().word(), u.lengthText(s.offsetM()),
+          u.lengthText(s.vegHeightM()), u.lengthText(s.cutToHeightM()),
+          s.points().isPresent() ? Integer.toString(s.points().getAsInt()) : "",
+          u.areaText(s.areaM2()), years(s.yearsToViolation())));
+    }
+    return b.toString();
+  }
+
+  /** The span table's text, in ranking order. */
+  public static String spans(RunAssessment run, ReportOptions options) {
+    OutputUnit u = new OutputUnit(options.outputUnit());
+    boolean ruled = run.profile().isPresent();
+    StringBuilder b = new StringBuilder();
+    row(b, spansHeader(options));
+    for (SpanResult r : run.spans()) {
+      SpanRecord s = r.span();
+      List<String> f = new ArrayList<>();
+      f.add(s.id());
+      f.add(s.context().lineId());
+      f.add(s.from().id());
+      f.add(s.to().id());
+      f.add(u.lengthText(s.context().lengthM()));
+      f.add(r.status().name());
+      f.add(r.reason());
+      f.add(Integer.toString(r.conductorsFitted()));
+      for (String group : List.of("survey", "hot", "blowout", "ice")) {
+        f.add(u.lengthText(r.minimumOfGroup(group)));
+      }
+      f.add(r.governingMinimum().map(ConditionMinimum::condition).orElse(""));
+      f.add(ruled ? r.worst().map(CutSite::zone).orElse("") : "");
+      f.add(r.sitesCounted() ? Integer.toString(r.sites().size()) : "");
+      f.add(r.rank().isPresent() ? Integer.toString(r.rank().getAsInt()) : "");
+      f.add(r.worst().map(w -> Integer.toString(w.priority())).orElse(""));
+      f.add(u.lengthText(r.worst().map(CutSite::deficitM).orElse(Double.NaN)));
+      f.add(OutputUnit.plain(s.context().nominalVoltageKv()));
+      f.add(ruled ? Long.toString(r.pointsChecked()) : "");
+      f.add(ruled ? Long.toString(r.pointsNotAssessed()) : "");
+      row(b, f);
+    }
+    return b.toString();
+  }
+
+  /** Writes both files into a run folder. */
+  public static void write(Path runDir, RunAssessment run, ReportOptions options)
+      throws IOException {
+    AtomicFiles.writeString(runDir.resolve(WORKLIST), worklist(run, options));
+    AtomicFiles.writeString(runDir.resolve(SPANS), spans(run, options));
+  }
+
+  /** Years as text: 2 decimals, {@code never} for +infinity, empty when not computed. */
+  static String years(double y) {
+    if (y == Double.POSITIVE_INFINITY) {
+      return "never";
+    }
+    return OutputUnit.fixed(y, YEAR_DECIMALS);
+  }
+
+  private static void row(StringBuilder b, List<String> fields) {
+    for (int i = 0; i < fields.size(); i++) {
+      if (i > 0) {
+        b.append(',');
+      }
+      b.append(quote(fields.get(i)));
+    }
+    b.append('\n');
+  }
+
+  /** A field quoted when it holds a comma, quote or line break (RFC 4180 section 2). */
+  static String quote(String field) {
+    if (field.indexOf(',') < 0 && field.indexOf('"') < 0 && field.indexOf('\n') < 0
+        && field.indexOf('\r') < 0) {
+      return field;
+    }
+    return '"' + field.replace("\"", "\"\"") + '"';
+  }
+}

@@ -1,0 +1,210 @@
+package org.clearance.report;
+
+import java.io.IOException;
+import java.nio.file.Path;
+import java.time.Instant;
+import java.time.temporal.ChronoUnit;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import org.clearance.clearance.ConditionMinimum;
+import org.clearance.clearance.SpanStatus;
+import org.clearance.io.AtomicFiles;
+import org.clearance.rules.RuleProfile;
+import org.clearance.rules.SpanRules;
+import org.clearance.rules.ZoneEvaluator;
+
+/**
+ * Writes {@code report.html}: one self-contained page (inline CSS and SVG, no scripts, no
+ * external resources) with the cautions, a summary, the spans that need attention because they
+ * are NOT ASSESSED or INCOMPLETE, the ranked span table, a section per span with findings (site
+ * table, plan and profile views) and the rule profile used.
+ */
+public final class HtmlReport {
+
+  /** File name inside a run folder. */
+  public static final String FILE_NAME = "report.html";
+
+  private HtmlReport() {}
+
+  /** Writes the page into a run folder. */
+  public static void write(Path runDir, RunAssessment run, ReportOptions options)
+      throws IOException {
+    AtomicFiles.writeString(runDir.resolve(FILE_NAME), page(run, options, Instant.now()));
+  }
+
+  /** The page's text. */
+  public static String page(RunAssessment run, ReportOptions options, Instant generated) {
+    OutputUnit u = new OutputUnit(options.outputUnit());
+    StringBuilder b = new StringBuilder(1 << 16);
+    b.append("<!DOCTYPE html>\n<html lang=\"en\"><head><meta charset=\"utf-8\">")
+        .append("<meta name=\"viewport\" content=\"width=device-width, initial-scale=1\">")
+        .append("<title>Clearance screening report</title><style>").append(HtmlStyle.CSS)
+        .append("</style></head><body>\n");
+    header(b, run, generated);
+    cautions(b, run);
+    HtmlSections.summary(b, run);
+    HtmlSections.attention(b, run);
+    spanTable(b, run, u);
+    int drawn = 0;
+    for (SpanResult r : run.spans()) {
+      if (r.sites().isEmpty()) {
+        continue;
+      }
+      if (drawn++ >= options.drawnSpans()) {
+        b.append(Html.f("<p class=\"note\">Only the first %d spans with findings are drawn; "
+            + "the work list holds every site.</p>", options.drawnSpans()));
+        break;
+      }
+      spanSection(b, run, r, u);
+    }
+    HtmlSections.profile(b, run);
+    HtmlSections.notes(b, run, u);
+    b.append(Html.f("<footer>Clearance %s &middot; generated %s</footer>\n",
+        Html.esc(run.model().toolVersion()),
+        Html.esc(generated.truncatedTo(ChronoUnit.SECONDS).toString())));
+    b.append("</body></html>\n");
+    return b.toString();
+  }
+
+  private static void header(StringBuilder b, RunAssessment run, Instant generated) {
+    var units = run.model().units();
+    String crs = units.crsName().isEmpty() ? "not named" : units.crsName();
+    if (units.epsg().isPresent()) {
+      crs += " (EPSG:" + units.epsg().getAsInt() + ")";
+    }
+    b.append("<header><p class=\"kicker\">Vegetation clearance screening</p>");
+    b.append("<h1>").append(run.profile().map(p -> Html.esc(p.title()))
+        .orElse("Distances measured, no rule profile applied")).append("</h1>");
+    b.append("<dl class=\"meta\">");
+    meta(b, "rule profile", run.profile().map(RuleProfile::name).orElse("none"));
+    meta(b, "spans", Integer.toString(run.spans().size()));
+    meta(b, "conditions", String.join(", ", run.model().conditions().names()));
+    meta(b, "survey CRS", crs);
+    meta(b, "x, y / z units", units.horizontal().symbol() + " / " + units.vertical().symbol());
+    meta(b, "vegetation", run.model().vegetation());
+    b.append("</dl></header>\n");
+  }
+
+  private static void meta(StringBuilder b, String name, String value) {
+    b.append("<div><dt>").append(Html.esc(name)).append("</dt><dd>").append(Html.esc(value))
+        .append("</dd></div>");
+  }
+
+  private static void cautions(StringBuilder b, RunAssessment run) {
+    b.append("<section class=\"cautions\" id=\"cautions\"><h2>Before you use this report</h2>"
+        + "<ul>");
+    for (String c : ReportCautions.GENERAL) {
+      b.append("<li>").append(Html.esc(c)).append("</li>");
+    }
+    run.profile().ifPresent(p -> p.origins().stream().filter(o -> !o.cautions().isEmpty())
+        .forEach(o -> b.append("<li>Rule profile ").append(Html.esc(o.name())).append(": ")
+            .append(Html.esc(o.cautions().strip())).append("</li>")));
+    b.append("</ul></section>\n");
+  }
+
+  private static void spanTable(StringBuilder b, RunAssessment run, OutputUnit u) {
+    b.append("<section id=\"spans\"><h2>Spans in order of attention</h2>");
+    b.append("<table class=\"spans\"><thead><tr><th>rank</th><th>span</th><th>line</th>"
+        + "<th>structures</th><th>length</th><th>status</th><th>most urgent zone</th>"
+        + "<th>sites</th><th>deficit</th><th>closest vegetation</th><th>in condition</th>"
+        + "</tr></thead><tbody>");
+    for (SpanResult r : run.spans()) {
+      String cls = switch (r.status()) {
+        case NOT_ASSESSED -> "na";
+        case INCOMPLETE -> "inc";
+        default -> r.sites().isEmpty() ? "clear" : "found";
+      };
+      b.append("<tr class=\"").append(cls).append("\"><td>")
+          .append(r.rank().isPresent() ? Integer.toString(r.rank().getAsInt()) : "&ndash;")
+          .append("</td><td>");
+      if (!r.sites().isEmpty()) {
+        b.append("<a href=\"#span-").append(Html.esc(anchor(r.id()))).append("\">")
+            .append(Html.esc(r.id())).append("</a>");
+      } else {
+        b.append(Html.esc(r.id()));
+      }
+      ConditionMinimum gov = r.governingMinimum().orElse(null);
+      b.append("</td><td>").append(Html.esc(r.span().context().lineId())).append("</td><td>")
+          .append(Html.esc(r.span().from().id())).append(" &rarr; ")
+          .append(Html.esc(r.span().to().id())).append("</td><td class=\"num\">")
+          .append(Html.len(u, r.span().context().lengthM())).append("</td><td>")
+          .append(statusBadge(r)).append("</td><td>")
+          .append(r.worst().map(w -> swatch(w) + Html.esc(w.zone())).orElse("&ndash;"))
+          .append("</td><td class=\"num\">")
+          .append(r.sitesCounted() ? Integer.toString(r.sites().size()) : "&ndash;")
+          .append("</td><td class=\"num\">")
+          .append(Html.len(u, r.worst().map(CutSite::deficitM).orElse(Double.NaN)))
+          .append("</td><td class=\"num\">").append(Html.len(u, gov == null ? Double.NaN
+              : gov.distance())).append("</td><td>")
+          .append(gov == null ? "&ndash;" : Html.esc(gov.condition())).append("</td></tr>");
+    }
+    b.append("</tbody></table></section>\n");
+  }
+
+  /** The status as a labelled badge; only an assessed span without sites reads "clear". */
+  static String statusBadge(SpanResult r) {
+    if (r.status() == SpanStatus.NOT_ASSESSED) {
+      return "<span class=\"badge na\">NOT ASSESSED</span>";
+    }
+    if (r.status() == SpanStatus.INCOMPLETE) {
+      return "<span class=\"badge inc\">INCOMPLETE</span>";
+    }
+    return r.sites().isEmpty() ? "<span class=\"badge clear\">clear</span>"
+        : "<span class=\"badge found\">findings</span>";
+  }
+
+  static String swatch(CutSite s) {
+    return "<i class=\"sw\" style=\"background:" + Palette.site(s) + "\"></i>";
+  }
+
+  static String anchor(String id) {
+    return id.replaceAll("[^A-Za-z0-9_.-]", "_");
+  }
+
+  private static void spanSection(StringBuilder b, RunAssessment run, SpanResult r,
+      OutputUnit u) {
+    SpanRecord s = r.span();
+    b.append("<section class=\"span\" id=\"span-").append(Html.esc(anchor(r.id())))
+        .append("\"><h2>Span ").append(Html.esc(r.id())).append(" <small>")
+        .append(Html.esc(s.lineName().isEmpty() ? s.context().lineId() : s.lineName()))
+        .append(", ").append(Html.esc(s.from().id())).append(" &rarr; ")
+        .append(Html.esc(s.to().id())).append(", ").append(Html.len(u, s.context().lengthM()))
+        .append("</small> ").append(statusBadge(r)).append("</h2>");
+    if (!r.reason().isEmpty()) {
+      b.append("<p class=\"reason\">").append(Html.esc(r.reason())).append("</p>");
+    }
+    HtmlSections.siteTable(b, r, u);
+    SpanRules rules = run.profile().map(p -> new ZoneEvaluator(p).forSpan(s.context()))
+        .orElse(null);
+    SvgSpanViews views = new SvgSpanViews(r, SvgSpanViews.governingIndex(r, run.model()),
+        rules, run.drawings().get(r.id()), u);
+    if (!views.drawable()) {
+      b.append("<p class=\"note\">The span's structures coincide in plan: not drawn.</p>");
+    } else {
+      Map<String, SvgSpanViews.View> both = new LinkedHashMap<>();
+      both.put("Plan", views.plan());
+      both.put("Profile", views.profile());
+      for (var e : both.entrySet()) {
+        b.append("<figure>").append(e.getValue().svg()).append("<figcaption>")
+            .append(e.getKey()).append(" view");
+        double k = e.getValue().stretch();
+        if (k > 1.05 || k < 0.95) {
+          b.append(Html.f(" (%s stretched &times;%.1f against chainage)",
+              e.getKey().equals("Plan") ? "offsets" : "heights", k));
+        }
+        b.append("</figcaption></figure>");
+      }
+      HtmlSections.legend(b, r, run, SvgSpanViews.governingIndex(r, run.model()));
+    }
+    b.append("</section>\n");
+  }
+
+  /** Counts of sites per zone in priority order (for the summary and the console). */
+  static Map<String, int[]> sitesPerZone(List<CutSite> sites) {
+    Map<String, int[]> out = new LinkedHashMap<>();
+    sites.stream().sorted(RunAssessor.SITE_ORDER).forEach(s ->
+        out.computeIfAbsent(s.zone(), z -> new int[] {s.priority(), 0})[1]++);
+    return out;
+  }
+}

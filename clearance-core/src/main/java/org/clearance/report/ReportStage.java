@@ -1,0 +1,80 @@
+package org.clearance.report;
+
+import java.io.IOException;
+import java.io.PrintWriter;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Objects;
+import org.clearance.clearance.NearPointFile;
+import org.clearance.rules.RuleProfile;
+
+/**
+ * The report stage of a run folder: evaluates the stored distances under a rule profile
+ * ({@link RunAssessor}) and writes every output - {@code worklist.csv}, {@code spans.csv},
+ * {@code sites.gpkg}, {@code sites.geojson} (when the CRS is known), {@code report.html} - each
+ * through a temporary file, then prints a short summary. It reads {@code near-points.bin} of the
+ * folder and the model given, never the survey; {@code clearance check} calls it after measuring,
+ * {@code clearance evaluate} to apply another profile. It does not write {@code run.json}: the
+ * calling command does ({@link RunRecord}).
+ */
+public final class ReportStage {
+
+  private ReportStage() {}
+
+  /**
+   * What the stage did.
+   *
+   * @param assessment the evaluated run
+   * @param written names of the files written into the run folder
+   * @param notes remarks about the outputs (a file not written and why)
+   * @param seconds time the stage took, s
+   */
+  public record Outcome(RunAssessment assessment, List<String> written, List<String> notes,
+      double seconds) {
+    public Outcome {
+      Objects.requireNonNull(assessment, "assessment");
+      written = List.copyOf(written);
+      notes = List.copyOf(notes);
+    }
+  }
+
+  /**
+   * Evaluates and writes the outputs of a run folder.
+   *
+   * @param runDir the run folder (holds {@code near-points.bin}; outputs are written here)
+   * @param model the run model
+   * @param profile the rule profile to apply, or null for none (every span is then NOT
+   *     ASSESSED and the work list is empty)
+   * @param options report options
+   * @param console where the summary goes, or null for none
+   * @throws org.clearance.InputException when the near-points file does not match the model
+   * @throws IOException when a file cannot be read or written
+   */
+  public static Outcome run(Path runDir, RunModel model, RuleProfile profile,
+      ReportOptions options, PrintWriter console) throws IOException {
+    long t0 = System.nanoTime();
+    RunAssessment run = RunAssessor.assess(model, runDir.resolve(NearPointFile.FILE_NAME),
+        profile, options);
+    List<String> written = new ArrayList<>();
+    List<String> notes = new ArrayList<>();
+    CsvOutputs.write(runDir, run, options);
+    written.add(CsvOutputs.WORKLIST);
+    written.add(CsvOutputs.SPANS);
+    GeoPackageWriter.write(runDir, run, options);
+    written.add(GeoPackageWriter.FILE_NAME);
+    if (GeoJsonSites.write(runDir, run, options)) {
+      written.add(GeoJsonSites.FILE_NAME);
+    } else {
+      notes.add(GeoJsonSites.FILE_NAME + " not written: RFC 7946 asks for longitude and "
+          + "latitude, and " + run.lonLatNote());
+    }
+    HtmlReport.write(runDir, run, options);
+    written.add(HtmlReport.FILE_NAME);
+    if (console != null) {
+      console.print(ConsoleSummary.text(run, options, written, notes));
+      console.flush();
+    }
+    return new Outcome(run, written, notes, (System.nanoTime() - t0) / 1e9);
+  }
+}

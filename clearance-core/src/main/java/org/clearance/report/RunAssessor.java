@@ -1,0 +1,266 @@
+package org.clearance.report;
+
+import java.io.IOException;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.Comparator;
+import java.util.HashMap;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.Optional;
+import java.util.OptionalInt;
+import org.clearance.InputException;
+import org.clearance.clearance.ConditionDistance;
+import org.clearance.clearance.NearPointFile;
+import org.clearance.clearance.NearPointReader;
+import org.clearance.clearance.PointClearance;
+import org.clearance.clearance.SpanStatus;
+import org.clearance.line.SpanFrame;
+import org.clearance.rules.PointFinding;
+import org.clearance.rules.ResolvedZone;
+import org.clearance.rules.RuleProfile;
+import org.clearance.rules.SpanRules;
+import org.clearance.rules.ZoneEvaluator;
+import org.clearance.rules.ZoneGap;
+
+/**
+ * Evaluates a finished run under a rule profile: streams {@code near-points.bin} once, checks
+ * every point with {@link SpanRules#evaluate}, groups the encroaching points of each span into
+ * sites, adds fall-in sites, decides each span's status and ranks the spans; a second pass
+ * samples the points of the spans the report draws. Reads only the run model and the stored
+ * distances, never the survey. Memory grows with the number of encroaching points and spans
+ * (plus a bounded sample per drawn span), not with the survey.
+ */
+public final class RunAssessor {
+
+  private final RuleProfile profile;
+  private final ReportOptions options;
+
+  /**
+   * @param profile the profile to apply, or null for none
+   * @param options report options
+   */
+  public RunAssessor(RuleProfile profile, ReportOptions options) {
+    this.profile = profile;
+    this.options = options;
+  }
+
+  /** Shortcut: {@code new RunAssessor(profile, options).assess(model, nearPoints)}. */
+  public static RunAssessment assess(RunModel model, Path nearPoints, RuleProfile profile,
+      ReportOptions options) throws IOException {
+    return new RunAssessor(profile, options).assess(model, nearPoints);
+  }
+
+  /**
+   * @param model the run model
+   * @param nearPoints the run's {@code near-points.bin} (not read without a profile)
+   * @throws InputException when the near-points file does not belong to the model
+   */
+  public RunAssessment assess(RunModel model, Path nearPoints) throws IOException {
+    LonLat.Lookup geo = LonLat.forUnits(model.units());
+    if (profile == null) {
+      List<SpanResult> out = new ArrayList<>();
+      for (SpanRecord s : model.spans()) {
+        String reason = s.status() == SpanStatus.NOT_ASSESSED ? s.reason()
+            : "no rule profile given: distances were measured but not checked against any zone";
+        out.add(new SpanResult(s, SpanStatus.NOT_ASSESSED, reason, List.of(),
+            OptionalInt.empty(), 0, 0));
+      }
+      return new RunAssessment(model, Optional.empty(), out, Map.of(), geo.note(),
+          geo.transform().isPresent());
+    }
+    ZoneEvaluator evaluator = new ZoneEvaluator(profile);
+    Map<String, SpanState> states = new LinkedHashMap<>();
+    for (SpanRecord s : model.spans()) {
+      states.put(s.id(), new SpanState(s, evaluator.forSpan(s.context())));
+    }
+    NearPointFile layout = NearPointReader.header(nearPoints);
+    if (!layout.conditions().equals(model.conditions().names())) {
+      throw new InputException(nearPoints, "header", "conditions", "conditions "
+          + layout.conditions() + " differ from those of " + RunModel.FILE_NAME + " "
+          + model.conditions().names() + ": the files belong to different runs");
+    }
+    NearPointReader.forEach(nearPoints, p -> {
+      SpanState st = states.get(p.spanId());
+      if (st == null) {
+        throw new InputException(nearPoints, null, "span", "span " + p.spanId()
+            + " is not in " + RunModel.FILE_NAME + ": the files belong to different runs");
+      }
+      st.add(p);
+    });
+    Map<String, List<TreeRecord>> trees = new HashMap<>();
+    for (TreeRecord t : model.trees()) {
+      if (!states.containsKey(t.spanId())) {
+        throw new InputException(RunModel.FILE_NAME, "tree " + t.id(), "span_id",
+            "span " + t.spanId() + " is not in the model");
+      }
+      trees.computeIfAbsent(t.spanId(), k -> new ArrayList<>()).add(t);
+    }
+    SiteBuilder builder = new SiteBuilder(options.linkDistanceM());
+    List<SpanResult> results = new ArrayList<>();
+    for (SpanState st : states.values()) {
+      results.add(st.result(model, builder, trees.getOrDefault(st.span.id(), List.of()),
+          geo.transform()));
+    }
+    List<SpanResult> ranked = SpanRanking.rank(results);
+    return new RunAssessment(model, Optional.of(profile), ranked,
+        drawings(nearPoints, states, ranked), geo.note(), geo.transform().isPresent());
+  }
+
+  /**
+   * Point samples of the spans the report draws (the first spans with sites in ranking
+   * order), from a second pass over the file, so that memory stays bounded by the drawn spans.
+   */
+  private Map<String, SpanPoints> drawings(Path nearPoints, Map<String, SpanState> states,
+      List<SpanResult> ranked) throws IOException {
+    Map<String, SpanPoints> out = new HashMap<>();
+    for (SpanResult r : ranked) {
+      if (out.size() < options.drawnSpans() && !r.sites().isEmpty()) {
+        out.put(r.id(), new SpanPoints(options.drawnPointsPerSpan()));
+      }
+    }
+    if (out.isEmpty() || options.drawnPointsPerSpan() == 0) {
+      return out;
+    }
+    NearPointReader.forEach(nearPoints, p -> {
+      SpanPoints sample = out.get(p.spanId());
+      if (sample == null) {
+        return;
+      }
+      PointFinding f = states.get(p.spanId()).rules.evaluate(p);
+      if (f.violation().isPresent()) {
+        sample.addInside(p.x(), p.y(), p.z(), f.violation().get().zone().priority());
+      } else {
+        sample.addOther(p.x(), p.y(), p.z());
+      }
+    });
+    return out;
+  }
+
+  /** Site order within a span: priority, then deficit (largest first), then chainage. */
+  static final Comparator<CutSite> SITE_ORDER = Comparator.comparingInt(CutSite::priority)
+      .thenComparingDouble(s -> -s.deficitM())
+      .thenComparingDouble(CutSite::chainageM);
+
+  /** What is gathered for one span while the points stream past. */
+  private final class SpanState {
+    final SpanRecord span;
+    final SpanRules rules;
+    final List<EncroachingPoint> inside = new ArrayList<>();
+    long checked;
+    long notAssessed;
+    String firstNotAssessed = "";
+
+    SpanState(SpanRecord span, SpanRules rules) {
+      this.span = span;
+      this.rules = rules;
+    }
+
+    void add(PointClearance p) {
+      checked++;
+      PointFinding f = rules.evaluate(p);
+      if (f.verdict() == PointFinding.Verdict.INSIDE_ZONE) {
+        inside.add(new EncroachingPoint(p.x(), p.y(), p.z(), p.heightAboveGround(),
+            f.violation().orElseThrow(), f.yearsToViolation(), CutHeight.allowedTop(rules, p)));
+      } else if (f.verdict() == PointFinding.Verdict.NOT_ASSESSED && notAssessed++ == 0) {
+        firstNotAssessed = f.notAssessedReason().orElse("");
+      }
+    }
+
+    SpanResult result(RunModel model, SiteBuilder builder, List<TreeRecord> trees,
+        Optional<LonLat> geo) {
+      SpanFrame frame = frameOf(span);
+      List<CutSite> sites = new ArrayList<>(builder.build(span.id(), frame, inside));
+      List<String> reasons = new ArrayList<>();
+      SpanStatus status = span.status();
+      if (!span.reason().isEmpty() && status != SpanStatus.ASSESSED) {
+        reasons.add(span.reason());
+      }
+      if (rules.notAssessedReason().isPresent()) {
+        status = SpanStatus.NOT_ASSESSED;
+        reasons.add("rule profile " + profile.name() + ": " + rules.notAssessedReason().get());
+      } else {
+        Optional<String> noCondition = referenceConditionMissing(model);
+        if (noCondition.isPresent()) {
+          status = SpanStatus.NOT_ASSESSED;
+          reasons.add(noCondition.get());
+        }
+      }
+      List<String> partial = new ArrayList<>();
+      for (ZoneGap g : rules.gaps()) {
+        partial.add("zone " + g.zone() + " not checked: " + g.reason());
+      }
+      for (ResolvedZone z : rules.zones()) {
+        if (!z.zone().violationReference() && !selectsAny(z, model)) {
+          partial.add("zone " + z.zone().name() + " not checked: the run computed no "
+              + "condition it applies in (" + z.zone().conditions().describe() + ")");
+        }
+      }
+      if (notAssessed > 0) {
+        partial.add(notAssessed + " vegetation point" + (notAssessed == 1 ? "" : "s")
+            + " not checked: " + firstNotAssessed);
+      }
+      if (rules.assessed()) {
+        FallInSites.Result fall = FallInSites.check(rules, model.conditions(), frame, trees,
+            RunAssessment.fallInPriority(profile));
+        sites.addAll(fall.sites());
+        if (profile.fallIn().enabled()) {
+          for (String n : fall.notAssessed()) {
+            partial.add("fall-in not checked for " + n);
+          }
+        }
+      }
+      reasons.addAll(partial);
+      if (status == SpanStatus.ASSESSED && !partial.isEmpty()) {
+        status = SpanStatus.INCOMPLETE;
+      }
+      sites.sort(SITE_ORDER);
+      List<CutSite> named = new ArrayList<>();
+      for (int i = 0; i < sites.size(); i++) {
+        CutSite s = sites.get(i).withId(span.id() + "." + (i + 1));
+        if (geo.isPresent()) {
+          double[] ll = geo.get().of(s.x(), s.y());
+          s = s.withLonLat(ll[0], ll[1]);
+        }
+        named.add(s);
+      }
+      return new SpanResult(span, status, String.join("; ", reasons), named,
+          OptionalInt.empty(), checked, notAssessed);
+    }
+
+    /** Why the violation-reference zone cannot apply to the run, if it cannot. */
+    private Optional<String> referenceConditionMissing(RunModel model) {
+      ResolvedZone ref = rules.reference().orElseThrow();
+      if (selectsAny(ref, model)) {
+        return Optional.empty();
+      }
+      return Optional.of("the run computed no condition the violation-reference zone "
+          + ref.zone().name() + " applies in (" + ref.zone().conditions().describe() + ")");
+    }
+  }
+
+  /** Whether a zone applies in at least one of the run's conditions. */
+  private static boolean selectsAny(ResolvedZone z, RunModel model) {
+    for (int k = 0; k < model.conditions().size(); k++) {
+      ConditionDistance probe = new ConditionDistance(model.conditions().names().get(k),
+          model.conditions().groups().get(k), Double.NaN, Double.NaN, Double.NaN, "",
+          Double.NaN);
+      if (z.zone().conditions().selects(probe)) {
+        return true;
+      }
+    }
+    return false;
+  }
+
+  /** The span's plan frame from its first structure to its second, or null. */
+  static SpanFrame frameOf(SpanRecord span) {
+    StructureRecord a = span.from();
+    StructureRecord b = span.to();
+    if (!(Double.isFinite(a.x()) && Double.isFinite(a.y()) && Double.isFinite(b.x())
+        && Double.isFinite(b.y())) || (a.x() == b.x() && a.y() == b.y())) {
+      return null;
+    }
+    return SpanFrame.between(a.x(), a.y(), b.x(), b.y());
+  }
+}
