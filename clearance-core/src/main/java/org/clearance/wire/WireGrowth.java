@@ -24,9 +24,10 @@ final class WireGrowth {
   /** Growth rounds at most per piece; a 1 km span in 15 m steps needs about 70. */
   static final int MAX_ROUNDS = 400;
   /**
-   * Largest RMS spread about the model, as a share of the tube's half-size: points filling the
-   * tube evenly spread over 0.58 of it (1 / sqrt 3), a wire's 3-5 cm noise or a twin bundle's
-   * half spacing far less.
+   * Largest robust spread (1.4826 MAD) about the model, as a share of the tube's half-size:
+   * points filling the tube evenly spread over 0.74 of it, a wire's 3-5 cm noise far less, and
+   * a wire with a crown around part of it keeps the spread of its own points (a median, unlike
+   * an RMS, ignores the leaves while they are fewer than the wire's points).
    */
   static final double SPREAD_SHARE = 0.5;
 
@@ -144,17 +145,13 @@ final class WireGrowth {
     }
     double[] lat = new double[kept.size()];
     double[] vert = new double[kept.size()];
-    double sumLat = 0;
-    double sumVert = 0;
     for (int k = 0; k < kept.size(); k++) {
       int i = kept.get(k);
       lat[k] = p.e(i) - m.e(p.s(i));
       vert[k] = p.z(i) - m.z(p.s(i));
-      sumLat += lat[k] * lat[k];
-      sumVert += vert[k] * vert[k];
     }
-    boolean spread = Math.sqrt(sumLat / kept.size()) > SPREAD_SHARE * tolLateral
-        || Math.sqrt(sumVert / kept.size()) > SPREAD_SHARE * tolVertical;
+    boolean spread = RobustScale.sigmaMad(lat, lat.length) > SPREAD_SHARE * tolLateral
+        || RobustScale.sigmaMad(vert, vert.length) > SPREAD_SHARE * tolVertical;
     if (spread && !BundleCheck.of(lat, vert).likelyBundle()) {
       // points filling the tube evenly: a hedge or a crown. A bundle's sub-conductors spread
       // as widely but in separate tight groups, which an even fill never splits into (an even

@@ -108,4 +108,41 @@ class WireGrowthTest {
     assertFalse(clusters.isEmpty());
     assertEquals(0, WireGrowth.grow(p, clusters, 0, 300, GROWTH, 0.5, 0.35).size());
   }
+
+  @Test
+  void aWireThroughACrownIsStillAWire() {
+    // an unclassified survey: a wire whose middle 14 m runs through a dense 7 m crown that
+    // puts about 200 leaf points in the wire's tube (the wire has 600)
+    SpanPoints p = new SpanPoints(0);
+    Random r = new Random(4);
+    wire(p, r, 3, 120, 0, 300, 1);
+    Catenary c = Catenary.through(0, 120, 300, 120, 1500);
+    for (int k = 0; k < 20000; k++) {
+      double a = 2 * Math.PI * r.nextDouble();
+      double b = Math.acos(2 * r.nextDouble() - 1);
+      double rad = 7 * Math.cbrt(r.nextDouble());
+      double s = 150 + rad * Math.sin(b) * Math.cos(a);
+      p.add(s, 3 + rad * Math.sin(b) * Math.sin(a), c.z(150) + rad * Math.cos(b), 12, 1);
+    }
+    p.sort();
+    boolean[] linear = new WireEvidence(WireFinderOptions.Evidence.defaults()).evaluate(p);
+    IntList seeds = new IntList();
+    for (int i = 0; i < p.size(); i++) {
+      if (linear[i]) {
+        seeds.add(i);
+      }
+    }
+    List<int[]> clusters = WireClusters.of(p, seeds.toArray(), GROWTH.stationStretch(),
+        GROWTH.clusterRadiusM(), GROWTH.clusterMinPoints());
+    List<int[]> wires = WireGrowth.grow(p, clusters, 0, 300, GROWTH, 0.6, 0.45);
+    assertEquals(1, wires.size());
+    int[] w = wires.get(0);
+    assertTrue(p.s(w[0]) < 5 && p.s(w[w.length - 1]) > 295, "end to end");
+    var span = new org.clearance.line.Span("P1-P2", "TX1", Fixtures.structure("P1", 1, 0, 0),
+        Fixtures.structure("P2", 2, 300, 0), org.clearance.line.SpanFrame.between(0, 0, 300, 0),
+        300, 0);
+    ConductorFit.Result fit = ConductorFit.fit(p, w, span, true, Double.NaN, Double.NaN);
+    assertEquals(c.midSpanSag(0, 300), fit.curve().orElseThrow().midSpanSag(), 0.03);
+    assertTrue(fit.quality().rmsM() < 0.08, "rms " + fit.quality().rmsM());
+  }
 }
