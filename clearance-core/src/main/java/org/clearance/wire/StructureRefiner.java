@@ -6,6 +6,7 @@ import java.util.Comparator;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
+import org.clearance.InputException;
 import org.clearance.clearance.HeightModel;
 import org.clearance.line.ConductorPosition;
 import org.clearance.line.LineLayout;
@@ -89,24 +90,27 @@ final class StructureRefiner {
     return apply(layout, towers);
   }
 
-  /** Refines the layout with the towers found. */
+  /**
+   * Refines the layout with the towers found. Within each line, structures and towers are paired
+   * nearest first (each at most once; lines may share towers, as two circuits on one tower do);
+   * a structure farther than the tolerance from its tower moves to it, and unpaired towers inside
+   * long spans are added. When the result is no valid layout (two structures brought to one
+   * place), the layout is left as given.
+   */
   Refined apply(SpanLayout layout, List<Tower> towers) {
-    boolean[] used = new boolean[towers.size()];
     List<StructureChange> changes = new ArrayList<>();
     List<Structure> structures = new ArrayList<>();
     List<LineSpec> specs = new ArrayList<>();
     for (LineLayout line : layout.lines()) {
       specs.add(line.spec());
+      List<Structure> given = line.structures();
+      boolean[] used = new boolean[towers.size()];
+      int[] towerOf = pair(given, towers, used);
       List<Structure> refined = new ArrayList<>();
-      for (Structure s : line.structures()) {
-        int t = nearest(towers, used, s.x(), s.y(), options.searchRadiusM());
-        if (t < 0) {
-          refined.add(s);
-          continue;
-        }
-        used[t] = true;
-        Tower tw = towers.get(t);
-        if (Math.hypot(tw.x() - s.x(), tw.y() - s.y()) <= options.toleranceM()) {
+      for (int k = 0; k < given.size(); k++) {
+        Structure s = given.get(k);
+        Tower tw = towerOf[k] < 0 ? null : towers.get(towerOf[k]);
+        if (tw == null || Math.hypot(tw.x() - s.x(), tw.y() - s.y()) <= options.toleranceM()) {
           refined.add(s);
           continue;
         }
@@ -121,7 +125,41 @@ final class StructureRefiner {
     if (changes.isEmpty()) {
       return new Refined(layout, List.of());
     }
-    return new Refined(SpanLayout.build(structures, specs), changes);
+    try {
+      return new Refined(SpanLayout.build(structures, specs), changes);
+    } catch (InputException e) {
+      return new Refined(layout, List.of());
+    }
+  }
+
+  /**
+   * Pairs structures with towers within the search radius, nearest pairs first; marks the
+   * paired towers used. Returns, per structure, its tower index or -1.
+   */
+  private int[] pair(List<Structure> structures, List<Tower> towers, boolean[] used) {
+    List<double[]> pairs = new ArrayList<>();
+    for (int k = 0; k < structures.size(); k++) {
+      Structure s = structures.get(k);
+      for (int t = 0; t < towers.size(); t++) {
+        double d = Math.hypot(towers.get(t).x() - s.x(), towers.get(t).y() - s.y());
+        if (d <= options.searchRadiusM()) {
+          pairs.add(new double[] {d, k, t});
+        }
+      }
+    }
+    pairs.sort(Comparator.<double[]>comparingDouble(a -> a[0]).thenComparingDouble(a -> a[1])
+        .thenComparingDouble(a -> a[2]));
+    int[] towerOf = new int[structures.size()];
+    java.util.Arrays.fill(towerOf, -1);
+    for (double[] pr : pairs) {
+      int k = (int) pr[1];
+      int t = (int) pr[2];
+      if (towerOf[k] < 0 && !used[t]) {
+        towerOf[k] = t;
+        used[t] = true;
+      }
+    }
+    return towerOf;
   }
 
   /** The line's structures with the towers standing inside its spans added, renumbered if need. */
@@ -184,20 +222,6 @@ final class StructureRefiner {
       }
       k++;
     }
-  }
-
-  private static int nearest(List<Tower> towers, boolean[] used, double x, double y,
-      double radius) {
-    int best = -1;
-    double bestD = radius;
-    for (int t = 0; t < towers.size(); t++) {
-      double d = Math.hypot(towers.get(t).x() - x, towers.get(t).y() - y);
-      if (!used[t] && d <= bestD) {
-        best = t;
-        bestD = d;
-      }
-    }
-    return best;
   }
 
   /** The discs around the structures and the bands along the spans that may hide one. */

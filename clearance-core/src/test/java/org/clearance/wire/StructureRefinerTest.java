@@ -110,4 +110,44 @@ class StructureRefinerTest {
     assertEquals("T0-found1", r.layout().spans().get(0).id());
     assertEquals("found1-T1", r.layout().spans().get(1).id());
   }
+
+  @Test
+  void twoLinesOnOneRowOfTowersBothUseThem() {
+    // two circuits given as two lines on the same towers; the file has T2 of both 30 m off
+    List<Structure> s = new ArrayList<>();
+    for (String line : List.of("L1", "L2")) {
+      double[] xs = {0, 300, 630, 900};
+      for (int i = 0; i < xs.length; i++) {
+        s.add(new Structure("T" + i, line, i + 1, org.clearance.line.StructureType.SUSPENSION,
+            xs[i], 0, Double.NaN, Map.of(), "test.csv", i + 2));
+      }
+    }
+    var spec = Fixtures.spec(SyntheticCorridor.standardPositions());
+    var spec2 = new org.clearance.line.LineSpec("L2", "", 230, 0, 25, spec.conductors(),
+        List.of(), "l2.yaml");
+    var spec1 = new org.clearance.line.LineSpec("L1", "", 230, 0, 25, spec.conductors(),
+        List.of(), "l1.yaml");
+    SpanLayout layout = SpanLayout.build(s, List.of(spec1, spec2));
+    List<StructureRefiner.Tower> towers = List.of(tower(0, 0, true), tower(300, 0, true),
+        tower(600, 0, true), tower(900, 0, true));
+    StructureRefiner.Refined r = new StructureRefiner(OPTIONS).apply(layout, towers);
+    assertEquals(2, r.changes().size(), r.changes().toString());
+    for (StructureChange c : r.changes()) {
+      assertEquals("T2", c.structureId());
+      assertEquals(600, c.toX(), 1e-9);
+    }
+  }
+
+  @Test
+  void aStructureNeverTakesItsNeighboursTower() {
+    // T1 is given 45 m towards T2's tower, whose own position is exact: T1 goes to its own
+    // tower 45 m back, T2 keeps its place
+    SpanLayout layout = line(0, 105, 150, 300);
+    List<StructureRefiner.Tower> towers = List.of(tower(0, 0, true), tower(60, 0, true),
+        tower(150, 0, true), tower(300, 0, true));
+    StructureRefiner.Refined r = new StructureRefiner(OPTIONS).apply(layout, towers);
+    assertEquals(1, r.changes().size(), r.changes().toString());
+    assertEquals("T1", r.changes().get(0).structureId());
+    assertEquals(60, r.changes().get(0).toX(), 1e-9);
+  }
 }
