@@ -17,6 +17,9 @@ import java.util.Objects;
  * @param bundle sub-conductors per phase, &ge; 1
  * @param bundleSpacingM sub-conductor spacing, m (&gt; 0), or NaN when {@code bundle} is 1
  * @param insulatorLengthM suspension string length, m (&ge; 0), or NaN
+ * @param strainLengthM length of the strain (dead-end) insulator assembly along the conductor,
+ *     m (&ge; 0): at a dead-end structure the conductor ends this far from the structure's
+ *     cross-section; 0 when not given
  */
 public record ConductorPosition(
     String position,
@@ -27,7 +30,8 @@ public record ConductorPosition(
     double attachHeightM,
     int bundle,
     double bundleSpacingM,
-    double insulatorLengthM) {
+    double insulatorLengthM,
+    double strainLengthM) {
 
   /** What a conductor position carries. */
   public enum Role {
@@ -47,6 +51,18 @@ public record ConductorPosition(
     if (bundle < 1) {
       throw new IllegalArgumentException("bundle must be at least 1: " + bundle);
     }
+    if (!(strainLengthM >= 0 && Double.isFinite(strainLengthM))) {
+      throw new IllegalArgumentException("strain assembly length must be >= 0: "
+          + strainLengthM);
+    }
+  }
+
+  /** A position without a strain assembly length (the conductor ends at the cross-section). */
+  public ConductorPosition(String position, Role role, int circuit, ConductorType conductor,
+      double offsetM, double attachHeightM, int bundle, double bundleSpacingM,
+      double insulatorLengthM) {
+    this(position, role, circuit, conductor, offsetM, attachHeightM, bundle, bundleSpacingM,
+        insulatorLengthM, 0.0);
   }
 
   /** True for a phase conductor. */

@@ -34,6 +34,9 @@ public final class LineSpecReader {
   /** Altitude range accepted, m: the lowest and highest ground a line can stand on, rounded out. */
   private static final double MIN_ALTITUDE_M = -500;
   private static final double MAX_ALTITUDE_M = 9000;
+  /** Longest strain assembly accepted, m: EHV dead-end assemblies run to about 10 m (common
+   * practice, no source); anything longer is a typo. */
+  private static final double MAX_STRAIN_LENGTH_M = 15;
   /** Position names appear in structure column names ({@code attach_z_<position>}). */
   private static final Pattern POSITION_NAME = Pattern.compile("[A-Za-z0-9_.-]+");
 
@@ -41,7 +44,7 @@ public final class LineSpecReader {
       "altitude_m", "survey_conductor_temperature_c", "conductors", "conditions");
   private static final List<String> POSITION_KEYS = List.of("position", "role", "circuit",
       "conductor", "offset_m", "attach_height_m", "bundle", "bundle_spacing_m",
-      "insulator_length_m");
+      "insulator_length_m", "strain_length_m");
 
   private LineSpecReader() {}
 
@@ -186,8 +189,13 @@ public final class LineSpecReader {
     if (m.has("insulator_length_m") && !(insulator >= 0)) {
       throw m.error("insulator_length_m", "must be 0 m or more: " + fmt(insulator));
     }
+    double strain = m.number("strain_length_m", 0.0);
+    if (!(strain >= 0 && strain <= MAX_STRAIN_LENGTH_M)) {
+      throw m.error("strain_length_m", "must be between 0 and " + fmt(MAX_STRAIN_LENGTH_M)
+          + " m: " + fmt(strain));
+    }
     return new ConductorPosition(position, role, circuit, type, offset, height, bundle, spacing,
-        insulator);
+        insulator, strain);
   }
 
   /** Throws naming the key when v is outside [lo, hi]. */

@@ -86,6 +86,14 @@ class LineSpecReaderTest {
     assertEquals(Role.PHASE, p.role());
     assertTrue(Double.isNaN(p.offsetM()));
     assertTrue(Double.isNaN(p.attachHeightM()));
+    assertEquals(0.0, p.strainLengthM(), 0.0); // line-inputs.md: default 0
+  }
+
+  @Test
+  void strainAssemblyLengthIsRead() {
+    LineSpec s = read("line_id: L\nnominal_voltage_kv: 230\nconductors:\n"
+        + "  - {position: A, role: phase, conductor: Drake, strain_length_m: 3.2}\n");
+    assertEquals(3.2, s.conductors().get(0).strainLengthM(), 0.0);
   }
 
   @Test
@@ -199,6 +207,8 @@ class LineSpecReaderTest {
             "bundle_spacing_m", "required when bundle"),
         edit("spacing without bundle", "    role: phase",
             "    role: phase\n    bundle_spacing_m: 0.45", 7, "bundle_spacing_m", "bundle is 1"),
+        edit("strain assembly too long", "    role: phase",
+            "    role: phase\n    strain_length_m: 40", 7, "strain_length_m", "between 0 and 15"),
         edit("negative attach height", "    role: phase",
             "    role: phase\n    attach_height_m: -3", 7, "attach_height_m", "greater than 0"),
         edit("voltage zero", "nominal_voltage_kv: 230", "nominal_voltage_kv: 0", 2,

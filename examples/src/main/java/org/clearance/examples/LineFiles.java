@@ -56,6 +56,7 @@ final class LineFiles {
       w.write(f("    attach_height_m: %.2f\n", p.attachHeightM()));
       if (p.insulatorLengthM() > 0) {
         w.write(f("    insulator_length_m: %.2f\n", p.insulatorLengthM()));
+        w.write(f("    strain_length_m: %.2f\n", TowerGeometry.STRAIN_INSULATOR_M));
       }
     }
     w.write("conditions:\n");
