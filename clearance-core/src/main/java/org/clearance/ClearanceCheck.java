@@ -31,7 +31,6 @@ import org.clearance.line.Span;
 import org.clearance.line.SpanLayout;
 import org.clearance.line.Structure;
 import org.clearance.line.StructureReader;
-import org.clearance.report.ConductorsCsv;
 import org.clearance.report.ReportStage;
 import org.clearance.report.RunModel;
 import org.clearance.report.RunAssessment;
@@ -43,6 +42,7 @@ import org.clearance.rules.RuleProfiles;
 import org.clearance.sag.ConditionSolver;
 import org.clearance.survey.PointChunk;
 import org.clearance.survey.Survey;
+import org.clearance.wire.ConductorTable;
 import org.clearance.wire.FittedConductor;
 import org.clearance.wire.SpanWires;
 import org.clearance.wire.WireFinder;
@@ -156,7 +156,7 @@ public final class ClearanceCheck {
     say("wires: %d conductors fitted in %d spans; %d structure change(s)", fittedCount,
         wires.spans().size(), wires.structureChanges().size());
     wires.structureChanges().forEach(c -> say("  structure: %s", c));
-    ConductorsCsv.write(dir, wires, survey.units());
+    ConductorTable.write(dir.resolve(ConductorTable.FILE_NAME), wires, survey.units());
     stop("wires");
 
     ConditionSet conditions = ConditionModels.conditionSet(specs);
@@ -196,7 +196,7 @@ public final class ClearanceCheck {
             + survey.units().vertical().symbol() + " (" + survey.units().source() + ")")
         .parameter("output_unit", options.report().outputUnit().symbol());
     timings.forEach(record::timing);
-    for (String name : List.of(ConductorsCsv.FILE_NAME, NearPointFile.FILE_NAME,
+    for (String name : List.of(ConductorTable.FILE_NAME, NearPointFile.FILE_NAME,
         RunModel.FILE_NAME)) {
       record.output(name);
     }

@@ -31,6 +31,7 @@ import picocli.CommandLine.Command;
       CommandLine.HelpCommand.class,
       DemoCommand.class,
       CheckCommand.class,
+      WiresCommand.class,
       SurveyCommand.class,
       EvaluateCommand.class,
       RulesCommand.class,

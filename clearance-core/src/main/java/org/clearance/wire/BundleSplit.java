@@ -61,9 +61,11 @@ final class BundleSplit {
     BundleCheck.Verdict v = check.check(whole.lateral(), whole.vertical());
     int[] members = whole.members();
     List<Part> parts = new ArrayList<>();
-    if (v.likelyBundle() && plausible(p, members, v.groups())) {
+    List<BundleCheck.Group> groups = v.likelyBundle() ? substantial(p, members, v.groups())
+        : List.of();
+    if (groups.size() >= 2) {
       List<ConductorFit.Result> subs = new ArrayList<>();
-      for (BundleCheck.Group g : v.groups()) {
+      for (BundleCheck.Group g : groups) {
         int[] idx = g.members().indices();
         int[] sub = new int[idx.length];
         for (int k = 0; k < idx.length; k++) {
@@ -71,7 +73,7 @@ final class BundleSplit {
         }
         subs.add(ConductorFit.fit(p, sub, span, true, zA, zB));
       }
-      double spread = spread(v.groups());
+      double spread = spread(groups);
       for (int k = 0; k < subs.size(); k++) {
         parts.add(new Part(subs.get(k), Optional.of(new BundleInfo(name, k + 1, subs.size(),
             spread))));
@@ -90,21 +92,24 @@ final class BundleSplit {
   }
 
   /**
-   * True when every group looks like a whole sub-conductor: it holds at least
-   * {@link #MIN_GROUP_SHARE} of the wire's points and runs along at least
-   * {@link #MIN_GROUP_EXTENT_SHARE} of the wire's stretch. A clump of stray points beside one
-   * wire (a crown touching it, a bird) is not a sub-conductor.
+   * The groups that look like whole sub-conductors: each holds at least {@link #MIN_GROUP_SHARE}
+   * of an even split's points and runs along at least {@link #MIN_GROUP_EXTENT_SHARE} of the
+   * wire's stretch. A clump of stray points beside one wire (a crown touching it, a bird) is no
+   * sub-conductor; its points are left out of the sub-conductors' fits. Empty unless at least
+   * two groups qualify.
    */
-  private static boolean plausible(SpanPoints p, int[] members, List<BundleCheck.Group> groups) {
+  private static List<BundleCheck.Group> substantial(SpanPoints p, int[] members,
+      List<BundleCheck.Group> groups) {
     double extent = extent(p, members, null);
+    List<BundleCheck.Group> out = new ArrayList<>();
     for (BundleCheck.Group g : groups) {
       int[] idx = g.members().indices();
-      if (idx.length < MIN_GROUP_SHARE * members.length / groups.size()
-          || extent(p, members, idx) < MIN_GROUP_EXTENT_SHARE * extent) {
-        return false;
+      if (idx.length >= MIN_GROUP_SHARE * members.length / groups.size()
+          && extent(p, members, idx) >= MIN_GROUP_EXTENT_SHARE * extent) {
+        out.add(g);
       }
     }
-    return true;
+    return out.size() >= 2 ? out : List.of();
   }
 
   /** Station extent of the members (all, or those at positions idx of members), m. */

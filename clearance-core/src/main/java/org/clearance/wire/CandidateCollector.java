@@ -96,6 +96,11 @@ final class CandidateCollector implements Consumer<PointChunk> {
     return points[k];
   }
 
+  /** Drops the candidates of corridor k once its span is done, so memory falls as spans end. */
+  void release(int k) {
+    points[k] = new SpanPoints(corridors.get(k).zRef());
+  }
+
   /** Number of survey points of any class that fell inside corridor k. */
   long seen(int k) {
     return seen[k];

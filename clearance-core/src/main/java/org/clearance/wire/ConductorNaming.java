@@ -100,7 +100,13 @@ final class ConductorNaming {
     Optional<String> why = judge(r, part.bundle());
     Optional<CatenaryCovariance> cov = r.fit() == null ? Optional.empty()
         : r.fit().covariance();
-    return new FittedConductor(name, role, position, r.curve(), cov, r.quality(), r.swingRad(),
+    Optional<ConductorCurve> curve = r.curve();
+    if (why.isPresent() && !(r.quality().curveSigmaM() <= quality.maxCurveSigmaM())) {
+      // An extrapolation this uncertain (a short piece at one end) is no curve to show.
+      curve = Optional.empty();
+      cov = Optional.empty();
+    }
+    return new FittedConductor(name, role, position, curve, cov, r.quality(), r.swingRad(),
         why.isEmpty() ? WireStatus.FITTED : WireStatus.NOT_ASSESSED, why, part.bundle());
   }
 

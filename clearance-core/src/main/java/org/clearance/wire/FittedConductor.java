@@ -18,7 +18,8 @@ import org.clearance.line.ConductorPosition;
  * @param position the specification position it was matched to; empty for an extra
  * @param curve the fitted conductor in the survey state (plan line from attachment A at the
  *     span's first structure to attachment B at its second, catenary in that plane); empty when
- *     no curve could be fitted
+ *     no curve could be fitted, or (not assessed) when its elevation uncertainty exceeds the
+ *     quality threshold (a short piece at one end of the span extrapolates wildly)
  * @param covariance covariance of the catenary parameters in the curve's plane; empty when the
  *     fit has no redundancy or failed
  * @param quality point count, coverage, residual, gap

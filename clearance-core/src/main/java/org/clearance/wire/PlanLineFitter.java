@@ -12,8 +12,8 @@ import java.util.SplittableRandom;
  *
  * <p>Robust option: a least-median-of-squares start, then reweighted rounds with Tukey's biweight
  * on the perpendicular residuals at sigma = 1.4826 MAD (as in {@link CatenaryFitter}), so that
- * stray points (a branch, a crossing wire) do not tilt the line. The direction is oriented so that the input order runs forwards:
- * the last inlier lies ahead of the first.
+ * stray points (a branch, a crossing wire) do not tilt the line. The direction is oriented so
+ * that the input order runs forwards: the last inlier lies ahead of the first.
  */
 public final class PlanLineFitter {
 

@@ -17,11 +17,13 @@ import org.clearance.line.ConductorPosition;
  * when given (scale {@link #SIGMA_ATTACH_Z_M}), else the ground elevation plus attach_height_m
  * plus a common shift per structure (scale {@link #SIGMA_HEIGHT_M}). The shift takes up tower
  * body extensions and a ground model error; it is tried at every value one wire-position pair
- * implies and costs (shift / {@link #SIGMA_SHIFT_M})^2. A wire whose points are labelled as a
+ * implies and costs (shift / {@link #SIGMA_SHIFT_M})^2; likewise a common lateral shift per
+ * structure (a structure centre a little off its tower) costing (shift /
+ * {@link #SIGMA_LATERAL_SHIFT_M})^2. A wire whose points are labelled as a
  * shield (class 13) or phase (class 14) pays {@link #ROLE_MISMATCH} at a position of the other
- * role: labels are a hint, vendors label earth wires as conductors too. The assignment is the Hungarian
- * method ({@link Hungarian}) with every wire and position free to stay unmatched at half the
- * gate each, so no pair costing more than {@link #GATE} is ever made.
+ * role: labels are a hint, vendors label earth wires as conductors too. The assignment is the
+ * Hungarian method ({@link Hungarian}) with every wire and position free to stay unmatched at
+ * half the gate each, so no pair costing more than {@link #GATE} is ever made.
  */
 final class PositionMatcher {
 
@@ -33,6 +35,10 @@ final class PositionMatcher {
   static final double SIGMA_ATTACH_Z_M = 0.5;
   /** Shift scale, m: tower body extensions run to about 15 m. */
   static final double SIGMA_SHIFT_M = 8.0;
+  /** Lateral shift scale, m: a structure centre up to the 3 m refinement tolerance off its
+   * tower moves every wire's offset alike; with several wires agreeing the shift pays for
+   * itself, one lone wire cannot buy it cheaply. */
+  static final double SIGMA_LATERAL_SHIFT_M = 1.0;
   /** Largest cost of a pair: three scales. */
   static final double GATE = 9.0;
   /** Cost of a role the wire's labels contradict: a third of the gate. */
@@ -85,14 +91,20 @@ final class PositionMatcher {
     boolean priorB = Double.isFinite(groundB);
     double gA = priorA ? groundA : 0;
     double gB = priorB ? groundB : 0;
+    // Shifts {up at A, up at B, across at A, across at B}: none, and those each wire-position
+    // pair implies, vertical only and vertical with lateral.
     List<double[]> shifts = new ArrayList<>();
-    shifts.add(new double[] {0, 0});
+    shifts.add(new double[4]);
     for (Wire w : wires) {
       for (Slot s : slots) {
         double h = s.position().attachHeightM();
-        if (Double.isFinite(h)) {
-          shifts.add(new double[] {w.nearA() ? w.zA() - gA - h : 0,
-              w.nearB() ? w.zB() - gB - h : 0});
+        double off = s.position().offsetM();
+        double upA = w.nearA() && Double.isFinite(h) ? w.zA() - gA - h : 0;
+        double upB = w.nearB() && Double.isFinite(h) ? w.zB() - gB - h : 0;
+        shifts.add(new double[] {upA, upB, 0, 0});
+        if (Double.isFinite(off)) {
+          shifts.add(new double[] {upA, upB, w.nearA() ? w.offsetA() - off : 0,
+              w.nearB() ? w.offsetB() - off : 0});
         }
       }
     }
@@ -116,7 +128,8 @@ final class PositionMatcher {
         }
       }
       int[] assign = Hungarian.solve(cost);
-      double total = prior(priorA ? shift[0] : 0, priorB ? shift[1] : 0);
+      double total = prior(priorA ? shift[0] : 0, priorB ? shift[1] : 0, SIGMA_SHIFT_M)
+          + prior(shift[2], shift[3], SIGMA_LATERAL_SHIFT_M);
       int[] result = new int[n];
       for (int i = 0; i < n; i++) {
         total += cost[i][assign[i]];
@@ -133,8 +146,8 @@ final class PositionMatcher {
     return answer;
   }
 
-  private static double prior(double a, double b) {
-    return 0.5 * (a * a + b * b) / (SIGMA_SHIFT_M * SIGMA_SHIFT_M);
+  private static double prior(double a, double b, double sigma) {
+    return 0.5 * (a * a + b * b) / (sigma * sigma);
   }
 
   /** Ranks the wires from left (most positive offset) to right. */
@@ -160,8 +173,8 @@ final class PositionMatcher {
     double cost = w.role().isPresent() && w.role().get() != p.role() ? ROLE_MISMATCH : 0;
     double off = p.offsetM();
     if (Double.isFinite(off)) {
-      double a = w.nearA() ? (w.offsetA() - off) / SIGMA_OFFSET_M : 0;
-      double b = w.nearB() ? (w.offsetB() - off) / SIGMA_OFFSET_M : 0;
+      double a = w.nearA() ? (w.offsetA() - off - shift[2]) / SIGMA_OFFSET_M : 0;
+      double b = w.nearB() ? (w.offsetB() - off - shift[3]) / SIGMA_OFFSET_M : 0;
       cost += (a * a + b * b) / ((w.nearA() ? 1 : 0) + (w.nearB() ? 1 : 0));
     }
     double sum = 0;

@@ -6,6 +6,7 @@ import java.util.Comparator;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
+import org.clearance.InputException;
 import org.clearance.clearance.HeightModel;
 import org.clearance.line.ConductorPosition;
 import org.clearance.line.LineLayout;
@@ -29,24 +30,37 @@ final class StructureRefiner {
 
   /** Half-width of the band along each span searched for a structure the file lacks, m. */
   static final double BAND_M = 12.0;
+  /** A span this many times longer than its line's median span may hide an angle structure
+   * the file lacks: its band is widened. */
+  static final double LONG_SPAN_FACTOR = 1.6;
+  /** Half-width of a widened band as a share of the span length: an angle structure missing
+   * from a line turning by up to 60 degrees stands within a quarter of the span of the chord. */
+  static final double WIDE_BAND_SHARE = 0.3;
+  /** Fewest spans in a line for its median span to tell a long span. */
+  static final int MEDIAN_SPANS = 3;
   /** A tower nearer than this to a span's end belongs to the end structure, m. */
   static final double END_CLEARANCE_M = 40.0;
   /** Tower top as a share of the highest nominal attachment height. */
   static final double TOP_SHARE = 0.9;
   /** Tower top when the specifications give no heights, m. */
   static final double DEFAULT_TOP_M = 15.0;
-  /** Lowest slice that must be occupied at the foot of a tower column, m. */
-  static final int FOOT_SLICE = 4;
-  /** Share of the slices from the foot to the top a tower must occupy. */
-  static final double FILL_SHARE = 0.6;
+  /** Highest slice, m, by which a tower's legs must show: steel stands on the ground, a crown
+   * on a trunk that airborne lidar barely sees. */
+  static final int FOOT_SLICE = 6;
+  /** Share of the slices from the foot to the top a tower must occupy: lattice steel is seen
+   * at almost every metre of height. */
+  static final double FILL_SHARE = 0.75;
   /** Widest tower footprint, m: lattice bases run to about 15 m. */
   static final double MAX_FOOTPRINT_M = 25.0;
 
   /** The refined layout and the changes made. */
   record Refined(SpanLayout layout, List<StructureChange> changes) {}
 
-  /** One tower found: plan centre, m, point count and how it was recognised. */
-  record Tower(double x, double y, int points, String evidence) {}
+  /**
+   * One tower found: plan centre, m, point count, how it was recognised, and whether from
+   * class-15 labels (else from a column of unclassified points).
+   */
+  record Tower(double x, double y, int points, String evidence, boolean labelled) {}
 
   private final WireFinderOptions.Structures options;
 
@@ -76,24 +90,27 @@ final class StructureRefiner {
     return apply(layout, towers);
   }
 
-  /** Refines the layout with the towers found. */
+  /**
+   * Refines the layout with the towers found. Within each line, structures and towers are paired
+   * nearest first (each at most once; lines may share towers, as two circuits on one tower do);
+   * a structure farther than the tolerance from its tower moves to it, and unpaired towers inside
+   * long spans are added. When the result is no valid layout (two structures brought to one
+   * place), the layout is left as given.
+   */
   Refined apply(SpanLayout layout, List<Tower> towers) {
-    boolean[] used = new boolean[towers.size()];
     List<StructureChange> changes = new ArrayList<>();
     List<Structure> structures = new ArrayList<>();
     List<LineSpec> specs = new ArrayList<>();
     for (LineLayout line : layout.lines()) {
       specs.add(line.spec());
+      List<Structure> given = line.structures();
+      boolean[] used = new boolean[towers.size()];
+      int[] towerOf = pair(given, towers, used);
       List<Structure> refined = new ArrayList<>();
-      for (Structure s : line.structures()) {
-        int t = nearest(towers, used, s.x(), s.y(), options.searchRadiusM());
-        if (t < 0) {
-          refined.add(s);
-          continue;
-        }
-        used[t] = true;
-        Tower tw = towers.get(t);
-        if (Math.hypot(tw.x() - s.x(), tw.y() - s.y()) <= options.toleranceM()) {
+      for (int k = 0; k < given.size(); k++) {
+        Structure s = given.get(k);
+        Tower tw = towerOf[k] < 0 ? null : towers.get(towerOf[k]);
+        if (tw == null || Math.hypot(tw.x() - s.x(), tw.y() - s.y()) <= options.toleranceM()) {
           refined.add(s);
           continue;
         }
@@ -108,7 +125,41 @@ final class StructureRefiner {
     if (changes.isEmpty()) {
       return new Refined(layout, List.of());
     }
-    return new Refined(SpanLayout.build(structures, specs), changes);
+    try {
+      return new Refined(SpanLayout.build(structures, specs), changes);
+    } catch (InputException e) {
+      return new Refined(layout, List.of());
+    }
+  }
+
+  /**
+   * Pairs structures with towers within the search radius, nearest pairs first; marks the
+   * paired towers used. Returns, per structure, its tower index or -1.
+   */
+  private int[] pair(List<Structure> structures, List<Tower> towers, boolean[] used) {
+    List<double[]> pairs = new ArrayList<>();
+    for (int k = 0; k < structures.size(); k++) {
+      Structure s = structures.get(k);
+      for (int t = 0; t < towers.size(); t++) {
+        double d = Math.hypot(towers.get(t).x() - s.x(), towers.get(t).y() - s.y());
+        if (d <= options.searchRadiusM()) {
+          pairs.add(new double[] {d, k, t});
+        }
+      }
+    }
+    pairs.sort(Comparator.<double[]>comparingDouble(a -> a[0]).thenComparingDouble(a -> a[1])
+        .thenComparingDouble(a -> a[2]));
+    int[] towerOf = new int[structures.size()];
+    java.util.Arrays.fill(towerOf, -1);
+    for (double[] pr : pairs) {
+      int k = (int) pr[1];
+      int t = (int) pr[2];
+      if (towerOf[k] < 0 && !used[t]) {
+        towerOf[k] = t;
+        used[t] = true;
+      }
+    }
+    return towerOf;
   }
 
   /** The line's structures with the towers standing inside its spans added, renumbered if need. */
@@ -125,12 +176,15 @@ final class StructureRefiner {
       }
       Structure b = refined.get(k + 1);
       SpanFrame f = SpanFrame.between(a.x(), a.y(), b.x(), b.y());
+      double half = bandHalfWidth(line, f.length());
+      Boolean longSpan = isLong(line, f.length());
       List<Integer> inside = new ArrayList<>();
       for (int t = 0; t < towers.size(); t++) {
         Tower tw = towers.get(t);
         double s = f.station(tw.x(), tw.y());
-        if (!used[t] && s >= END_CLEARANCE_M && s <= f.length() - END_CLEARANCE_M
-            && Math.abs(f.offset(tw.x(), tw.y())) <= BAND_M) {
+        boolean may = longSpan == null ? tw.labelled() : longSpan;
+        if (!used[t] && may && s >= END_CLEARANCE_M && s <= f.length() - END_CLEARANCE_M
+            && Math.abs(f.offset(tw.x(), tw.y())) <= half) {
           inside.add(t);
         }
       }
@@ -170,21 +224,7 @@ final class StructureRefiner {
     }
   }
 
-  private static int nearest(List<Tower> towers, boolean[] used, double x, double y,
-      double radius) {
-    int best = -1;
-    double bestD = radius;
-    for (int t = 0; t < towers.size(); t++) {
-      double d = Math.hypot(towers.get(t).x() - x, towers.get(t).y() - y);
-      if (!used[t] && d <= bestD) {
-        best = t;
-        bestD = d;
-      }
-    }
-    return best;
-  }
-
-  /** The discs around the structures and the bands along the spans. */
+  /** The discs around the structures and the bands along the spans that may hide one. */
   private List<TowerGrid.Area> areas(SpanLayout layout) {
     List<TowerGrid.Area> areas = new ArrayList<>();
     double r = options.searchRadiusM();
@@ -193,10 +233,37 @@ final class StructureRefiner {
         areas.add(new Disc(s.x(), s.y(), r));
       }
       for (Span span : line.spans()) {
-        areas.add(new Band(span.frame(), BAND_M));
+        if (!Boolean.FALSE.equals(isLong(line, span.lengthM()))) {
+          areas.add(new Band(span.frame(), bandHalfWidth(line, span.lengthM())));
+        }
       }
     }
     return areas;
+  }
+
+  /**
+   * Half-width of the band searched for a missing structure along a span of this length, m:
+   * {@link #BAND_M}, widened for a span much longer than its line's median (or in a line too
+   * short to tell).
+   */
+  static double bandHalfWidth(LineLayout line, double length) {
+    return Boolean.FALSE.equals(isLong(line, length)) ? BAND_M
+        : Math.max(BAND_M, WIDE_BAND_SHARE * length);
+  }
+
+  /**
+   * Whether a span of this length is much longer than its line's median span (one structure
+   * missing makes a span about twice as long); null when the line has too few spans to tell.
+   * Structures are only added inside long spans, or, in a line too short to tell, from class-15
+   * points: a tall tree in an ordinary span must never split it.
+   */
+  static Boolean isLong(LineLayout line, double length) {
+    List<Span> spans = line.spans();
+    if (spans.size() < MEDIAN_SPANS) {
+      return null;
+    }
+    double[] lengths = spans.stream().mapToDouble(Span::lengthM).sorted().toArray();
+    return length > LONG_SPAN_FACTOR * lengths[lengths.length / 2];
   }
 
   /** Lowest top of a tower column: a share of the highest nominal attachment height. */

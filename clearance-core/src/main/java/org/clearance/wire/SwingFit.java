@@ -17,9 +17,9 @@ final class SwingFit {
   static final double MIN_EXTENT_SHARE = 0.4;
   /** Smallest range of sag among the points, m: less cannot separate the bow from the line. */
   static final double MIN_SAG_RANGE_M = 1.0;
-  /** Largest swing believed of a surveyed wire, radians (20 deg): surveys are flown in calm
-   * weather; more means the points are not one wire. */
-  static final double MAX_SWING = Math.toRadians(20);
+  /** Largest swing believed of a surveyed wire, radians (45 deg): surveys are flown in light
+   * wind, a swing this large would be a gale; more means the points are not one wire. */
+  static final double MAX_SWING = Math.toRadians(45);
   /** Clipping: points beyond this many RMS residuals are left out of the second round. */
   static final double CLIP_RMS = 4;
   /** Clipping floor, m: below wire noise. */

@@ -84,7 +84,8 @@ final class TowerFinder {
     if (n < minPoints) {
       return null;
     }
-    return new StructureRefiner.Tower(sx / n, sy / n, n, "ASPRS class 15 (tower) points");
+    return new StructureRefiner.Tower(sx / n, sy / n, n, "ASPRS class 15 (tower) points",
+        true);
   }
 
   private static StructureRefiner.Tower columnTower(List<TowerGrid.Cell> group, int minPoints,
@@ -112,14 +113,13 @@ final class TowerFinder {
     if (n < minPoints || top < topMin || wide > StructureRefiner.MAX_FOOTPRINT_M) {
       return null;
     }
-    int filled = 0;
-    for (int k = StructureRefiner.FOOT_SLICE; k <= top; k++) {
-      filled += (slices >>> k & 1L) != 0 ? 1 : 0;
-    }
-    if (filled < StructureRefiner.FILL_SHARE * (top - StructureRefiner.FOOT_SLICE + 1)) {
+    int lowest = Long.numberOfTrailingZeros(slices);
+    int filled = Long.bitCount(slices);
+    if (lowest > StructureRefiner.FOOT_SLICE
+        || filled < StructureRefiner.FILL_SHARE * (top - lowest + 1)) {
       return null;
     }
     return new StructureRefiner.Tower(sx / n, sy / n, n,
-        "column of unclassified points from near the ground to " + top + " m");
+        "column of unclassified points from near the ground to " + top + " m", false);
   }
 }

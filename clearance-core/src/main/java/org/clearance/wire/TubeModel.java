@@ -36,6 +36,7 @@ final class TubeModel {
   private final double sc;
   private final double a0;
   private final double a1;
+  private final double a2;
   private final double b0;
   private final double b1;
   private final double b2;
@@ -50,6 +51,7 @@ final class TubeModel {
     this.sc = sc;
     this.a0 = a[0];
     this.a1 = a[1];
+    this.a2 = a.length > 2 ? a[2] : 0;
     this.b0 = b[0];
     this.b1 = b[1];
     this.b2 = b.length > 2 ? b[2] : 0;
@@ -86,11 +88,14 @@ final class TubeModel {
     boolean wantCurve = hi - lo >= MIN_CURVED_EXTENT_M && n >= MIN_CURVED_POINTS;
     TubeModel m = null;
     for (int round = 0; round <= CLIP_ROUNDS; round++) {
-      double[] a = polyFit(p, members, use, sc, 1, true);
       double[] b = wantCurve ? polyFit(p, members, use, sc, 2, false) : null;
       boolean curved = b != null && b[2] > 0 && 1 / (2 * b[2]) >= MIN_C;
       if (!curved) {
         b = polyFit(p, members, use, sc, 1, false);
+      }
+      double[] a = curved ? polyFit(p, members, use, sc, 2, true) : null;
+      if (a == null || !(Math.abs(a[2]) <= b[2])) {
+        a = polyFit(p, members, use, sc, 1, true);
       }
       if (a == null || b == null) {
         return m;
@@ -187,7 +192,8 @@ final class TubeModel {
 
   /** Offset of the model at station s, m. */
   double e(double s) {
-    return a0 + a1 * (s - sc);
+    double u = s - sc;
+    return a0 + a1 * u + a2 * u * u;
   }
 
   /** Elevation of the model at station s, m. */
@@ -196,9 +202,9 @@ final class TubeModel {
     return b0 + b1 * u + b2 * u * u;
   }
 
-  /** Plan slope de/ds of the model. */
+  /** Largest plan slope |de/ds| of the model over the piece. */
   double planSlope() {
-    return a1;
+    return Math.max(Math.abs(a1 + 2 * a2 * (lo - sc)), Math.abs(a1 + 2 * a2 * (hi - sc)));
   }
 
   /** True when the vertical model is curved (a parabola, not a line). */

@@ -108,8 +108,10 @@ public final class WireFinder {
         int idx = k;
         futures.add(pool.submit(() -> {
           Span span = spans.get(idx);
-          return finder.find(all.sorted(idx), all.seen(idx), span, specs.get(idx),
+          SpanWires w = finder.find(all.sorted(idx), all.seen(idx), span, specs.get(idx),
               groundAt(span.from(), heights), groundAt(span.to(), heights));
+          all.release(idx);
+          return w;
         }));
       }
       List<SpanWires> out = new ArrayList<>();

@@ -174,11 +174,12 @@ public record WireFinderOptions(Collection collection, Evidence evidence, Growth
 
     /**
      * k = 5 and radius 1 m (points 5 m apart along a wire link, wires 1 m apart across do not),
-     * 4 points, tube 0.5 m across and 0.35 m up and down (about ten times the 3-5 cm wire noise),
-     * 15 m steps, 10 m shortest wire, 10 degrees (common practice, no source).
+     * 4 points, tube 0.6 m across and 0.45 m up and down (about ten times the 3-5 cm wire noise,
+     * and room for a twin or quad bundle of up to about 0.5 m spacing the specification does
+     * not mention), 15 m steps, 10 m shortest wire, 10 degrees (common practice, no source).
      */
     public static Growth defaults() {
-      return new Growth(5.0, 1.0, 4, 0.5, 0.35, 15.0, 10.0, 10.0);
+      return new Growth(5.0, 1.0, 4, 0.6, 0.45, 15.0, 10.0, 10.0);
     }
   }
 

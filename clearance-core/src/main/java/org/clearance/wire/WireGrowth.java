@@ -14,13 +14,22 @@ import java.util.List;
  * reaches both ends of the span and a last sweep over its whole length adds nothing. Candidates
  * include every kept point, not only the seeds: unlabelled points on a labelled wire and points
  * without linear evidence (beside a tree) join this way. A grown piece is kept as a wire only
- * when it is long enough, runs along the span in plan, and has enough points left after a final
- * check against the tube without extrapolation; otherwise its points stay free for later pieces.
+ * when it is long enough, runs along the span in plan, has enough points left after a final
+ * check against the tube without extrapolation, and does not fill the tube evenly as a hedge or
+ * a crown would (a bundle's separate sub-conductors may spread as widely); otherwise its points
+ * stay free for later pieces.
  */
 final class WireGrowth {
 
   /** Growth rounds at most per piece; a 1 km span in 15 m steps needs about 70. */
   static final int MAX_ROUNDS = 400;
+  /**
+   * Largest robust spread (1.4826 MAD) about the model, as a share of the tube's half-size:
+   * points filling the tube evenly spread over 0.74 of it, a wire's 3-5 cm noise far less, and
+   * a wire with a crown around part of it keeps the spread of its own points (a median, unlike
+   * an RMS, ignores the leaves while they are fewer than the wire's points).
+   */
+  static final double SPREAD_SHARE = 0.5;
 
   private WireGrowth() {}
 
@@ -134,8 +143,24 @@ final class WireGrowth {
     if (kept.size() < 2 * growth.clusterMinPoints() || hi - lo < growth.minLengthM()) {
       return null;
     }
+    double[] lat = new double[kept.size()];
+    double[] vert = new double[kept.size()];
+    for (int k = 0; k < kept.size(); k++) {
+      int i = kept.get(k);
+      lat[k] = p.e(i) - m.e(p.s(i));
+      vert[k] = p.z(i) - m.z(p.s(i));
+    }
+    boolean spread = RobustScale.sigmaMad(lat, lat.length) > SPREAD_SHARE * tolLateral
+        || RobustScale.sigmaMad(vert, vert.length) > SPREAD_SHARE * tolVertical;
+    if (spread && !BundleCheck.of(lat, vert).likelyBundle()) {
+      // points filling the tube evenly: a hedge or a crown. A bundle's sub-conductors spread
+      // as widely but in separate tight groups, which an even fill never splits into (an even
+      // spread cut in two is 2 sqrt 3 = 3.5 of its halves' deviations apart, the check wants 4).
+      return null;
+    }
     int[] out = kept.toArray();
     java.util.Arrays.sort(out);
     return out;
   }
+
 }

@@ -1,0 +1,152 @@
+package org.clearance.cli;
+
+import java.io.PrintWriter;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+import java.util.concurrent.Callable;
+import org.clearance.InputException;
+import org.clearance.ground.GroundModel;
+import org.clearance.ground.GroundModelBuilder;
+import org.clearance.ground.GroundOptions;
+import org.clearance.line.ConductorLibrary;
+import org.clearance.line.LineSpec;
+import org.clearance.line.LineSpecReader;
+import org.clearance.line.SpanLayout;
+import org.clearance.line.StructureReader;
+import org.clearance.survey.Survey;
+import org.clearance.wire.ConductorTable;
+import org.clearance.wire.FittedConductor;
+import org.clearance.wire.SpanWires;
+import org.clearance.wire.StructureChange;
+import org.clearance.wire.WireFinder;
+import org.clearance.wire.WireFinderOptions;
+import org.clearance.wire.WireResult;
+import org.clearance.wire.WireStatus;
+import picocli.CommandLine;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
+import picocli.CommandLine.Option;
+
+/**
+ * {@code clearance wires}: finds and fits the conductors of every span and writes
+ * {@code conductors.csv} (docs/wire-finder.md), with a short summary per span on the console.
+ */
+@Command(
+    name = "wires",
+    description = {
+      "Finds the conductors of every span in a lidar survey, fits a catenary to each and writes "
+          + "OUT/conductors.csv: points, coverage, residual, largest gap, attachments, catenary "
+          + "constant, mid-span sag, and whether each conductor could be assessed.",
+      "Works whether or not the survey labels its wires (ASPRS classes 13 and 14)."
+    },
+    mixinStandardHelpOptions = true)
+public final class WiresCommand implements Callable<Integer> {
+  /** Name of the output file in the output folder. */
+  public static final String CONDUCTORS_FILE = ConductorTable.FILE_NAME;
+
+  @Option(names = "--survey", arity = "1..*", required = true, paramLabel = "FILE",
+      description = "LAS files (tiles) of the survey.")
+  List<Path> survey;
+
+  @Option(names = "--structures", required = true, paramLabel = "FILE",
+      description = "Structures file, CSV or GeoJSON (docs/line-inputs.md).")
+  Path structures;
+
+  @Option(names = "--line", arity = "1..*", required = true, paramLabel = "FILE",
+      description = "Line specification, YAML, one per line (docs/line-inputs.md).")
+  List<Path> lines;
+
+  @Option(names = "--conductors", paramLabel = "FILE",
+      description = "Extra conductor types, CSV, added to the built-in library.")
+  Path conductors;
+
+  @Option(names = "--out", required = true, paramLabel = "DIR",
+      description = "Output folder (created when missing).")
+  Path out;
+
+  @Option(names = "--threads", paramLabel = "N",
+      description = "Worker threads, 1 to 256 (default: cores, at most 4).")
+  Integer threads;
+
+  @Option(names = "--keep-structure-positions",
+      description = "Use the structures file's positions as given: do not move or add "
+          + "structures from tower points in the survey.")
+  boolean keepPositions;
+
+  @Mixin UnitsOptions units;
+
+  @CommandLine.Spec CommandLine.Model.CommandSpec spec;
+
+  @Override
+  public Integer call() {
+    int n = threads != null ? threads
+        : Math.min(SurveyCommand.DEFAULT_MAX_THREADS, Runtime.getRuntime().availableProcessors());
+    if (n < 1 || n > WireFinderOptions.MAX_THREADS) {
+      throw new CommandLine.ParameterException(spec.commandLine(),
+          "--threads must be 1 to 256: " + n);
+    }
+    if (Files.exists(out) && !Files.isDirectory(out)) {
+      throw new InputException(out, null, "--out", "exists and is not a folder");
+    }
+    Survey s = Survey.open(survey, units.choice());
+    ConductorLibrary library = conductors == null ? ConductorLibrary.builtin()
+        : ConductorLibrary.builtin().withUserFile(conductors);
+    List<LineSpec> specs = new ArrayList<>();
+    for (Path p : lines) {
+      specs.add(LineSpecReader.read(p, library));
+    }
+    SpanLayout layout = SpanLayout.build(StructureReader.read(structures, s.units()), specs);
+    GroundModel ground = GroundModelBuilder.build(s, GroundOptions.defaults(), n);
+    WireFinderOptions options = WireFinderOptions.defaults(n);
+    if (keepPositions) {
+      WireFinderOptions.Structures st = options.structures();
+      options = options.withStructures(new WireFinderOptions.Structures(false,
+          st.searchRadiusM(), st.toleranceM(), st.minTowerPoints()));
+    }
+    WireResult result = WireFinder.find(s, layout, ground::heightAboveGround, options);
+    try {
+      Files.createDirectories(out);
+    } catch (java.io.IOException e) {
+      throw new InputException(out, null, "--out", "cannot create the folder: " + e.getMessage());
+    }
+    Path file = out.resolve(CONDUCTORS_FILE);
+    ConductorTable.write(file, result, s.units());
+    PrintWriter w = spec.commandLine().getOut();
+    w.print(summary(result, file));
+    w.flush();
+    return ClearanceCommand.EXIT_OK;
+  }
+
+  /** The console summary: structure changes, one line per span, the file written. */
+  static String summary(WireResult result, Path file) {
+    StringBuilder b = new StringBuilder();
+    for (StructureChange c : result.structureChanges()) {
+      if (c.kind() == StructureChange.Kind.MOVED) {
+        b.append(String.format(Locale.ROOT, "structure %s (line %s) moved %.1f m to %.3f, %.3f"
+            + " (%d survey points: %s)%n", c.structureId(), c.lineId(), c.shiftM(), c.toX(),
+            c.toY(), c.evidencePoints(), c.evidence()));
+      } else {
+        b.append(String.format(Locale.ROOT, "structure %s (line %s) added at %.3f, %.3f: the"
+            + " structures file has none there (%d survey points: %s)%n", c.structureId(),
+            c.lineId(), c.toX(), c.toY(), c.evidencePoints(), c.evidence()));
+      }
+    }
+    int rows = 0;
+    for (SpanWires sw : result.spans()) {
+      long fitted = sw.conductors().stream().filter(FittedConductor::isFitted).count();
+      rows += sw.conductors().size();
+      b.append(String.format(Locale.ROOT, "span %s: %s, %d of %d conductors fitted, %s%n",
+          sw.span().id(), sw.status() == WireStatus.FITTED ? "fitted" : "NOT ASSESSED", fitted,
+          sw.conductors().size(), sw.labelled() ? "wires labelled in the survey"
+              : "wires found from their shape"));
+      if (sw.reason().isPresent()) {
+        b.append("  ").append(sw.reason().get()).append(System.lineSeparator());
+      }
+    }
+    b.append(String.format(Locale.ROOT, "wrote %s (%d conductor rows)%n", file, rows));
+    return b.toString();
+  }
+}

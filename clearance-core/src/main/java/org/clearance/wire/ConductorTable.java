@@ -1,0 +1,100 @@
+package org.clearance.wire;
+
+import java.io.IOException;
+import java.io.UncheckedIOException;
+import java.nio.file.Path;
+import java.util.List;
+import java.util.Locale;
+import org.clearance.io.AtomicFiles;
+import org.clearance.survey.SurveyUnits;
+
+/**
+ * The conductors file: one row per conductor per span (docs/wire-finder.md). Distances are in
+ * metres; coordinates are in the survey CRS's own units (metres divided by the survey's linear
+ * unit). A value not computed is an empty field. Numbers use {@link Locale#ROOT}; a text field
+ * holding a comma, quote or line break is quoted (RFC 4180).
+ */
+public final class ConductorTable {
+
+  /** File name in a run folder. */
+  public static final String FILE_NAME = "conductors.csv";
+
+  /** The columns, in order. */
+  public static final List<String> COLUMNS = List.of("span_id", "from_structure",
+      "to_structure", "conductor", "n_points", "coverage_pct", "rms_m", "max_gap_m",
+      "attach_a_x", "attach_a_y", "attach_a_z", "attach_b_x", "attach_b_y", "attach_b_z",
+      "catenary_c_m", "sag_mid_m", "status", "reason");
+
+  private ConductorTable() {}
+
+  /** The whole file as text: the header row, then one row per conductor, spans in order. */
+  public static String csv(WireResult result, SurveyUnits units) {
+    StringBuilder b = new StringBuilder(String.join(",", COLUMNS)).append('\n');
+    double h = units.horizontal().metres();
+    double v = units.vertical().metres();
+    for (SpanWires sw : result.spans()) {
+      for (FittedConductor c : sw.conductors()) {
+        WireQuality q = c.quality();
+        String[] row = new String[COLUMNS.size()];
+        row[0] = text(sw.span().id());
+        row[1] = text(sw.span().from().id());
+        row[2] = text(sw.span().to().id());
+        row[3] = text(c.name());
+        row[4] = Integer.toString(q.points());
+        row[5] = num(q.coveragePct(), 1);
+        row[6] = num(q.rmsM(), 3);
+        row[7] = num(q.maxGapM(), 2);
+        for (int k = 8; k <= 15; k++) {
+          row[k] = "";
+        }
+        c.curve().ifPresent(cc -> {
+          double len = cc.length();
+          row[8] = num(cc.x(0) / h, 3);
+          row[9] = num(cc.y(0) / h, 3);
+          row[10] = num(cc.zA() / v, 3);
+          row[11] = num(cc.x(len) / h, 3);
+          row[12] = num(cc.y(len) / h, 3);
+          row[13] = num(cc.zB() / v, 3);
+          row[14] = num(cc.curve().c(), 1);
+          row[15] = num(cc.midSpanSag(), 3);
+        });
+        row[16] = c.status().label();
+        row[17] = text(c.reason().orElse(""));
+        b.append(String.join(",", row)).append('\n');
+      }
+    }
+    return b.toString();
+  }
+
+  /**
+   * Writes the file: to a temporary file in the same folder, then moved into place, so a
+   * failure never leaves a partial file under the final name.
+   *
+   * @throws UncheckedIOException when the file cannot be written
+   */
+  public static void write(Path file, WireResult result, SurveyUnits units) {
+    try {
+      AtomicFiles.writeString(file, csv(result, units));
+    } catch (IOException e) {
+      throw new UncheckedIOException(e);
+    }
+  }
+
+  /** A number with fixed decimals, or an empty field when not finite. */
+  static String num(double value, int decimals) {
+    if (!Double.isFinite(value)) {
+      return "";
+    }
+    String s = String.format(Locale.ROOT, "%." + decimals + "f", value);
+    return s.startsWith("-") && s.matches("-0\\.?0*") ? s.substring(1) : s;
+  }
+
+  /** A text field, quoted when it holds a comma, quote or line break. */
+  static String text(String s) {
+    if (s.indexOf(',') < 0 && s.indexOf('"') < 0 && s.indexOf('\n') < 0
+        && s.indexOf('\r') < 0) {
+      return s;
+    }
+    return '"' + s.replace("\"", "\"\"") + '"';
+  }
+}
