@@ -95,7 +95,8 @@ public final class WireFinder {
       all.absorb(collectors.get(k));
     }
     collectors.clear();
-    return new WireResult(used, processSpans(spans, specs, all, heights), changes);
+    return StrainAssemblies.apply(
+        new WireResult(used, processSpans(spans, specs, all, heights), changes));
   }
 
   private List<SpanWires> processSpans(List<Span> spans, List<LineSpec> specs,
