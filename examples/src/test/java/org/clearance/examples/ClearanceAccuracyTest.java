@@ -6,30 +6,17 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.io.IOException;
 import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.HashMap;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
-import java.util.Optional;
 import java.util.stream.Stream;
-import org.clearance.clearance.CatenaryDistance;
 import org.clearance.clearance.ConditionMinimum;
-import org.clearance.clearance.ConditionModels;
-import org.clearance.clearance.ConditionSet;
-import org.clearance.clearance.ConductorModel;
-import org.clearance.clearance.ConductorState;
 import org.clearance.clearance.NearPointFile;
 import org.clearance.clearance.NearPointReader;
 import org.clearance.clearance.SpanStatus;
-import org.clearance.clearance.SurveyedConductor;
-import org.clearance.line.ConductorLibrary;
-import org.clearance.line.LineSpec;
-import org.clearance.line.LineSpecReader;
-import org.clearance.line.SpanLayout;
-import org.clearance.line.StructureReader;
-import org.clearance.report.ConductorRecord;
 import org.clearance.report.SpanRecord;
-import org.clearance.sag.ConditionSolver;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.Arguments;
@@ -38,11 +25,10 @@ import org.junit.jupiter.params.provider.MethodSource;
 /**
  * Issue 4 accuracy: the check's per-span minimum clearances against the demo truth.
  *
- * <p>Truth: the generator's exact conductor catenaries and its vegetation points. The surveyed
- * state is measured with the generator's own distance routine ({@link CurveDistance},
- * independent of the engine); the hot, ice and blowout states of the true conductors come from
- * the same sag models the check uses ("with the same physics inputs", issue 4), so the
- * comparison isolates what the survey changes: finding and fitting the wires, and measuring.
+ * <p>Truth: the generator's exact conductor catenaries and its vegetation points, measured by
+ * {@link TruthDistances} (only the conductors the check fitted, to compare like with like), so
+ * the comparison isolates what the survey changes: finding and fitting the wires, and
+ * measuring.
  */
 class ClearanceAccuracyTest {
 
@@ -143,55 +129,17 @@ class ClearanceAccuracyTest {
       return s.status() != SpanStatus.NOT_ASSESSED;
     }
 
-    static Truth of(DemoRuns.Run run) throws IOException {
+    static Truth of(DemoRuns.Run run) {
       Truth t = new Truth(run);
-      DemoScene scene = run.scene();
-      ConditionSet conditions = run.model().conditions();
-      ConductorLibrary library = ConductorLibrary.builtin();
-      LineSpec spec = LineSpecReader.read(run.input().resolve(DemoCorridor.LINE_SPEC), library);
-      SpanLayout layout = SpanLayout.build(StructureReader.read(
-          run.input().resolve(DemoCorridor.STRUCTURES), scene.units()), List.of(spec));
-      // The conductors the check fitted, with their true curves.
-      Map<String, List<SurveyedConductor>> fitted = new HashMap<>();
+      TruthDistances truth = new TruthDistances(run, true);
       List<SpanRecord> spans = run.model().spans();
-      for (int i = 0; i < spans.size(); i++) {
-        List<SurveyedConductor> list = new ArrayList<>();
-        for (ConductorRecord c : spans.get(i).conductors()) {
-          if (c.fitted()) {
-            DemoWire w = scene.spans().get(i).wire(c.name());
-            list.add(new SurveyedConductor(c.name(), c.name(), c.role(), w.curve()));
-          }
-        }
-        fitted.put(spans.get(i).id(), list);
-      }
-      Map<String, List<ConductorModel>> models = ConditionModels.build(layout, fitted,
-          conditions, new ConditionSolver(ConditionSolver.Options.DEFAULT));
-      int n = conditions.size();
-      List<List<CatenaryDistance[]>> kernels = new ArrayList<>();
-      List<List<ConductorState[]>> states = new ArrayList<>();
+      int n = run.model().conditions().size();
       for (SpanRecord s : spans) {
-        List<CatenaryDistance[]> ks = new ArrayList<>();
-        List<ConductorState[]> ss = new ArrayList<>();
-        for (ConductorModel m : models.get(s.id())) {
-          CatenaryDistance[] row = new CatenaryDistance[n];
-          ConductorState[] st = new ConductorState[n];
-          for (int k = 0; k < n; k++) {
-            Optional<ConductorState> o = m.states().get(k);
-            if (o.isPresent()) {
-              row[k] = new CatenaryDistance(o.get().curve());
-              st[k] = o.get();
-            }
-          }
-          ks.add(row);
-          ss.add(st);
-        }
-        kernels.add(ks);
-        states.add(ss);
         double[] init = new double[n];
-        java.util.Arrays.fill(init, Double.POSITIVE_INFINITY);
+        Arrays.fill(init, Double.POSITIVE_INFINITY);
         t.minima.put(s.id(), init);
       }
-      scene.points((chunk, ids) -> {
+      run.scene().points((chunk, ids) -> {
         for (int i = 0; i < chunk.size(); i++) {
           int cls = chunk.classification()[i];
           if (cls < 3 || cls > 5) {
@@ -201,35 +149,18 @@ class ClearanceAccuracyTest {
           double y = chunk.y()[i];
           double z = chunk.z()[i];
           for (int sp = 0; sp < spans.size(); sp++) {
-            SpanRecord s = spans.get(sp);
-            double st = scene.spans().get(sp).wires().get(0).curve().plan().station(x, y);
-            if (st < -COMPARED_WITHIN_M || st > s.context().lengthM() + COMPARED_WITHIN_M) {
+            if (!truth.nearSpan(sp, x, y, COMPARED_WITHIN_M)) {
               continue;
             }
-            double[] mins = t.minima.get(s.id());
-            List<CatenaryDistance[]> ks = kernels.get(sp);
-            List<ConductorState[]> ss = states.get(sp);
-            for (int j = 0; j < ks.size(); j++) {
-              for (int k = 0; k < n; k++) {
-                if (ks.get(j)[k] == null) {
-                  continue;
-                }
-                double d;
-                if (k == 0) {
-                  d = CurveDistance.distance(ss.get(j)[0].curve(), x, y, z);
-                } else {
-                  ConductorState cs = ss.get(j)[k];
-                  double phi = ks.get(j)[k].closestSwingAngle(x, y, z, cs.swingMin(),
-                      cs.swingMax());
-                  d = ks.get(j)[k].distance(x, y, z, phi);
-                }
-                mins[k] = Math.min(mins[k], d);
-                if (k == 0 && TruthId.kind(ids[i]) == TruthId.Kind.TREE) {
-                  int tree = TruthId.index(ids[i]);
-                  double[] best = t.closestTreePoint.get(tree);
-                  if (best == null || d < best[0]) {
-                    t.closestTreePoint.put(tree, new double[] {d, x, y, z, sp});
-                  }
+            double[] mins = t.minima.get(spans.get(sp).id());
+            for (int k = 0; k < n; k++) {
+              double d = truth.distance(sp, k, x, y, z);
+              mins[k] = Math.min(mins[k], d);
+              if (k == 0 && TruthId.kind(ids[i]) == TruthId.Kind.TREE) {
+                int tree = TruthId.index(ids[i]);
+                double[] best = t.closestTreePoint.get(tree);
+                if (best == null || d < best[0]) {
+                  t.closestTreePoint.put(tree, new double[] {d, x, y, z, sp});
                 }
               }
             }
