@@ -27,8 +27,16 @@ import picocli.CommandLine.Command;
       "A screening aid: the utility's rules, the local regulator and qualified line-clearance "
           + "personnel govern."
     },
-    subcommands = {CommandLine.HelpCommand.class, SurveyCommand.class, EvaluateCommand.class,
-        RulesCommand.class, WiresCommand.class})
+    subcommands = {
+      CommandLine.HelpCommand.class,
+      DemoCommand.class,
+      CheckCommand.class,
+      WiresCommand.class,
+      SurveyCommand.class,
+      EvaluateCommand.class,
+      RulesCommand.class,
+      BenchCommand.class
+    })
 public final class ClearanceCommand implements Runnable {
   /** The work was done. */
   public static final int EXIT_OK = 0;

@@ -45,7 +45,7 @@ import picocli.CommandLine.Option;
     mixinStandardHelpOptions = true)
 public final class WiresCommand implements Callable<Integer> {
   /** Name of the output file in the output folder. */
-  public static final String CONDUCTORS_FILE = "conductors.csv";
+  public static final String CONDUCTORS_FILE = ConductorTable.FILE_NAME;
 
   @Option(names = "--survey", arity = "1..*", required = true, paramLabel = "FILE",
       description = "LAS files (tiles) of the survey.")

@@ -123,14 +123,33 @@ final class EngineWorker implements Consumer<PointChunk> {
   private Outcome measure(PreparedSpan p, double x, double y, double z, int cls, double hag) {
     int sp = p.index;
     int nc = conditions.size();
+    // Lower bounds first: a point that cannot be stored (farther than the keep radius in every
+    // condition) only needs exact distances where it may set a new span minimum.
+    double lowest = Double.POSITIVE_INFINITY;
+    for (int k = 0; k < nc; k++) {
+      CatenaryDistance[] row = p.kernels[k];
+      for (int j = 0; j < row.length; j++) {
+        if (row[j] != null) {
+          lowest = Math.min(lowest, p.lowerBound(k, j, x, y, z));
+        }
+      }
+    }
+    boolean mayKeep = lowest <= options.keepRadius()
+        || (vegetation.inferred() && lowest < options.conductorExclusion());
     double nearest = Double.POSITIVE_INFINITY;
     for (int k = 0; k < nc; k++) {
       best[k] = Double.POSITIVE_INFINITY;
       bestConductor[k] = -1;
+      ConditionMinimum current = minimum[sp][k];
+      double cutoff = mayKeep || current == null ? Double.POSITIVE_INFINITY : current.distance();
       CatenaryDistance[] row = p.kernels[k];
       for (int j = 0; j < row.length; j++) {
         CatenaryDistance kernel = row[j];
         if (kernel == null) {
+          continue;
+        }
+        double bound = p.lowerBound(k, j, x, y, z);
+        if (bound >= best[k] || bound >= cutoff) {
           continue;
         }
         double phi = 0;

@@ -28,6 +28,13 @@ final class PreparedSpan {
   final CatenaryDistance[][] kernels;
   final double[][] swingMin;
   final double[][] swingMax;
+  /**
+   * Per condition and conductor, for cheap lower bounds: the conductor's plan frame, how far it
+   * can move sideways by swinging (m), and its lowest elevation (m).
+   */
+  final SpanFrame[][] plans;
+  final double[][] sideReach;
+  final double[][] lowest;
   final String[] names;
 
   /**
@@ -42,6 +49,9 @@ final class PreparedSpan {
     kernels = new CatenaryDistance[conditions][n];
     swingMin = new double[conditions][n];
     swingMax = new double[conditions][n];
+    plans = new SpanFrame[conditions][n];
+    sideReach = new double[conditions][n];
+    lowest = new double[conditions][n];
     names = new String[n];
     double lo = Double.POSITIVE_INFINITY;
     double hi = Double.NEGATIVE_INFINITY;
@@ -65,6 +75,9 @@ final class PreparedSpan {
         swingMax[k][j] = st.swingMax();
         double sag = maxSag(curve);
         double sideways = st.swings() ? sag : 0;
+        plans[k][j] = curve.plan();
+        sideReach[k][j] = sag * Math.sin(Math.max(-st.swingMin(), st.swingMax()));
+        lowest[k][j] = lowestZ(curve);
         for (double s : new double[] {0, curve.length()}) {
           double x = curve.x(s);
           double y = curve.y(s);
@@ -91,6 +104,18 @@ final class PreparedSpan {
   /** True when the span has at least one conductor to measure to. */
   boolean measurable() {
     return Double.isFinite(eMin);
+  }
+
+  /**
+   * A lower bound of the distance from a point to conductor j in condition k, m: the plan
+   * distance beyond the conductor's sideways reach, or the height below its lowest point (a
+   * catenary lies below its chord, and swinging only raises it), whichever is larger. Only the
+   * offset from the conductor's plan line counts in plan, which keeps the bound cheap.
+   */
+  double lowerBound(int k, int j, double x, double y, double z) {
+    double e = Math.abs(plans[k][j].offset(x, y)) - sideReach[k][j];
+    double below = lowest[k][j] - z;
+    return Math.max(0, Math.max(e, below));
   }
 
   /** Whether a point lies in the measuring box. */

@@ -87,7 +87,7 @@ public final class GroundModelBuilder implements Consumer<PointChunk> {
   }
 
   /** Adds everything another builder (same options) has collected; that builder is emptied. */
-  void absorb(GroundModelBuilder other) {
+  public void absorb(GroundModelBuilder other) {
     surface.merge(other.surface);
     if (classified != null) {
       classified.merge(other.classified);

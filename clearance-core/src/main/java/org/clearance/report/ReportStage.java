@@ -54,8 +54,31 @@ public final class ReportStage {
   public static Outcome run(Path runDir, RunModel model, RuleProfile profile,
       ReportOptions options, PrintWriter console) throws IOException {
     long t0 = System.nanoTime();
-    RunAssessment run = RunAssessor.assess(model, runDir.resolve(NearPointFile.FILE_NAME),
-        profile, options);
+    RunAssessment run = assess(runDir, model, profile, options);
+    Outcome written = write(runDir, run, options, console);
+    return new Outcome(run, written.written(), written.notes(), (System.nanoTime() - t0) / 1e9);
+  }
+
+  /**
+   * The rules half of the stage: evaluates the profile on the stored distances.
+   *
+   * @throws org.clearance.InputException when the near-points file does not match the model
+   * @throws IOException when the near-points file cannot be read
+   */
+  public static RunAssessment assess(Path runDir, RunModel model, RuleProfile profile,
+      ReportOptions options) throws IOException {
+    return RunAssessor.assess(model, runDir.resolve(NearPointFile.FILE_NAME), profile, options);
+  }
+
+  /**
+   * The report half of the stage: writes every output of an evaluated run and the console
+   * summary.
+   *
+   * @throws IOException when a file cannot be written
+   */
+  public static Outcome write(Path runDir, RunAssessment run, ReportOptions options,
+      PrintWriter console) throws IOException {
+    long t0 = System.nanoTime();
     List<String> written = new ArrayList<>();
     List<String> notes = new ArrayList<>();
     CsvOutputs.write(runDir, run, options);

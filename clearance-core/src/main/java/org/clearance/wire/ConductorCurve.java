@@ -57,6 +57,26 @@ public record ConductorCurve(SpanFrame plan, Catenary curve) {
     return curve.z(s);
   }
 
+  /**
+   * The same curve cut short at its ends: the part from station {@code startCut} to station
+   * {@code length() - endCut}, as a conductor of its own (stations from 0 again). Used where the
+   * conductor really ends before the structure's cross-section, at a strain insulator.
+   *
+   * @param startCut plan distance removed at A, m (&gt;= 0)
+   * @param endCut plan distance removed at B, m (&gt;= 0)
+   * @throws IllegalArgumentException when the cuts leave nothing
+   */
+  public ConductorCurve trimmed(double startCut, double endCut) {
+    double len = plan.length();
+    if (!(startCut >= 0 && endCut >= 0 && startCut + endCut < len)) {
+      throw new IllegalArgumentException("cuts " + startCut + " + " + endCut
+          + " m leave nothing of " + len + " m");
+    }
+    SpanFrame cut = new SpanFrame(plan.x(startCut, 0), plan.y(startCut, 0), plan.ux(),
+        plan.uy(), len - startCut - endCut);
+    return new ConductorCurve(cut, new Catenary(curve.s0() - startCut, curve.z0(), curve.c()));
+  }
+
   /** The same attachments with another catenary constant c, m. */
   public ConductorCurve withConstant(double c) {
     return new ConductorCurve(plan, Catenary.through(0, zA(), plan.length(), zB(), c));

@@ -2,14 +2,10 @@ package org.clearance.wire;
 
 import java.io.IOException;
 import java.io.UncheckedIOException;
-import java.io.Writer;
-import java.nio.charset.StandardCharsets;
-import java.nio.file.AtomicMoveNotSupportedException;
-import java.nio.file.Files;
 import java.nio.file.Path;
-import java.nio.file.StandardCopyOption;
 import java.util.List;
 import java.util.Locale;
+import org.clearance.io.AtomicFiles;
 import org.clearance.survey.SurveyUnits;
 
 /**
@@ -19,6 +15,9 @@ import org.clearance.survey.SurveyUnits;
  * holding a comma, quote or line break is quoted (RFC 4180).
  */
 public final class ConductorTable {
+
+  /** File name in a run folder. */
+  public static final String FILE_NAME = "conductors.csv";
 
   /** The columns, in order. */
   public static final List<String> COLUMNS = List.of("span_id", "from_structure",
@@ -74,30 +73,10 @@ public final class ConductorTable {
    * @throws UncheckedIOException when the file cannot be written
    */
   public static void write(Path file, WireResult result, SurveyUnits units) {
-    Path dir = file.toAbsolutePath().getParent();
-    Path tmp = null;
     try {
-      tmp = Files.createTempFile(dir, ".conductors-", ".tmp");
-      try (Writer w = Files.newBufferedWriter(tmp, StandardCharsets.UTF_8)) {
-        w.write(csv(result, units));
-      }
-      try {
-        Files.move(tmp, file, StandardCopyOption.REPLACE_EXISTING,
-            StandardCopyOption.ATOMIC_MOVE);
-      } catch (AtomicMoveNotSupportedException e) {
-        Files.move(tmp, file, StandardCopyOption.REPLACE_EXISTING);
-      }
-      tmp = null;
+      AtomicFiles.writeString(file, csv(result, units));
     } catch (IOException e) {
       throw new UncheckedIOException(e);
-    } finally {
-      if (tmp != null) {
-        try {
-          Files.deleteIfExists(tmp);
-        } catch (IOException ignored) {
-          // the original failure is the one to report
-        }
-      }
     }
   }
 

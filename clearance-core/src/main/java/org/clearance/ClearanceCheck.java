@@ -1,0 +1,292 @@
+package org.clearance;
+
+import java.io.IOException;
+import java.io.PrintWriter;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import java.util.function.Consumer;
+import org.clearance.clearance.ClearanceEngine;
+import org.clearance.clearance.ConditionModels;
+import org.clearance.clearance.ConditionSet;
+import org.clearance.clearance.ConductorModel;
+import org.clearance.clearance.Measurement;
+import org.clearance.clearance.NearPointFile;
+import org.clearance.clearance.NearPointWriter;
+import org.clearance.clearance.SpanContext;
+import org.clearance.clearance.SpanModel;
+import org.clearance.clearance.SurveyedConductor;
+import org.clearance.clearance.VegetationSelector;
+import org.clearance.ground.GroundModel;
+import org.clearance.ground.GroundModelBuilder;
+import org.clearance.line.ConductorLibrary;
+import org.clearance.line.LineLayout;
+import org.clearance.line.LineSpec;
+import org.clearance.line.LineSpecReader;
+import org.clearance.line.Span;
+import org.clearance.line.SpanLayout;
+import org.clearance.line.Structure;
+import org.clearance.line.StructureReader;
+import org.clearance.report.ReportStage;
+import org.clearance.report.RunModel;
+import org.clearance.report.RunAssessment;
+import org.clearance.report.RunModelJson;
+import org.clearance.report.RunRecord;
+import org.clearance.report.RunRecordJson;
+import org.clearance.rules.RuleProfile;
+import org.clearance.rules.RuleProfiles;
+import org.clearance.sag.ConditionSolver;
+import org.clearance.survey.PointChunk;
+import org.clearance.survey.Survey;
+import org.clearance.wire.ConductorTable;
+import org.clearance.wire.FittedConductor;
+import org.clearance.wire.SpanWires;
+import org.clearance.wire.WireFinder;
+import org.clearance.wire.WireResult;
+
+/**
+ * The whole clearance check, from survey files to a finished run folder: read the inputs, build
+ * the ground model, find and fit the conductors, compute the line conditions, measure every
+ * vegetation point near the line, then evaluate the rule profile and write the reports.
+ *
+ * <p>Every output goes first into a staging folder beside the run folder; only when every stage
+ * has succeeded are the files moved into the run folder, so a failed check never leaves a
+ * half-written run behind.
+ */
+public final class ClearanceCheck {
+
+  /** Told when each stage ends; the benchmark uses it to read the heap. */
+  @FunctionalInterface
+  public interface StageObserver {
+    /**
+     * @param stage the stage that ended (as in run.json's timings)
+     * @param seconds how long it took, s
+     */
+    void stageEnded(String stage, double seconds);
+  }
+
+  private final CheckOptions options;
+  private final PrintWriter console;
+  private final StageObserver observer;
+  private final Map<String, Double> timings = new LinkedHashMap<>();
+  private long stageStart;
+
+  /**
+   * @param options options of every stage
+   * @param console where progress and the summary go (never null; use a null writer to mute)
+   */
+  public ClearanceCheck(CheckOptions options, PrintWriter console) {
+    this(options, console, (stage, seconds) -> { });
+  }
+
+  /** A check that also tells {@code observer} when each stage ends. */
+  public ClearanceCheck(CheckOptions options, PrintWriter console, StageObserver observer) {
+    this.options = options;
+    this.console = console;
+    this.observer = observer;
+  }
+
+  /**
+   * Runs the check.
+   *
+   * @param inputs the input files and the run folder
+   * @param toolVersion version recorded in the run
+   * @return what the report stage did
+   * @throws InputException for any problem with the inputs (names file, record and field)
+   * @throws IOException when a file cannot be read or written
+   */
+  public ReportStage.Outcome run(CheckInputs inputs, String toolVersion) throws IOException {
+    RunRecord.Builder record = RunRecord.builder("check", toolVersion);
+    Path staging = RunFolder.staging(inputs.outDir());
+    try {
+      ReportStage.Outcome outcome = runInto(staging, inputs, toolVersion, record);
+      RunFolder.publish(staging, inputs.outDir());
+      return outcome;
+    } finally {
+      RunFolder.deleteQuietly(staging);
+    }
+  }
+
+  private ReportStage.Outcome runInto(Path dir, CheckInputs in, String toolVersion,
+      RunRecord.Builder record) throws IOException {
+    start();
+    ConductorLibrary library = ConductorLibrary.builtin();
+    if (in.conductors().isPresent()) {
+      library = library.withUserFile(in.conductors().get());
+      record.input("conductors", in.conductors().get());
+      if (!library.replacedCodes().isEmpty()) {
+        record.parameter("conductors_replaced", String.join(" ", library.replacedCodes()));
+      }
+    }
+    RuleProfile profile = in.rules().map(RuleProfiles::byNameOrPath).orElse(null);
+    Survey survey = Survey.open(in.survey(), in.surveyUnits());
+    List<Structure> structures = StructureReader.read(in.structures(), survey.units());
+    List<LineSpec> specs = new ArrayList<>();
+    for (Path line : in.lines()) {
+      specs.add(LineSpecReader.read(line, library));
+    }
+    SpanLayout layout = SpanLayout.build(structures, specs);
+    for (Path p : in.survey()) {
+      record.input("survey", p);
+    }
+    record.input("structures", in.structures());
+    for (Path p : in.lines()) {
+      record.input("line", p);
+    }
+    if (profile != null) {
+      record.profile(profile);
+    }
+    say("read inputs: %d survey file(s), %,d points, %d line(s), %d spans; units %s / %s (%s)",
+        in.survey().size(), survey.pointCount(), specs.size(), layout.spans().size(),
+        survey.units().horizontal().symbol(), survey.units().vertical().symbol(),
+        survey.units().source());
+    stop("inputs");
+
+    SurveyScan scan = scan(survey);
+    say("ground: %s", scan.ground.source().describe());
+    stop("ground");
+
+    WireResult wires = WireFinder.find(survey, layout, scan.ground::heightAboveGround,
+        options.wires());
+    long fittedCount = wires.spans().stream().mapToLong(s -> s.fitted().size()).sum();
+    say("wires: %d conductors fitted in %d spans; %d structure change(s)", fittedCount,
+        wires.spans().size(), wires.structureChanges().size());
+    wires.structureChanges().forEach(c -> say("  structure: %s", c));
+    ConductorTable.write(dir.resolve(ConductorTable.FILE_NAME), wires, survey.units());
+    stop("wires");
+
+    ConditionSet conditions = ConditionModels.conditionSet(specs);
+    Map<String, List<SurveyedConductor>> fitted = surveyed(wires);
+    Map<String, List<ConductorModel>> models = ConditionModels.build(wires.layout(), fitted,
+        conditions, new ConditionSolver(options.conditions()));
+    say("conditions: %s", ConditionModels.summary(conditions, models));
+    stop("conditions");
+
+    VegetationSelector vegetation = VegetationSelector.forSurvey(scan.classCounts,
+        options.vegetationClasses());
+    List<SpanModel> spanModels = spanModels(wires.layout(), models);
+    ClearanceEngine engine = new ClearanceEngine(spanModels, conditions, scan.ground, vegetation,
+        options.engine(), options.trees());
+    Measurement measured;
+    try (NearPointWriter out = new NearPointWriter(dir.resolve(NearPointFile.FILE_NAME),
+        engine.nearPointLayout())) {
+      measured = engine.measure(survey::readParallel, out);
+      say("clearance: %,d vegetation points stored within %.1f m; %d trees near the line",
+          out.count(), options.engine().keepRadius(), measured.trees().size());
+    }
+    stop("clearance");
+
+    RunModel model = RunModels.of(toolVersion, survey.units(), conditions, options, vegetation,
+        scan.ground, wires, spanModels, measured);
+    RunModelJson.write(model, dir.resolve(RunModel.FILE_NAME));
+    RunAssessment assessed = ReportStage.assess(dir, model, profile, options.report());
+    stop("rules");
+    ReportStage.Outcome outcome = ReportStage.write(dir, assessed, options.report(), console);
+    stop("report");
+
+    record.parameter("threads", Integer.toString(options.threads()))
+        .parameter("keep_radius_m", Double.toString(options.engine().keepRadius()))
+        .parameter("vegetation", vegetation.describe())
+        .parameter("ground", scan.ground.source().describe())
+        .parameter("survey_units", survey.units().horizontal().symbol() + "/"
+            + survey.units().vertical().symbol() + " (" + survey.units().source() + ")")
+        .parameter("output_unit", options.report().outputUnit().symbol());
+    timings.forEach(record::timing);
+    for (String name : List.of(ConductorTable.FILE_NAME, NearPointFile.FILE_NAME,
+        RunModel.FILE_NAME)) {
+      record.output(name);
+    }
+    outcome.written().forEach(record::output);
+    record.output(RunRecord.FILE_NAME);
+    RunRecordJson.write(dir, record.build());
+    return outcome;
+  }
+
+  /** Per span, the fitted conductors as the line conditions need them. */
+  static Map<String, List<SurveyedConductor>> surveyed(WireResult wires) {
+    Map<String, List<SurveyedConductor>> out = new LinkedHashMap<>();
+    for (SpanWires sw : wires.spans()) {
+      List<SurveyedConductor> list = new ArrayList<>();
+      for (FittedConductor c : sw.fitted()) {
+        list.add(new SurveyedConductor(c.name(), c.position().orElse(""),
+            c.role().name().toLowerCase(Locale.ROOT), c.curve().orElseThrow()));
+      }
+      out.put(sw.span().id(), list);
+    }
+    return out;
+  }
+
+  private static List<SpanModel> spanModels(SpanLayout layout,
+      Map<String, List<ConductorModel>> models) {
+    List<SpanModel> out = new ArrayList<>();
+    for (LineLayout line : layout.lines()) {
+      for (Span span : line.spans()) {
+        SpanContext context = new SpanContext(span.id(), line.spec().lineId(),
+            line.spec().nominalVoltageKv(), line.spec().altitudeM(), span.lengthM());
+        out.add(new SpanModel(span, context, models.getOrDefault(span.id(), List.of())));
+      }
+    }
+    return out;
+  }
+
+  /** What the first pass over the survey collects. */
+  private record SurveyScan(GroundModel ground, long[] classCounts) {}
+
+  private SurveyScan scan(Survey survey) {
+    List<GroundModelBuilder> builders = new ArrayList<>();
+    List<long[]> counts = new ArrayList<>();
+    survey.readParallel(options.threads(), () -> {
+      GroundModelBuilder b = new GroundModelBuilder(options.ground());
+      long[] c = new long[256];
+      builders.add(b);
+      counts.add(c);
+      Consumer<PointChunk> worker = chunk -> {
+        b.accept(chunk);
+        short[] cls = chunk.classification();
+        for (int i = 0; i < chunk.size(); i++) {
+          c[cls[i] & 0xFF]++;
+        }
+      };
+      return worker;
+    });
+    GroundModelBuilder first = builders.get(0);
+    long[] total = new long[256];
+    for (int i = 0; i < builders.size(); i++) {
+      if (i > 0) {
+        first.absorb(builders.get(i));
+      }
+      for (int c = 0; c < 256; c++) {
+        total[c] += counts.get(i)[c];
+      }
+    }
+    return new SurveyScan(first.build(), total);
+  }
+
+  private void start() {
+    stageStart = System.nanoTime();
+  }
+
+  private void stop(String stage) {
+    long now = System.nanoTime();
+    double s = (now - stageStart) / 1e9;
+    timings.put(stage, s);
+    observer.stageEnded(stage, s);
+    console.printf(Locale.ROOT, "  [%s %.1f s]%n", stage, s);
+    console.flush();
+    stageStart = now;
+  }
+
+  private void say(String format, Object... args) {
+    console.println(String.format(Locale.ROOT, format, args));
+    console.flush();
+  }
+
+  /** Files present in a finished run folder. */
+  static boolean isRunFolder(Path dir) {
+    return Files.isRegularFile(dir.resolve(RunRecord.FILE_NAME));
+  }
+}

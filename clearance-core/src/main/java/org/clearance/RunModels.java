@@ -1,0 +1,142 @@
+package org.clearance;
+
+import java.util.ArrayList;
+import java.util.HashMap;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import java.util.Optional;
+import org.clearance.clearance.ClearanceEngine;
+import org.clearance.clearance.ConditionSet;
+import org.clearance.clearance.ConductorModel;
+import org.clearance.clearance.ConductorState;
+import org.clearance.clearance.Measurement;
+import org.clearance.clearance.SpanClearance;
+import org.clearance.clearance.SpanModel;
+import org.clearance.clearance.SpanStatus;
+import org.clearance.clearance.TreeClearance;
+import org.clearance.clearance.VegetationSelector;
+import org.clearance.ground.GroundModel;
+import org.clearance.line.Span;
+import org.clearance.line.Structure;
+import org.clearance.report.ConductorRecord;
+import org.clearance.report.CurveRecord;
+import org.clearance.report.RunModel;
+import org.clearance.report.SpanRecord;
+import org.clearance.report.StructureRecord;
+import org.clearance.report.TreeRecord;
+import org.clearance.survey.SurveyUnits;
+import org.clearance.wire.FittedConductor;
+import org.clearance.wire.SpanWires;
+import org.clearance.wire.StructureChange;
+import org.clearance.wire.WireResult;
+
+/** Assembles the {@link RunModel} of a check from what each stage produced. */
+final class RunModels {
+
+  private RunModels() {}
+
+  static RunModel of(String toolVersion, SurveyUnits units, ConditionSet conditions,
+      CheckOptions options, VegetationSelector vegetation, GroundModel ground, WireResult wires,
+      List<SpanModel> spanModels, Measurement measured) {
+    Map<String, SpanClearance> clearances = new HashMap<>();
+    measured.spans().forEach(c -> clearances.put(c.spanId(), c));
+    Map<String, SpanModel> models = new HashMap<>();
+    spanModels.forEach(m -> models.put(m.span().id(), m));
+    Map<String, String> lineNames = new HashMap<>();
+    wires.layout().lines().forEach(l -> lineNames.put(l.spec().lineId(), l.spec().displayName()));
+    List<SpanRecord> spans = new ArrayList<>();
+    for (SpanWires sw : wires.spans()) {
+      SpanModel model = models.get(sw.span().id());
+      SpanClearance clearance = clearances.get(sw.span().id());
+      spans.add(span(sw, model, clearance, wires.structureChanges(), conditions,
+          options.engine(), lineNames.getOrDefault(sw.span().lineId(), "")));
+    }
+    List<TreeRecord> trees = new ArrayList<>();
+    int n = 0;
+    for (TreeClearance t : measured.trees()) {
+      n++;
+      trees.add(new TreeRecord(String.format(Locale.ROOT, "TREE%05d", n), t.spanId(),
+          t.tree().x(), t.tree().y(), t.tree().topZ(), t.tree().baseZ(), t.tree().height(),
+          t.tree().crownRadius(), t.baseDistances(), t.nearestConductor()));
+    }
+    return new RunModel(toolVersion, units, conditions, options.engine().keepRadius(),
+        vegetation.describe(), ground.source().describe(), spans, trees);
+  }
+
+  private static SpanRecord span(SpanWires sw, SpanModel model, SpanClearance clearance,
+      List<StructureChange> changes, ConditionSet conditions, ClearanceEngine.Options engine,
+      String lineName) {
+    Span span = sw.span();
+    Map<String, ConductorModel> byName = new HashMap<>();
+    if (model != null) {
+      model.conductors().forEach(c -> byName.put(c.name(), c));
+    }
+    List<ConductorRecord> conductors = new ArrayList<>();
+    List<String> problems = new ArrayList<>();
+    for (FittedConductor c : sw.conductors()) {
+      ConductorModel m = byName.get(c.name());
+      List<Optional<CurveRecord>> states = new ArrayList<>();
+      List<Optional<String>> failures = new ArrayList<>();
+      for (int k = 0; k < conditions.size(); k++) {
+        if (m == null) {
+          states.add(Optional.empty());
+          failures.add(Optional.of(c.reason().orElse("not fitted")));
+          continue;
+        }
+        Optional<ConductorState> st = m.states().get(k);
+        states.add(st.map(CurveRecord::of));
+        failures.add(m.failures().get(k));
+        if (st.isEmpty()) {
+          problems.add(conditions.names().get(k) + " for " + c.name() + ": "
+              + m.failures().get(k).orElse("not computed"));
+        }
+      }
+      conductors.add(new ConductorRecord(c.name(), c.role().name().toLowerCase(Locale.ROOT),
+          c.isFitted() ? "fitted" : "not_assessed", c.reason().orElse(""),
+          c.quality().points(), c.quality().coveragePct(), c.quality().rmsM(),
+          c.quality().maxGapM(), states, failures));
+    }
+    boolean anyFitted = !sw.fitted().isEmpty();
+    SpanStatus status;
+    String reason;
+    if (!anyFitted) {
+      status = SpanStatus.NOT_ASSESSED;
+      reason = sw.reason().orElse("no conductor fitted");
+    } else if (sw.reason().isPresent() || !problems.isEmpty()) {
+      status = SpanStatus.INCOMPLETE;
+      List<String> parts = new ArrayList<>();
+      sw.reason().ifPresent(parts::add);
+      if (!problems.isEmpty()) {
+        parts.add("conditions not computed: " + String.join("; ", problems));
+      }
+      reason = String.join("; ", parts);
+    } else {
+      status = SpanStatus.ASSESSED;
+      reason = "";
+    }
+    List<String> notes = new ArrayList<>();
+    for (StructureChange ch : changes) {
+      if (ch.structureId().equals(span.from().id()) || ch.structureId().equals(span.to().id())) {
+        notes.add("structure " + ch.structureId() + " " + ch.kind().name().toLowerCase(Locale.ROOT)
+            + String.format(Locale.ROOT, " from (%.2f, %.2f) to (%.2f, %.2f) m: %s",
+            ch.fromX(), ch.fromY(), ch.toX(), ch.toY(), ch.evidence()));
+      }
+    }
+    if (clearance != null && clearance.excludedAsConductor() + clearance.excludedAsStructure() > 0) {
+      notes.add(String.format(Locale.ROOT, "unclassified survey: %d points within %.2f m of a "
+          + "conductor taken as the conductor, %d points within %.1f m of a structure taken as "
+          + "the structure", clearance.excludedAsConductor(), engine.conductorExclusion(),
+          clearance.excludedAsStructure(), engine.structureExclusion()));
+    }
+    return new SpanRecord(model.context(), lineName, structure(span.from()), structure(span.to()),
+        status, reason, conductors, clearance == null ? List.of() : clearance.minima(),
+        clearance == null ? 0 : clearance.pointsMeasured(),
+        clearance == null ? 0 : clearance.pointsKept(), notes);
+  }
+
+  private static StructureRecord structure(Structure s) {
+    return new StructureRecord(s.id(), s.x(), s.y(), s.groundZ(),
+        s.type().name().toLowerCase(Locale.ROOT));
+  }
+}
