@@ -51,9 +51,10 @@ final class BundleSplit {
    * @param expected sub-conductors the specification gives (1 when single or unknown)
    * @param spacing the specification's sub-conductor spacing, m, or NaN
    * @param zA attachment elevation at the first structure, m, or NaN; zB at the second
+   * @param ends where the conductor ends at the structures
    */
   static List<Part> split(SpanPoints p, ConductorFit.Result whole, Span span, String name,
-      int expected, double spacing, double zA, double zB) {
+      int expected, double spacing, double zA, double zB, ConductorEnds ends) {
     BundleCheck check = expected > 1 && Double.isFinite(spacing)
         ? new BundleCheck(new BundleCheck.Options(SPLIT_RMS_SHARE * spacing,
             MIN_SEPARATION_SHARE * spacing, KNOWN_BUNDLE_RATIO, MIN_GROUP_POINTS))
@@ -71,7 +72,7 @@ final class BundleSplit {
         for (int k = 0; k < idx.length; k++) {
           sub[k] = members[idx[k]];
         }
-        subs.add(ConductorFit.fit(p, sub, span, true, zA, zB));
+        subs.add(ConductorFit.fit(p, sub, span, true, zA, zB, ends));
       }
       double spread = spread(groups);
       for (int k = 0; k < subs.size(); k++) {
@@ -81,7 +82,7 @@ final class BundleSplit {
       return parts;
     }
     boolean bundled = expected > 1;
-    ConductorFit.Result single = ConductorFit.fit(p, members, span, !bundled, zA, zB);
+    ConductorFit.Result single = ConductorFit.fit(p, members, span, !bundled, zA, zB, ends);
     Optional<BundleInfo> info = Optional.empty();
     if (bundled) {
       double rms = lateralRms(single);

@@ -12,8 +12,9 @@ import org.clearance.line.SpanFrame;
  *
  * <p>The plan line is fitted in the span frame by total least squares ({@link PlanLineFitter}),
  * robust for a single conductor, plain for a bundle's centre line (a robust line would follow one
- * sub-conductor). Its crossings with the cross-sections through the structure centres (stations
- * 0 and L) are the plan attachments; the catenary is fitted ({@link CatenaryFitter}) to the
+ * sub-conductor). Its crossings with the cross-sections through the conductor's ends (the
+ * structure centres, stations 0 and L, or a dead-end's strain assembly length inside them) are
+ * the plan attachments; the catenary is fitted ({@link CatenaryFitter}) to the
  * points' stations along the attachment-to-attachment line and elevations, free, or through
  * known attachment elevations. A wire blown sideways while surveyed bows across the span in
  * proportion to its sag ({@link SwingFit}); the bow is fitted, the plan line moved onto the
@@ -26,6 +27,8 @@ final class ConductorFit {
   /** Largest angle between the plan line and the span for a usable crossing, radians (60 deg):
    * conductors run along their span, the growth step already rejects more than its own limit. */
   static final double MIN_ALONG = 0.5;
+  /** How far beyond a conductor's end a point may lie and still count (noise), m. */
+  static final double END_SLACK_M = 0.3;
   /** Robust standard deviations beyond which a point is not counted in the quality figures. */
   static final double CLIP_SIGMAS = 3;
   /** Floor of the robust standard deviation, m: below airborne wire noise. */
@@ -63,6 +66,16 @@ final class ConductorFit {
    */
   static Result fit(SpanPoints p, int[] members, Span span, boolean robustPlan, double zA,
       double zB) {
+    return fit(p, members, span, robustPlan, zA, zB, ConductorEnds.SQUARE);
+  }
+
+  /**
+   * Fits the members' points of a conductor ending where {@code ends} says: at the structures'
+   * cross arms, or a dead-end's strain assembly further into the span; points beyond its ends
+   * are insulator or jumper, not conductor, and are left out of the catenary.
+   */
+  static Result fit(SpanPoints p, int[] members, Span span, boolean robustPlan, double zA,
+      double zB, ConductorEnds ends) {
     int n = members.length;
     double[] ps = new double[n];
     double[] pe = new double[n];
@@ -79,11 +92,21 @@ final class ConductorFit {
     }
     PlanLine pl = line.get();
     SpanFrame f = span.frame();
-    double length = span.lengthM();
-    double eA = pl.pointY() + (0 - pl.pointX()) * pl.uy() / pl.ux();
-    double eB = pl.pointY() + (length - pl.pointX()) * pl.uy() / pl.ux();
-    SpanFrame plan = SpanFrame.between(f.x(0, eA), f.y(0, eA), f.x(length, eB),
-        f.y(length, eB));
+    double planSlope = pl.uy() / pl.ux();
+    double e0 = pl.pointY() - pl.pointX() * planSlope;
+    double sA = ends.stationA(e0, planSlope);
+    double sB = ends.stationB(e0, planSlope, span.lengthM());
+    if (!(sB - sA > 0)) {
+      return failed(members, "the conductor's ends at the structures do not leave a span");
+    }
+    for (int k = 0; k < n; k++) {
+      if (!(ps[k] >= sA - END_SLACK_M && ps[k] <= sB + END_SLACK_M)) {
+        pz[k] = Double.NaN; // beyond the conductor's ends: left out of the catenary
+      }
+    }
+    double eA = e0 + planSlope * sA;
+    double eB = e0 + planSlope * sB;
+    SpanFrame plan = SpanFrame.between(f.x(sA, eA), f.y(sA, eA), f.x(sB, eB), f.y(sB, eB));
     double[] sc = new double[n];
     double[] lateral = new double[n];
     project(f, plan, ps, pe, sc, lateral);

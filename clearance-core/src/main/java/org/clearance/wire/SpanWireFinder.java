@@ -24,6 +24,9 @@ final class SpanWireFinder {
   /** A wire's fit counts at a structure when its points come within this share of the span
    * length of it: extrapolated farther, a curve says little about where it hangs there. */
   static final double NEAR_END_SHARE = 0.35;
+  /** Least share of the span a conductor must span between its strain assemblies; a shorter
+   * one means the strain length does not fit this span, and the structures are used. */
+  static final double MIN_CONDUCTOR_SHARE = 0.5;
 
   private final WireFinderOptions options;
 
@@ -37,9 +40,10 @@ final class SpanWireFinder {
    * @param p the span's candidate points, sorted by station
    * @param seen survey points of any class that fell in the corridor
    * @param groundA ground elevation at the first structure, m, or NaN; groundB at the second
+   * @param arms the cross arms at the two structures (no strain assemblies)
    */
   SpanWires find(SpanPoints p, long seen, Span span, LineSpec spec, double groundA,
-      double groundB) {
+      double groundB, ConductorEnds arms) {
     List<ConductorPosition> positions = spec.conductors();
     if (p.size() == 0) {
       String why = seen == 0
@@ -71,7 +75,8 @@ final class SpanWireFinder {
     List<ConductorFit.Result> fits = new ArrayList<>();
     List<ConductorFit.Result> failed = new ArrayList<>();
     for (int[] w : wires) {
-      ConductorFit.Result r = ConductorFit.fit(p, w, span, false, Double.NaN, Double.NaN);
+      ConductorFit.Result r = ConductorFit.fit(p, w, span, false, Double.NaN, Double.NaN,
+          arms);
       (r.curve().isPresent() ? fits : failed).add(r);
     }
     List<PositionMatcher.Slot> slots = positions.stream().map(pos -> new PositionMatcher.Slot(
@@ -89,7 +94,7 @@ final class SpanWireFinder {
         if (slotOf[i] == j) {
           naming.addPosition(pos, BundleSplit.split(p, fits.get(i), span, pos.position(),
               pos.bundle(), pos.bundleSpacingM(), slots.get(j).attachZA(),
-              slots.get(j).attachZB()));
+              slots.get(j).attachZB(), ends(span, pos, arms)));
         }
       }
       naming.closePosition(pos, where(pos));
@@ -106,12 +111,27 @@ final class SpanWireFinder {
       String name = naming.nextExtraName();
       naming.addExtra(summaries.get(i).role().orElse(ConductorPosition.Role.PHASE),
           BundleSplit.split(p, fits.get(i), span, name, 1, Double.NaN, Double.NaN,
-              Double.NaN));
+              Double.NaN, arms));
     }
     for (ConductorFit.Result r : failed) {
       naming.addFailedExtra(roleHint(p, r.members()).orElse(ConductorPosition.Role.PHASE), r);
     }
     return naming.spanWires(p.size(), labelled);
+  }
+
+  /**
+   * Where a position's conductor ends: at the cross arms, and at a dead-end a strain assembly
+   * further into the span (docs/line-inputs.md, strain_length_m), as long as that leaves at
+   * least {@link #MIN_CONDUCTOR_SHARE} of the span.
+   */
+  static ConductorEnds ends(Span span, ConductorPosition pos, ConductorEnds arms) {
+    double length = span.lengthM();
+    double a = span.from().isDeadEnd() ? pos.strainLengthM() : 0;
+    double b = span.to().isDeadEnd() ? pos.strainLengthM() : 0;
+    if (length - a - b < MIN_CONDUCTOR_SHARE * length) {
+      return arms;
+    }
+    return arms.withStrain(a, b);
   }
 
   /** Tube half-width and half-height, m, widened for the specification's bundles. */

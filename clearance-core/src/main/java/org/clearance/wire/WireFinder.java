@@ -75,10 +75,14 @@ public final class WireFinder {
     List<Span> spans = used.spans();
     List<LineSpec> specs = new ArrayList<>();
     List<SpanCorridor> corridors = new ArrayList<>();
+    List<ConductorEnds> arms = new ArrayList<>();
     for (LineLayout line : used.lines()) {
-      for (Span span : line.spans()) {
+      List<Span> ls = line.spans();
+      for (int k = 0; k < ls.size(); k++) {
         specs.add(line.spec());
-        corridors.add(corridor(span, line.spec(), heights));
+        corridors.add(corridor(ls.get(k), line.spec(), heights));
+        arms.add(arms(ls.get(k), k > 0 ? ls.get(k - 1) : null,
+            k + 1 < ls.size() ? ls.get(k + 1) : null));
       }
     }
     CorridorIndex index = new CorridorIndex(corridors.stream().map(SpanCorridor::corners)
@@ -95,12 +99,25 @@ public final class WireFinder {
       all.absorb(collectors.get(k));
     }
     collectors.clear();
-    return StrainAssemblies.apply(
-        new WireResult(used, processSpans(spans, specs, all, heights), changes));
+    return new WireResult(used, processSpans(spans, specs, arms, all, heights), changes);
+  }
+
+  /**
+   * The cross arms of a span: at a structure between two spans the arm lies along the bisector
+   * of the line's turn, at a line's end square to the span.
+   */
+  static ConductorEnds arms(Span span, Span before, Span after) {
+    double ux = span.frame().ux();
+    double uy = span.frame().uy();
+    double tanA = before == null ? 0 : ConductorEnds.armTangent(ux, uy,
+        before.frame().ux() + ux, before.frame().uy() + uy);
+    double tanB = after == null ? 0 : ConductorEnds.armTangent(ux, uy,
+        after.frame().ux() + ux, after.frame().uy() + uy);
+    return new ConductorEnds(tanA, 0, tanB, 0);
   }
 
   private List<SpanWires> processSpans(List<Span> spans, List<LineSpec> specs,
-      CandidateCollector all, HeightModel heights) {
+      List<ConductorEnds> arms, CandidateCollector all, HeightModel heights) {
     SpanWireFinder finder = new SpanWireFinder(options);
     ExecutorService pool = Executors.newFixedThreadPool(options.threads());
     try {
@@ -110,7 +127,7 @@ public final class WireFinder {
         futures.add(pool.submit(() -> {
           Span span = spans.get(idx);
           SpanWires w = finder.find(all.sorted(idx), all.seen(idx), span, specs.get(idx),
-              groundAt(span.from(), heights), groundAt(span.to(), heights));
+              groundAt(span.from(), heights), groundAt(span.to(), heights), arms.get(idx));
           all.release(idx);
           return w;
         }));

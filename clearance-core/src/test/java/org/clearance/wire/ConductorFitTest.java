@@ -136,4 +136,46 @@ class ConductorFitTest {
     assertTrue(fit.quality().rmsM() < 0.05, "rms " + fit.quality().rmsM());
     assertTrue(fit.quality().points() <= 600);
   }
+
+  /**
+   * A conductor held 3 m into the span by dead-end strain assemblies at both structures
+   * (docs/line-inputs.md, strain_length_m): the curve runs from the assemblies' ends, and the
+   * level insulator points between the structure and the conductor's end are left out.
+   */
+  @Test
+  void conductorEndsAtTheStrainAssemblies() {
+    double length = 300;
+    Catenary truth = Catenary.through(3, 50, length - 3, 50, 1600);
+    SpanPoints p = points(truth, length, 900, 5);
+    for (double s = 0; s < 3; s += 0.1) { // strain insulators, level with the conductor's end
+      p.add(s, 2.5, 50, 15, 1);
+      p.add(length - s, 2.5, 50, 15, 1);
+    }
+    p.sort();
+    ConductorFit.Result r = ConductorFit.fit(p, all(p), span(length), true, Double.NaN,
+        Double.NaN, ConductorEnds.SQUARE.withStrain(3, 3));
+    ConductorCurve c = r.curve().orElseThrow();
+    assertEquals(length - 6, c.length(), 0.01);
+    assertEquals(3, span(length).frame().station(c.x(0), c.y(0)), 0.01);
+    assertEquals(50, c.zA(), 0.03);
+    assertEquals(50, c.zB(), 0.03);
+    assertEquals(truth.midSpanSag(3, length - 3), c.midSpanSag(), 0.02);
+    assertTrue(r.quality().rmsM() < 0.05, "rms " + r.quality().rmsM());
+  }
+
+  /**
+   * At a structure where the line turns 30 degrees left, the cross arm lies along the bisector,
+   * 15 degrees off square (plane geometry): a conductor 8 m to the left meets it 8 tan 15 =
+   * 2.1436 m before the structure's square cross-section, one 8 m to the right as far beyond.
+   */
+  @Test
+  void crossArmAtAnAngleStructure() {
+    double turn = Math.toRadians(30);
+    double tan = ConductorEnds.armTangent(1, 0, 1 + Math.cos(turn), Math.sin(turn));
+    assertEquals(Math.tan(Math.toRadians(15)), tan, 1e-12);
+    ConductorEnds ends = new ConductorEnds(0, 0, tan, 0);
+    assertEquals(300 - 2.1436, ends.stationB(8, 0, 300), 1e-4);
+    assertEquals(300 + 2.1436, ends.stationB(-8, 0, 300), 1e-4);
+    assertEquals(300 - 2.1436 - 3, ends.withStrain(0, 3).stationB(8, 0, 300), 1e-4);
+  }
 }
