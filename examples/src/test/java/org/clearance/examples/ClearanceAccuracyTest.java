@@ -103,6 +103,37 @@ class ClearanceAccuracyTest {
     assertTrue(checked >= 1, "the scenes have trees within 3 m of a conductor: " + checked);
   }
 
+  /**
+   * Issue 4: a survey without any labels runs. Vegetation is then inferred (every point not
+   * ground, conductor or structure), a superset of the true vegetation, so no span's minimum may
+   * exceed the truth's vegetation minimum (beyond the survey tolerance); and the conductors are
+   * found without labels, so spans are assessed.
+   */
+  @Test
+  void unclassifiedSurveyRunsAndMissesNoVegetation() throws IOException {
+    DemoRuns.Run run = DemoRuns.of(DemoRuns.small(11L, ClassificationMode.UNCLASSIFIED), null);
+    DemoRuns.Run labelled = DemoRuns.of(DemoRuns.small(11L, ClassificationMode.FULL), null);
+    Truth truth = Truth.of(labelled);
+    long assessed = run.model().spans().stream()
+        .filter(s -> s.status() != SpanStatus.NOT_ASSESSED).count();
+    assertTrue(assessed >= run.model().spans().size() - 1, "spans assessed: " + assessed);
+    assertTrue(run.model().vegetation().startsWith("inferred"), run.model().vegetation());
+    int compared = 0;
+    for (int i = 0; i < run.model().spans().size(); i++) {
+      SpanRecord span = run.model().spans().get(i);
+      SpanRecord ref = labelled.model().spans().get(i);
+      if (span.status() != SpanStatus.ASSESSED || ref.status() != SpanStatus.ASSESSED) {
+        continue;
+      }
+      double expected = truth.minimum(span.id(), 0);
+      double got = span.minima().get(0).distance();
+      assertTrue(got <= expected + SURVEY_TOL_M, span.id() + ": inferred vegetation at "
+          + got + " m, true vegetation at " + expected + " m");
+      compared++;
+    }
+    assertTrue(compared >= 3, "spans compared: " + compared);
+  }
+
   private static long key(double x, double y, double z) {
     return Math.round(x * 1000) * 1_000_003L * 1_000_003L + Math.round(y * 1000) * 1_000_003L
         + Math.round(z * 1000);
