@@ -7,6 +7,7 @@ import java.util.Comparator;
 import java.util.HashMap;
 import java.util.LinkedHashMap;
 import java.util.List;
+import java.util.Locale;
 import java.util.Map;
 import java.util.Optional;
 import java.util.OptionalInt;
@@ -18,6 +19,7 @@ import org.clearance.clearance.PointClearance;
 import org.clearance.clearance.SpanStatus;
 import org.clearance.line.SpanFrame;
 import org.clearance.rules.PointFinding;
+import org.clearance.rules.Requirement;
 import org.clearance.rules.ResolvedZone;
 import org.clearance.rules.RuleProfile;
 import org.clearance.rules.SpanRules;
@@ -197,6 +199,15 @@ public final class RunAssessor {
               + "condition it applies in (" + z.zone().conditions().describe() + ")");
         }
       }
+      for (ResolvedZone z : rules.zones()) {
+        double reach = reach(z, span.context().lengthM());
+        if (reach > model.keepRadiusM()) {
+          partial.add(String.format(Locale.ROOT, "zone %s reaches %.2f m from the conductors, "
+              + "beyond the %.2f m within which the check stored vegetation; run the check "
+              + "again with --keep-radius %.0f or more", z.zone().name(), reach,
+              model.keepRadiusM(), Math.ceil(reach)));
+        }
+      }
       if (notAssessed > 0) {
         partial.add(notAssessed + " vegetation point" + (notAssessed == 1 ? "" : "s")
             + " not checked: " + firstNotAssessed);
@@ -227,6 +238,22 @@ public final class RunAssessor {
       }
       return new SpanResult(span, status, String.join("; ", reasons), named,
           OptionalInt.empty(), checked, notAssessed);
+    }
+
+    /**
+     * The farthest 3D distance from a conductor at which a point can be inside the zone, m:
+     * the radial distance, or the diagonal of the horizontal and vertical distances, at the
+     * span's ends, quarter points and middle (where span-position allowances peak).
+     */
+    private static double reach(ResolvedZone z, double length) {
+      double max = 0;
+      for (double f : new double[] {0, 0.25, 0.5, 0.75, 1}) {
+        Requirement r = z.at(length, f * length);
+        double d = z.radial().isPresent() ? r.radialM() : Math.hypot(r.horizontalM(),
+            r.verticalM());
+        max = Math.max(max, d);
+      }
+      return max;
     }
 
     /** Why the violation-reference zone cannot apply to the run, if it cannot. */

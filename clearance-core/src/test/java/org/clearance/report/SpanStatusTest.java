@@ -75,6 +75,20 @@ class SpanStatusTest {
   }
 
   @Test
+  void zoneWiderThanTheStoredDistancesMakesTheSpanIncomplete() throws IOException {
+    // Regression: a zone reaching beyond the keep radius (15 m in the fixture) found no points
+    // there, because none were stored, and the span could read clear.
+    RunAssessment a = assess(RunFixture.metric(), profile("zones:", REF,
+        "  - {name: wide, priority: 2, conditions: [all], radial_m: 20}"));
+    SpanResult r = span(a, "KV-12-13");
+    assertEquals(SpanStatus.INCOMPLETE, r.status());
+    assertTrue(r.reason().contains("zone wide reaches 20.00 m from the conductors, beyond the "
+        + "15.00 m"), r.reason());
+    assertTrue(r.reason().contains("--keep-radius 20 or more"), r.reason());
+    assertTrue(!r.clear());
+  }
+
+  @Test
   void pointsWithoutDistancesMakeTheSpanIncomplete() throws IOException {
     RunFixture f = RunFixture.metric();
     // the engine could not compute any distance for one point of the clear span (NaN)
