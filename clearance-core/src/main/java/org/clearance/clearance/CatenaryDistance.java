@@ -39,7 +39,7 @@ public final class CatenaryDistance {
    * 1e-14 m. */
   static final int MAX_ITERATIONS = 60;
   /** Station step below which the root finder stops, m: a million times finer than 1 mm. */
-  static final double STATION_TOLERANCE = 1e-9;
+  static final double STATION_TOLERANCE = 1e-6;
   /** Intervals of the scan for points more than c above the vertex (non-convex case). */
   static final int SCAN_INTERVALS = 512;
 

@@ -35,6 +35,10 @@ final class PreparedSpan {
   final SpanFrame[][] plans;
   final double[][] sideReach;
   final double[][] lowest;
+  /** Catenary of each state (vertex station and elevation, constant), for the tangent bound. */
+  final double[][] vertexS;
+  final double[][] vertexZ;
+  final double[][] constant;
   final String[] names;
 
   /**
@@ -52,6 +56,9 @@ final class PreparedSpan {
     plans = new SpanFrame[conditions][n];
     sideReach = new double[conditions][n];
     lowest = new double[conditions][n];
+    vertexS = new double[conditions][n];
+    vertexZ = new double[conditions][n];
+    constant = new double[conditions][n];
     names = new String[n];
     double lo = Double.POSITIVE_INFINITY;
     double hi = Double.NEGATIVE_INFINITY;
@@ -78,6 +85,9 @@ final class PreparedSpan {
         plans[k][j] = curve.plan();
         sideReach[k][j] = sag * Math.sin(Math.max(-st.swingMin(), st.swingMax()));
         lowest[k][j] = lowestZ(curve);
+        vertexS[k][j] = curve.curve().s0();
+        vertexZ[k][j] = curve.curve().z0();
+        constant[k][j] = curve.curve().c();
         for (double s : new double[] {0, curve.length()}) {
           double x = curve.x(s);
           double y = curve.y(s);
@@ -107,15 +117,34 @@ final class PreparedSpan {
   }
 
   /**
-   * A lower bound of the distance from a point to conductor j in condition k, m: the plan
-   * distance beyond the conductor's sideways reach, or the height below its lowest point (a
-   * catenary lies below its chord, and swinging only raises it), whichever is larger. Only the
-   * offset from the conductor's plan line counts in plan, which keeps the bound cheap.
+   * A lower bound of the distance from a point to conductor j in condition k, m.
+   *
+   * <p>A swinging conductor: the plan distance beyond its sideways reach, or the height below its
+   * lowest point (a catenary lies below its chord, and swinging only raises it), whichever is
+   * larger. A hanging one: the catenary is convex, so it lies above its tangent at the point's
+   * station; a point below that tangent is at least its distance from the tangent line away in
+   * the vertical plane, v / sqrt(1 + z'^2) for a vertical gap v, and combined with the offset
+   * e from the plane, sqrt(e^2 + (v / sqrt(1 + z'^2))^2). The bound holds for the whole
+   * (unclamped) catenary and so for the span's part of it.
    */
   double lowerBound(int k, int j, double x, double y, double z) {
-    double e = Math.abs(plans[k][j].offset(x, y)) - sideReach[k][j];
-    double below = lowest[k][j] - z;
-    return Math.max(0, Math.max(e, below));
+    SpanFrame plan = plans[k][j];
+    double e = plan.offset(x, y);
+    if (sideReach[k][j] > 0) {
+      double side = Math.abs(e) - sideReach[k][j];
+      double below = lowest[k][j] - z;
+      return Math.max(0, Math.max(side, below));
+    }
+    double c = constant[k][j];
+    double t = (plan.station(x, y) - vertexS[k][j]) / c;
+    double ex = Math.exp(t);
+    double ch = 0.5 * (ex + 1 / ex);
+    double v = vertexZ[k][j] + c * (ch - 1) - z; // gap below the curve at the point's station
+    if (!(v > 0)) {
+      return Math.abs(e);
+    }
+    double across = v / ch; // sqrt(1 + sinh^2 t) = cosh t
+    return Math.sqrt(e * e + across * across);
   }
 
   /** Whether a point lies in the measuring box. */
