@@ -32,7 +32,7 @@ public final class CheckSettings {
 
   @Option(names = "--keep-radius", paramLabel = "M",
       description = "Store vegetation points within this distance of a conductor, m, for rule "
-          + "evaluation and re-evaluation (default 15).")
+          + "evaluation and re-evaluation (default 10).")
   Double keepRadius;
 
   /** The check options these settings describe. */

@@ -182,15 +182,18 @@ public final class CatenaryDistance {
 
   /** Closest approach of point (x, y, z), m, to the conductor swung by phi, radians. */
   public ConductorDistance closest(double x, double y, double z, double phi) {
+    return closestAt(x, y, z, phi, closestStation(x, y, z, phi));
+  }
+
+  /**
+   * The approach of point (x, y, z), m, to the curve point at station s (normally the one from
+   * {@link #closestStation(double, double, double, double)}) of the conductor swung by phi.
+   */
+  public ConductorDistance closestAt(double x, double y, double z, double phi, double s) {
     double ps = plan.station(x, y);
     double pe = plan.offset(x, y);
     double pz = z - zA;
     double cos = Math.cos(phi);
-    double sin = -Math.sin(phi);
-    double dot = ks * ps + kz * pz;
-    double rs = ps * cos + (-kz * pe) * sin + ks * dot * (1 - cos);
-    double rz = pz * cos + (ks * pe) * sin + kz * dot * (1 - cos);
-    double s = closestStation(rs, rz + zA);
     // the closest curve point, relative to A, swung back by +phi
     double cs = s;
     double cz = curveZ(s) - zA;
@@ -202,8 +205,50 @@ public final class CatenaryDistance {
     double dS = ps - ws;
     double dE = pe - we;
     double dZ = pz - wz;
-    return new ConductorDistance(Math.sqrt(dS * dS + dE * dE + dZ * dZ), s, Math.hypot(dS, dE),
+    double horizontal = Math.sqrt(dS * dS + dE * dE); // Math.hypot is slow; no overflow here
+    return new ConductorDistance(Math.sqrt(horizontal * horizontal + dZ * dZ), s, horizontal,
         dZ, phi, plan.x(ws, we), plan.y(ws, we), wz + zA);
+  }
+
+  /**
+   * Station of the closest curve point to point (x, y, z), m, with the conductor swung by phi,
+   * radians: the solve shared by {@link #distanceAt} and {@link #closestAt}, so that a caller
+   * who needs the distance first and the details later solves once.
+   */
+  public double closestStation(double x, double y, double z, double phi) {
+    if (phi == 0) {
+      return closestStation(plan.station(x, y), z);
+    }
+    double ps = plan.station(x, y);
+    double pe = plan.offset(x, y);
+    double pz = z - zA;
+    double cos = Math.cos(phi);
+    double sin = -Math.sin(phi);
+    double dot = ks * ps + kz * pz;
+    double rs = ps * cos + (-kz * pe) * sin + ks * dot * (1 - cos);
+    double rz = pz * cos + (ks * pe) * sin + kz * dot * (1 - cos);
+    return closestStation(rs, rz + zA);
+  }
+
+  /** Distance from (x, y, z), m, to the curve point at station s of the conductor swung by phi. */
+  public double distanceAt(double x, double y, double z, double phi, double s) {
+    if (phi == 0) {
+      double ds = s - plan.station(x, y);
+      double de = plan.offset(x, y);
+      double dz = curveZ(s) - z;
+      return Math.sqrt(ds * ds + de * de + dz * dz);
+    }
+    double ps = plan.station(x, y);
+    double pe = plan.offset(x, y);
+    double pz = z - zA;
+    double cos = Math.cos(phi);
+    double sin = -Math.sin(phi);
+    double dot = ks * ps + kz * pz;
+    double rs = ps * cos + (-kz * pe) * sin + ks * dot * (1 - cos);
+    double re = pe * cos + (kz * ps - ks * pz) * sin;
+    double rz = pz * cos + (ks * pe) * sin + kz * dot * (1 - cos);
+    double dz = curveZ(s) - zA - rz;
+    return Math.sqrt((s - rs) * (s - rs) + re * re + dz * dz);
   }
 
   /** Closest approach of point (x, y, z), m, over swings in [-phiMax, phiMax], radians. */

@@ -52,13 +52,15 @@ public final class ClearanceEngine {
       double treeReach) {
 
     /**
-     * Keep radius 15 m (wider than any built-in zone, with room for several years of growth),
-     * conductor exclusion 0.5 m (a twin bundle's half spacing plus lidar noise), structure
+     * Keep radius 10 m (wider than every built-in zone: the widest, 20 ft in GO 95 fire-threat
+     * areas and the example profile's watch band, stay below 8 m; a wider profile zone makes
+     * its spans INCOMPLETE and asks for a larger radius), conductor exclusion 0.5 m (a twin
+     * bundle's half spacing plus lidar noise), structure
      * exclusion 8 m (a lattice tower's half cross-arm length), tree reach 50 m (taller than
      * almost any tree near a line; common practice, no source).
      */
     public static Options defaults(int threads) {
-      return new Options(15.0, threads, 0.5, 8.0, 50.0);
+      return new Options(10.0, threads, 0.5, 8.0, 50.0);
     }
 
     public Options {

@@ -38,6 +38,7 @@ final class EngineWorker implements Consumer<PointChunk> {
   private final double[] best;
   private final int[] bestConductor;
   private final double[] bestAngle;
+  private final double[] bestStation;
 
   EngineWorker(List<PreparedSpan> spans, SpanIndex index, ConditionSet conditions,
       HeightModel heights, VegetationSelector vegetation, ClearanceEngine.Options options,
@@ -60,6 +61,7 @@ final class EngineWorker implements Consumer<PointChunk> {
     best = new double[nc];
     bestConductor = new int[nc];
     bestAngle = new double[nc];
+    bestStation = new double[nc];
   }
 
   @Override
@@ -152,18 +154,15 @@ final class EngineWorker implements Consumer<PointChunk> {
         if (bound >= best[k] || bound >= cutoff) {
           continue;
         }
-        double phi = 0;
-        double d;
-        if (p.swingMin[k][j] < 0 || p.swingMax[k][j] > 0) {
-          phi = kernel.closestSwingAngle(x, y, z, p.swingMin[k][j], p.swingMax[k][j]);
-          d = kernel.distance(x, y, z, phi);
-        } else {
-          d = kernel.distance(x, y, z);
-        }
+        double phi = p.swingMin[k][j] < 0 || p.swingMax[k][j] > 0
+            ? kernel.closestSwingAngle(x, y, z, p.swingMin[k][j], p.swingMax[k][j]) : 0;
+        double station = kernel.closestStation(x, y, z, phi);
+        double d = kernel.distanceAt(x, y, z, phi, station);
         if (d < best[k]) {
           best[k] = d;
           bestConductor[k] = j;
           bestAngle[k] = phi;
+          bestStation[k] = station;
         }
       }
       nearest = Math.min(nearest, best[k]);
@@ -191,7 +190,7 @@ final class EngineWorker implements Consumer<PointChunk> {
       if (!keep && !newMinimum) {
         continue;
       }
-      ConductorDistance cd = p.kernels[k][j].closest(x, y, z, bestAngle[k]);
+      ConductorDistance cd = p.kernels[k][j].closestAt(x, y, z, bestAngle[k], bestStation[k]);
       if (newMinimum) {
         minimum[sp][k] = new ConditionMinimum(name, group, cd.distance(), cd.horizontal(),
             cd.vertical(), p.names[j], x, y, z);
