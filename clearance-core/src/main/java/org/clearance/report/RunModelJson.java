@@ -14,6 +14,7 @@ import org.clearance.clearance.ConditionSet;
 import org.clearance.clearance.SpanContext;
 import org.clearance.clearance.SpanStatus;
 import org.clearance.io.Json;
+import org.clearance.io.JsonFields;
 import org.clearance.io.AtomicFiles;
 import org.clearance.io.JsonWriter;
 import org.clearance.survey.LinearUnit;
@@ -137,7 +138,7 @@ public final class RunModelJson {
   public static RunModel read(Path file) throws IOException {
     String name = file.toString();
     Json.Value root = Json.parse(Files.readString(file, StandardCharsets.UTF_8), name);
-    Reader r = new Reader(name);
+    JsonFields r = new JsonFields(name);
     Json.Obj o = r.obj(root, "the document");
     String format = r.str(o, "format");
     if (!FORMAT.equals(format)) {
@@ -167,7 +168,7 @@ public final class RunModelJson {
       Json.Obj t = r.obj(v, "a tree");
       List<Double> ds = new ArrayList<>();
       for (Json.Value d : r.arr(t, "base_distances_m")) {
-        ds.add(r.number(d));
+        ds.add(r.number(d, null));
       }
       trees.add(new TreeRecord(r.str(t, "id"), r.str(t, "span_id"), r.num(t, "x"),
           r.num(t, "y"), r.num(t, "top_z"), r.num(t, "base_z"), r.num(t, "height_m"),
@@ -178,7 +179,7 @@ public final class RunModelJson {
         trees);
   }
 
-  private static SpanRecord readSpan(Reader r, Json.Obj s) {
+  private static SpanRecord readSpan(JsonFields r, Json.Obj s) {
     SpanContext context = new SpanContext(r.str(s, "id"), r.str(s, "line_id"),
         r.num(s, "nominal_voltage_kv"), r.num(s, "altitude_m"), r.num(s, "length_m"));
     List<ConductorRecord> conductors = new ArrayList<>();
@@ -212,7 +213,7 @@ public final class RunModelJson {
     }
     List<String> notes = new ArrayList<>();
     for (Json.Value v : r.arr(s, "notes")) {
-      notes.add(r.string(v, "a note"));
+      notes.add(r.text(v, "a note"));
     }
     return new SpanRecord(context, r.str(s, "line_name"), readStructure(r, s, "from"),
         readStructure(r, s, "to"), SpanStatus.valueOf(r.str(s, "status")), r.str(s, "reason"),
@@ -220,60 +221,9 @@ public final class RunModelJson {
         notes);
   }
 
-  private static StructureRecord readStructure(Reader r, Json.Obj s, String key) {
+  private static StructureRecord readStructure(JsonFields r, Json.Obj s, String key) {
     Json.Obj o = r.obj(r.get(s, key), key);
     return new StructureRecord(r.str(o, "id"), r.num(o, "x"), r.num(o, "y"),
         r.num(o, "ground_z"), r.str(o, "type"));
-  }
-
-  /** Typed access with errors that name the file, line and key. */
-  private record Reader(String file) {
-    Json.Value get(Json.Obj o, String key) {
-      Json.Value v = o.members().get(key);
-      if (v == null) {
-        throw new InputException(file, "line " + o.line(), key, "missing");
-      }
-      return v;
-    }
-
-    Json.Obj obj(Json.Value v, String what) {
-      if (v instanceof Json.Obj o) {
-        return o;
-      }
-      throw new InputException(file, "line " + v.line(), null, what + " must be an object");
-    }
-
-    List<Json.Value> arr(Json.Obj o, String key) {
-      Json.Value v = get(o, key);
-      if (v instanceof Json.Arr a) {
-        return a.items();
-      }
-      throw new InputException(file, "line " + v.line(), key, "must be an array");
-    }
-
-    String str(Json.Obj o, String key) {
-      return string(get(o, key), key);
-    }
-
-    String string(Json.Value v, String key) {
-      if (v instanceof Json.Str s) {
-        return s.value();
-      }
-      throw new InputException(file, "line " + v.line(), key, "must be a string");
-    }
-
-    double num(Json.Obj o, String key) {
-      return number(get(o, key));
-    }
-
-    double number(Json.Value v) {
-      if (v instanceof Json.Num n) {
-        return n.value();
-      }
-      if (v instanceof Json.Null) {
-        return Double.NaN;
-      }
-      throw new InputException(file, "line " + v.line(), null, "must be a number or null");
-    }
   }
 }

@@ -14,6 +14,7 @@ import java.util.Optional;
 import org.clearance.InputException;
 import org.clearance.io.AtomicFiles;
 import org.clearance.io.Json;
+import org.clearance.io.JsonFields;
 import org.clearance.io.JsonWriter;
 
 /**
@@ -82,14 +83,14 @@ public final class RunRecordJson {
   public static RunRecord read(Path file) throws IOException {
     String name = file.toString();
     Json.Value root = Json.parse(Files.readString(file, StandardCharsets.UTF_8), name);
-    return read(new Fields(name), root);
+    return read(new JsonFields(name), root);
   }
 
-  private static RunRecord read(Fields f, Json.Value v) {
+  private static RunRecord read(JsonFields f, Json.Value v) {
     Json.Obj o = f.obj(v, "a run record");
     String format = f.str(o, "format");
     if (!FORMAT.equals(format)) {
-      throw new InputException(f.file, "line " + o.line(), "format",
+      throw new InputException(f.file(), "line " + o.line(), "format",
           "not a run record of this version (" + format + "); expected " + FORMAT);
     }
     List<RunRecord.InputFile> inputs = new ArrayList<>();
@@ -121,64 +122,5 @@ public final class RunRecordJson {
     return new RunRecord(f.str(o, "command"), f.str(o, "tool_version"),
         f.time(o, "started"), f.time(o, "finished"), inputs, profile, params, timings, outputs,
         source);
-  }
-
-  /** Typed access with errors that name the file, line and key. */
-  private record Fields(String file) {
-    Json.Value get(Json.Obj o, String key) {
-      Json.Value v = o.members().get(key);
-      if (v == null) {
-        throw new InputException(file, "line " + o.line(), key, "missing");
-      }
-      return v;
-    }
-
-    Json.Obj obj(Json.Value v, String what) {
-      if (v instanceof Json.Obj o) {
-        return o;
-      }
-      throw new InputException(file, "line " + v.line(), null, what + " must be an object");
-    }
-
-    List<Json.Value> arr(Json.Obj o, String key) {
-      if (get(o, key) instanceof Json.Arr a) {
-        return a.items();
-      }
-      throw new InputException(file, "line " + o.line(), key, "must be an array");
-    }
-
-    String str(Json.Obj o, String key) {
-      return text(get(o, key), key);
-    }
-
-    String text(Json.Value v, String key) {
-      if (v instanceof Json.Str s) {
-        return s.value();
-      }
-      throw new InputException(file, "line " + v.line(), key, "must be a string");
-    }
-
-    double num(Json.Obj o, String key) {
-      return number(get(o, key), key);
-    }
-
-    double number(Json.Value v, String key) {
-      if (v instanceof Json.Num n) {
-        return n.value();
-      }
-      if (v instanceof Json.Null) {
-        return Double.NaN;
-      }
-      throw new InputException(file, "line " + v.line(), key, "must be a number");
-    }
-
-    Instant time(Json.Obj o, String key) {
-      String s = str(o, key);
-      try {
-        return Instant.parse(s);
-      } catch (DateTimeParseException e) {
-        throw new InputException(file, "line " + o.line(), key, "not an ISO-8601 time: " + s);
-      }
-    }
   }
 }
