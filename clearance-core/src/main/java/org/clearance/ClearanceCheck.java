@@ -146,12 +146,14 @@ public final class ClearanceCheck {
         survey.units().source());
     stop("inputs");
 
-    SurveyScan scan = scan(survey);
+    Progress progress = new Progress(console, survey.pointCount());
+    SurveyScan scan = scan(survey, progress);
     say("ground: %s", scan.ground.source().describe());
     stop("ground");
 
-    WireResult wires = WireFinder.find(survey, layout, scan.ground::heightAboveGround,
-        options.wires());
+    WireResult wires = new WireFinder(options.wires()).find(consumers -> survey.readParallel(
+        options.threads(), progress.wrap("wires", consumers)), layout,
+        scan.ground::heightAboveGround);
     long fittedCount = wires.spans().stream().mapToLong(s -> s.fitted().size()).sum();
     say("wires: %d conductors fitted in %d spans; %d structure change(s)", fittedCount,
         wires.spans().size(), wires.structureChanges().size());
@@ -174,7 +176,8 @@ public final class ClearanceCheck {
     Measurement measured;
     try (NearPointWriter out = new NearPointWriter(dir.resolve(NearPointFile.FILE_NAME),
         engine.nearPointLayout())) {
-      measured = engine.measure(survey::readParallel, out);
+      measured = engine.measure((threads, consumers) -> survey.readParallel(threads,
+          progress.wrap("clearance", consumers)), out);
       say("clearance: %,d vegetation points stored within %.1f m; %d trees near the line",
           out.count(), options.engine().keepRadius(), measured.trees().size());
     }
@@ -236,10 +239,10 @@ public final class ClearanceCheck {
   /** What the first pass over the survey collects. */
   private record SurveyScan(GroundModel ground, long[] classCounts) {}
 
-  private SurveyScan scan(Survey survey) {
+  private SurveyScan scan(Survey survey, Progress progress) {
     List<GroundModelBuilder> builders = new ArrayList<>();
     List<long[]> counts = new ArrayList<>();
-    survey.readParallel(options.threads(), () -> {
+    survey.readParallel(options.threads(), progress.wrap("ground", () -> {
       GroundModelBuilder b = new GroundModelBuilder(options.ground());
       long[] c = new long[256];
       builders.add(b);
@@ -252,7 +255,7 @@ public final class ClearanceCheck {
         }
       };
       return worker;
-    });
+    }));
     GroundModelBuilder first = builders.get(0);
     long[] total = new long[256];
     for (int i = 0; i < builders.size(); i++) {
