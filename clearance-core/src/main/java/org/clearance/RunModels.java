@@ -49,8 +49,9 @@ final class RunModels {
     for (SpanWires sw : wires.spans()) {
       SpanModel model = models.get(sw.span().id());
       SpanClearance clearance = clearances.get(sw.span().id());
+      double coverage = model == null ? Double.NaN : SurveyCoverage.share(model, ground);
       spans.add(span(sw, model, clearance, wires.structureChanges(), conditions,
-          options.engine(), lineNames.getOrDefault(sw.span().lineId(), "")));
+          options.engine(), lineNames.getOrDefault(sw.span().lineId(), ""), coverage));
     }
     List<TreeRecord> trees = new ArrayList<>();
     int n = 0;
@@ -66,7 +67,7 @@ final class RunModels {
 
   private static SpanRecord span(SpanWires sw, SpanModel model, SpanClearance clearance,
       List<StructureChange> changes, ConditionSet conditions, ClearanceEngine.Options engine,
-      String lineName) {
+      String lineName, double coverage) {
     Span span = sw.span();
     Map<String, ConductorModel> byName = new HashMap<>();
     if (model != null) {
@@ -88,14 +89,19 @@ final class RunModels {
         states.add(st.map(CurveRecord::of));
         failures.add(m.failures().get(k));
         if (st.isEmpty()) {
-          problems.add(conditions.names().get(k) + " for " + c.name() + ": "
-              + m.failures().get(k).orElse("not computed"));
+          problems.add("condition " + conditions.names().get(k) + " not computed for "
+              + c.name() + ": " + m.failures().get(k).orElse("not computed"));
         }
       }
       conductors.add(new ConductorRecord(c.name(), c.role().name().toLowerCase(Locale.ROOT),
           c.isFitted() ? "fitted" : "not_assessed", c.reason().orElse(""),
           c.quality().points(), c.quality().coveragePct(), c.quality().rmsM(),
           c.quality().maxGapM(), states, failures));
+    }
+    if (coverage < SurveyCoverage.MIN_SHARE) {
+      problems.add(String.format(Locale.ROOT, "the survey covers %.0f %% of the span's corridor "
+          + "(sampled every %.0f m, %.0f m beyond the outer conductors); the rest was not "
+          + "looked at", 100 * coverage, SurveyCoverage.STEP_M, SurveyCoverage.MARGIN_M));
     }
     boolean anyFitted = !sw.fitted().isEmpty();
     SpanStatus status;
@@ -108,7 +114,7 @@ final class RunModels {
       List<String> parts = new ArrayList<>();
       sw.reason().ifPresent(parts::add);
       if (!problems.isEmpty()) {
-        parts.add("conditions not computed: " + String.join("; ", problems));
+        parts.add(String.join("; ", problems));
       }
       reason = String.join("; ", parts);
     } else {
