@@ -64,8 +64,10 @@ public final class RunAssessor {
     if (profile == null) {
       List<SpanResult> out = new ArrayList<>();
       for (SpanRecord s : model.spans()) {
+        String noProfile =
+            "no rule profile given: distances were measured but not checked against any zone";
         String reason = s.status() == SpanStatus.NOT_ASSESSED ? s.reason()
-            : "no rule profile given: distances were measured but not checked against any zone";
+            : s.reason().isEmpty() ? noProfile : s.reason() + "; " + noProfile;
         out.add(new SpanResult(s, SpanStatus.NOT_ASSESSED, reason, List.of(),
             OptionalInt.empty(), 0, 0));
       }
