@@ -47,6 +47,13 @@ final class PositionMatcher {
   static final double FORBIDDEN = 1e9;
   /** Tie-break per step of left-to-right rank, for positions without geometry. */
   static final double TIE_BREAK = 1e-6;
+  /**
+   * For positions without geometry (no offset, no height, no attach_z): cost of a shield
+   * position on a wire that is not among the highest (as many as there are shield positions),
+   * and of a phase position on one that is. Shield wires hang at the top of the structure
+   * (methods.md 1.6); below the role-label cost, so labels still decide where they speak.
+   */
+  static final double HEIGHT_ROLE_COST = 2.0;
 
   /**
    * One wire as the matcher sees it.
@@ -86,6 +93,8 @@ final class PositionMatcher {
       return none;
     }
     int[] rank = leftToRight(wires);
+    boolean[] top = highest(wires, (int) slots.stream()
+        .filter(t -> t.position().role() == ConductorPosition.Role.SHIELD).count());
     // Without a ground elevation the shift stands for ground plus extension: no prior on it.
     boolean priorA = Double.isFinite(groundA);
     boolean priorB = Double.isFinite(groundB);
@@ -116,6 +125,10 @@ final class PositionMatcher {
         for (int j = 0; j < m; j++) {
           double c = pairCost(wires.get(i), slots.get(j), gA, gB, shift);
           c += TIE_BREAK * Math.abs(rank[i] - j);
+          if (withoutGeometry(slots.get(j))
+              && top[i] != (slots.get(j).position().role() == ConductorPosition.Role.SHIELD)) {
+            c += HEIGHT_ROLE_COST;
+          }
           cost[i][j] = c <= GATE ? c : FORBIDDEN;
         }
         for (int j = m; j < n + m; j++) {
@@ -162,6 +175,34 @@ final class PositionMatcher {
       rank[order[r]] = r;
     }
     return rank;
+  }
+
+  /** The {@code k} highest wires (mean elevation at the ends they reach). */
+  private static boolean[] highest(List<Wire> wires, int k) {
+    Integer[] order = new Integer[wires.size()];
+    for (int i = 0; i < order.length; i++) {
+      order[i] = i;
+    }
+    Arrays.sort(order, (a, b) -> Double.compare(elevation(wires.get(b)),
+        elevation(wires.get(a))));
+    boolean[] top = new boolean[order.length];
+    for (int r = 0; r < Math.min(k, order.length); r++) {
+      top[order[r]] = true;
+    }
+    return top;
+  }
+
+  private static double elevation(Wire w) {
+    if (w.nearA() && w.nearB()) {
+      return 0.5 * (w.zA() + w.zB());
+    }
+    return w.nearA() ? w.zA() : w.zB();
+  }
+
+  private static boolean withoutGeometry(Slot s) {
+    ConductorPosition p = s.position();
+    return !Double.isFinite(p.offsetM()) && !Double.isFinite(p.attachHeightM())
+        && !Double.isFinite(s.attachZA()) && !Double.isFinite(s.attachZB());
   }
 
   private static double mean(Wire w) {

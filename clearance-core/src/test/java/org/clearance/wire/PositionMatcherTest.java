@@ -1,6 +1,8 @@
 package org.clearance.wire;
 
 import static org.junit.jupiter.api.Assertions.assertArrayEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+import static org.junit.jupiter.api.Assertions.assertEquals;
 
 import java.util.List;
 import java.util.Optional;
@@ -63,6 +65,25 @@ class PositionMatcherTest {
         new PositionMatcher.Wire(4.1, 4.1, 531.9, 531.9, Optional.empty(), true, true));
     assertArrayEquals(new int[] {3, 0, 2, 1},
         PositionMatcher.match(w, stack, Double.NaN, Double.NaN));
+  }
+
+  @Test
+  void withoutAnyGeometryShieldsGoToTheHighestWires() {
+    // Regression: with neither offset_m nor attach_height_m in the specification, positions
+    // were filled left to right only, so an earth wire could take a phase position and a phase
+    // a shield's (seen on the open corridor tile, all wires labelled 14).
+    double n = Double.NaN;
+    List<PositionMatcher.Slot> bare = List.of(slot("A", Role.PHASE, n, n),
+        slot("B", Role.PHASE, n, n), slot("C", Role.PHASE, n, n), slot("E", Role.SHIELD, n, n));
+    Optional<Role> labelledPhase = Optional.of(Role.PHASE);
+    List<PositionMatcher.Wire> w = List.of(wire(-6, 20, 0, labelledPhase),
+        wire(0, 20, 0, labelledPhase), wire(6, 20, 0, labelledPhase),
+        wire(-7, 30, 0, labelledPhase));
+    int[] got = PositionMatcher.match(w, bare, GROUND_A, GROUND_B);
+    assertEquals(3, got[3], "the highest wire takes the shield position");
+    for (int i = 0; i < 3; i++) {
+      assertTrue(got[i] >= 0 && got[i] < 3, "phases take phase positions: " + got[i]);
+    }
   }
 
   @Test
