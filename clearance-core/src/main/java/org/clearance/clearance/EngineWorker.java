@@ -16,6 +16,12 @@ final class EngineWorker implements Consumer<PointChunk> {
 
   /** Points buffered before they are handed to the writer. */
   private static final int FLUSH_POINTS = 4096;
+  /**
+   * Lowest return that goes into the canopy for the tree search, m above ground: half the 2 m
+   * minimum tree height (Popescu and Wynne 2004, methods.md 5.1); lower vegetation cannot hold a
+   * tree top and is most of the points.
+   */
+  static final double CANOPY_MIN_HEIGHT_M = 1.0;
 
   /** What happened to a point in one span. */
   private enum Outcome { MEASURED, CONDUCTOR, STRUCTURE }
@@ -117,7 +123,7 @@ final class EngineWorker implements Consumer<PointChunk> {
         notVegetation = true;
       }
     }
-    if (canopy != null && inTreeRegion && !notVegetation) {
+    if (canopy != null && inTreeRegion && !notVegetation && hag >= CANOPY_MIN_HEIGHT_M) {
       canopy.add(x, y, z);
     }
   }

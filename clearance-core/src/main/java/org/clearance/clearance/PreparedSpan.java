@@ -158,9 +158,9 @@ final class PreparedSpan {
         && e <= eMax + treePad;
   }
 
-  /** Cell keys of the plan grid that the tree region (which holds the box) touches. */
-  List<Long> cells(double cell) {
-    List<Long> out = new ArrayList<>();
+  /** Cells (x, y cell coordinates) of the plan grid that the tree region touches. */
+  List<long[]> cells(double cell) {
+    List<long[]> out = new ArrayList<>();
     if (!measurable()) {
       return out;
     }
@@ -185,7 +185,7 @@ final class PreparedSpan {
         double e = frame.offset(x, y);
         double pad = treePad + halfDiagonal;
         if (s >= sMin - pad && s <= sMax + pad && e >= eMin - pad && e <= eMax + pad) {
-          out.add(SpanIndex.cellKey(x, y));
+          out.add(new long[] {cx, cy});
         }
       }
     }

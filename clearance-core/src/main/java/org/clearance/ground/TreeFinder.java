@@ -98,6 +98,10 @@ final class TreeFinder {
         if (n == 0) {
           continue;
         }
+        float v = chm[i];
+        if (!Float.isNaN(v) && !medianMayExceed(nb, n, (float) (v + pitDepth))) {
+          continue; // not a pit, whatever the exact median: no sort needed
+        }
         Arrays.sort(nb, 0, n);
         float median = (n % 2 == 1) ? nb[n / 2] : 0.5f * (nb[n / 2 - 1] + nb[n / 2]);
         boolean pit = !Float.isNaN(chm[i]) && n >= MIN_NEIGHBOURS_TO_FILL
@@ -109,6 +113,21 @@ final class TreeFinder {
       }
     }
     return out;
+  }
+
+  /**
+   * Whether the median of {@code nb[0..n)} can exceed {@code level}: only when more than half of
+   * the values exceed it (odd n), or at least half (even n, the median being the mean of the two
+   * middle values). A count, cheaper than the sort the median needs.
+   */
+  static boolean medianMayExceed(float[] nb, int n, float level) {
+    int above = 0;
+    for (int k = 0; k < n; k++) {
+      if (nb[k] > level) {
+        above++;
+      }
+    }
+    return n % 2 == 1 ? above > n / 2 : above >= n / 2;
   }
 
   /** Indices of the variable-window local maxima of at least the minimum height. */
