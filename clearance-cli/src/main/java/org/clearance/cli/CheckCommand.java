@@ -3,7 +3,6 @@ package org.clearance.cli;
 import java.io.IOException;
 import java.io.PrintWriter;
 import java.nio.file.Path;
-import java.util.List;
 import java.util.Optional;
 import java.util.concurrent.Callable;
 import org.clearance.CheckInputs;
@@ -29,17 +28,7 @@ import picocli.CommandLine.Option;
     mixinStandardHelpOptions = true)
 public final class CheckCommand implements Callable<Integer> {
 
-  @Option(names = "--survey", arity = "1..*", required = true, paramLabel = "FILE",
-      description = "Uncompressed LAS files (tiles) of the survey.")
-  List<Path> survey;
-
-  @Option(names = "--structures", required = true, paramLabel = "FILE",
-      description = "Structures file (CSV or GeoJSON), see docs/line-inputs.md.")
-  Path structures;
-
-  @Option(names = "--line", arity = "1..*", required = true, paramLabel = "FILE",
-      description = "Line specification (YAML), one per line.")
-  List<Path> lines;
+  @Mixin LineInputOptions inputs;
 
   @Option(names = "--out", required = true, paramLabel = "DIR",
       description = "Run folder to write (new, or an earlier run folder to replace).")
@@ -50,10 +39,6 @@ public final class CheckCommand implements Callable<Integer> {
           + "Without it the spans are measured but not judged.")
   String rules;
 
-  @Option(names = "--conductors", paramLabel = "FILE",
-      description = "Your own conductor library (CSV), added to the built-in one.")
-  Path conductors;
-
   @Mixin CheckSettings settings;
 
   @Mixin UnitsOptions units;
@@ -63,9 +48,9 @@ public final class CheckCommand implements Callable<Integer> {
   @Override
   public Integer call() throws IOException {
     PrintWriter console = spec.commandLine().getOut();
-    CheckInputs inputs = new CheckInputs(survey, units.choice(), structures, lines,
-        Optional.ofNullable(conductors), Optional.ofNullable(rules), out);
-    new ClearanceCheck(settings.options(spec), console).run(inputs, ClearanceCommand.version());
+    CheckInputs files = new CheckInputs(inputs.survey, units.choice(), inputs.structures,
+        inputs.lines, Optional.ofNullable(inputs.conductors), Optional.ofNullable(rules), out);
+    new ClearanceCheck(settings.options(spec), console).run(files, ClearanceCommand.version());
     console.println("run folder: " + out.toAbsolutePath().normalize());
     console.flush();
     return ClearanceCommand.EXIT_OK;

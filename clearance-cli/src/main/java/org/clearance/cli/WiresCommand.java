@@ -3,17 +3,12 @@ package org.clearance.cli;
 import java.io.PrintWriter;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.util.ArrayList;
-import java.util.List;
 import java.util.Locale;
 import java.util.concurrent.Callable;
 import org.clearance.InputException;
 import org.clearance.ground.GroundModel;
 import org.clearance.ground.GroundModelBuilder;
 import org.clearance.ground.GroundOptions;
-import org.clearance.line.ConductorLibrary;
-import org.clearance.line.LineSpec;
-import org.clearance.line.LineSpecReader;
 import org.clearance.line.SpanLayout;
 import org.clearance.line.StructureReader;
 import org.clearance.survey.Survey;
@@ -47,21 +42,7 @@ public final class WiresCommand implements Callable<Integer> {
   /** Name of the output file in the output folder. */
   public static final String CONDUCTORS_FILE = ConductorTable.FILE_NAME;
 
-  @Option(names = "--survey", arity = "1..*", required = true, paramLabel = "FILE",
-      description = "LAS files (tiles) of the survey.")
-  List<Path> survey;
-
-  @Option(names = "--structures", required = true, paramLabel = "FILE",
-      description = "Structures file, CSV or GeoJSON (docs/line-inputs.md).")
-  Path structures;
-
-  @Option(names = "--line", arity = "1..*", required = true, paramLabel = "FILE",
-      description = "Line specification, YAML, one per line (docs/line-inputs.md).")
-  List<Path> lines;
-
-  @Option(names = "--conductors", paramLabel = "FILE",
-      description = "Extra conductor types, CSV, added to the built-in library.")
-  Path conductors;
+  @Mixin LineInputOptions inputs;
 
   @Option(names = "--out", required = true, paramLabel = "DIR",
       description = "Output folder (created when missing).")
@@ -91,14 +72,9 @@ public final class WiresCommand implements Callable<Integer> {
     if (Files.exists(out) && !Files.isDirectory(out)) {
       throw new InputException(out, null, "--out", "exists and is not a folder");
     }
-    Survey s = Survey.open(survey, units.choice());
-    ConductorLibrary library = conductors == null ? ConductorLibrary.builtin()
-        : ConductorLibrary.builtin().withUserFile(conductors);
-    List<LineSpec> specs = new ArrayList<>();
-    for (Path p : lines) {
-      specs.add(LineSpecReader.read(p, library));
-    }
-    SpanLayout layout = SpanLayout.build(StructureReader.read(structures, s.units()), specs);
+    Survey s = Survey.open(inputs.survey, units.choice());
+    SpanLayout layout = SpanLayout.build(StructureReader.read(inputs.structures, s.units()),
+        inputs.specs());
     GroundModel ground = GroundModelBuilder.build(s, GroundOptions.defaults(), n);
     WireFinderOptions options = WireFinderOptions.defaults(n);
     if (keepPositions) {

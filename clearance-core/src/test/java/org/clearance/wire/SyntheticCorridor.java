@@ -1,6 +1,5 @@
 package org.clearance.wire;
 
-import java.util.ArrayList;
 import java.util.List;
 import java.util.Random;
 import java.util.function.Consumer;
