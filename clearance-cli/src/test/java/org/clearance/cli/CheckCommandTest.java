@@ -29,15 +29,15 @@ class CheckCommandTest {
         DemoOptions.defaults().withSpanCount(3).withPointDensity(1.0));
   }
 
-  private WiresCommandTest.Run check(Path structures, Path line, Path out, String... more) {
+  private CliRun check(Path structures, Path line, Path out, String... more) {
     List<String> args = new java.util.ArrayList<>(List.of("check", "--survey",
         demo.survey().toString(), "--structures", structures.toString(), "--line",
         line.toString(), "--out", out.toString(), "--threads", "2"));
     args.addAll(List.of(more));
-    return WiresCommandTest.run(args.toArray(new String[0]));
+    return CliRun.of(args.toArray(new String[0]));
   }
 
-  private static void assertOneLineInputError(WiresCommandTest.Run r, String... parts) {
+  private static void assertOneLineInputError(CliRun r, String... parts) {
     assertEquals(ClearanceCommand.EXIT_INPUT, r.exit(), r.err());
     assertEquals(1, r.err().lines().count(), "one line, no stack trace: " + r.err());
     for (String p : parts) {
@@ -56,7 +56,7 @@ class CheckCommandTest {
   @Test
   void wholeCheckWritesTheRunFolder() throws IOException {
     Path out = dir.resolve("run");
-    WiresCommandTest.Run r = check(demo.structures(), demo.lineSpec(), out, "--rules",
+    CliRun r = check(demo.structures(), demo.lineSpec(), out, "--rules",
         "example-utility", "--units", "ft");
     assertEquals(ClearanceCommand.EXIT_OK, r.exit(), r.err());
     for (String f : List.of("worklist.csv", "spans.csv", "conductors.csv", "sites.gpkg",
@@ -113,7 +113,7 @@ class CheckCommandTest {
   @Test
   void demoWritesInputsAndRun() {
     Path out = dir.resolve("demo");
-    WiresCommandTest.Run r = WiresCommandTest.run("demo", "--out", out.toString(), "--spans",
+    CliRun r = CliRun.of("demo", "--out", out.toString(), "--spans",
         "3", "--density", "1", "--threads", "2");
     assertEquals(ClearanceCommand.EXIT_OK, r.exit(), r.err());
     assertTrue(Files.isRegularFile(out.resolve("input/survey.las")));

@@ -5,13 +5,12 @@ import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.io.IOException;
-import java.io.PrintWriter;
-import java.io.StringWriter;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
+import org.clearance.report.CsvText;
 import org.clearance.report.RunFixture;
 import org.clearance.report.RunRecord;
 import org.clearance.report.RunRecordJson;
@@ -41,15 +40,9 @@ class EvaluateCommandTest {
   @TempDir Path tmp;
   private Path run;
 
-  record Run(int exit, String out, String err) {}
 
-  static Run run(String... args) {
-    StringWriter out = new StringWriter();
-    StringWriter err = new StringWriter();
-    var cl = ClearanceCommand.commandLine();
-    cl.setOut(new PrintWriter(out));
-    cl.setErr(new PrintWriter(err));
-    return new Run(cl.execute(args), out.toString(), err.toString());
+  static CliRun run(String... args) {
+    return CliRun.of(args);
   }
 
   @BeforeEach
@@ -68,13 +61,13 @@ class EvaluateCommandTest {
   }
 
   private static List<Map<String, String>> worklist(Path dir) throws IOException {
-    return Csv.rows(Files.readString(dir.resolve("worklist.csv")));
+    return CsvText.rows(Files.readString(dir.resolve("worklist.csv")));
   }
 
   @Test
   void changingAZoneDistanceChangesTheWorkList() throws IOException {
     Path a = tmp.resolve("a");
-    Run r = run("evaluate", run.toString(), "--rules", profile("p3", 3.0).toString(),
+    CliRun r = run("evaluate", run.toString(), "--rules", profile("p3", 3.0).toString(),
         "--out", a.toString());
     assertEquals(0, r.exit(), r.err());
     assertTrue(r.out().contains("Rule profile kestrel-check"), r.out());
@@ -101,7 +94,7 @@ class EvaluateCommandTest {
     assertEquals(0, run("evaluate", run.toString(), "--rules", profile("p2", 2.0).toString(),
         "--out", c.toString()).exit());
     assertEquals(List.of(), ids(worklist(c)));
-    List<Map<String, String>> spans = Csv.rows(Files.readString(c.resolve("spans.csv")));
+    List<Map<String, String>> spans = CsvText.rows(Files.readString(c.resolve("spans.csv")));
     assertEquals("ASSESSED", spans.get(1).get("status"));
     assertEquals("0", spans.get(1).get("n_sites"));
     assertEquals("NOT_ASSESSED", spans.get(0).get("status"), "still not assessed");
@@ -158,23 +151,23 @@ class EvaluateCommandTest {
 
   @Test
   void badInputIsExitTwoWithOneLine() throws IOException {
-    Run missing = run("evaluate", tmp.resolve("nope").toString(), "--rules", "ca-prc4293");
+    CliRun missing = run("evaluate", tmp.resolve("nope").toString(), "--rules", "ca-prc4293");
     assertEquals(2, missing.exit());
     assertTrue(missing.err().startsWith("clearance: "), missing.err());
     assertFalse(missing.err().contains("\tat "), "no stack trace");
-    Run profile = run("evaluate", run.toString(), "--rules", "no-such-profile");
+    CliRun profile = run("evaluate", run.toString(), "--rules", "no-such-profile");
     assertEquals(2, profile.exit());
     assertTrue(profile.err().contains("no-such-profile"), profile.err());
     Path full = Files.createDirectory(tmp.resolve("full"));
     Files.writeString(full.resolve("x.txt"), "x");
-    Run notEmpty = run("evaluate", run.toString(), "--rules", "ca-prc4293", "--out",
+    CliRun notEmpty = run("evaluate", run.toString(), "--rules", "ca-prc4293", "--out",
         full.toString());
     assertEquals(2, notEmpty.exit());
     assertTrue(notEmpty.err().contains("not empty"), notEmpty.err());
     assertEquals(2, run("evaluate", run.toString(), "--rules", "ca-prc4293", "--units", "usft")
         .exit());
     Files.delete(run.resolve("near-points.bin"));
-    Run noPoints = run("evaluate", run.toString(), "--rules", "ca-prc4293");
+    CliRun noPoints = run("evaluate", run.toString(), "--rules", "ca-prc4293");
     assertEquals(2, noPoints.exit());
     assertTrue(noPoints.err().contains("near-points.bin"), noPoints.err());
   }

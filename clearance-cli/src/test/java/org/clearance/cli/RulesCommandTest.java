@@ -17,13 +17,13 @@ class RulesCommandTest {
 
   @TempDir Path tmp;
 
-  private static EvaluateCommandTest.Run run(String... args) {
-    return EvaluateCommandTest.run(args);
+  private static CliRun run(String... args) {
+    return CliRun.of(args);
   }
 
   @Test
   void listNamesEveryBuiltInProfile() {
-    EvaluateCommandTest.Run r = run("rules", "list");
+    CliRun r = run("rules", "list");
     assertEquals(0, r.exit(), r.err());
     for (String name : RuleProfiles.names()) {
       assertTrue(r.out().contains(name), name);
@@ -33,7 +33,7 @@ class RulesCommandTest {
 
   @Test
   void showPrintsTheResolvedProfile() {
-    EvaluateCommandTest.Run r = run("rules", "show", "example-utility");
+    CliRun r = run("rules", "show", "example-utility");
     assertEquals(0, r.exit(), r.err());
     // inherited from ca-prc4293 and the example's own zones, growth and fall-in
     assertTrue(r.out().contains("builds on: example-utility -> ca-prc4293"), r.out());
@@ -53,14 +53,14 @@ class RulesCommandTest {
         "name: good", "title: T", "source: S", "zones:",
         "  - {name: z, priority: 1, violation_reference: true, conditions: [all], "
             + "radial_m: 2}", ""));
-    EvaluateCommandTest.Run ok = run("rules", "validate", good.toString());
+    CliRun ok = run("rules", "validate", good.toString());
     assertEquals(0, ok.exit(), ok.err());
     assertTrue(ok.out().contains("valid rule profile good (1 zone;"), ok.out());
     Path bad = Files.writeString(tmp.resolve("bad.yaml"), String.join("\n",
         "name: bad", "title: T", "source: S", "zones:",
         "  - {name: z, priority: 1, violation_reference: true, conditions: [all], "
             + "radial_m: 2, colour: red}", ""));
-    EvaluateCommandTest.Run no = run("rules", "validate", bad.toString());
+    CliRun no = run("rules", "validate", bad.toString());
     assertEquals(2, no.exit());
     assertTrue(no.err().contains("bad.yaml"), no.err());
     assertTrue(no.err().contains("colour"), no.err());
@@ -70,15 +70,15 @@ class RulesCommandTest {
 
   @Test
   void explainADescribedSpan() {
-    EvaluateCommandTest.Run r = run("rules", "explain", "--profile", "ca-prc4293",
+    CliRun r = run("rules", "explain", "--profile", "ca-prc4293",
         "--voltage-kv", "115", "--length-m", "200");
     assertEquals(0, r.exit(), r.err());
     // PRC 4293 (published): 10 ft at 110 kV and above, 4 ft (1.2192 m) from 2.4 to < 72 kV
     assertTrue(r.out().contains("less than 3.048 m"), r.out());
-    EvaluateCommandTest.Run low = run("rules", "explain", "--profile", "ca-prc4293",
+    CliRun low = run("rules", "explain", "--profile", "ca-prc4293",
         "--voltage-kv", "69", "--length-m", "120", "--altitude-m", "300");
     assertTrue(low.out().contains("less than 1.219 m"), low.out());
-    EvaluateCommandTest.Run below = run("rules", "explain", "--profile", "ca-prc4293",
+    CliRun below = run("rules", "explain", "--profile", "ca-prc4293",
         "--voltage-kv", "1", "--length-m", "50");
     assertEquals(0, below.exit());
     assertTrue(below.out().contains("NOT ASSESSED"), below.out());
@@ -87,12 +87,12 @@ class RulesCommandTest {
   @Test
   void explainASpanOfARunFolder() throws IOException {
     Path dir = RunFixture.metric().write(Files.createDirectory(tmp.resolve("run")));
-    EvaluateCommandTest.Run r = run("rules", "explain", "--profile", "example-utility",
+    CliRun r = run("rules", "explain", "--profile", "example-utility",
         "--run", dir.toString(), "--span", "KV-10-11");
     assertEquals(0, r.exit(), r.err());
     assertTrue(r.out().contains("Span KV-10-11 of line KV"), r.out());
     assertTrue(r.out().contains("work-trigger"), r.out());
-    EvaluateCommandTest.Run missing = run("rules", "explain", "--profile", "example-utility",
+    CliRun missing = run("rules", "explain", "--profile", "example-utility",
         "--run", dir.toString(), "--span", "KV-99");
     assertEquals(2, missing.exit());
     assertTrue(missing.err().contains("no span 'KV-99'"), missing.err());

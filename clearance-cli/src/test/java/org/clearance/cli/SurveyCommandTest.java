@@ -5,8 +5,6 @@ import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.io.IOException;
-import java.io.PrintWriter;
-import java.io.StringWriter;
 import java.nio.ByteBuffer;
 import java.nio.ByteOrder;
 import java.nio.file.Files;
@@ -32,19 +30,12 @@ class SurveyCommandTest {
 
   @TempDir Path dir;
 
-  record Run(int exit, String out, String err) {}
 
-  static Run run(String... args) {
-    StringWriter out = new StringWriter();
-    StringWriter err = new StringWriter();
-    var cl = ClearanceCommand.commandLine();
-    cl.setOut(new PrintWriter(out));
-    cl.setErr(new PrintWriter(err));
-    int exit = cl.execute(args);
-    return new Run(exit, out.toString(), err.toString());
+  static CliRun run(String... args) {
+    return CliRun.of(args);
   }
 
-  private static Map<String, Object> json(Run r) {
+  private static Map<String, Object> json(CliRun r) {
     assertEquals(0, r.exit(), r.err());
     return MiniJson.object(MiniJson.parse(r.out()));
   }
@@ -115,7 +106,7 @@ class SurveyCommandTest {
 
   @Test
   void textSaysWhenUnitsAreNotStated() {
-    Run r = run("survey", SurveyTestFiles.open("warsaw_small.las").toString());
+    CliRun r = run("survey", SurveyTestFiles.open("warsaw_small.las").toString());
     assertEquals(0, r.exit(), r.err());
     assertTrue(r.out().contains("not stated (WKT record 2112 holds no CRS definition)"),
         r.out());
@@ -126,7 +117,7 @@ class SurveyCommandTest {
 
   @Test
   void textGivesDensityWhenTheUnitIsKnown() {
-    Run r = run("survey", SurveyTestFiles.open("topography_forest.las").toString());
+    CliRun r = run("survey", SurveyTestFiles.open("topography_forest.las").toString());
     assertEquals(0, r.exit(), r.err());
     assertTrue(r.out().contains("points per square metre over"), r.out());
     assertTrue(r.out().contains("EPSG:2949"), r.out());
@@ -176,7 +167,7 @@ class SurveyCommandTest {
   private void refused(byte[] bytes, String words) throws IOException {
     Path p = Files.write(dir.resolve("bad.las"), bytes);
     long filesBefore = count();
-    Run r = run("survey", "--json", p.toString());
+    CliRun r = run("survey", "--json", p.toString());
     assertEquals(ClearanceCommand.EXIT_INPUT, r.exit(), r.err());
     assertEquals("", r.out());
     String err = r.err().strip();
@@ -216,7 +207,7 @@ class SurveyCommandTest {
 
   @Test
   void missingFileIsAnInputError() {
-    Run r = run("survey", dir.resolve("absent.las").toString());
+    CliRun r = run("survey", dir.resolve("absent.las").toString());
     assertEquals(ClearanceCommand.EXIT_INPUT, r.exit());
     assertEquals("clearance: " + dir.resolve("absent.las") + ": no such file", r.err().strip());
   }
@@ -224,23 +215,23 @@ class SurveyCommandTest {
   @Test
   void contradictoryUnitsAreInputErrors() {
     String mvk = SurveyTestFiles.open("mvk-thin.las").toString();
-    Run conflict = run("survey", "--survey-units", "m", mvk);
+    CliRun conflict = run("survey", "--survey-units", "m", mvk);
     assertEquals(ClearanceCommand.EXIT_INPUT, conflict.exit());
     assertTrue(conflict.err().contains("the file states US survey foot"), conflict.err());
-    Run both = run("survey", "--survey-units", "m", "--vertical-units", "ft", mvk);
+    CliRun both = run("survey", "--survey-units", "m", "--vertical-units", "ft", mvk);
     assertEquals(ClearanceCommand.EXIT_INPUT, both.exit());
     assertTrue(both.err().contains("not both"), both.err());
-    Run unknown = run("survey", "--survey-units", "furlong", mvk);
+    CliRun unknown = run("survey", "--survey-units", "furlong", mvk);
     assertEquals(ClearanceCommand.EXIT_INPUT, unknown.exit());
     assertTrue(unknown.err().contains("'furlong' is not a unit"), unknown.err());
-    Run replaced = run("survey", "--json", "--survey-units", "m", "--override-file-units", mvk);
+    CliRun replaced = run("survey", "--json", "--survey-units", "m", "--override-file-units", mvk);
     assertEquals("m", json(replaced).get("horizontal_unit"));
   }
 
   @Test
   void tilesInDifferentCrsAreRefused() {
     // mvk-thin: EPSG 26995, 4_6_crop: EPSG 2903 (README).
-    Run r = run("survey", SurveyTestFiles.open("mvk-thin.las").toString(),
+    CliRun r = run("survey", SurveyTestFiles.open("mvk-thin.las").toString(),
         SurveyTestFiles.open("4_6_crop.las").toString());
     assertEquals(ClearanceCommand.EXIT_INPUT, r.exit());
     assertTrue(r.err().contains("field 'EPSG code'"), r.err());

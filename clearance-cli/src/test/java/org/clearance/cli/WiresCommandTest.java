@@ -5,8 +5,6 @@ import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.io.IOException;
-import java.io.PrintWriter;
-import java.io.StringWriter;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.nio.file.Paths;
@@ -28,19 +26,12 @@ class WiresCommandTest {
 
   @TempDir Path dir;
 
-  record Run(int exit, String out, String err) {}
 
-  static Run run(String... args) {
-    StringWriter out = new StringWriter();
-    StringWriter err = new StringWriter();
-    var cl = ClearanceCommand.commandLine();
-    cl.setOut(new PrintWriter(out));
-    cl.setErr(new PrintWriter(err));
-    int exit = cl.execute(args);
-    return new Run(exit, out.toString(), err.toString());
+  static CliRun run(String... args) {
+    return CliRun.of(args);
   }
 
-  private Run wires(Path structures, Path line) {
+  private CliRun wires(Path structures, Path line) {
     return run("wires", "--survey", TILE, "--structures", structures.toString(), "--line",
         line.toString(), "--out", dir.resolve("out").toString(), "--survey-units", "m",
         "--threads", "1");
@@ -52,7 +43,7 @@ class WiresCommandTest {
 
   @Test
   void tileGivesEveryConductorOfTheCoveredSpan() throws IOException {
-    Run r = wires(FIXTURE.resolve("structures.csv"), FIXTURE.resolve("line.yaml"));
+    CliRun r = wires(FIXTURE.resolve("structures.csv"), FIXTURE.resolve("line.yaml"));
     assertEquals(0, r.exit(), r.err());
     List<String> rows = rows();
     assertEquals(HEADER, rows.get(0));
@@ -99,7 +90,7 @@ class WiresCommandTest {
     Files.writeString(line, Files.readString(FIXTURE.resolve("line.yaml"))
         + "  - position: X9\n    role: phase\n    conductor: Cardinal\n    offset_m: 25\n"
         + "    attach_height_m: 20\n");
-    Run r = wires(structures, line);
+    CliRun r = wires(structures, line);
     assertEquals(0, r.exit(), r.err());
     List<String> rows = rows();
     assertTrue(rows.contains("OV380/OV-12-OV-13,OV-12,OV-13,X9,0,,,,,,,,,,,,not_assessed,"
@@ -117,7 +108,7 @@ class WiresCommandTest {
     Path structures = dir.resolve("structures.csv");
     Files.writeString(structures, "line_id,structure_id,x,y\nOV380,A,229911.676,569995.314\n"
         + "OV380,A,230037.549,570324.039\n");
-    Run r = wires(structures, FIXTURE.resolve("line.yaml"));
+    CliRun r = wires(structures, FIXTURE.resolve("line.yaml"));
     assertEquals(ClearanceCommand.EXIT_INPUT, r.exit());
     String[] lines = r.err().strip().split("\n");
     assertEquals(1, lines.length, r.err());
@@ -128,7 +119,7 @@ class WiresCommandTest {
 
   @Test
   void surveyWithoutUnitsNeedsTheOption() {
-    Run r = run("wires", "--survey", TILE, "--structures",
+    CliRun r = run("wires", "--survey", TILE, "--structures",
         FIXTURE.resolve("structures.csv").toString(), "--line",
         FIXTURE.resolve("line.yaml").toString(), "--out", dir.resolve("out").toString());
     assertEquals(ClearanceCommand.EXIT_INPUT, r.exit());
@@ -138,7 +129,7 @@ class WiresCommandTest {
   @Test
   void outputThatIsAFileIsAnInputError() throws IOException {
     Path file = Files.writeString(dir.resolve("taken"), "x");
-    Run r = run("wires", "--survey", TILE, "--structures",
+    CliRun r = run("wires", "--survey", TILE, "--structures",
         FIXTURE.resolve("structures.csv").toString(), "--line",
         FIXTURE.resolve("line.yaml").toString(), "--out", file.toString(), "--survey-units",
         "m");

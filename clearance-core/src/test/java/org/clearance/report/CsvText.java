@@ -6,15 +6,15 @@ import java.util.List;
 import java.util.Map;
 
 /** A small RFC 4180 reader for tests: header line, then rows as maps by column name. */
-final class CsvText {
+public final class CsvText {
 
   private CsvText() {}
 
-  static List<String> header(String text) {
+  public static List<String> header(String text) {
     return fields(text).get(0);
   }
 
-  static List<Map<String, String>> rows(String text) {
+  public static List<Map<String, String>> rows(String text) {
     List<List<String>> all = fields(text);
     List<Map<String, String>> out = new ArrayList<>();
     for (List<String> r : all.subList(1, all.size())) {
