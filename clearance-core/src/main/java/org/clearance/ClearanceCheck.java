@@ -31,6 +31,7 @@ import org.clearance.line.Span;
 import org.clearance.line.SpanLayout;
 import org.clearance.line.Structure;
 import org.clearance.line.StructureReader;
+import org.clearance.line.SurveyTemperatureSpec;
 import org.clearance.report.ReportStage;
 import org.clearance.report.RunModel;
 import org.clearance.report.RunAssessment;
@@ -40,10 +41,14 @@ import org.clearance.report.RunRecordJson;
 import org.clearance.rules.RuleProfile;
 import org.clearance.rules.RuleProfiles;
 import org.clearance.sag.ConditionSolver;
+import org.clearance.sag.SurveyTemperatures;
+import org.clearance.sag.TemperatureEstimate;
+import org.clearance.survey.LonLat;
 import org.clearance.survey.PointChunk;
 import org.clearance.survey.Survey;
 import org.clearance.wire.ConductorTable;
 import org.clearance.wire.FittedConductor;
+import org.clearance.wire.FlightTimes;
 import org.clearance.wire.SpanWires;
 import org.clearance.wire.WireFinder;
 import org.clearance.wire.WireResult;
@@ -151,8 +156,9 @@ public final class ClearanceCheck {
     say("ground: %s", scan.ground.source().describe());
     stop("ground");
 
+    FlightTimes flight = new FlightTimes(layout.spans());
     WireResult wires = new WireFinder(options.wires()).find(consumers -> survey.readParallel(
-        options.threads(), progress.wrap("wires", consumers)), layout,
+        options.threads(), progress.wrap("wires", flight.consumers(consumers))), layout,
         scan.ground::heightAboveGround);
     long fittedCount = wires.spans().stream().mapToLong(s -> s.fitted().size()).sum();
     say("wires: %d conductors fitted in %d spans; %d structure change(s)", fittedCount,
@@ -163,8 +169,12 @@ public final class ClearanceCheck {
 
     ConditionSet conditions = ConditionModels.conditionSet(specs);
     Map<String, List<SurveyedConductor>> fitted = surveyed(wires);
+    SurveyTemperatures temperatures = surveyTemperatures(survey, flight);
     Map<String, List<ConductorModel>> models = ConditionModels.build(wires.layout(), fitted,
-        conditions, new ConditionSolver(options.conditions()));
+        conditions, new ConditionSolver(options.conditions()), temperatures);
+    Map<String, TemperatureEstimate> spanTemperatures =
+        ConditionModels.spanTemperatures(wires.layout(), temperatures);
+    sayTemperatures(specs, spanTemperatures);
     say("conditions: %s", ConditionModels.summary(conditions, models));
     stop("conditions");
 
@@ -221,6 +231,30 @@ public final class ClearanceCheck {
       out.put(sw.span().id(), list);
     }
     return out;
+  }
+
+  /** The survey temperatures: given, or computed at each section's flight time. */
+  private static SurveyTemperatures surveyTemperatures(Survey survey, FlightTimes flight) {
+    boolean adjusted = survey.files().stream().allMatch(f -> f.header().adjustedGpsTime());
+    LonLat.Lookup geo = LonLat.forUnits(survey.units());
+    Map<String, Double> times = new LinkedHashMap<>();
+    flight.result().forEach((id, t) -> times.put(id, t.meanGps()));
+    return new SurveyTemperatures(new SurveyTemperatures.Clock(adjusted), geo.transform(),
+        geo.note(), times);
+  }
+
+  private void sayTemperatures(List<LineSpec> specs, Map<String, TemperatureEstimate> bySpan) {
+    if (specs.stream().noneMatch(s -> s.surveyTemperature().source()
+        == SurveyTemperatureSpec.Source.COMPUTED)) {
+      return;
+    }
+    Map<String, TemperatureEstimate> distinct = new LinkedHashMap<>();
+    bySpan.forEach((id, t) -> distinct.putIfAbsent(t.detail(), t));
+    for (TemperatureEstimate t : distinct.values()) {
+      say("  survey temperature %s: %s", t.isKnown() ? String.format(Locale.ROOT,
+          "%.1f +- %.1f degC (%s dominates)", t.temperatureC(), t.sigmaC(), t.dominant())
+          : "unknown", t.detail());
+    }
   }
 
   private static List<SpanModel> spanModels(SpanLayout layout,

@@ -18,6 +18,7 @@ import org.clearance.clearance.NearPointReader;
 import org.clearance.clearance.PointClearance;
 import org.clearance.clearance.SpanStatus;
 import org.clearance.line.SpanFrame;
+import org.clearance.survey.LonLat;
 import org.clearance.rules.PointFinding;
 import org.clearance.rules.Requirement;
 import org.clearance.rules.ResolvedZone;

@@ -13,6 +13,7 @@ import java.util.OptionalInt;
 import org.clearance.io.Json;
 import org.clearance.rules.RuleProfiles;
 import org.clearance.survey.LinearUnit;
+import org.clearance.survey.LonLat;
 import org.clearance.survey.SurveyUnits;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
