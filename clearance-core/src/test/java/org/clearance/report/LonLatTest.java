@@ -12,6 +12,7 @@ import java.util.Map;
 import java.util.OptionalInt;
 import org.clearance.io.Json;
 import org.clearance.rules.RuleProfiles;
+import org.clearance.run.RunFixture;
 import org.clearance.survey.LinearUnit;
 import org.clearance.survey.LonLat;
 import org.clearance.survey.SurveyUnits;

@@ -1,4 +1,4 @@
-package org.clearance.report;
+package org.clearance.assess;
 
 import java.io.IOException;
 import java.nio.file.Path;
@@ -18,7 +18,6 @@ import org.clearance.clearance.NearPointReader;
 import org.clearance.clearance.PointClearance;
 import org.clearance.clearance.SpanStatus;
 import org.clearance.line.SpanFrame;
-import org.clearance.survey.LonLat;
 import org.clearance.rules.PointFinding;
 import org.clearance.rules.Requirement;
 import org.clearance.rules.ResolvedZone;
@@ -26,6 +25,11 @@ import org.clearance.rules.RuleProfile;
 import org.clearance.rules.SpanRules;
 import org.clearance.rules.ZoneEvaluator;
 import org.clearance.rules.ZoneGap;
+import org.clearance.run.RunModel;
+import org.clearance.run.SpanRecord;
+import org.clearance.run.StructureRecord;
+import org.clearance.run.TreeRecord;
+import org.clearance.survey.LonLat;
 
 /**
  * Evaluates a finished run under a rule profile: streams {@code near-points.bin} once, checks
@@ -38,20 +42,20 @@ import org.clearance.rules.ZoneGap;
 public final class RunAssessor {
 
   private final RuleProfile profile;
-  private final ReportOptions options;
+  private final AssessOptions options;
 
   /**
    * @param profile the profile to apply, or null for none
-   * @param options report options
+   * @param options assessment options
    */
-  public RunAssessor(RuleProfile profile, ReportOptions options) {
+  public RunAssessor(RuleProfile profile, AssessOptions options) {
     this.profile = profile;
     this.options = options;
   }
 
   /** Shortcut: {@code new RunAssessor(profile, options).assess(model, nearPoints)}. */
   public static RunAssessment assess(RunModel model, Path nearPoints, RuleProfile profile,
-      ReportOptions options) throws IOException {
+      AssessOptions options) throws IOException {
     return new RunAssessor(profile, options).assess(model, nearPoints);
   }
 
@@ -144,7 +148,7 @@ public final class RunAssessor {
   }
 
   /** Site order within a span: priority, then deficit (largest first), then chainage. */
-  static final Comparator<CutSite> SITE_ORDER = Comparator.comparingInt(CutSite::priority)
+  public static final Comparator<CutSite> SITE_ORDER = Comparator.comparingInt(CutSite::priority)
       .thenComparingDouble(s -> -s.deficitM())
       .thenComparingDouble(CutSite::chainageM);
 
@@ -284,7 +288,7 @@ public final class RunAssessor {
   }
 
   /** The span's plan frame from its first structure to its second, or null. */
-  static SpanFrame frameOf(SpanRecord span) {
+  public static SpanFrame frameOf(SpanRecord span) {
     StructureRecord a = span.from();
     StructureRecord b = span.to();
     if (!(Double.isFinite(a.x()) && Double.isFinite(a.y()) && Double.isFinite(b.x())
