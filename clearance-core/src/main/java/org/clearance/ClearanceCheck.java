@@ -194,7 +194,7 @@ public final class ClearanceCheck {
     stop("clearance");
 
     RunModel model = RunModels.of(toolVersion, survey.units(), conditions, options, vegetation,
-        scan.ground, wires, spanModels, measured);
+        scan.ground, wires, spanModels, measured, spanTemperatures);
     RunModelJson.write(model, dir.resolve(RunModel.FILE_NAME));
     RunAssessment assessed = ReportStage.assess(dir, model, profile, options.report());
     stop("rules");
