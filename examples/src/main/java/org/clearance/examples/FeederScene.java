@@ -39,6 +39,9 @@ public final class FeederScene {
   static final double STRAIN_LENGTH_M = 0.4;
   /** Share of conductor-spans with one long gap leaving 8-28 % coverage (as the main demo). */
   static final double LOW_COVERAGE_SHARE = 0.08;
+  /** Least plan distance from a trimmed crown to the outermost conductor, m (common practice,
+   * no source). */
+  static final double TRIM_CLEARANCE_M = 2.0;
   /** Surveyed half width either side of the line, m. */
   static final double HALF_WIDTH_M = 30;
 
@@ -263,7 +266,16 @@ public final class FeederScene {
     return new ConductorCurve(plan, Catenary.through(0, z + 0.3, 40, z + 0.3, 1600 / 2.4));
   }
 
+  /**
+   * Trees along the line, one per 12 m of span: crowns kept at least {@link #TRIM_CLEARANCE_M}
+   * in plan from the outermost conductor (a maintained feeder), except every third span's
+   * grow-in, whose crown edge comes within 0.3-1.5 m of it in plan.
+   */
   private void trees(SplittableRandom rng) {
+    double outer = 0;
+    for (Position p : positions) {
+      outer = Math.max(outer, Math.abs(p.offsetM()));
+    }
     for (Span sp : spans) {
       FeederPole a = poles.get(sp.from());
       FeederPole b = poles.get(sp.to());
@@ -271,15 +283,18 @@ public final class FeederScene {
       double uy = (b.y() - a.y()) / sp.lengthM();
       int count = (int) Math.round(sp.lengthM() / 12);
       for (int k = 0; k < count; k++) {
+        boolean growIn = k == 0 && sp.index() % 3 == 1;
         double s = rng.nextDouble(5, sp.lengthM() - 5);
         double side = rng.nextBoolean() ? 1 : -1;
-        double e = side * rng.nextDouble(3.5, HALF_WIDTH_M - 4);
+        double h = rng.nextDouble(5, 16);
+        double r = Math.min(0.35 * h, rng.nextDouble(1.5, 3.5));
+        double edge = growIn ? rng.nextDouble(0.3, 1.5) : rng.nextDouble(TRIM_CLEARANCE_M,
+            HALF_WIDTH_M - 2 * r - outer);
+        double e = side * (outer + edge + r);
         double x = a.x() + s * ux - e * uy;
         double y = a.y() + s * uy + e * ux;
-        double h = rng.nextDouble(5, 16);
-        boolean cone = rng.nextBoolean();
-        double r = Math.min(0.35 * h, rng.nextDouble(1.5, 3.5));
-        trees.add(new Tree(x, y, groundZ(x, y), h, r, h * rng.nextDouble(0.3, 0.5), cone));
+        trees.add(new Tree(x, y, groundZ(x, y), h, r, h * rng.nextDouble(0.3, 0.5),
+            rng.nextBoolean()));
       }
     }
   }
