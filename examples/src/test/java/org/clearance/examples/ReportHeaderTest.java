@@ -80,8 +80,8 @@ class ReportHeaderTest {
     // the generator's own flight plan dates the survey (its first strip's start)
     String firstDay = DemoCorridor.surveyDay(DemoScene.create(run.options())).toString();
     assertTrue(meta(html, "survey acquired").startsWith(firstDay), meta(html, "survey acquired"));
-    assertTrue(html.contains("Years to violation count from the survey&#39;s first day, " + firstDay),
-        "years count from the survey day");
+    assertTrue(html.contains("Years to violation count from the survey&#39;s first day, "
+        + firstDay), "years count from the survey day");
     assertEquals("Clearance test", meta(html, "tool"));
     String started = new String(Files.readAllBytes(run.runDir().resolve("run.json")),
         StandardCharsets.UTF_8).replaceAll("(?s).*\"started\"\\s*:\\s*\"([^\"]+)\".*", "$1");
