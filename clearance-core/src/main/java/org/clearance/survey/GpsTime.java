@@ -8,30 +8,39 @@ import java.time.temporal.TemporalAdjusters;
 import java.util.Optional;
 
 /**
- * The UTC instant of a LAS point's GPS time (ASPRS LAS 1.4 R15, global encoding bit 0): adjusted
- * standard GPS time is GPS seconds since 1980-01-06T00:00:00 minus 1e9; otherwise the time is
- * seconds of the GPS week, which starts on Sunday 00:00 GPS time, and the survey day must say
- * which week. GPS time runs ahead of UTC by the leap seconds since 1980 (IERS bulletins: 18 s
- * since 2017-01-01; earlier steps in {@link #LEAP_STEPS}).
+ * Dates from LAS GPS time stamps. A LAS file whose global encoding bit 0 is set stores adjusted
+ * standard GPS time: GPS seconds since 1980-01-06 00:00:00 UTC minus 10^9 (ASPRS LAS 1.4 R15,
+ * section 2.4, global encoding). GPS time runs without leap seconds, so UTC = GPS - (leap seconds
+ * inserted since 1980), taken from the IERS table (Bulletin C) below. With bit 0 clear the file
+ * stores GPS week seconds (0 to 604 800 within a week that the file does not name): a date can be
+ * derived from those only with the survey day from elsewhere ({@link #toUtc}); GPS weeks start on
+ * Sunday 00:00 GPS time.
  */
 public final class GpsTime {
 
-  /** The GPS epoch, 1980-01-06T00:00:00 (GPS and UTC agreed then). */
+  /** The GPS epoch. */
   public static final Instant EPOCH = Instant.parse("1980-01-06T00:00:00Z");
-  /** Offset of adjusted standard GPS time, s (LAS 1.4 R15: standard GPS time minus 1e9). */
+  /** Offset of adjusted standard GPS time, s (LAS 1.4 R15). */
   public static final double ADJUSTED_OFFSET_S = 1e9;
-  private static final long SECONDS_PER_WEEK = 7L * 86_400;
 
-  /** UTC dates from which GPS - UTC grew by one more second (IERS Bulletin C, from memory). */
-  private static final String[] LEAP_STEPS = {"1981-07-01", "1982-07-01", "1983-07-01",
-      "1985-07-01", "1988-01-01", "1990-01-01", "1991-01-01", "1992-07-01", "1993-07-01",
-      "1994-07-01", "1996-01-01", "1997-07-01", "1999-01-01", "2006-01-01", "2009-01-01",
-      "2012-07-01", "2015-07-01", "2017-01-01"};
+  /**
+   * UTC days from which GPS - UTC grows by one second (IERS Bulletin C; the 18 leap seconds
+   * inserted between 1981-07-01 and 2017-01-01, published). None announced since.
+   */
+  private static final LocalDate[] LEAP_DAYS = {
+    LocalDate.of(1981, 7, 1), LocalDate.of(1982, 7, 1), LocalDate.of(1983, 7, 1),
+    LocalDate.of(1985, 7, 1), LocalDate.of(1988, 1, 1), LocalDate.of(1990, 1, 1),
+    LocalDate.of(1991, 1, 1), LocalDate.of(1992, 7, 1), LocalDate.of(1993, 7, 1),
+    LocalDate.of(1994, 7, 1), LocalDate.of(1996, 1, 1), LocalDate.of(1997, 7, 1),
+    LocalDate.of(1999, 1, 1), LocalDate.of(2006, 1, 1), LocalDate.of(2009, 1, 1),
+    LocalDate.of(2012, 7, 1), LocalDate.of(2015, 7, 1), LocalDate.of(2017, 1, 1)};
+
+  private static final long SECONDS_PER_WEEK = 7L * 86_400;
 
   private GpsTime() {}
 
   /**
-   * The UTC instant of a GPS time.
+   * The UTC instant of a point's GPS time, adjusted or of the GPS week.
    *
    * @param gpsTime the point's GPS time field, s
    * @param adjusted whether the file stores adjusted standard GPS time (global encoding bit 0)
@@ -40,34 +49,48 @@ public final class GpsTime {
    */
   public static Optional<Instant> toUtc(double gpsTime, boolean adjusted,
       Optional<LocalDate> surveyDay) {
-    if (!Double.isFinite(gpsTime)) {
+    if (adjusted) {
+      return utcOfAdjusted(gpsTime);
+    }
+    if (!Double.isFinite(gpsTime) || surveyDay.isEmpty()) {
       return Optional.empty();
     }
-    double gpsSeconds;
-    if (adjusted) {
-      gpsSeconds = gpsTime + ADJUSTED_OFFSET_S;
-    } else {
-      if (surveyDay.isEmpty()) {
-        return Optional.empty();
+    LocalDate sunday = surveyDay.get().with(TemporalAdjusters.previousOrSame(DayOfWeek.SUNDAY));
+    long weekStart = sunday.atStartOfDay(ZoneOffset.UTC).toEpochSecond() - EPOCH.getEpochSecond();
+    weekStart -= weekStart % SECONDS_PER_WEEK;
+    return utcOfAdjusted(weekStart + gpsTime - ADJUSTED_OFFSET_S);
+  }
+
+  /** GPS - UTC at a moment of the GPS scale, s. */
+  static int leapSeconds(Instant gps) {
+    int leap = 0;
+    for (LocalDate d : LEAP_DAYS) {
+      Instant effective = d.atStartOfDay(ZoneOffset.UTC).toInstant().plusSeconds(leap + 1);
+      if (!gps.isBefore(effective)) {
+        leap++;
       }
-      LocalDate sunday = surveyDay.get().with(TemporalAdjusters.previousOrSame(DayOfWeek.SUNDAY));
-      long weekStart = sunday.atStartOfDay(ZoneOffset.UTC).toEpochSecond()
-          - EPOCH.getEpochSecond();
-      gpsSeconds = weekStart - weekStart % SECONDS_PER_WEEK + gpsTime;
     }
-    long whole = (long) Math.floor(gpsSeconds);
-    Instant gps = EPOCH.plusSeconds(whole).plusNanos((long) ((gpsSeconds - whole) * 1e9));
+    return leap;
+  }
+
+  /**
+   * The UTC instant of an adjusted standard GPS time.
+   *
+   * @param adjustedSeconds adjusted standard GPS time, s
+   * @return the instant (to the millisecond), or empty when the value is not finite
+   */
+  public static Optional<Instant> utcOfAdjusted(double adjustedSeconds) {
+    if (!Double.isFinite(adjustedSeconds)) {
+      return Optional.empty();
+    }
+    long ms = Math.round((adjustedSeconds + ADJUSTED_OFFSET_S) * 1000.0);
+    Instant gps = EPOCH.plusMillis(ms);
+    // the instants leap seconds took effect, expressed on the GPS scale
     return Optional.of(gps.minusSeconds(leapSeconds(gps)));
   }
 
-  /** GPS - UTC at a moment, s. */
-  static int leapSeconds(Instant gps) {
-    int n = 0;
-    for (String step : LEAP_STEPS) {
-      if (!gps.isBefore(LocalDate.parse(step).atStartOfDay(ZoneOffset.UTC).toInstant())) {
-        n++;
-      }
-    }
-    return n;
+  /** The UTC day of an adjusted standard GPS time, or empty when not finite. */
+  public static Optional<LocalDate> utcDayOfAdjusted(double adjustedSeconds) {
+    return utcOfAdjusted(adjustedSeconds).map(i -> i.atZone(ZoneOffset.UTC).toLocalDate());
   }
 }

@@ -48,7 +48,8 @@ class SurveyTemperaturesTest {
   }
 
   private static LineSpec spec(SurveyTemperatureSpec st) {
-    return new LineSpec("L", "", 230, 0, st.temperatureC(), List.of(A, SHIELD), List.of(), "t",
+    return new LineSpec("L", "", 230, 0, st.temperatureC(), Double.NaN, List.of(A, SHIELD),
+        List.of(), "t",
         st);
   }
 
