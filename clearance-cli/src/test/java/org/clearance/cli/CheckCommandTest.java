@@ -133,6 +133,28 @@ class CheckCommandTest {
     assertTrue(Files.isRegularFile(out.resolve("model.json")), "the previous run is kept");
   }
 
+  /**
+   * Regression: structure ids starting with {@code =}, {@code +}, {@code -} or {@code @} were
+   * written as bare cells, which a spreadsheet runs as formulas (issue 10, item 10).
+   */
+  @Test
+  void idsThatLookLikeFormulasAreWrittenAsText() throws IOException {
+    String text = Files.readString(demo.structures(), StandardCharsets.UTF_8);
+    Path structures = dir.resolve("s-formula.csv");
+    Files.writeString(structures, text.replaceAll("(?m)^(T\\d+),", "=$1,"));
+    Path out = dir.resolve("run");
+    CliRun r = check(structures, demo.lineSpec(), out);
+    assertEquals(ClearanceCommand.EXIT_OK, r.exit(), r.err());
+    for (String f : List.of("spans.csv", "conductors.csv")) {
+      List<String> lines = Files.readAllLines(out.resolve(f));
+      assertTrue(lines.size() > 1, f);
+      for (String line : lines.subList(1, lines.size())) {
+        assertTrue(line.contains(",'=T"), f + ": " + line);
+        assertFalse(line.startsWith("=") || line.contains(",="), f + ": " + line);
+      }
+    }
+  }
+
   @Test
   void demoWritesInputsAndRun() {
     Path out = dir.resolve("demo");
