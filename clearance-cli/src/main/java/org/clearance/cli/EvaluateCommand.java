@@ -98,7 +98,7 @@ public final class EvaluateCommand implements Callable<Integer> {
         record.input("rules", profileFile);
       }
       RunModel runModel = RunModelJson.read(dir.resolve(RunModel.FILE_NAME));
-      NearPointReader.header(dir.resolve(NearPointFile.FILE_NAME));
+      NearPointReader.verify(dir.resolve(NearPointFile.FILE_NAME));
       if (inPlace) {
         evaluateInto(source.beginReplacing("RUN_DIR"), dir, runModel, profile, record, true);
         source.publish();
