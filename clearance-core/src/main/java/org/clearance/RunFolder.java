@@ -20,8 +20,8 @@ import java.util.HashSet;
 import java.util.List;
 import java.util.Set;
 import java.util.stream.Stream;
-import org.clearance.report.RunRecord;
-import org.clearance.report.RunRecordJson;
+import org.clearance.run.RunRecord;
+import org.clearance.run.RunRecordJson;
 
 /**
  * A run folder being written: the new run goes into a staging folder beside it and is published

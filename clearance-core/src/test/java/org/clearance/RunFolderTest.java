@@ -10,8 +10,8 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.stream.Stream;
-import org.clearance.report.RunRecord;
-import org.clearance.report.RunRecordJson;
+import org.clearance.run.RunRecord;
+import org.clearance.run.RunRecordJson;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
