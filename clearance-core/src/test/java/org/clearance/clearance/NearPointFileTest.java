@@ -89,7 +89,7 @@ class NearPointFileTest {
     byte[] older = bytes.clone();
     older[7] = '1';
     byte[] text = "span_id,x\n".getBytes(StandardCharsets.UTF_8);
-    String[][] cases = {{"cut", "ends early|end marker|whole number"}, {"flipped", "CRC-32C"},
+    String[][] cases = {{"cut", "ends early|end marker|whole number"}, {"flipped", "CRC-32C|outside the header"},
         {"older", "format 1"}, {"text", "not a near-points file|ends"}};
     byte[][] contents = {cut, flipped, older, text};
     for (int i = 0; i < cases.length; i++) {
