@@ -94,6 +94,7 @@ public final class RunModelJson {
       t.baseDistances().forEach(d -> ds.add(JsonFiles.number(d)));
       n.put("nearest_conductor", t.nearestConductor());
     }
+    o.set(RunFactsJson.KEY, RunFactsJson.node(m.facts()));
     return o;
   }
 
@@ -229,7 +230,8 @@ public final class RunModelJson {
     }
     try {
       return new RunModel(o.str("tool_version"), units, new ConditionSet(names, groups),
-          o.num("keep_radius_m"), o.str("vegetation"), o.str("ground_source"), spans, trees);
+          o.num("keep_radius_m"), o.str("vegetation"), o.str("ground_source"), spans, trees,
+          RunFactsJson.read(o.obj(RunFactsJson.KEY)));
     } catch (IllegalArgumentException e) {
       throw o.error(null, e.getMessage() + RERUN);
     }
