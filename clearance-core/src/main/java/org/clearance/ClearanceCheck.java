@@ -20,6 +20,7 @@ import org.clearance.clearance.NearPointWriter;
 import org.clearance.clearance.SpanContext;
 import org.clearance.clearance.SpanModel;
 import org.clearance.clearance.SurveyedConductor;
+import org.clearance.clearance.UncertaintyFile;
 import org.clearance.clearance.VegetationSelector;
 import org.clearance.ground.GroundModel;
 import org.clearance.ground.GroundModelBuilder;
@@ -167,7 +168,8 @@ public final class ClearanceCheck {
     Map<String, List<SurveyedConductor>> fitted = surveyed(wires);
     SurveyTemperatures temperatures = surveyTemperatures(survey, flight);
     Map<String, List<ConductorModel>> models = ConditionModels.build(wires.layout(), fitted,
-        conditions, new ConditionSolver(options.conditions()), temperatures);
+        conditions, new ConditionSolver(options.conditions()), temperatures,
+        options.uncertainty());
     Map<String, TemperatureEstimate> spanTemperatures =
         ConditionModels.spanTemperatures(wires.layout(), temperatures);
     sayTemperatures(specs, spanTemperatures);
@@ -187,6 +189,8 @@ public final class ClearanceCheck {
       say("clearance: %,d vegetation points stored within %.1f m; %d trees near the line",
           out.count(), options.engine().keepRadius(), measured.trees().size());
     }
+    UncertaintyFile.write(dir.resolve(UncertaintyFile.FILE_NAME), spanModels, conditions,
+        options.uncertainty());
     stop("clearance");
 
     RunModel model = RunModels.of(toolVersion, survey.units(), conditions, options, vegetation,
@@ -207,7 +211,7 @@ public final class ClearanceCheck {
         .parameter("output_unit", options.report().outputUnit().symbol());
     timings.forEach(record::timing);
     for (String name : List.of(ConductorTable.FILE_NAME, NearPointFile.FILE_NAME,
-        RunModel.FILE_NAME)) {
+        UncertaintyFile.FILE_NAME, RunModel.FILE_NAME)) {
       record.output(name);
     }
     outcome.written().forEach(record::output);
@@ -223,7 +227,7 @@ public final class ClearanceCheck {
       List<SurveyedConductor> list = new ArrayList<>();
       for (FittedConductor c : sw.fitted()) {
         list.add(new SurveyedConductor(c.name(), c.position().orElse(""),
-            c.role().name().toLowerCase(Locale.ROOT), c.curve().orElseThrow()));
+            c.role().name().toLowerCase(Locale.ROOT), c.curve().orElseThrow(), c.covariance()));
       }
       out.put(sw.span().id(), list);
     }

@@ -186,11 +186,13 @@ final class RunModels {
     if (!t.isKnown()) {
       return "survey conductor temperature unknown: " + t.detail();
     }
-    String source = t.source() == SurveyTemperatureSpec.Source.COMPUTED
-        ? "computed, " + t.detail() : t.source().name().toLowerCase(Locale.ROOT);
+    if (t.source() != SurveyTemperatureSpec.Source.COMPUTED) {
+      return String.format(Locale.ROOT, "survey conductor temperature %.1f degC, standard "
+          + "uncertainty %.1f degC (%s)", t.temperatureC(), t.sigmaC(), t.detail());
+    }
     return String.format(Locale.ROOT, "survey conductor temperature %.1f degC, standard "
-        + "uncertainty %.1f degC (%s; %s dominates the uncertainty)", t.temperatureC(),
-        t.sigmaC(), source, t.dominant());
+        + "uncertainty %.1f degC (computed by the %s; %s dominates the uncertainty)",
+        t.temperatureC(), t.sigmaC(), t.detail(), t.dominant());
   }
 
   private static StructureRecord structure(Structure s) {

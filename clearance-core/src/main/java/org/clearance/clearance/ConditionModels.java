@@ -93,10 +93,26 @@ public final class ConditionModels {
   public static Map<String, List<ConductorModel>> build(SpanLayout layout,
       Map<String, List<SurveyedConductor>> fitted, ConditionSet conditions,
       ConditionSolver solver, SurveyTemperatures temperatures) {
+    return build(layout, fitted, conditions, solver, temperatures, null);
+  }
+
+  /**
+   * Conductor models with the uncertainty of every state ({@link UncertaintyPropagation}).
+   *
+   * @param uncertainty input uncertainties, or null for models without uncertainties
+   * @see #build(SpanLayout, Map, ConditionSet, ConditionSolver, SurveyTemperatures)
+   */
+  public static Map<String, List<ConductorModel>> build(SpanLayout layout,
+      Map<String, List<SurveyedConductor>> fitted, ConditionSet conditions,
+      ConditionSolver solver, SurveyTemperatures temperatures, UncertaintyOptions uncertainty) {
+    UncertaintyPropagation propagation = uncertainty == null ? null
+        : new UncertaintyPropagation(solver, uncertainty);
     Map<String, List<ConductorModel>> out = new LinkedHashMap<>();
     for (LineLayout line : layout.lines()) {
       Map<String, String> why = new HashMap<>();
-      Map<String, SectionSurvey> sections = sectionSurveys(line, fitted, temperatures, why);
+      Map<String, Double> sigmas = new HashMap<>();
+      Map<String, SectionSurvey> sections = sectionSurveys(line, fitted, temperatures, why,
+          sigmas);
       List<Span> spans = line.spans();
       for (int i = 0; i < spans.size(); i++) {
         Span span = spans.get(i);
@@ -106,8 +122,11 @@ public final class ConditionModels {
         for (SurveyedConductor c : fitted.getOrDefault(span.id(), List.of())) {
           SectionSurvey section = sections.getOrDefault(sectionKey(line.section(span), c.name()),
               SectionSurvey.unknown());
-          models.add(model(line.spec(), span, c, section, conditions, solver, before, after,
-              spans, i, why.get(sectionKey(line.section(span), c.name()))));
+          String key = sectionKey(line.section(span), c.name());
+          ConductorModel m = model(line.spec(), span, c, section, conditions, solver, before,
+              after, spans, i, why.get(key));
+          models.add(propagation == null ? m : withUncertainty(m, line.spec(), c, section,
+              sigmas.getOrDefault(key, Double.NaN), conditions, solver, propagation));
         }
         out.put(span.id(), models);
       }
@@ -154,6 +173,32 @@ public final class ConditionModels {
     return new ConductorModel(c.name(), c.role(), states, failures);
   }
 
+  /** The model with the uncertainty of each state it has. */
+  private static ConductorModel withUncertainty(ConductorModel m, LineSpec spec,
+      SurveyedConductor c, SectionSurvey section, double sigmaT, ConditionSet conditions,
+      ConditionSolver solver, UncertaintyPropagation propagation) {
+    ConductorType type = spec.position(c.position()).map(ConductorPosition::conductor)
+        .orElse(null);
+    List<Optional<StateUncertainty>> u = new ArrayList<>();
+    u.add(Optional.of(propagation.survey(c.curve(), c.covariance())));
+    for (int k = 1; k < conditions.size(); k++) {
+      Optional<LineCondition> condition = spec.condition(baseName(conditions.names().get(k)));
+      if (m.states().get(k).isEmpty() || condition.isEmpty()) {
+        u.add(Optional.empty());
+        continue;
+      }
+      try {
+        ConditionState base = solver.state(c.curve(), type, section, condition.get());
+        u.add(Optional.of(propagation.condition(c.curve(), c.covariance(), type, section, sigmaT,
+            condition.get(), base)));
+      } catch (IllegalArgumentException e) {
+        // A perturbed state without a solution: the uncertainty is unknown, never zero.
+        u.add(Optional.empty());
+      }
+    }
+    return new ConductorModel(m.name(), m.role(), m.states(), m.failures(), u);
+  }
+
   private static ConditionState withStrings(ConditionState state, Span span,
       Optional<ConductorPosition> position, boolean left, double before, double after,
       List<Span> spans, int index) {
@@ -185,7 +230,7 @@ public final class ConditionModels {
 
   private static Map<String, SectionSurvey> sectionSurveys(LineLayout line,
       Map<String, List<SurveyedConductor>> fitted, SurveyTemperatures temperatures,
-      Map<String, String> why) {
+      Map<String, String> why, Map<String, Double> sigmas) {
     LineSpec spec = line.spec();
     Map<String, List<ConductorCurve>> curves = new HashMap<>();
     Map<String, String> positions = new HashMap<>();
@@ -209,6 +254,7 @@ public final class ConditionModels {
         if (!t.isKnown()) {
           why.put(e.getKey(), t.detail());
         }
+        sigmas.put(e.getKey(), t.sigmaC());
         out.put(e.getKey(), new SectionSurvey(section.rulingSpanM(), tension.horizontalTension(),
             t.temperatureC()));
       }
