@@ -42,13 +42,17 @@ import java.util.OptionalInt;
  *     circle), NaN when not known
  * @param yearsToViolation years until the site grows into the violation-reference zone: 0 when
  *     it is inside it, +infinity when never at the profile's rates, NaN when not computed
+ * @param conductor position name of the conductor the governing point is nearest to (for a
+ *     fall-in tree, the conductor nearest its base in the surveyed state), or empty
+ * @param cutToNowM like {@code cutToHeightM} but without the trim cycle's growth: the height
+ *     that clears the zone today, m, or NaN
  */
 public record CutSite(
     String siteId, String spanId, Kind kind, int priority, String zone,
     boolean violationReference, String condition, double minClearanceM, double requiredM,
     double deficitM, double x, double y, double z, double lon, double lat, double chainageM,
     Side side, double offsetM, double vegHeightM, double cutToHeightM, OptionalInt points,
-    double areaM2, double yearsToViolation) {
+    double areaM2, double yearsToViolation, String conductor, double cutToNowM) {
 
   /** Zone name of fall-in sites. */
   public static final String FALL_IN_ZONE = "fall-in";
@@ -82,19 +86,21 @@ public record CutSite(
     Objects.requireNonNull(condition, "condition");
     Objects.requireNonNull(side, "side");
     Objects.requireNonNull(points, "points");
+    Objects.requireNonNull(conductor, "conductor");
   }
 
   /** The same site under another id. */
   public CutSite withId(String id) {
     return new CutSite(id, spanId, kind, priority, zone, violationReference, condition,
         minClearanceM, requiredM, deficitM, x, y, z, lon, lat, chainageM, side, offsetM,
-        vegHeightM, cutToHeightM, points, areaM2, yearsToViolation);
+        vegHeightM, cutToHeightM, points, areaM2, yearsToViolation, conductor, cutToNowM);
   }
 
   /** The same site with a longitude and latitude. */
   public CutSite withLonLat(double longitude, double latitude) {
     return new CutSite(siteId, spanId, kind, priority, zone, violationReference, condition,
         minClearanceM, requiredM, deficitM, x, y, z, longitude, latitude, chainageM, side,
-        offsetM, vegHeightM, cutToHeightM, points, areaM2, yearsToViolation);
+        offsetM, vegHeightM, cutToHeightM, points, areaM2, yearsToViolation, conductor,
+        cutToNowM);
   }
 }

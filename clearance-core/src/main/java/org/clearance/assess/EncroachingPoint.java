@@ -12,10 +12,12 @@ import org.clearance.rules.ZoneViolation;
  * @param heightAboveGround height above ground, m, or NaN
  * @param violation the most urgent zone it is inside
  * @param years years to the violation-reference zone (0 inside, +infinity never, NaN unknown)
- * @param allowedTop highest elevation the vegetation may keep ({@link CutHeight}), m
+ * @param allowedTop highest elevation the vegetation may keep until the next trim
+ *     ({@link CutHeight}), m
+ * @param allowedTopNow highest elevation that clears the zone today (no growth), m
  */
 record EncroachingPoint(double x, double y, double z, double heightAboveGround,
-    ZoneViolation violation, double years, double allowedTop) {
+    ZoneViolation violation, double years, double allowedTop, double allowedTopNow) {
 
   EncroachingPoint {
     Objects.requireNonNull(violation, "violation");

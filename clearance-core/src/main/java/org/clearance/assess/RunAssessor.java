@@ -170,7 +170,8 @@ public final class RunAssessor {
       PointFinding f = rules.evaluate(p);
       if (f.verdict() == PointFinding.Verdict.INSIDE_ZONE) {
         inside.add(new EncroachingPoint(p.x(), p.y(), p.z(), p.heightAboveGround(),
-            f.violation().orElseThrow(), f.yearsToViolation(), CutHeight.allowedTop(rules, p)));
+            f.violation().orElseThrow(), f.yearsToViolation(), CutHeight.allowedTop(rules, p),
+            CutHeight.allowedTop(rules, p, false)));
       } else if (f.verdict() == PointFinding.Verdict.NOT_ASSESSED && notAssessed++ == 0) {
         firstNotAssessed = f.notAssessedReason().orElse("");
       }

@@ -11,9 +11,10 @@ import org.clearance.io.JsonWriter;
 /**
  * Writes {@code sites.geojson}: one Point feature per site in WGS84 longitude and latitude, as
  * RFC 7946 requires (section 4: no other CRS; coordinates longitude first). Properties are those
- * of the work list (lengths in the output unit, each name carrying its unit; x, y, z in the survey
- * CRS's units); a value not computed is null, and so is {@code years_to_violation} when growth
- * never brings the site in (the work list writes {@code never} there). Written only when the
+ * of {@code sites.csv} (lengths in the output unit, each name carrying its unit; x, y, z in the
+ * survey CRS's units, named in the key); null means only "not computed":
+ * {@code years_to_violation} is the string {@code never} when growth never brings the site in.
+ * Written only when the
  * survey's CRS is known, since longitude and latitude cannot be computed otherwise.
  */
 public final class GeoJsonSites {
@@ -23,6 +24,12 @@ public final class GeoJsonSites {
   /** Decimals of degrees: RFC 7946 section 11.2 advises against more than is meaningful; 1e-7
    * degree is about a centimetre. */
   static final double DEGREE_SCALE = 1e7;
+
+  /**
+   * {@code years_to_violation} of a site the profile's growth never brings into the zone; null
+   * is kept for "not computed".
+   */
+  static final String NEVER = "never";
 
   private GeoJsonSites() {}
 
@@ -49,8 +56,9 @@ public final class GeoJsonSites {
           .member(u.column("min_clearance"), round(u.length(s.minClearanceM())))
           .member(u.column("required"), round(u.length(s.requiredM())))
           .member(u.column("deficit"), round(u.length(s.deficitM())))
-          .member("x", round(h.fromMetres(s.x()))).member("y", round(h.fromMetres(s.y())))
-          .member("z", round(v.fromMetres(s.z())))
+          .member("x_" + h.symbol(), round(h.fromMetres(s.x())))
+          .member("y_" + h.symbol(), round(h.fromMetres(s.y())))
+          .member("z_" + v.symbol(), round(v.fromMetres(s.z())))
           .member(u.column("chainage"), round(u.length(s.chainageM())))
           .member("side", s.side().word())
           .member(u.column("offset"), round(u.length(s.offsetM())))
@@ -62,9 +70,13 @@ public final class GeoJsonSites {
       } else {
         w.value((String) null);
       }
-      w.member(u.areaColumn(), round(u.area(s.areaM2()), 100))
-          .member("years_to_violation", round(s.yearsToViolation(), 100))
-          .endObject().endObject();
+      w.member(u.areaColumn(), round(u.area(s.areaM2()), 100));
+      if (s.yearsToViolation() == Double.POSITIVE_INFINITY) {
+        w.member("years_to_violation", NEVER);
+      } else {
+        w.member("years_to_violation", round(s.yearsToViolation(), 100));
+      }
+      w.member("conductor", s.conductor()).endObject().endObject();
     }
     w.endArray();
     return w.endObject().toString() + "\n";

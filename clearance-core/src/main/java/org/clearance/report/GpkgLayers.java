@@ -1,18 +1,24 @@
 package org.clearance.report;
 
 import java.util.ArrayList;
+import java.util.LinkedHashMap;
 import java.util.List;
+import java.util.Map;
 import java.util.Optional;
 import org.clearance.assess.CutSite;
 import org.clearance.assess.RunAssessment;
+import org.clearance.assess.RunAssessor;
 import org.clearance.assess.SpanResult;
 import org.clearance.clearance.ConditionMinimum;
+import org.clearance.line.SpanFrame;
 import org.clearance.report.GeoPackageWriter.Column;
 import org.clearance.report.GeoPackageWriter.Feature;
 import org.clearance.report.GeoPackageWriter.Layer;
 import org.clearance.run.ConductorRecord;
 import org.clearance.run.CurveRecord;
+import org.clearance.run.LineFacts;
 import org.clearance.run.SpanRecord;
+import org.clearance.run.StructureRecord;
 import org.clearance.survey.LinearUnit;
 
 /**
@@ -25,7 +31,70 @@ final class GpkgLayers {
   private GpkgLayers() {}
 
   static List<Layer> of(RunAssessment run, ReportOptions options, int srs) {
-    return List.of(sites(run, options, srs), spans(run, options, srs), conductors(run, srs));
+    List<Layer> out = new ArrayList<>(List.of(sites(run, options, srs), spans(run, options, srs),
+        conductors(run, srs), structures(run, srs)));
+    Layer row = rightOfWay(run, options, srs);
+    if (!row.features().isEmpty()) {
+      out.add(row);
+    }
+    return out;
+  }
+
+  /** The structures at the ends of the spans, once each: id, type and line. */
+  private static Layer structures(RunAssessment run, int srs) {
+    LinearUnit h = run.model().units().horizontal();
+    LinearUnit v = run.model().units().vertical();
+    List<Column> cols = List.of(col("structure_id", "TEXT"), col("type", "TEXT"),
+        col("line_id", "TEXT"), col("ground_z", "REAL"));
+    Map<String, Feature> byId = new LinkedHashMap<>();
+    Extent e = new Extent();
+    for (SpanRecord span : run.model().spans()) { // line order, not ranking order
+      for (StructureRecord s : List.of(span.from(), span.to())) {
+        double x = h.fromMetres(s.x());
+        double y = h.fromMetres(s.y());
+        if (byId.containsKey(s.id()) || !(Double.isFinite(x) && Double.isFinite(y))) {
+          continue;
+        }
+        e.add(x, y);
+        byId.put(s.id(), new Feature(GpkgGeometry.point(srs, x, y), values(s.id(), s.type(),
+            span.context().lineId(), v.fromMetres(s.groundZ()))));
+      }
+    }
+    return new Layer("structures", "Structures at the ends of the spans", "POINT", false, cols,
+        new ArrayList<>(byId.values()), e.box());
+  }
+
+  /**
+   * The right-of-way of each span whose line specification gives {@code row_half_width_m}: the
+   * rectangle from structure to structure, that far either side of the centre line.
+   */
+  private static Layer rightOfWay(RunAssessment run, ReportOptions options, int srs) {
+    OutputUnit u = new OutputUnit(options.outputUnit());
+    LinearUnit h = run.model().units().horizontal();
+    List<Column> cols = List.of(col("span_id", "TEXT"), col("line_id", "TEXT"),
+        col(u.column("half_width"), "REAL"));
+    List<Feature> features = new ArrayList<>();
+    Extent e = new Extent();
+    for (SpanResult r : run.spans()) {
+      double half = run.model().facts().line(r.span().context().lineId())
+          .map(LineFacts::rowHalfWidthM).orElse(Double.NaN);
+      SpanFrame f = RunAssessor.frameOf(r.span());
+      if (Double.isNaN(half) || f == null) {
+        continue;
+      }
+      double len = f.length();
+      double[][] corners = {{0, half}, {len, half}, {len, -half}, {0, -half}};
+      double[] xy = new double[8];
+      for (int i = 0; i < 4; i++) {
+        xy[2 * i] = h.fromMetres(f.x(corners[i][0], corners[i][1]));
+        xy[2 * i + 1] = h.fromMetres(f.y(corners[i][0], corners[i][1]));
+        e.add(xy[2 * i], xy[2 * i + 1]);
+      }
+      features.add(new Feature(GpkgGeometry.polygon(srs, xy), values(r.id(),
+          r.span().context().lineId(), u.length(half))));
+    }
+    return new Layer("row", "Right-of-way of each span, from the line specification's width",
+        "POLYGON", false, cols, features, e.box());
   }
 
   private static Layer sites(RunAssessment run, ReportOptions options, int srs) {

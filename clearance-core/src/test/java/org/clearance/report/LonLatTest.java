@@ -78,16 +78,16 @@ class LonLatTest {
     assertEquals(37.0462224705789, ((Json.Num) xy.get(1)).value(), 0.6e-7);
     Map<String, Json.Value> props = ((Json.Obj) first.get("properties")).members();
     assertEquals("prc4293", ((Json.Str) props.get("zone")).value());
-    assertEquals(500100, ((Json.Num) props.get("x")).value(), 1e-9);
+    assertEquals(500100, ((Json.Num) props.get("x_m")).value(), 1e-9);
     assertEquals(0.0, ((Json.Num) props.get("years_to_violation")).value(), 0.0);
     Map<String, Json.Value> tree = ((Json.Obj) ((Json.Obj) features.get(2)).members()
         .get("properties")).members();
     assertTrue(tree.get("n_points") instanceof Json.Null);
     assertTrue(tree.get("years_to_violation") instanceof Json.Null);
-    // the work list carries the same longitude and latitude
-    Map<String, String> row = CsvText.rows(Files.readString(dir.resolve("worklist.csv")))
+    // the site table carries the same longitude and latitude
+    Map<String, String> row = CsvText.rows(Files.readString(dir.resolve("sites.csv")))
         .get(0);
-    assertEquals(-122.998875421175, Double.parseDouble(row.get("lon")), 0.6e-8);
-    assertFalse(row.get("lat").isEmpty());
+    assertEquals(-122.998875421175, Double.parseDouble(row.get("lon_deg")), 0.6e-8);
+    assertFalse(row.get("lat_deg").isEmpty());
   }
 }
