@@ -15,10 +15,10 @@ import org.clearance.survey.SurveyUnits;
 /**
  * Writes {@code worklist.csv} (one line per tree or vegetation patch, {@link WorkListCsv}),
  * {@code sites.csv} (one line per cut site: each grow-in clump and each fall-in check) and
- * {@code spans.csv} (one line per span) of a run folder: UTF-8, comma-separated, a header line, fields quoted as RFC 4180 asks when they
- * hold a comma, quote or line break. Every length column names its unit ({@code _m} or
- * {@code _ft}); x, y and z are in the survey CRS's own units. An empty field is a value not
- * computed; {@code years_to_violation} is {@code never} when growth never brings the site in.
+ * {@code spans.csv} (one line per span) of a run folder: UTF-8, comma-separated, a header
+ * line, fields quoted as RFC 4180 asks when they hold a comma, quote or line break. Every
+ * length column names its unit ({@code _m} or {@code _ft}); x, y and z are in the survey CRS's
+ * own units, named in the column. An empty field is a value not computed; {@code years_to_violation} is {@code never} when growth never brings the site in.
  */
 public final class CsvOutputs {
 
