@@ -1,12 +1,15 @@
 package org.clearance.report;
 
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.node.ArrayNode;
+import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import org.clearance.assess.CutSite;
 import org.clearance.assess.RunAssessment;
 import org.clearance.io.AtomicFiles;
-import org.clearance.io.JsonWriter;
+import org.clearance.io.JsonFiles;
 
 /**
  * Writes {@code sites.geojson}: one Point feature per site in WGS84 longitude and latitude, as
@@ -14,8 +17,8 @@ import org.clearance.io.JsonWriter;
  * of {@code sites.csv} (lengths in the output unit, each name carrying its unit; x, y, z in the
  * survey CRS's units, named in the key); null means only "not computed":
  * {@code years_to_violation} is the string {@code never} when growth never brings the site in.
- * Written only when the
- * survey's CRS is known, since longitude and latitude cannot be computed otherwise.
+ * Written only when the survey's CRS is known, since longitude and latitude cannot be computed
+ * otherwise.
  */
 public final class GeoJsonSites {
 
@@ -38,48 +41,49 @@ public final class GeoJsonSites {
     OutputUnit u = new OutputUnit(options.outputUnit());
     var h = run.model().units().horizontal();
     var v = run.model().units().vertical();
-    JsonWriter w = new JsonWriter().beginObject().member("type", "FeatureCollection");
-    w.name("features").beginArray();
+    ObjectNode doc = JsonFiles.object().put("type", "FeatureCollection");
+    ArrayNode features = doc.putArray("features");
     for (CutSite s : run.sites()) {
-      w.beginObject().member("type", "Feature").member("id", s.siteId());
-      w.name("geometry");
+      ObjectNode f = features.addObject().put("type", "Feature").put("id", s.siteId());
       if (Double.isFinite(s.lon()) && Double.isFinite(s.lat())) {
-        w.beginObject().member("type", "Point").name("coordinates").beginArray()
-            .value(round(s.lon(), DEGREE_SCALE)).value(round(s.lat(), DEGREE_SCALE))
-            .endArray().endObject();
+        f.putObject("geometry").put("type", "Point").putArray("coordinates")
+            .add(round(s.lon(), DEGREE_SCALE)).add(round(s.lat(), DEGREE_SCALE));
       } else {
-        w.value((String) null);
+        f.putNull("geometry");
       }
-      w.name("properties").beginObject().member("site_id", s.siteId())
-          .member("span_id", s.spanId()).member("priority", s.priority())
-          .member("zone", s.zone()).member("condition", s.condition())
-          .member(u.column("min_clearance"), round(u.length(s.minClearanceM())))
-          .member(u.column("required"), round(u.length(s.requiredM())))
-          .member(u.column("deficit"), round(u.length(s.deficitM())))
-          .member("x_" + h.symbol(), round(h.fromMetres(s.x())))
-          .member("y_" + h.symbol(), round(h.fromMetres(s.y())))
-          .member("z_" + v.symbol(), round(v.fromMetres(s.z())))
-          .member(u.column("chainage"), round(u.length(s.chainageM())))
-          .member("side", s.side().word())
-          .member(u.column("offset"), round(u.length(s.offsetM())))
-          .member(u.column("veg_height"), round(u.length(s.vegHeightM())))
-          .member(u.column("cut_to_height"), round(u.length(s.cutToHeightM())));
-      w.name("n_points");
+      ObjectNode p = f.putObject("properties").put("site_id", s.siteId())
+          .put("span_id", s.spanId()).put("priority", s.priority())
+          .put("zone", s.zone()).put("condition", s.condition());
+      p.set(u.column("min_clearance"), length(u.length(s.minClearanceM())));
+      p.set(u.column("required"), length(u.length(s.requiredM())));
+      p.set(u.column("deficit"), length(u.length(s.deficitM())));
+      p.set("x_" + h.symbol(), length(h.fromMetres(s.x())));
+      p.set("y_" + h.symbol(), length(h.fromMetres(s.y())));
+      p.set("z_" + v.symbol(), length(v.fromMetres(s.z())));
+      p.set(u.column("chainage"), length(u.length(s.chainageM())));
+      p.put("side", s.side().word());
+      p.set(u.column("offset"), length(u.length(s.offsetM())));
+      p.set(u.column("veg_height"), length(u.length(s.vegHeightM())));
+      p.set(u.column("cut_to_height"), length(u.length(s.cutToHeightM())));
       if (s.points().isPresent()) {
-        w.value(s.points().getAsInt());
+        p.put("n_points", s.points().getAsInt());
       } else {
-        w.value((String) null);
+        p.putNull("n_points");
       }
-      w.member(u.areaColumn(), round(u.area(s.areaM2()), 100));
+      p.set(u.areaColumn(), JsonFiles.number(round(u.area(s.areaM2()), 100)));
       if (s.yearsToViolation() == Double.POSITIVE_INFINITY) {
-        w.member("years_to_violation", NEVER);
+        p.put("years_to_violation", NEVER);
       } else {
-        w.member("years_to_violation", round(s.yearsToViolation(), 100));
+        p.set("years_to_violation", JsonFiles.number(round(s.yearsToViolation(), 100)));
       }
-      w.member("conductor", s.conductor()).endObject().endObject();
+      p.put("conductor", s.conductor());
     }
-    w.endArray();
-    return w.endObject().toString() + "\n";
+    return JsonFiles.write(doc) + "\n";
+  }
+
+  /** A length to millimetres, or null when not computed. */
+  private static JsonNode length(double v) {
+    return JsonFiles.number(round(v, 1000));
   }
 
   /**
@@ -95,11 +99,6 @@ public final class GeoJsonSites {
     }
     AtomicFiles.writeString(target, text(run, options));
     return true;
-  }
-
-  /** Millimetres: lengths to 3 decimals. */
-  private static double round(double v) {
-    return round(v, 1000);
   }
 
   /** Rounded to 1 / scale; NaN and infinities unchanged (written as null). */

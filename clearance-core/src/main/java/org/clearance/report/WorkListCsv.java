@@ -2,7 +2,6 @@ package org.clearance.report;
 
 import java.util.ArrayList;
 import java.util.List;
-import java.util.Locale;
 import org.clearance.assess.RunAssessment;
 import org.clearance.assess.WorkItem;
 import org.clearance.assess.WorkList;
@@ -13,7 +12,8 @@ import org.clearance.survey.SurveyUnits;
  * with every reason, the governing conductor, the work and its figures, and where to find it.
  * Lengths in the report unit ({@code _m} or {@code _ft}); x, y, z in the survey CRS's own units,
  * named in the column ({@code x_m}, {@code x_ft}, {@code x_ftUS}); longitude and latitude in
- * degrees. An empty field is a value not computed or not applicable; {@code years_to_violation}
+ * degrees. Text cells are neutralised against formula injection as in the other tables. An
+ * empty field is a value not computed or not applicable; {@code years_to_violation}
  * is {@code never} when growth never brings the vegetation in.
  */
 final class WorkListCsv {
@@ -47,8 +47,9 @@ final class WorkListCsv {
     List<List<String>> out = new ArrayList<>();
     out.add(header(options, su));
     for (WorkItem w : WorkList.of(run, options.linkDistanceM())) {
-      out.add(List.of(w.itemId(), w.spanId(), w.treeId(), Integer.toString(w.priority()),
-          w.zone(), w.reasons(), w.work().words(), w.condition(), w.conductor(),
+      out.add(List.of(t(w.itemId()), t(w.spanId()), t(w.treeId()),
+          Integer.toString(w.priority()), t(w.zone()), t(w.reasons()), w.work().words(),
+          t(w.condition()), t(w.conductor()),
           w.circuit() > 0 ? Integer.toString(w.circuit()) : "", u.lengthText(w.clearanceM()),
           u.lengthText(w.requiredM()), u.lengthText(w.deficitM()), u.lengthText(w.sideTrimM()),
           u.lengthText(w.cutToNowM()), u.lengthText(w.cutToCycleM()),
@@ -58,17 +59,17 @@ final class WorkListCsv {
           OutputUnit.fixed(su.horizontal().fromMetres(w.y()), LENGTH_DECIMALS),
           OutputUnit.fixed(su.vertical().fromMetres(w.z()), LENGTH_DECIMALS),
           OutputUnit.fixed(w.lon(), DEGREE_DECIMALS), OutputUnit.fixed(w.lat(), DEGREE_DECIMALS),
-          u.lengthText(w.stationM()), u.lengthText(w.chainageM()), w.nearestStructure(),
+          u.lengthText(w.stationM()), u.lengthText(w.chainageM()), t(w.nearestStructure()),
           w.side().word(), u.lengthText(w.offsetM()), w.rightOfWay().words(),
           w.points().isPresent() ? Integer.toString(w.points().getAsInt()) : "",
           u.areaText(w.areaM2()), CsvOutputs.years(w.yearsToViolation()),
-          String.join(" ", w.siteIds())));
+          t(String.join(" ", w.siteIds()))));
     }
     return out;
   }
 
-  /** Lower-case words of an enum constant. */
-  static String words(Enum<?> e) {
-    return e.name().toLowerCase(Locale.ROOT).replace('_', ' ');
+  /** A text cell neutralised against formula injection, as in the other tables. */
+  private static String t(String text) {
+    return CsvOutputs.t(text);
   }
 }
