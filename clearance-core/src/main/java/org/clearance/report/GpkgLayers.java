@@ -105,11 +105,12 @@ final class GpkgLayers {
         col("kind", "TEXT"), col("priority", "INTEGER"), col("zone", "TEXT"),
         col("condition", "TEXT"), col(u.column("min_clearance"), "REAL"),
         col(u.column("required"), "REAL"), col(u.column("deficit"), "REAL"),
-        col("z", "REAL"), col("lon", "REAL"), col("lat", "REAL"),
+        col("z_" + v.symbol(), "REAL"), col("lon_deg", "REAL"), col("lat_deg", "REAL"),
         col(u.column("chainage"), "REAL"), col("side", "TEXT"), col(u.column("offset"), "REAL"),
         col(u.column("veg_height"), "REAL"), col(u.column("cut_to_height"), "REAL"),
         col("n_points", "INTEGER"), col(u.areaColumn(), "REAL"),
-        col("years_to_violation", "REAL"));
+        col("years_to_violation", "REAL"), col("conductor", "TEXT"),
+        col(u.column("cut_to_height_now"), "REAL"));
     List<Feature> features = new ArrayList<>();
     Extent e = new Extent();
     for (CutSite s : run.sites()) {
@@ -127,7 +128,8 @@ final class GpkgLayers {
           s.lat(), u.length(s.chainageM()), s.side().word(), u.length(s.offsetM()),
           u.length(s.vegHeightM()), u.length(s.cutToHeightM()),
           s.points().isPresent() ? (Object) (long) s.points().getAsInt() : null,
-          u.area(s.areaM2()), s.yearsToViolation())));
+          u.area(s.areaM2()), s.yearsToViolation(), s.conductor(),
+          u.length(s.cutToNowM()))));
     }
     return new Layer("sites", "Vegetation sites inside a clearance zone, and fall-in trees",
         "POINT", false, cols, features, e.box());

@@ -127,7 +127,7 @@ class GeoPackageTest {
       // the fixture's clump sits at mid-span of the first span: 100 m east of the origin
       assertArrayEquals(new double[] {500100, 4100000}, b.coords(), 1e-6);
       assertArrayEquals(new double[] {500100, 500100, 4100000, 4100000}, b.envelope(), 1e-6);
-      assertEquals(110.5, ((Number) s.get("z")).doubleValue(), 1e-9);
+      assertEquals(110.5, ((Number) s.get("z_m")).doubleValue(), 1e-9);
       assertEquals(9L, ((Number) s.get("n_points")).longValue());
       double hot = 120 - 700 * (Math.cosh(100.0 / 700) - 1); // computed, as in ReportStageTest
       assertEquals(3.048 - (hot - 110.5), ((Number) s.get("deficit_m")).doubleValue(), 1e-6);
