@@ -4,6 +4,7 @@ import java.io.IOException;
 import java.io.InputStream;
 import java.io.PrintWriter;
 import java.io.UncheckedIOException;
+import java.util.List;
 import java.util.Properties;
 import org.clearance.InputException;
 import picocli.CommandLine;
@@ -62,6 +63,22 @@ public final class ClearanceCommand implements Runnable {
     cl.getCommandSpec().exitCodeOnVersionHelp(EXIT_OK);
     cl.getCommandSpec().exitCodeOnSuccess(EXIT_OK);
     cl.getCommandSpec().exitCodeOnExecutionException(EXIT_FAILURE);
+    CommandLine.IParameterExceptionHandler usual = cl.getParameterExceptionHandler();
+    cl.setParameterExceptionHandler((ex, args) -> {
+      List<String> unknown = UnknownOptions.of(ex.getCommandLine(), args);
+      if (unknown.isEmpty()) {
+        return usual.handleParseException(ex, args);
+      }
+      PrintWriter err = ex.getCommandLine().getErr();
+      for (String u : unknown) {
+        err.println("clearance " + ex.getCommandLine().getCommandName() + ": unknown option "
+            + u + UnknownOptions.suggestion(ex.getCommandLine(), u));
+      }
+      err.println("See: clearance " + ex.getCommandLine().getCommandSpec().qualifiedName(" ")
+          .replaceFirst("^clearance ?", "") + " --help");
+      err.flush();
+      return EXIT_INPUT;
+    });
     return cl;
   }
 

@@ -48,7 +48,7 @@ public final class EvaluateCommand implements Callable<Integer> {
   @Parameters(paramLabel = "RUN_DIR", description = "Run folder of a finished check.")
   Path runDir;
 
-  @Option(names = "--rules", required = true, paramLabel = "PROFILE|FILE",
+  @Option(names = "--rules", required = true, paramLabel = "NAME|FILE",
       description = "Built-in rule profile name (see 'clearance rules list') or profile file.")
   String rules;
 

@@ -24,8 +24,9 @@ import picocli.CommandLine;
     + "(with --altitude-m for altitude-banded tables)."}, mixinStandardHelpOptions = true)
 public final class RulesExplainCommand implements Callable<Integer> {
 
-  @Option(names = "--profile", required = true, paramLabel = "NAME|FILE",
-      description = "Built-in profile name or profile file.")
+  @Option(names = {"--rules", "--profile"}, required = true, paramLabel = "NAME|FILE",
+      description = "Built-in profile name or profile file, as --rules of check and evaluate "
+          + "(--profile is the earlier name).")
   String profile;
 
   @Option(names = "--run", paramLabel = "DIR", description = "Run folder of a check.")

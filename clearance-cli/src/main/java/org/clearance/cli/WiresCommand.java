@@ -19,7 +19,6 @@ import org.clearance.wire.StructureChange;
 import org.clearance.wire.WireFinder;
 import org.clearance.wire.WireFinderOptions;
 import org.clearance.wire.WireResult;
-import org.clearance.wire.WireStatus;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
@@ -114,8 +113,12 @@ public final class WiresCommand implements Callable<Integer> {
     for (SpanWires sw : result.spans()) {
       long fitted = sw.conductors().stream().filter(FittedConductor::isFitted).count();
       rows += sw.conductors().size();
+      // the words of check's span status: nothing fitted is NOT ASSESSED, a phase missing is
+      // INCOMPLETE (check says the same of that span)
+      String word = fitted == 0 ? "NOT ASSESSED" : sw.reason().isPresent() ? "INCOMPLETE"
+          : "all phases fitted";
       b.append(String.format(Locale.ROOT, "span %s: %s, %d of %d conductors fitted, %s%n",
-          sw.span().id(), sw.status() == WireStatus.FITTED ? "fitted" : "NOT ASSESSED", fitted,
+          sw.span().id(), word, fitted,
           sw.conductors().size(), sw.labelled() ? "wires labelled in the survey"
               : "wires found from their shape"));
       if (sw.reason().isPresent()) {

@@ -64,12 +64,25 @@ class CheckCommandTest {
       assertTrue(Files.isRegularFile(out.resolve(f)), f);
     }
     String header = Files.readAllLines(out.resolve("worklist.csv")).get(0);
-    assertTrue(header.contains("min_clearance_ft") && header.contains("area_ft2"), header);
+    assertTrue(header.contains("clearance_ft") && header.contains("area_ft2"), header);
     assertTrue(r.out().contains("screening aid"), "the console carries the caution");
     try (Stream<Path> s = Files.list(dir)) {
       assertEquals(List.of(".run.lock", "run"), s.map(p -> p.getFileName().toString())
           .sorted().toList(), "no staging folder left behind");
     }
+  }
+
+  @Test
+  void aMistypedOptionIsReportedAsUnknownNotAsAMissingOne() {
+    // regression (issue 11): "--survy" was reported as "Missing required option '--survey'"
+    Path out = dir.resolve("run");
+    CliRun r = CliRun.of("check", "--survy", demo.survey().toString(), "--structures",
+        demo.structures().toString(), "--line", demo.lineSpec().toString(), "--out",
+        out.toString());
+    assertEquals(ClearanceCommand.EXIT_INPUT, r.exit(), r.err());
+    assertTrue(r.err().contains("unknown option --survy; did you mean --survey?"), r.err());
+    assertFalse(r.err().contains("Missing"), r.err());
+    assertFalse(Files.exists(out));
   }
 
   @Test

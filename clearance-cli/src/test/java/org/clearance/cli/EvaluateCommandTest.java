@@ -62,7 +62,7 @@ class EvaluateCommandTest {
   }
 
   private static List<Map<String, String>> worklist(Path dir) throws IOException {
-    return CsvText.rows(Files.readString(dir.resolve("worklist.csv")));
+    return CsvText.rows(Files.readString(dir.resolve("sites.csv")));
   }
 
   @Test
@@ -132,8 +132,10 @@ class EvaluateCommandTest {
     assertTrue(rec.outputs().containsAll(List.of("worklist.csv", "spans.csv", "sites.gpkg",
         "report.html", "run.json", "model.json")));
     assertEquals("ft", rec.parameters().get("units"));
-    assertTrue(Files.readString(out.resolve("worklist.csv")).startsWith(
+    assertTrue(Files.readString(out.resolve("sites.csv")).startsWith(
         "site_id,span_id,priority,zone,condition,min_clearance_ft,"));
+    assertTrue(Files.readString(out.resolve("worklist.csv")).startsWith(
+        "item_id,span_id,tree_id,priority,zone,reasons,work,"));
   }
 
   @Test

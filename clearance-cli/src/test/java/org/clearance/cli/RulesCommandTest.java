@@ -70,7 +70,7 @@ class RulesCommandTest {
 
   @Test
   void explainADescribedSpan() {
-    CliRun r = run("rules", "explain", "--profile", "ca-prc4293",
+    CliRun r = run("rules", "explain", "--rules", "ca-prc4293",
         "--voltage-kv", "115", "--length-m", "200");
     assertEquals(0, r.exit(), r.err());
     // PRC 4293 (published): 10 ft at 110 kV and above, 4 ft (1.2192 m) from 2.4 to < 72 kV

@@ -44,11 +44,22 @@ public final class CutHeight {
    *     (the point is beside the zone); NaN when the span is not assessed
    */
   public static double allowedTop(SpanRules rules, PointClearance point) {
+    return allowedTop(rules, point, true);
+  }
+
+  /**
+   * The highest elevation the vegetation at a point may keep, with or without one trim cycle of
+   * growth.
+   *
+   * @param withGrowth whether the top must stay clear until the next trim (true) or only today
+   * @return elevation, m; as {@link #allowedTop(SpanRules, PointClearance)}
+   */
+  public static double allowedTop(SpanRules rules, PointClearance point, boolean withGrowth) {
     if (rules.reference().isEmpty()) {
       return Double.NaN;
     }
     ResolvedZone ref = rules.reference().get();
-    double growth = cycleGrowth(rules.profile(), point.classification());
+    double growth = withGrowth ? cycleGrowth(rules.profile(), point.classification()) : 0;
     double length = rules.span().lengthM();
     double top = Double.POSITIVE_INFINITY;
     for (ConditionDistance d : point.distances()) {

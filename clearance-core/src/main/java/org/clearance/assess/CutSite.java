@@ -43,6 +43,10 @@ import java.util.OptionalInt;
  *     circle), NaN when not known
  * @param yearsToViolation years until the site grows into the violation-reference zone: 0 when
  *     it is inside it, +infinity when never at the profile's rates, NaN when not computed
+ * @param conductor position name of the conductor the governing point is nearest to (for a
+ *     fall-in tree, the conductor nearest its base in the surveyed state), or empty
+ * @param cutToNowM like {@code cutToHeightM} but without the trim cycle's growth: the height
+ *     that clears the zone today, m, or NaN
  * @param interval the governing distance's interval at the profile's confidence level and the
  *     site's verdict (a violation when any of its points is one), or empty when the profile asks
  *     for no confidence level (and for fall-in sites)
@@ -52,17 +56,18 @@ public record CutSite(
     boolean violationReference, String condition, double minClearanceM, double requiredM,
     double deficitM, double x, double y, double z, double lon, double lat, double chainageM,
     Side side, double offsetM, double vegHeightM, double cutToHeightM, OptionalInt points,
-    double areaM2, double yearsToViolation, Optional<FindingInterval> interval) {
+    double areaM2, double yearsToViolation, String conductor, double cutToNowM,
+    Optional<FindingInterval> interval) {
 
   /** A site without an interval. */
   public CutSite(String siteId, String spanId, Kind kind, int priority, String zone,
       boolean violationReference, String condition, double minClearanceM, double requiredM,
       double deficitM, double x, double y, double z, double lon, double lat, double chainageM,
       Side side, double offsetM, double vegHeightM, double cutToHeightM, OptionalInt points,
-      double areaM2, double yearsToViolation) {
+      double areaM2, double yearsToViolation, String conductor, double cutToNowM) {
     this(siteId, spanId, kind, priority, zone, violationReference, condition, minClearanceM,
         requiredM, deficitM, x, y, z, lon, lat, chainageM, side, offsetM, vegHeightM,
-        cutToHeightM, points, areaM2, yearsToViolation, Optional.empty());
+        cutToHeightM, points, areaM2, yearsToViolation, conductor, cutToNowM, Optional.empty());
   }
 
   /** Zone name of fall-in sites. */
@@ -98,13 +103,15 @@ public record CutSite(
     Objects.requireNonNull(side, "side");
     Objects.requireNonNull(points, "points");
     Objects.requireNonNull(interval, "interval");
+    Objects.requireNonNull(conductor, "conductor");
   }
 
   /** The same site under another id. */
   public CutSite withId(String id) {
     return new CutSite(id, spanId, kind, priority, zone, violationReference, condition,
         minClearanceM, requiredM, deficitM, x, y, z, lon, lat, chainageM, side, offsetM,
-        vegHeightM, cutToHeightM, points, areaM2, yearsToViolation, interval);
+        vegHeightM, cutToHeightM, points, areaM2, yearsToViolation, conductor, cutToNowM,
+        interval);
   }
 
   /** Whether the site is only a possible violation (its interval straddles the zone). */
@@ -117,6 +124,7 @@ public record CutSite(
   public CutSite withLonLat(double longitude, double latitude) {
     return new CutSite(siteId, spanId, kind, priority, zone, violationReference, condition,
         minClearanceM, requiredM, deficitM, x, y, z, longitude, latitude, chainageM, side,
-        offsetM, vegHeightM, cutToHeightM, points, areaM2, yearsToViolation, interval);
+        offsetM, vegHeightM, cutToHeightM, points, areaM2, yearsToViolation, conductor,
+        cutToNowM, interval);
   }
 }

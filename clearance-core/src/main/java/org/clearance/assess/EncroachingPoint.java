@@ -13,17 +13,20 @@ import org.clearance.rules.ZoneViolation;
  * @param heightAboveGround height above ground, m, or NaN
  * @param violation the most urgent zone it is inside
  * @param years years to the violation-reference zone (0 inside, +infinity never, NaN unknown)
- * @param allowedTop highest elevation the vegetation may keep ({@link CutHeight}), m
+ * @param allowedTop highest elevation the vegetation may keep until the next trim
+ *     ({@link CutHeight}), m
+ * @param allowedTopNow highest elevation that clears the zone today (no growth), m
  * @param interval the distance interval and verdict at the profile's confidence level, or empty
  *     when the profile asks for none
  */
 record EncroachingPoint(double x, double y, double z, double heightAboveGround,
-    ZoneViolation violation, double years, double allowedTop,
+    ZoneViolation violation, double years, double allowedTop, double allowedTopNow,
     Optional<FindingInterval> interval) {
 
   EncroachingPoint(double x, double y, double z, double heightAboveGround,
-      ZoneViolation violation, double years, double allowedTop) {
-    this(x, y, z, heightAboveGround, violation, years, allowedTop, Optional.empty());
+      ZoneViolation violation, double years, double allowedTop, double allowedTopNow) {
+    this(x, y, z, heightAboveGround, violation, years, allowedTop, allowedTopNow,
+        Optional.empty());
   }
 
   EncroachingPoint {

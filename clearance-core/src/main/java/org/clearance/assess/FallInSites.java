@@ -62,6 +62,7 @@ final class FallInSites {
       }
       double growth = CutHeight.cycleGrowth(rules.profile(), TREE_CLASS);
       double cutTo = Math.max(0, t.heightM() - f.marginM() - growth);
+      double cutToNow = Math.max(0, t.heightM() - f.marginM());
       double chainage = Double.NaN;
       double offset = Double.NaN;
       CutSite.Side side = CutSite.Side.CENTRE;
@@ -76,7 +77,7 @@ final class FallInSites {
       sites.add(new CutSite("", t.spanId(), CutSite.Kind.FALL_IN, priority,
           CutSite.FALL_IN_ZONE, false, f.condition(), f.distanceM(), f.reachM(), f.marginM(),
           t.x(), t.y(), t.topZ(), Double.NaN, Double.NaN, chainage, side, offset, t.heightM(),
-          cutTo, OptionalInt.empty(), area, Double.NaN));
+          cutTo, OptionalInt.empty(), area, Double.NaN, t.nearestConductor(), cutToNow));
     }
     return new Result(sites, notAssessed);
   }

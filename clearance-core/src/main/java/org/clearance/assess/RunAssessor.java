@@ -197,7 +197,7 @@ public final class RunAssessor {
       if (f.verdict() == PointFinding.Verdict.INSIDE_ZONE) {
         inside.add(new EncroachingPoint(p.x(), p.y(), p.z(), p.heightAboveGround(),
             f.violation().orElseThrow(), f.yearsToViolation(), CutHeight.allowedTop(rules, p),
-            o.interval()));
+            CutHeight.allowedTop(rules, p, false), o.interval()));
       } else if (f.verdict() == PointFinding.Verdict.NOT_ASSESSED && notAssessed++ == 0) {
         firstNotAssessed = f.notAssessedReason().orElse("");
       }

@@ -76,6 +76,7 @@ final class SiteBuilder {
     double tallest = Double.NaN;
     double years = Double.NaN;
     double cut = Double.POSITIVE_INFINITY;
+    double cutNow = Double.POSITIVE_INFINITY;
     boolean cutKnown = true;
     for (EncroachingPoint p : g) {
       if (gov == null || p.priority() < gov.priority() || (p.priority() == gov.priority()
@@ -98,8 +99,11 @@ final class SiteBuilder {
       }
       double ground = p.z() - p.heightAboveGround();
       cut = Math.min(cut, p.allowedTop() - ground);
+      cutNow = Math.min(cutNow, p.allowedTopNow() - ground);
     }
     double cutTo = !cutKnown || Double.isInfinite(cut) ? Double.NaN : Math.max(0, cut);
+    double cutToNow = !cutKnown || Double.isInfinite(cutNow) || Double.isNaN(cutNow)
+        ? Double.NaN : Math.max(0, cutNow);
     double chainage = Double.NaN;
     double offset = Double.NaN;
     CutSite.Side side = CutSite.Side.CENTRE;
@@ -113,7 +117,8 @@ final class SiteBuilder {
     return new CutSite("", spanId, CutSite.Kind.GROW_IN, v.zone().priority(), v.zone().name(),
         v.zone().violationReference(), v.condition(), v.actualM(), v.requiredM(), v.deficitM(),
         gov.x(), gov.y(), gov.z(), Double.NaN, Double.NaN, chainage, side, offset, tallest,
-        cutTo, OptionalInt.of(g.size()), planArea(g), years, siteInterval(gov, g));
+        cutTo, OptionalInt.of(g.size()), planArea(g), years, v.conductor(), cutToNow,
+        siteInterval(gov, g));
   }
 
   /** The governing point's interval, a violation when any point of the site is one. */

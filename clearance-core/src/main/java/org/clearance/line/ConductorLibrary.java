@@ -145,7 +145,7 @@ public final class ConductorLibrary {
   }
 
   private static Map<String, ConductorType> parseFile(Path file) {
-    String text = TextFiles.read(file);
+    String text = TextFiles.read(file, "a conductor table (CSV text)");
     try {
       return parse(new BufferedReader(new StringReader(text)), file.toString());
     } catch (IOException e) {

@@ -67,7 +67,7 @@ public final class LineSpecReader {
    */
   public static LineSpec read(Path file, ConductorLibrary library) {
     String name = file.toString();
-    Node root = compose(TextFiles.read(file), name);
+    Node root = compose(TextFiles.read(file, "the line specification (YAML text)"), name);
     YamlMap top = new YamlMap(root, name, "the line specification", TOP_KEYS);
     String lineId = top.text("line_id");
     if (lineId.isEmpty()) {

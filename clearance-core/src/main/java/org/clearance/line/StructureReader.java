@@ -67,7 +67,7 @@ public final class StructureReader {
    */
   public static List<Structure> read(Path file, SurveyUnits units) {
     String name = file.toString();
-    String text = TextFiles.read(file);
+    String text = TextFiles.read(file, "the structures table (CSV or GeoJSON text)");
     String lower = name.toLowerCase(Locale.ROOT);
     boolean json = lower.endsWith(".geojson") || lower.endsWith(".json")
         || text.stripLeading().startsWith("{");

@@ -15,9 +15,6 @@ import org.clearance.clearance.SpanStatus;
  */
 public final class ConsoleSummary {
 
-  /** Longest reason printed on one line, characters; the span table has the whole text. */
-  static final int REASON_CHARS = 100;
-
   private ConsoleSummary() {}
 
   /**
@@ -32,18 +29,22 @@ public final class ConsoleSummary {
       List<String> notes) {
     OutputUnit u = new OutputUnit(options.outputUnit());
     StringBuilder b = new StringBuilder();
-    if (run.profile().isPresent()) {
+    boolean ruled = run.profile().isPresent();
+    if (ruled) {
       line(b, "Rule profile %s: %s", run.profile().get().name(), run.profile().get().title());
     } else {
-      line(b, "No rule profile: distances measured, no span checked against a zone.");
+      line(b, "No rule profile: distances were measured, no span was checked against a zone. "
+          + "Check them with: clearance evaluate RUN_FOLDER --rules NAME|FILE "
+          + "(clearance rules list names the built-in profiles).");
     }
-    long na = run.spans().stream().filter(r -> r.status() == SpanStatus.NOT_ASSESSED).count();
-    long inc = run.spans().stream().filter(r -> r.status() == SpanStatus.INCOMPLETE).count();
-    long found = run.spans().stream().filter(r -> !r.sites().isEmpty()).count();
+    long na = count(run, SpanStatus.NOT_ASSESSED);
+    long inc = count(run, SpanStatus.INCOMPLETE);
+    long as = count(run, SpanStatus.ASSESSED);
     long clear = run.spans().stream().filter(SpanResult::clear).count();
-    line(b, "%d span%s: %d NOT ASSESSED, %d INCOMPLETE, %d with sites, %d assessed and clear",
-        run.spans().size(), run.spans().size() == 1 ? "" : "s", na, inc, found, clear);
-    if (run.profile().isPresent()) {
+    if (ruled) {
+      line(b, "%d span%s: %d %s, %d %s, %d %s (%d with sites, %d clear)", run.spans().size(),
+          run.spans().size() == 1 ? "" : "s", na, word(SpanStatus.NOT_ASSESSED), inc,
+          word(SpanStatus.INCOMPLETE), as, word(SpanStatus.ASSESSED), as - clear, clear);
       Map<String, int[]> perZone = HtmlReport.sitesPerZone(run.sites());
       List<String> parts = new ArrayList<>();
       perZone.forEach((z, c) -> parts.add(z + " " + c[1]));
@@ -55,32 +56,35 @@ public final class ConsoleSummary {
               .count(), run.sites().stream().filter(CutSite::possibleOnly).count()));
     }
     for (SpanStatus s : List.of(SpanStatus.NOT_ASSESSED, SpanStatus.INCOMPLETE)) {
-      List<SpanResult> list = run.spans().stream().filter(r -> r.status() == s).toList();
+      // without a profile every span is NOT ASSESSED for that one reason, said above: list only
+      // the spans the check itself could not assess
+      List<SpanResult> list = run.spans().stream().filter(r -> ruled ? r.status() == s
+          : r.span().status() == s).toList();
       if (list.isEmpty()) {
         continue;
       }
       b.append('\n');
-      line(b, "%s (never clear):", s == SpanStatus.NOT_ASSESSED ? "NOT ASSESSED" : "INCOMPLETE");
+      line(b, "%s (never clear):", word(s));
+      int w = width(list);
       for (SpanResult r : list) {
-        line(b, "  %-12s %s", r.id(), shorten(r.reason()));
+        line(b, "  %-" + w + "s  %s", r.id(), ruled ? r.reason() : r.span().reason());
       }
     }
-    if (run.profile().isPresent() && !run.spans().isEmpty()) {
+    if (ruled && !run.spans().isEmpty()) {
       b.append('\n');
       int n = Math.min(options.consoleSpans(), run.spans().size());
+      List<SpanResult> shown = run.spans().subList(0, n);
       line(b, "Spans in order of attention (first %d of %d):", n, run.spans().size());
-      line(b, "  %4s  %-12s %-13s %-16s %5s  %s", "rank", "span", "status", "most urgent zone",
-          "sites", u.column("deficit"));
-      for (SpanResult r : run.spans().subList(0, n)) {
-        String status = switch (r.status()) {
-          case NOT_ASSESSED -> "NOT ASSESSED";
-          case INCOMPLETE -> "INCOMPLETE";
-          default -> r.sites().isEmpty() ? "clear" : "findings";
-        };
-        line(b, "  %4d  %-12s %-13s %-16s %5s  %s", r.rank().orElse(0), r.id(), status,
+      int w = width(shown);
+      int zw = Math.max("most urgent zone".length(), shown.stream().mapToInt(r -> r.worst()
+          .map(CutSite::zone).orElse("-").length()).max().orElse(0));
+      String row = "  %4s  %-" + w + "s  %-12s  %-" + zw + "s  %5s  %s";
+      line(b, row, "rank", "span", "status", "most urgent zone", "sites", u.column("deficit"));
+      for (SpanResult r : shown) {
+        line(b, row, Integer.toString(r.rank().orElse(0)), r.id(), word(r.status()),
             r.worst().map(CutSite::zone).orElse("-"),
             r.sitesCounted() ? Integer.toString(r.sites().size()) : "-",
-            r.worst().map(w -> u.lengthText(w.deficitM())).orElse("-"));
+            r.worst().map(x -> u.lengthText(x.deficitM())).orElse("-"));
       }
     }
     b.append('\n');
@@ -93,8 +97,22 @@ public final class ConsoleSummary {
     return b.toString();
   }
 
-  private static String shorten(String s) {
-    return s.length() <= REASON_CHARS ? s : s.substring(0, REASON_CHARS - 3) + "...";
+  /**
+   * The one word of a status used by every output: {@code NOT ASSESSED}, {@code INCOMPLETE},
+   * {@code ASSESSED} (spans.csv writes the same with an underscore).
+   */
+  public static String word(SpanStatus s) {
+    return s.name().replace('_', ' ');
+  }
+
+  private static long count(RunAssessment run, SpanStatus s) {
+    return run.spans().stream().filter(r -> r.status() == s).count();
+  }
+
+  /** Width of the span id column: the longest id, at least the header's. */
+  private static int width(List<SpanResult> spans) {
+    return Math.max("span".length(), spans.stream().mapToInt(r -> r.id().length()).max()
+        .orElse(0));
   }
 
   private static void line(StringBuilder b, String format, Object... args) {

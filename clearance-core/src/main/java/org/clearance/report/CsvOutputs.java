@@ -15,17 +15,21 @@ import org.clearance.run.SpanRecord;
 import org.clearance.survey.SurveyUnits;
 
 /**
- * Writes {@code worklist.csv} (one line per site) and {@code spans.csv} (one line per span) of a
- * run folder: UTF-8, comma-separated, a header line, text fields quoted as RFC 4180 asks when
- * they hold a comma, quote or line break and neutralised against formula injection
- * ({@link CsvCells}). Every length column names its unit ({@code _m} or
- * {@code _ft}); x, y and z are in the survey CRS's own units. An empty field is a value not
- * computed; {@code years_to_violation} is {@code never} when growth never brings the site in.
+ * Writes {@code worklist.csv} (one line per tree or vegetation patch, {@link WorkListCsv}),
+ * {@code sites.csv} (one line per cut site: each grow-in clump and each fall-in check) and
+ * {@code spans.csv} (one line per span) of a run folder: UTF-8, comma-separated, a header
+ * line, text fields quoted as RFC 4180 asks when they hold a comma, quote or line break and
+ * neutralised against formula injection ({@link CsvCells}). Every length column names its unit
+ * ({@code _m} or {@code _ft}); x, y and z are in the survey CRS's own units, named in the
+ * column. An empty field is a value not computed; {@code years_to_violation} is {@code never}
+ * when growth never brings the site in.
  */
 public final class CsvOutputs {
 
   /** Work-list file name. */
   public static final String WORKLIST = "worklist.csv";
+  /** Site table file name. */
+  public static final String SITES = "sites.csv";
   /** Span table file name. */
   public static final String SPANS = "spans.csv";
 
@@ -38,13 +42,15 @@ public final class CsvOutputs {
 
   private CsvOutputs() {}
 
-  /** The work-list header for an output unit. */
-  public static List<String> worklistHeader(ReportOptions options) {
+  /** The site-table header for an output unit. */
+  public static List<String> sitesHeader(ReportOptions options, SurveyUnits su) {
     OutputUnit u = new OutputUnit(options.outputUnit());
+    String h = su.horizontal().symbol();
     return List.of("site_id", "span_id", "priority", "zone", "condition",
-        u.column("min_clearance"), u.column("required"), u.column("deficit"), "x", "y", "z",
-        "lon", "lat", u.column("chainage"), "side", u.column("offset"), u.column("veg_height"),
-        u.column("cut_to_height"), "n_points", u.areaColumn(), "years_to_violation",
+        u.column("min_clearance"), u.column("required"), u.column("deficit"), "x_" + h, "y_" + h,
+        "z_" + su.vertical().symbol(), "lon_deg", "lat_deg", u.column("chainage"), "side",
+        u.column("offset"), u.column("veg_height"), u.column("cut_to_height"), "n_points",
+        u.areaColumn(), "years_to_violation", "conductor", u.column("cut_to_height_now"),
         "verdict", "confidence_percent", u.column("clearance_sigma"), u.column("clearance_low"),
         u.column("clearance_high"), "uncertainty_dominant");
   }
@@ -60,12 +66,21 @@ public final class CsvOutputs {
         "points_not_assessed", "n_possible_violation_sites");
   }
 
-  /** The work list's text. */
+  /** The work list's text: one line per tree or vegetation patch. */
   public static String worklist(RunAssessment run, ReportOptions options) {
+    StringBuilder b = new StringBuilder();
+    for (List<String> r : WorkListCsv.rows(run, options)) {
+      row(b, r);
+    }
+    return b.toString();
+  }
+
+  /** The site table's text. */
+  public static String sites(RunAssessment run, ReportOptions options) {
     OutputUnit u = new OutputUnit(options.outputUnit());
     SurveyUnits su = run.model().units();
     StringBuilder b = new StringBuilder();
-    row(b, worklistHeader(options));
+    row(b, sitesHeader(options, su));
     for (CutSite s : run.sites()) {
       row(b, List.of(t(s.siteId()), t(s.spanId()), Integer.toString(s.priority()), t(s.zone()),
           t(s.condition()), u.lengthText(s.minClearanceM()), u.lengthText(s.requiredM()),
@@ -77,7 +92,8 @@ public final class CsvOutputs {
           u.lengthText(s.chainageM()), t(s.side().word()), u.lengthText(s.offsetM()),
           u.lengthText(s.vegHeightM()), u.lengthText(s.cutToHeightM()),
           s.points().isPresent() ? Integer.toString(s.points().getAsInt()) : "",
-          u.areaText(s.areaM2()), years(s.yearsToViolation()),
+          u.areaText(s.areaM2()), years(s.yearsToViolation()), t(s.conductor()),
+          u.lengthText(s.cutToNowM()),
           s.interval().map(i -> i.verdict().words()).orElse(""),
           s.interval().map(i -> OutputUnit.plain(i.confidencePercent())).orElse(""),
           u.lengthText(s.interval().map(FindingInterval::sigmaM).orElse(Double.NaN)),
@@ -124,10 +140,11 @@ public final class CsvOutputs {
     return b.toString();
   }
 
-  /** Writes both files into a run folder. */
+  /** Writes the three files into a run folder. */
   public static void write(Path runDir, RunAssessment run, ReportOptions options)
       throws IOException {
     AtomicFiles.writeString(runDir.resolve(WORKLIST), worklist(run, options));
+    AtomicFiles.writeString(runDir.resolve(SITES), sites(run, options));
     AtomicFiles.writeString(runDir.resolve(SPANS), spans(run, options));
   }
 
@@ -145,7 +162,7 @@ public final class CsvOutputs {
   }
 
   /** A text cell: quoted as RFC 4180 asks, neutralised against formula injection. */
-  private static String t(String text) {
+  static String t(String text) {
     return CsvCells.text(text);
   }
 }

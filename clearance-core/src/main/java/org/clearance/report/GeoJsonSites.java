@@ -14,10 +14,11 @@ import org.clearance.io.JsonFiles;
 /**
  * Writes {@code sites.geojson}: one Point feature per site in WGS84 longitude and latitude, as
  * RFC 7946 requires (section 4: no other CRS; coordinates longitude first). Properties are those
- * of the work list (lengths in the output unit, each name carrying its unit; x, y, z in the survey
- * CRS's units); a value not computed is null, and so is {@code years_to_violation} when growth
- * never brings the site in (the work list writes {@code never} there). Written only when the
- * survey's CRS is known, since longitude and latitude cannot be computed otherwise.
+ * of {@code sites.csv} (lengths in the output unit, each name carrying its unit; x, y, z in the
+ * survey CRS's units, named in the key); null means only "not computed":
+ * {@code years_to_violation} is the string {@code never} when growth never brings the site in.
+ * Written only when the survey's CRS is known, since longitude and latitude cannot be computed
+ * otherwise.
  */
 public final class GeoJsonSites {
 
@@ -26,6 +27,12 @@ public final class GeoJsonSites {
   /** Decimals of degrees: RFC 7946 section 11.2 advises against more than is meaningful; 1e-7
    * degree is about a centimetre. */
   static final double DEGREE_SCALE = 1e7;
+
+  /**
+   * {@code years_to_violation} of a site the profile's growth never brings into the zone; null
+   * is kept for "not computed".
+   */
+  static final String NEVER = "never";
 
   private GeoJsonSites() {}
 
@@ -50,9 +57,9 @@ public final class GeoJsonSites {
       p.set(u.column("min_clearance"), length(u.length(s.minClearanceM())));
       p.set(u.column("required"), length(u.length(s.requiredM())));
       p.set(u.column("deficit"), length(u.length(s.deficitM())));
-      p.set("x", length(h.fromMetres(s.x())));
-      p.set("y", length(h.fromMetres(s.y())));
-      p.set("z", length(v.fromMetres(s.z())));
+      p.set("x_" + h.symbol(), length(h.fromMetres(s.x())));
+      p.set("y_" + h.symbol(), length(h.fromMetres(s.y())));
+      p.set("z_" + v.symbol(), length(v.fromMetres(s.z())));
       p.set(u.column("chainage"), length(u.length(s.chainageM())));
       p.put("side", s.side().word());
       p.set(u.column("offset"), length(u.length(s.offsetM())));
@@ -64,7 +71,12 @@ public final class GeoJsonSites {
         p.putNull("n_points");
       }
       p.set(u.areaColumn(), JsonFiles.number(round(u.area(s.areaM2()), 100)));
-      p.set("years_to_violation", JsonFiles.number(round(s.yearsToViolation(), 100)));
+      if (s.yearsToViolation() == Double.POSITIVE_INFINITY) {
+        p.put("years_to_violation", NEVER);
+      } else {
+        p.set("years_to_violation", JsonFiles.number(round(s.yearsToViolation(), 100)));
+      }
+      p.put("conductor", s.conductor());
     }
     return JsonFiles.write(doc) + "\n";
   }

@@ -20,6 +20,7 @@ final class GpkgGeometry {
   /** WKB geometry type codes (ISO; z adds 1000). */
   static final int WKB_POINT = 1;
   static final int WKB_LINESTRING = 2;
+  static final int WKB_POLYGON = 3;
   static final int WKB_Z = 1000;
 
   private GpkgGeometry() {}
@@ -61,6 +62,41 @@ final class GpkgGeometry {
     b.put((byte) 1).putInt(WKB_LINESTRING + (withZ ? WKB_Z : 0)).putInt(n);
     for (double v : xyz) {
       b.putDouble(v);
+    }
+    return b.array();
+  }
+
+  /**
+   * A 2D polygon of one ring (OGC Simple Features WKB; the ring is closed here when its last
+   * vertex differs from its first).
+   *
+   * @param xy ring vertices: x0, y0, x1, y1, ... (three or more)
+   */
+  static byte[] polygon(int srsId, double[] xy) {
+    int n = xy.length / 2;
+    if (n < 3 || 2 * n != xy.length) {
+      throw new IllegalArgumentException("a polygon ring needs three or more whole vertices");
+    }
+    boolean closed = xy[0] == xy[xy.length - 2] && xy[1] == xy[xy.length - 1];
+    int count = closed ? n : n + 1;
+    double minX = Double.POSITIVE_INFINITY;
+    double minY = Double.POSITIVE_INFINITY;
+    double maxX = Double.NEGATIVE_INFINITY;
+    double maxY = Double.NEGATIVE_INFINITY;
+    for (int i = 0; i < n; i++) {
+      minX = Math.min(minX, xy[2 * i]);
+      maxX = Math.max(maxX, xy[2 * i]);
+      minY = Math.min(minY, xy[2 * i + 1]);
+      maxY = Math.max(maxY, xy[2 * i + 1]);
+    }
+    ByteBuffer b = header(srsId, ENVELOPE_XY, 1 + 4 + 4 + 4 + 16 * count);
+    b.putDouble(minX).putDouble(maxX).putDouble(minY).putDouble(maxY);
+    b.put((byte) 1).putInt(WKB_POLYGON).putInt(1).putInt(count);
+    for (double v : xy) {
+      b.putDouble(v);
+    }
+    if (!closed) {
+      b.putDouble(xy[0]).putDouble(xy[1]);
     }
     return b.array();
   }

@@ -1,19 +1,25 @@
 package org.clearance.report;
 
 import java.util.ArrayList;
+import java.util.LinkedHashMap;
 import java.util.List;
+import java.util.Map;
 import java.util.Optional;
 import org.clearance.assess.CutSite;
 import org.clearance.assess.FindingInterval;
 import org.clearance.assess.RunAssessment;
+import org.clearance.assess.RunAssessor;
 import org.clearance.assess.SpanResult;
 import org.clearance.clearance.ConditionMinimum;
+import org.clearance.line.SpanFrame;
 import org.clearance.report.GeoPackageWriter.Column;
 import org.clearance.report.GeoPackageWriter.Feature;
 import org.clearance.report.GeoPackageWriter.Layer;
 import org.clearance.run.ConductorRecord;
 import org.clearance.run.CurveRecord;
+import org.clearance.run.LineFacts;
 import org.clearance.run.SpanRecord;
+import org.clearance.run.StructureRecord;
 import org.clearance.survey.LinearUnit;
 
 /**
@@ -26,7 +32,70 @@ final class GpkgLayers {
   private GpkgLayers() {}
 
   static List<Layer> of(RunAssessment run, ReportOptions options, int srs) {
-    return List.of(sites(run, options, srs), spans(run, options, srs), conductors(run, srs));
+    List<Layer> out = new ArrayList<>(List.of(sites(run, options, srs), spans(run, options, srs),
+        conductors(run, srs), structures(run, srs)));
+    Layer row = rightOfWay(run, options, srs);
+    if (!row.features().isEmpty()) {
+      out.add(row);
+    }
+    return out;
+  }
+
+  /** The structures at the ends of the spans, once each: id, type and line. */
+  private static Layer structures(RunAssessment run, int srs) {
+    LinearUnit h = run.model().units().horizontal();
+    LinearUnit v = run.model().units().vertical();
+    List<Column> cols = List.of(col("structure_id", "TEXT"), col("type", "TEXT"),
+        col("line_id", "TEXT"), col("ground_z", "REAL"));
+    Map<String, Feature> byId = new LinkedHashMap<>();
+    Extent e = new Extent();
+    for (SpanRecord span : run.model().spans()) { // line order, not ranking order
+      for (StructureRecord s : List.of(span.from(), span.to())) {
+        double x = h.fromMetres(s.x());
+        double y = h.fromMetres(s.y());
+        if (byId.containsKey(s.id()) || !(Double.isFinite(x) && Double.isFinite(y))) {
+          continue;
+        }
+        e.add(x, y);
+        byId.put(s.id(), new Feature(GpkgGeometry.point(srs, x, y), values(s.id(), s.type(),
+            span.context().lineId(), v.fromMetres(s.groundZ()))));
+      }
+    }
+    return new Layer("structures", "Structures at the ends of the spans", "POINT", false, cols,
+        new ArrayList<>(byId.values()), e.box());
+  }
+
+  /**
+   * The right-of-way of each span whose line specification gives {@code row_half_width_m}: the
+   * rectangle from structure to structure, that far either side of the centre line.
+   */
+  private static Layer rightOfWay(RunAssessment run, ReportOptions options, int srs) {
+    OutputUnit u = new OutputUnit(options.outputUnit());
+    LinearUnit h = run.model().units().horizontal();
+    List<Column> cols = List.of(col("span_id", "TEXT"), col("line_id", "TEXT"),
+        col(u.column("half_width"), "REAL"));
+    List<Feature> features = new ArrayList<>();
+    Extent e = new Extent();
+    for (SpanResult r : run.spans()) {
+      double half = run.model().facts().line(r.span().context().lineId())
+          .map(LineFacts::rowHalfWidthM).orElse(Double.NaN);
+      SpanFrame f = RunAssessor.frameOf(r.span());
+      if (Double.isNaN(half) || f == null) {
+        continue;
+      }
+      double len = f.length();
+      double[][] corners = {{0, half}, {len, half}, {len, -half}, {0, -half}};
+      double[] xy = new double[8];
+      for (int i = 0; i < 4; i++) {
+        xy[2 * i] = h.fromMetres(f.x(corners[i][0], corners[i][1]));
+        xy[2 * i + 1] = h.fromMetres(f.y(corners[i][0], corners[i][1]));
+        e.add(xy[2 * i], xy[2 * i + 1]);
+      }
+      features.add(new Feature(GpkgGeometry.polygon(srs, xy), values(r.id(),
+          r.span().context().lineId(), u.length(half))));
+    }
+    return new Layer("row", "Right-of-way of each span, from the line specification's width",
+        "POLYGON", false, cols, features, e.box());
   }
 
   private static Layer sites(RunAssessment run, ReportOptions options, int srs) {
@@ -37,11 +106,12 @@ final class GpkgLayers {
         col("kind", "TEXT"), col("priority", "INTEGER"), col("zone", "TEXT"),
         col("condition", "TEXT"), col(u.column("min_clearance"), "REAL"),
         col(u.column("required"), "REAL"), col(u.column("deficit"), "REAL"),
-        col("z", "REAL"), col("lon", "REAL"), col("lat", "REAL"),
+        col("z_" + v.symbol(), "REAL"), col("lon_deg", "REAL"), col("lat_deg", "REAL"),
         col(u.column("chainage"), "REAL"), col("side", "TEXT"), col(u.column("offset"), "REAL"),
         col(u.column("veg_height"), "REAL"), col(u.column("cut_to_height"), "REAL"),
         col("n_points", "INTEGER"), col(u.areaColumn(), "REAL"),
-        col("years_to_violation", "REAL"), col("verdict", "TEXT"),
+        col("years_to_violation", "REAL"), col("conductor", "TEXT"),
+        col(u.column("cut_to_height_now"), "REAL"), col("verdict", "TEXT"),
         col(u.column("clearance_sigma"), "REAL"), col(u.column("clearance_low"), "REAL"),
         col(u.column("clearance_high"), "REAL"), col("uncertainty_dominant", "TEXT"));
     List<Feature> features = new ArrayList<>();
@@ -61,7 +131,8 @@ final class GpkgLayers {
           s.lat(), u.length(s.chainageM()), s.side().word(), u.length(s.offsetM()),
           u.length(s.vegHeightM()), u.length(s.cutToHeightM()),
           s.points().isPresent() ? (Object) (long) s.points().getAsInt() : null,
-          u.area(s.areaM2()), s.yearsToViolation(),
+          u.area(s.areaM2()), s.yearsToViolation(), s.conductor(),
+          u.length(s.cutToNowM()),
           s.interval().map(i -> i.verdict().words()).orElse(null),
           u.length(s.interval().map(FindingInterval::sigmaM).orElse(Double.NaN)),
           u.length(s.interval().map(FindingInterval::lowM).orElse(Double.NaN)),

@@ -53,6 +53,7 @@ public final class HtmlReport {
     HtmlHeader.inputs(b, run);
     HtmlSections.summary(b, run);
     HtmlSections.attention(b, run);
+    overview(b, run, u);
     spanTable(b, run, u);
     int drawn = 0;
     for (SpanResult r : run.spans()) {
@@ -84,6 +85,40 @@ public final class HtmlReport {
         .forEach(o -> b.append("<li>Rule profile ").append(Html.esc(o.name())).append(": ")
             .append(Html.esc(o.cautions().strip())).append("</li>")));
     b.append("</ul></section>\n");
+  }
+
+  private static void overview(StringBuilder b, RunAssessment run, OutputUnit u) {
+    String map = SvgOverview.svg(run, u);
+    if (map.isEmpty()) {
+      return;
+    }
+    var units = run.model().units();
+    String crs = units.crsName().isEmpty() ? "the survey's coordinates (CRS not named)"
+        : units.crsName() + (units.epsg().isPresent() ? " (EPSG:" + units.epsg().getAsInt() + ")"
+            : "");
+    b.append("<section id=\"overview\"><h2>Overview map</h2><div class=\"figblock\"><figure>")
+        .append(map).append("<figcaption>Drawn in ").append(Html.esc(crs))
+        .append(", grid north up, one scale on both axes; drawn from the run, no map tiles."
+            + "</figcaption></figure><ul class=\"legend\">");
+    legendItem(b, "line", Palette.CONDUCTOR, "span, ASSESSED");
+    legendItem(b, "dash", "#8a6d1f", "span, INCOMPLETE");
+    legendItem(b, "dash", Palette.NOT_ASSESSED, "span, NOT ASSESSED");
+    legendItem(b, "dash", "#3d6b4f", "right-of-way edge (line specification's width)");
+    if (run.profile().isPresent()) {
+      for (var z : run.profile().get().zones()) {
+        legendItem(b, "dot", Palette.zone(z.priority()), "site in zone " + z.name()
+            + " (priority " + z.priority() + ")");
+      }
+      if (run.profile().get().fallIn().enabled()) {
+        legendItem(b, "dot", Palette.FALL_IN, "fall-in tree");
+      }
+    }
+    b.append("<li>&#9632; structure</li></ul></div></section>\n");
+  }
+
+  private static void legendItem(StringBuilder b, String kind, String colour, String text) {
+    b.append("<li><i class=\"key ").append(kind).append("\" style=\"--c:").append(colour)
+        .append("\"></i>").append(Html.esc(text)).append("</li>");
   }
 
   private static void spanTable(StringBuilder b, RunAssessment run, OutputUnit u) {
@@ -125,7 +160,10 @@ public final class HtmlReport {
     b.append("</tbody></table></section>\n");
   }
 
-  /** The status as a labelled badge; only an assessed span without sites reads "clear". */
+  /**
+   * The status as a labelled badge with the same word as every other output; the colour tells an
+   * assessed span with sites from one without.
+   */
   static String statusBadge(SpanResult r) {
     if (r.status() == SpanStatus.NOT_ASSESSED) {
       return "<span class=\"badge na\">NOT ASSESSED</span>";
@@ -133,8 +171,8 @@ public final class HtmlReport {
     if (r.status() == SpanStatus.INCOMPLETE) {
       return "<span class=\"badge inc\">INCOMPLETE</span>";
     }
-    return r.sites().isEmpty() ? "<span class=\"badge clear\">clear</span>"
-        : "<span class=\"badge found\">findings</span>";
+    return r.sites().isEmpty() ? "<span class=\"badge clear\">ASSESSED</span>"
+        : "<span class=\"badge found\">ASSESSED</span>";
   }
 
   static String swatch(CutSite s) {
@@ -184,8 +222,32 @@ public final class HtmlReport {
       }
       HtmlSections.legend(b, r, run, SvgSpanViews.governingIndex(r, run.model()));
       b.append("</div>");
+      section(b, run, r, rules, u);
     }
     b.append("</section>\n");
+  }
+
+  private static void section(StringBuilder b, RunAssessment run, SpanResult r,
+      SpanRules rules, OutputUnit u) {
+    List<String> names = run.model().conditions().names();
+    String svg = SvgSection.svg(r, rules, run.drawings().get(r.id()), u, names);
+    if (svg.isEmpty()) {
+      return;
+    }
+    CutSite site = r.sites().get(0);
+    b.append("<div class=\"figblock\"><figure>").append(svg).append("<figcaption>")
+        .append(Html.f("Cross-section at site %s (%s), looking from %s to %s, true scale: the "
+            + "conductors where they are in each condition at this point of the span (a line "
+            + "joins the ends of a swing range), the violation-reference zone around the "
+            + "governing conductor in the governing condition, vegetation within %s m along the "
+            + "span, and the site where it stands (a tree: stem and crown).",
+            Html.esc(site.siteId()), Html.esc(site.zone()), Html.esc(r.span().from().id()),
+            Html.esc(r.span().to().id()), OutputUnit.plain(SvgSection.SLICE_M)))
+        .append("</figcaption></figure><ul class=\"legend\">");
+    for (int k = 0; k < names.size(); k++) {
+      legendItem(b, "dot", SvgSection.colour(k), "conductor, " + names.get(k));
+    }
+    b.append("</ul></div>");
   }
 
   /** Counts of sites per zone in priority order (for the summary and the console). */

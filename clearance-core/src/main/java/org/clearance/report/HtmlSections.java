@@ -21,16 +21,19 @@ final class HtmlSections {
   static void summary(StringBuilder b, RunAssessment run) {
     long na = count(run, SpanStatus.NOT_ASSESSED);
     long inc = count(run, SpanStatus.INCOMPLETE);
-    long withSites = run.spans().stream().filter(r -> !r.sites().isEmpty()).count();
+    long as = count(run, SpanStatus.ASSESSED);
     long clear = run.spans().stream().filter(SpanResult::clear).count();
     b.append("<section id=\"summary\"><h2>Summary</h2><div class=\"tiles\">");
     tile(b, "spans in the run", run.spans().size(), "");
     tile(b, "NOT ASSESSED", na, na > 0 ? "na" : "");
     tile(b, "INCOMPLETE", inc, inc > 0 ? "inc" : "");
-    tile(b, "spans with sites", withSites, withSites > 0 ? "found" : "");
-    tile(b, "sites", run.sites().size(), "");
-    tile(b, "assessed and clear", clear, "clear");
+    tile(b, "ASSESSED, with sites", as - clear, as - clear > 0 ? "found" : "");
+    tile(b, "ASSESSED, clear", clear, "clear");
     b.append("</div>");
+    b.append(Html.f("<p class=\"note\">Each span is counted once, by its status: %d + %d + %d "
+        + "+ %d = %d. %d cut sites in %d spans (INCOMPLETE spans may have sites too).</p>", na,
+        inc, as - clear, clear, run.spans().size(), run.sites().size(),
+        run.spans().stream().filter(r -> !r.sites().isEmpty()).count()));
     if (run.profile().isEmpty()) {
       b.append("<p class=\"reason\">No rule profile was applied: clearances were measured but "
           + "no span was checked against any zone, so every span is NOT ASSESSED. Evaluate "

@@ -72,8 +72,7 @@ final class HtmlStyle {
       "h2,h3{break-after:avoid;page-break-after:avoid}",
       "tr{break-inside:avoid}",
       "@media print{body{background:#fff;max-width:none;padding:0;font-size:12px}"
-          + ".attention{background:#fff}section.span{break-before:page}"
-          + "#overview{break-before:page}}");
+          + ".attention{background:#fff}section.span{break-before:page}}");
 
   /**
    * Rules for printed pages: A4 with margins, and in the page margins the line and run (top) and

@@ -88,6 +88,7 @@ public final class ReportStage {
     List<String> notes = new ArrayList<>();
     CsvOutputs.write(runDir, run, options);
     written.add(CsvOutputs.WORKLIST);
+    written.add(CsvOutputs.SITES);
     written.add(CsvOutputs.SPANS);
     GeoPackageWriter.write(runDir, run, options);
     written.add(GeoPackageWriter.FILE_NAME);

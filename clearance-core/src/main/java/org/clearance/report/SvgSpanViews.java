@@ -179,9 +179,44 @@ final class SvgSpanViews {
     }
     structures(b, sx, sy, plan);
     sites(b, sx, sy, plan);
+    if (plan) {
+      northArrow(b, sx, sy);
+    }
     b.append("</svg>");
     double stretch = (sy.pixelsPerUnit()) / sx.pixelsPerUnit();
     return new View(b.toString(), stretch);
+  }
+
+  /**
+   * A grid-north arrow in the top right corner of the plan view, turned as north lies in the
+   * span's frame (chainage to the right, offset to the left of the line upwards) and with the
+   * view's stretch of the offsets.
+   */
+  private void northArrow(StringBuilder b, Scale sx, Scale sy) {
+    double ax = result.span().from().x();
+    double ay = result.span().from().y();
+    double ds = frame.station(ax, ay + 1) - frame.station(ax, ay);
+    double de = frame.offset(ax, ay + 1) - frame.offset(ax, ay);
+    double dx = ds * Math.abs(sx.pixelsPerUnit());
+    double dy = -de * Math.abs(sy.pixelsPerUnit());
+    double n = Math.hypot(dx, dy);
+    if (!(n > 0)) {
+      return;
+    }
+    dx /= n;
+    dy /= n;
+    double cx = WIDTH - RIGHT - 26;
+    double cy = TOP + 26;
+    double r = 16;
+    b.append(Html.f("<g class=\"north\"><circle cx=\"%s\" cy=\"%s\" r=\"20\" fill=\"#fff\" "
+        + "fill-opacity=\"0.85\" stroke=\"#bbb\"/><path d=\"M%s %s L%s %s\" stroke=\"#111\" "
+        + "stroke-width=\"2\"/><path d=\"M%s %s l%s %s l%s %s z\" fill=\"#111\"/>"
+        + "<text x=\"%s\" y=\"%s\" text-anchor=\"middle\" class=\"lbl\">N</text></g>",
+        Html.px(cx), Html.px(cy), Html.px(cx - dx * r * 0.6), Html.px(cy - dy * r * 0.6),
+        Html.px(cx + dx * r * 0.5), Html.px(cy + dy * r * 0.5),
+        Html.px(cx + dx * r), Html.px(cy + dy * r), Html.px(-dx * 7 - dy * 4),
+        Html.px(-dy * 7 + dx * 4), Html.px(dy * 8), Html.px(-dx * 8),
+        Html.px(cx - dx * 9 + dy * 9), Html.px(cy - dy * 9 - dx * 9 + 4)));
   }
 
   /** The zone band around one conductor: outline as (chainage, cross) pairs. */
@@ -280,6 +315,7 @@ final class SvgSpanViews {
   }
 
   private void sites(StringBuilder b, Scale sx, Scale sy, boolean plan) {
+    List<double[]> placed = new ArrayList<>();
     for (CutSite s : result.sites()) {
       double x = sx.at(frame.station(s.x(), s.y()));
       double y = sy.at(crossOf(s.x(), s.y(), s.z(), plan));
@@ -292,17 +328,55 @@ final class SvgSpanViews {
               + "stroke=\"%s\" stroke-width=\"1.5\"/>", Html.px(x), Html.px(y),
               Html.px(r * sx.pixelsPerUnit()), Html.px(r * sy.pixelsPerUnit()), colour));
         } else {
+          // beside the line, not under it: a dashed stem, its offset in the tooltip and the
+          // cross-section below the views draws it where it stands
           b.append(Html.f("<line x1=\"%s\" x2=\"%s\" y1=\"%s\" y2=\"%s\" stroke=\"%s\" "
-              + "stroke-width=\"2\"/>", Html.px(x), Html.px(x),
-              Html.px(sy.at(s.z() - s.vegHeightM())), Html.px(y), colour));
+              + "stroke-width=\"2\" stroke-dasharray=\"3 3\"><title>%s: tree %s m %s of the "
+              + "centre line</title></line>", Html.px(x), Html.px(x),
+              Html.px(sy.at(s.z() - s.vegHeightM())), Html.px(y), colour,
+              Html.esc(s.siteId()), OutputUnit.fixed(unit.length(s.offsetM()), 1),
+              s.side().word()));
         }
       } else {
         b.append(Html.f("<circle cx=\"%s\" cy=\"%s\" r=\"6\" fill=\"none\" stroke=\"%s\" "
             + "stroke-width=\"1.5\"/>", Html.px(x), Html.px(y), colour));
       }
-      b.append(Html.f("<text x=\"%s\" y=\"%s\" class=\"site\" fill=\"%s\">%s</text>",
-          Html.px(x + 7), Html.px(y - 7), colour, Html.esc(label)));
+      double[] at = labelPlace(placed, x, y, label.length());
+      if (at != null) {
+        b.append(Html.f("<text x=\"%s\" y=\"%s\" class=\"site\" fill=\"%s\">%s</text>",
+            Html.px(at[0]), Html.px(at[1]), colour, Html.esc(label)));
+      }
     }
+  }
+
+  /** Width of a label character and height of a label, px (12 px bold text). */
+  private static final double CHAR_PX = 7.5;
+  private static final double LABEL_PX = 12;
+
+  /**
+   * Where a site label goes: the first of eight places around its mark (right above first)
+   * that overlaps no label placed before, or null when all do (the site table lists it).
+   */
+  static double[] labelPlace(List<double[]> placed, double x, double y, int chars) {
+    double w = chars * CHAR_PX;
+    double[][] tries = {{7, -7}, {7, 15}, {-7 - w, -7}, {-7 - w, 15}, {7, -21}, {7, 29},
+        {-7 - w, -21}, {-7 - w, 29}};
+    for (double[] t : tries) {
+      double x0 = x + t[0];
+      double y0 = y + t[1] - LABEL_PX;
+      boolean free = true;
+      for (double[] p : placed) {
+        if (x0 < p[2] && p[0] < x0 + w && y0 < p[3] && p[1] < y0 + LABEL_PX) {
+          free = false;
+          break;
+        }
+      }
+      if (free) {
+        placed.add(new double[] {x0, y0, x0 + w, y0 + LABEL_PX});
+        return new double[] {x + t[0], y + t[1]};
+      }
+    }
+    return null;
   }
 
   private void axes(StringBuilder b, Scale sx, Scale sy, boolean plan) {

@@ -23,7 +23,7 @@ class SpanRankingTest {
     for (double[] s : sites) { // {priority, deficit}
       list.add(new CutSite(id + "." + (list.size() + 1), id, CutSite.Kind.GROW_IN, (int) s[0],
           "z" + (int) s[0], s[0] == 1, "survey", 1, 1 + s[1], s[1], 0, 0, 0, Double.NaN,
-          Double.NaN, 50, CutSite.Side.LEFT, 1, 5, 2, OptionalInt.of(3), 1, 0));
+          Double.NaN, 50, CutSite.Side.LEFT, 1, 5, 2, OptionalInt.of(3), 1, 0, "B", 2));
     }
     return new SpanResult(rec, status, status == SpanStatus.ASSESSED ? "" : "why", list,
         OptionalInt.empty(), 10, 0);

@@ -227,4 +227,21 @@ class StructureReaderTest {
     Path missing = dir.resolve("absent.csv");
     InputErrors.check(missing, 0, null, "not found", () -> StructureReader.read(missing, METRES));
   }
+
+  @Test
+  void aLasFileGivenAsStructuresSaysWhatWasExpected() throws Exception {
+    // regression (issue 11): a LAS file given as structures said only "not UTF-8 text"
+    Path las = dir.resolve("tile.las");
+    byte[] head = new byte[64];
+    head[0] = 'L';
+    head[1] = 'A';
+    head[2] = 'S';
+    head[3] = 'F';
+    head[10] = (byte) 0xFF; // not UTF-8, as any real LAS header
+    java.nio.file.Files.write(las, head);
+    org.clearance.InputException e = org.junit.jupiter.api.Assertions.assertThrows(
+        org.clearance.InputException.class, () -> StructureReader.read(las, METRES));
+    assertTrue(e.getMessage().contains("a LAS point file (give it with --survey); expected the "
+        + "structures table (CSV or GeoJSON text)"), e.getMessage());
+  }
 }

@@ -84,7 +84,7 @@ class GeoPackageTest {
           srs.stream().map(r -> ((Number) r.get("srs_id")).intValue()).toList());
       List<Map<String, Object>> contents = query(c,
           "SELECT table_name, data_type, srs_id FROM gpkg_contents ORDER BY table_name");
-      assertEquals(List.of("conductors", "sites", "spans"),
+      assertEquals(List.of("conductors", "row", "sites", "spans", "structures"),
           contents.stream().map(r -> r.get("table_name")).toList());
       contents.forEach(r -> assertEquals("features", r.get("data_type")));
       contents.forEach(r -> assertEquals(UTM10N, ((Number) r.get("srs_id")).intValue()));
@@ -92,9 +92,21 @@ class GeoPackageTest {
           + "FROM gpkg_geometry_columns ORDER BY table_name");
       assertEquals("LINESTRING", geom.get(0).get("geometry_type_name"));
       assertEquals(1, ((Number) geom.get(0).get("z")).intValue());
-      assertEquals("POINT", geom.get(1).get("geometry_type_name"));
-      assertEquals(0, ((Number) geom.get(1).get("z")).intValue());
-      assertEquals("LINESTRING", geom.get(2).get("geometry_type_name"));
+      assertEquals("POLYGON", geom.get(1).get("geometry_type_name"));
+      assertEquals("POINT", geom.get(2).get("geometry_type_name"));
+      assertEquals(0, ((Number) geom.get(2).get("z")).intValue());
+      assertEquals("LINESTRING", geom.get(3).get("geometry_type_name"));
+      assertEquals("POINT", geom.get(4).get("geometry_type_name"));
+      // the fixture's four structures once each, and a right-of-way rectangle per span
+      assertEquals(List.of("KV-10", "KV-11", "KV-12", "KV-13"), query(c,
+          "SELECT structure_id FROM structures ORDER BY fid").stream()
+          .map(r -> r.get("structure_id")).toList());
+      assertEquals(3, query(c, "SELECT span_id FROM row").size());
+      // extent of the row layer: the line runs along grid east, 12 m either side (computed)
+      Map<String, Object> rowBox = query(c, "SELECT min_y, max_y FROM gpkg_contents WHERE "
+          + "table_name = 'row'").get(0);
+      assertEquals(2 * RunFixture.ROW_HALF_WIDTH, ((Number) rowBox.get("max_y")).doubleValue()
+          - ((Number) rowBox.get("min_y")).doubleValue(), 1e-6);
       assertEquals("ok", query(c, "PRAGMA integrity_check").get(0).values().iterator().next());
     }
   }
@@ -115,7 +127,7 @@ class GeoPackageTest {
       // the fixture's clump sits at mid-span of the first span: 100 m east of the origin
       assertArrayEquals(new double[] {500100, 4100000}, b.coords(), 1e-6);
       assertArrayEquals(new double[] {500100, 500100, 4100000, 4100000}, b.envelope(), 1e-6);
-      assertEquals(110.5, ((Number) s.get("z")).doubleValue(), 1e-9);
+      assertEquals(110.5, ((Number) s.get("z_m")).doubleValue(), 1e-9);
       assertEquals(9L, ((Number) s.get("n_points")).longValue());
       double hot = 120 - 700 * (Math.cosh(100.0 / 700) - 1); // computed, as in ReportStageTest
       assertEquals(3.048 - (hot - 110.5), ((Number) s.get("deficit_m")).doubleValue(), 1e-6);
@@ -203,5 +215,15 @@ class GeoPackageTest {
     assertTrue(q.waitFor(60, TimeUnit.SECONDS));
     assertTrue(rows.contains("site_id (String) = KV-10-11.1"), rows);
     assertTrue(rows.contains("POINT (500100 4100000)"), rows);
+    assertTrue(out.contains("Layer name: row"), out);
+    assertTrue(out.contains("Geometry: Polygon"), out);
+    assertTrue(out.contains("Layer name: structures"), out);
+    // the first span's right-of-way, 12 m either side of KV-10 -> KV-11 along grid east
+    Process w = new ProcessBuilder(ogrinfo.toString(), "-ro", gpkg.toString(), "row",
+        "-where", "span_id = 'KV-10-11'").redirectErrorStream(true).start();
+    String poly = new String(w.getInputStream().readAllBytes(), StandardCharsets.UTF_8);
+    assertTrue(w.waitFor(60, TimeUnit.SECONDS));
+    assertTrue(poly.contains("POLYGON ((500000 4100012,500200 4100012,500200 4099988,"
+        + "500000 4099988,500000 4100012))"), poly);
   }
 }

@@ -53,9 +53,12 @@ class HtmlReportTest {
 
   @Test
   void drawsPlanAndProfileForTheSpanWithFindingsOnly() {
-    assertEquals(2, count(html, "<svg "), "two views of the one span with sites");
+    assertEquals(4, count(html, "<svg "),
+        "the overview map and three views of the one span with sites");
+    assertTrue(html.contains("aria-label=\"overview map\""));
     assertTrue(html.contains("aria-label=\"Plan view of span KV-10-11\""));
     assertTrue(html.contains("aria-label=\"Profile view of span KV-10-11\""));
+    assertTrue(html.contains("aria-label=\"cross-section of span KV-10-11 at site KV-10-11.1\""));
   }
 
   @Test
@@ -66,7 +69,7 @@ class HtmlReportTest {
     RunAssessment a = RunAssessor.assess(f.model(), dir.resolve("near-points.bin"),
         RuleProfiles.builtin("example-utility"), none.assessOptions());
     String page = HtmlReport.page(a, none, java.time.Instant.EPOCH);
-    assertEquals(0, count(page, "<svg "));
+    assertEquals(1, count(page, "<svg "), "only the overview map");
     assertTrue(page.contains("Only the first 0 spans with findings are drawn"));
     assertTrue(a.drawings().isEmpty());
   }

@@ -77,15 +77,15 @@ class LonLatTest {
     assertEquals(37.0462224705789, xy.get(1).doubleValue(), 0.6e-7);
     JsonNode props = first.get("properties");
     assertEquals("prc4293", props.get("zone").textValue());
-    assertEquals(500100, props.get("x").doubleValue(), 1e-9);
+    assertEquals(500100, props.get("x_m").doubleValue(), 1e-9);
     assertEquals(0.0, props.get("years_to_violation").doubleValue(), 0.0);
     JsonNode tree = features.get(2).get("properties");
     assertTrue(tree.get("n_points").isNull());
     assertTrue(tree.get("years_to_violation").isNull());
-    // the work list carries the same longitude and latitude
-    Map<String, String> row = CsvText.rows(Files.readString(dir.resolve("worklist.csv")))
+    // the site table carries the same longitude and latitude
+    Map<String, String> row = CsvText.rows(Files.readString(dir.resolve("sites.csv")))
         .get(0);
-    assertEquals(-122.998875421175, Double.parseDouble(row.get("lon")), 0.6e-8);
-    assertFalse(row.get("lat").isEmpty());
+    assertEquals(-122.998875421175, Double.parseDouble(row.get("lon_deg")), 0.6e-8);
+    assertFalse(row.get("lat_deg").isEmpty());
   }
 }

@@ -12,6 +12,7 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
+import java.util.Set;
 import org.clearance.assess.SpanResult;
 import org.clearance.clearance.PointClearance;
 import org.clearance.rules.PointFinding;
@@ -54,6 +55,10 @@ class ReportStageTest {
     console = out.toString();
   }
 
+  private List<Map<String, String>> sites() throws IOException {
+    return CsvText.rows(Files.readString(dir.resolve("sites.csv")));
+  }
+
   private List<Map<String, String>> worklist() throws IOException {
     return CsvText.rows(Files.readString(dir.resolve("worklist.csv")));
   }
@@ -63,19 +68,20 @@ class ReportStageTest {
   }
 
   @Test
-  void worklistColumnsAreExactlyTheAgreedOnes() throws IOException {
-    // issue 5: the agreed column list, in this order
+  void siteColumnsAreExactlyTheAgreedOnes() throws IOException {
+    // issue 5: the agreed column list, in this order; issue 11: units in coordinate names
     assertEquals(List.of("site_id", "span_id", "priority", "zone", "condition",
-        "min_clearance_m", "required_m", "deficit_m", "x", "y", "z", "lon", "lat", "chainage_m",
-        "side", "offset_m", "veg_height_m", "cut_to_height_m", "n_points", "area_m2",
-        "years_to_violation", "verdict", "confidence_percent",
-        "clearance_sigma_m", "clearance_low_m", "clearance_high_m", "uncertainty_dominant"),
-        CsvText.header(Files.readString(dir.resolve("worklist.csv"))));
+        "min_clearance_m", "required_m", "deficit_m", "x_m", "y_m", "z_m", "lon_deg", "lat_deg",
+        "chainage_m", "side", "offset_m", "veg_height_m", "cut_to_height_m", "n_points",
+        "area_m2", "years_to_violation", "conductor", "cut_to_height_now_m", "verdict",
+        "confidence_percent", "clearance_sigma_m", "clearance_low_m", "clearance_high_m",
+        "uncertainty_dominant"),
+        CsvText.header(Files.readString(dir.resolve("sites.csv"))));
   }
 
   @Test
   void clumpUnderTheLineIsAPrc4293SiteWhenHot() throws IOException {
-    Map<String, String> s = worklist().get(0);
+    Map<String, String> s = sites().get(0);
     assertEquals("KV-10-11.1", s.get("site_id"));
     assertEquals("1", s.get("priority"));
     assertEquals("prc4293", s.get("zone"));
@@ -87,9 +93,9 @@ class ReportStageTest {
     assertEquals(clearance, num(s, "min_clearance_m"), CSV_TOL);
     assertEquals(PRC_M, num(s, "required_m"), CSV_TOL);
     assertEquals(PRC_M - clearance, num(s, "deficit_m"), CSV_TOL);
-    assertEquals(100, num(s, "x"), CSV_TOL);
-    assertEquals(0, num(s, "y"), CSV_TOL);
-    assertEquals(110.5, num(s, "z"), CSV_TOL);
+    assertEquals(100, num(s, "x_m"), CSV_TOL);
+    assertEquals(0, num(s, "y_m"), CSV_TOL);
+    assertEquals(110.5, num(s, "z_m"), CSV_TOL);
     assertEquals(100, num(s, "chainage_m"), CSV_TOL);
     assertEquals("centre", s.get("side"));
     assertEquals(10.5, num(s, "veg_height_m"), CSV_TOL);
@@ -101,12 +107,14 @@ class ReportStageTest {
     // computed: convex hull of a 3 x 3 grid 0.5 m apart is a 1 m square
     assertEquals(1.0, num(s, "area_m2"), 0.005 + 1e-9);
     assertEquals(0.0, num(s, "years_to_violation"), 0.0);
-    assertEquals("", s.get("lon"), "no CRS: longitude not computed");
+    assertEquals("", s.get("lon_deg"), "no CRS: longitude not computed");
+    assertEquals("B2", s.get("conductor"), "straight under the middle phase");
+    assertEquals(hotConductor - PRC_M - 100, num(s, "cut_to_height_now_m"), CSV_TOL);
   }
 
   @Test
   void watchSiteCarriesItsYearsToViolation() throws IOException {
-    Map<String, String> s = worklist().get(1);
+    Map<String, String> s = sites().get(1);
     assertEquals("KV-10-11.2", s.get("site_id"));
     assertEquals("watch", s.get("zone"));
     assertEquals("right", s.get("side"));
@@ -133,7 +141,7 @@ class ReportStageTest {
 
   @Test
   void tallTreeIsAFallInSite() throws IOException {
-    Map<String, String> s = worklist().get(2);
+    Map<String, String> s = sites().get(2);
     assertEquals("KV-10-11.3", s.get("site_id"));
     assertEquals("fall-in", s.get("zone"));
     assertEquals("4", s.get("priority"), "after the profile's three zones");
@@ -152,6 +160,50 @@ class ReportStageTest {
     assertEquals("", s.get("n_points"));
     // a 3 m crown radius: pi 3^2
     assertEquals(Math.PI * 9, num(s, "area_m2"), 0.005 + 1e-9);
+  }
+
+  @Test
+  void workListHasOneRowPerTreeOrPatchWithTheCrewsColumns() throws IOException {
+    // the fixture's span KV-10-11 holds three things: the clump under the middle phase, the
+    // watch clump 10 m right of the line and tree T1 14 m left (fall-in): three rows
+    List<Map<String, String>> w = worklist();
+    assertEquals(3, w.size());
+    Map<String, String> clump = w.get(0);
+    assertEquals("KV-10-11.W1", clump.get("item_id"));
+    assertEquals("", clump.get("tree_id"));
+    assertEquals("zone prc4293 (hot-75C)", clump.get("reasons"));
+    assertEquals("clear to height", clump.get("work"));
+    assertEquals("B2", clump.get("conductor"));
+    assertEquals("1", clump.get("circuit"));
+    double hotConductor = 120 - 700 * (Math.cosh(100.0 / 700) - 1);
+    // computed (CutHeight): today below the hot conductor by the PRC distance; for the cycle
+    // also by one cycle of class-5 growth; ground at 100 m
+    assertEquals(hotConductor - PRC_M - 100, num(clump, "cut_to_height_now_m"), CSV_TOL);
+    assertEquals(hotConductor - PRC_M - CLASS5_CYCLE_GROWTH - 100,
+        num(clump, "cut_to_height_cycle_m"), CSV_TOL);
+    assertEquals(num(sites().get(0), "min_clearance_m"), num(clump, "clearance_m"), 0.0);
+    assertEquals("", clump.get("fall_in_distance_m"), "not a fall-in tree");
+    assertEquals("", clump.get("side_trim_m"), "a cut in height clears it");
+    // first span of the line: station = chainage; 100 m of 200: the first structure is nearest
+    assertEquals(100, num(clump, "station_m"), CSV_TOL);
+    assertEquals("KV-10", clump.get("nearest_structure"));
+    assertEquals("on", clump.get("right_of_way"), "on the centre line, 12 m half width");
+    assertEquals("KV-10-11.1", clump.get("sites"));
+    Map<String, String> tree = w.stream().filter(r -> r.get("tree_id").equals("T1"))
+        .findFirst().orElseThrow();
+    assertEquals("remove tree", tree.get("work"));
+    assertEquals("fall-in (hot-75C)", tree.get("reasons"));
+    assertEquals("", tree.get("clearance_m"), "a distance column means one thing in every row");
+    assertEquals(num(sites().get(2), "min_clearance_m"), num(tree, "fall_in_distance_m"), 0.0);
+    assertEquals(RunFixture.TREE_HEIGHT + PRC_M, num(tree, "fall_in_reach_m"), CSV_TOL);
+    assertEquals(RunFixture.TREE_STATION, num(tree, "station_m"), CSV_TOL);
+    assertEquals("KV-11", tree.get("nearest_structure"));
+    assertEquals("off", tree.get("right_of_way"), "14 m from the centre line, 12 m half width");
+    assertEquals(RunFixture.TREE_OFFSET, num(tree, "offset_m"), CSV_TOL);
+    for (Map<String, String> r : w) {
+      assertTrue(Set.of("remove tree", "clear to height", "side-trim", "no cut now (re-check)")
+          .contains(r.get("work")), r.get("work"));
+    }
   }
 
   private static double bruteForceBaseDistance(double c) {
@@ -188,7 +240,7 @@ class ReportStageTest {
     assertEquals("3", found.get("n_sites"));
     assertEquals("hot-75C", found.get("governing_condition"));
     assertEquals("3", found.get("n_conductors_fitted"));
-    assertEquals(num(worklist().get(0), "min_clearance_m"), num(found, "min_clearance_hot_m"),
+    assertEquals(num(sites().get(0), "min_clearance_m"), num(found, "min_clearance_hot_m"),
         CSV_TOL);
     Map<String, String> clear = spans.get(2);
     assertEquals("0", clear.get("n_sites"));
@@ -209,7 +261,7 @@ class ReportStageTest {
     assertTrue(console.contains("prc4293 1, watch 1, fall-in 1"), console);
     assertTrue(console.contains("sites.geojson not written"), console);
     assertTrue(console.contains("qualified line-clearance personnel"), console);
-    assertEquals(List.of("worklist.csv", "spans.csv", "sites.gpkg", "report.html"),
+    assertEquals(List.of("worklist.csv", "sites.csv", "spans.csv", "sites.gpkg", "report.html"),
         outcome.written());
     assertFalse(Files.exists(dir.resolve("sites.geojson")));
   }
@@ -220,15 +272,16 @@ class ReportStageTest {
     RunFixture.metric().write(ft);
     ReportStage.run(ft, RunModelJson.read(ft.resolve(RunModel.FILE_NAME)), profile,
         ReportOptions.defaults().withUnit(LinearUnit.FOOT), null);
-    String text = Files.readString(ft.resolve("worklist.csv"));
+    String text = Files.readString(ft.resolve("sites.csv"));
     List<String> header = CsvText.header(text);
     assertEquals(List.of("site_id", "span_id", "priority", "zone", "condition",
-        "min_clearance_ft", "required_ft", "deficit_ft", "x", "y", "z", "lon", "lat",
-        "chainage_ft", "side", "offset_ft", "veg_height_ft", "cut_to_height_ft", "n_points",
-        "area_ft2", "years_to_violation", "verdict", "confidence_percent",
-        "clearance_sigma_ft", "clearance_low_ft", "clearance_high_ft", "uncertainty_dominant"),
+        "min_clearance_ft", "required_ft", "deficit_ft", "x_m", "y_m", "z_m", "lon_deg",
+        "lat_deg", "chainage_ft", "side", "offset_ft", "veg_height_ft", "cut_to_height_ft",
+        "n_points", "area_ft2", "years_to_violation", "conductor", "cut_to_height_now_ft",
+        "verdict", "confidence_percent", "clearance_sigma_ft", "clearance_low_ft",
+        "clearance_high_ft", "uncertainty_dominant"),
         header);
-    Map<String, String> m = worklist().get(0);
+    Map<String, String> m = sites().get(0);
     Map<String, String> f = CsvText.rows(text).get(0);
     // 1 ft = 0.3048 m exactly (NIST; check-values.md section 1, published)
     for (String c : List.of("min_clearance", "required", "deficit", "chainage", "veg_height",
@@ -237,7 +290,7 @@ class ReportStageTest {
           c);
     }
     assertEquals(num(m, "area_m2") / (0.3048 * 0.3048), num(f, "area_ft2"), 0.01);
-    assertEquals(num(m, "x"), num(f, "x"), 0.0, "x stays in the survey's units");
+    assertEquals(num(m, "x_m"), num(f, "x_m"), 0.0, "x stays in the survey's units");
     List<Map<String, String>> spans = CsvText.rows(Files.readString(ft.resolve("spans.csv")));
     assertEquals(200 / 0.3048, num(spans.get(1), "length_ft"), CSV_TOL);
   }

@@ -16,6 +16,7 @@ import org.clearance.clearance.NearPointWriter;
 import org.clearance.clearance.PointClearance;
 import org.clearance.clearance.SpanContext;
 import org.clearance.clearance.SpanStatus;
+import org.clearance.line.LineCondition;
 import org.clearance.line.SpanFrame;
 import org.clearance.survey.SurveyUnits;
 import org.clearance.wire.Catenary;
@@ -102,9 +103,29 @@ public final class RunFixture {
     return "KV-" + (10 + k) + "-" + (11 + k);
   }
 
+  /** Right-of-way half width of the fixture's line, m. */
+  public static final double ROW_HALF_WIDTH = 12;
+
   public RunModel model() {
     return new RunModel("test", units, new ConditionSet(CONDITIONS, GROUPS), 15, "ASPRS 3-5",
-        "test ground", spans, trees);
+        "test ground", spans, trees, facts());
+  }
+
+  /** The line as its specification would state it: three phases of circuit 1, two conditions. */
+  public static RunFacts facts() {
+    List<LineFacts.Position> positions = new ArrayList<>();
+    for (String p : PHASES) {
+      positions.add(new LineFacts.Position(p, "phase", 1, "Linnet", 1));
+    }
+    LineFacts line = new LineFacts("KV", "Kestrel Vale 115 kV", KV, 20, ROW_HALF_WIDTH,
+        positions, List.of(
+            new LineCondition("hot-75C", LineCondition.Kind.TEMPERATURE, 75, 0, 0, 913,
+                Double.NaN, Double.NaN, Double.NaN),
+            new LineCondition("gale", LineCondition.Kind.SWING, Double.NaN, 0, 0, 913,
+                Double.NaN, SWING, Double.NaN)));
+    return new RunFacts(List.of(line), List.of(), Optional.of(java.time.LocalDate.of(2026, 5, 4)),
+        Optional.of(java.time.LocalDate.of(2026, 5, 5)), "fixture",
+        Optional.of(java.time.LocalDate.of(2026, 6, 1)));
   }
 
   /** Writes model.json and near-points.bin into a folder. */

@@ -26,7 +26,8 @@ class GpsTimeTest {
     assertEquals(Instant.parse("2017-01-01T00:00:00Z"),
         GpsTime.utcOfAdjusted(adjusted).orElseThrow());
     assertEquals(Instant.parse("2016-12-31T23:59:59Z"),
-        GpsTime.utcOfAdjusted(adjusted - 2).orElseThrow(), "the second before the leap second, GPS - UTC = 17 s");
+        GpsTime.utcOfAdjusted(adjusted - 2).orElseThrow(),
+        "the second before the leap second, GPS - UTC = 17 s");
     assertEquals(LocalDate.of(2017, 1, 1), GpsTime.utcDayOfAdjusted(adjusted).orElseThrow());
   }
 

@@ -9,6 +9,12 @@ import java.util.Locale;
  * Coordinates and elevations are metres (the demo CRS is metric); numbers use {@link Locale#ROOT}.
  */
 final class LineFiles {
+
+  /**
+   * Right-of-way half width of the demo line, m: 20 m either side, a 40 m corridor, about what a
+   * 230 kV single-circuit line is given (common practice, no source).
+   */
+  static final double ROW_HALF_WIDTH_M = 20;
   /** Hot case: maximum operating temperature, degC, and creep allowance, degC. */
   static final double HOT_TEMPERATURE_C = 100;
   static final double HOT_CREEP_ALLOWANCE_C = 10;
@@ -46,6 +52,7 @@ final class LineFiles {
     w.write(f("nominal_voltage_kv: %.0f\n", DemoScene.NOMINAL_VOLTAGE_KV));
     w.write(f("altitude_m: %.0f\n", Math.ceil(altitude)));
     w.write(f("survey_conductor_temperature_c: %.1f\n", scene.surveyTemperatureC()));
+    w.write(f("row_half_width_m: %.1f\n", ROW_HALF_WIDTH_M));
     w.write("conductors:\n");
     for (DemoPosition p : scene.positions()) {
       w.write("  - position: " + p.name() + "\n");

@@ -59,6 +59,9 @@ class ReportHeaderTest {
     double surveyT = ((Number) line.get("survey_conductor_temperature_c")).doubleValue();
     assertEquals(plain(surveyT) + " \u00b0C", fact(html, "survey conductor temperature"));
 
+    double half = ((Number) line.get("row_half_width_m")).doubleValue();
+    assertEquals(plain(half) + " m either side of the centre line", fact(html, "right-of-way"));
+
     for (Object o : (List<?>) line.get("conditions")) {
       Map<?, ?> c = (Map<?, ?>) o;
       String row = row(html, (String) c.get("name"));

@@ -155,7 +155,7 @@ class WorklistTruthTest {
   }
 
   private static List<Site> sites(DemoRuns.Run run) throws IOException {
-    List<String> lines = Files.readAllLines(run.runDir().resolve("worklist.csv"),
+    List<String> lines = Files.readAllLines(run.runDir().resolve("sites.csv"),
         StandardCharsets.UTF_8);
     List<String> header = List.of(lines.get(0).split(",", -1));
     List<Site> out = new ArrayList<>();
@@ -163,8 +163,9 @@ class WorklistTruthTest {
       String[] f = line.split(",", -1);
       out.add(new Site(f[header.indexOf("span_id")],
           Integer.parseInt(f[header.indexOf("priority")]), f[header.indexOf("zone")],
-          f[header.indexOf("condition")], Double.parseDouble(f[header.indexOf("x")]),
-          Double.parseDouble(f[header.indexOf("y")]), Double.parseDouble(f[header.indexOf("z")]),
+          f[header.indexOf("condition")], Double.parseDouble(f[header.indexOf("x_m")]),
+          Double.parseDouble(f[header.indexOf("y_m")]),
+          Double.parseDouble(f[header.indexOf("z_m")]),
           Double.parseDouble(f[header.indexOf("required_m")])));
     }
     return out;
