@@ -12,6 +12,7 @@ import org.clearance.line.SpanFrame;
 import org.clearance.run.LineFacts;
 import org.clearance.run.SpanRecord;
 import org.clearance.run.TreeRecord;
+import org.clearance.survey.LonLat;
 
 /**
  * The work list of an assessed run: one item per tree or vegetation patch, gathering every cut
