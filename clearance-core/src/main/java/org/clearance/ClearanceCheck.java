@@ -177,7 +177,7 @@ public final class ClearanceCheck {
     try (NearPointWriter out = new NearPointWriter(dir.resolve(NearPointFile.FILE_NAME),
         engine.nearPointLayout())) {
       measured = engine.measure((threads, consumers) -> survey.readParallel(threads,
-          progress.wrap("clearance", consumers)), out);
+          progress.wrap("clearance", consumers)), out, wires.setAside());
       say("clearance: %,d vegetation points stored within %.1f m; %d trees near the line",
           out.count(), options.engine().keepRadius(), measured.trees().size());
     }

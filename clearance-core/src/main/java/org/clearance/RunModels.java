@@ -129,11 +129,13 @@ final class RunModels {
             ch.fromX(), ch.fromY(), ch.toX(), ch.toY(), ch.evidence()));
       }
     }
-    if (clearance != null && clearance.excludedAsConductor() + clearance.excludedAsStructure() > 0) {
-      notes.add(String.format(Locale.ROOT, "unclassified survey: %d points within %.2f m of a "
-          + "conductor taken as the conductor, %d points within %.1f m of a structure taken as "
-          + "the structure", clearance.excludedAsConductor(), engine.conductorExclusion(),
-          clearance.excludedAsStructure(), engine.structureExclusion()));
+    if (clearance != null && clearance.excludedAsConductor() + clearance.excludedAsStructure()
+        + clearance.excludedAsAirborne() > 0) {
+      notes.add(String.format(Locale.ROOT, "unclassified points set aside: %d on a wire (on a "
+          + "fitted curve within its fit tolerance, or on a long linear piece), %d within %.1f m "
+          + "of a structure, %d isolated airborne (birds, noise)",
+          clearance.excludedAsConductor(), clearance.excludedAsStructure(),
+          engine.structureExclusion(), clearance.excludedAsAirborne()));
     }
     return new SpanRecord(model.context(), lineName, structure(span.from()), structure(span.to()),
         status, reason, conductors, clearance == null ? List.of() : clearance.minima(),

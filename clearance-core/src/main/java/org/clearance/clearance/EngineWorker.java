@@ -7,6 +7,7 @@ import java.util.List;
 import java.util.function.Consumer;
 import org.clearance.ground.CanopyBuilder;
 import org.clearance.survey.PointChunk;
+import org.clearance.wire.SetAside;
 
 /**
  * One worker thread of the {@link ClearanceEngine}: measures the chunks it is given and keeps its
@@ -24,7 +25,6 @@ final class EngineWorker implements Consumer<PointChunk> {
   static final double CANOPY_MIN_HEIGHT_M = 1.0;
 
   /** What happened to a point in one span. */
-  private enum Outcome { MEASURED, CONDUCTOR, STRUCTURE }
 
   private final List<PreparedSpan> spans;
   private final SpanIndex index;
@@ -41,6 +41,8 @@ final class EngineWorker implements Consumer<PointChunk> {
   final long[] kept;
   final long[] excludedConductor;
   final long[] excludedStructure;
+  final long[] excludedAirborne;
+  private final SetAside setAside;
   private final double[] best;
   private final int[] bestConductor;
   private final double[] bestAngle;
@@ -48,7 +50,8 @@ final class EngineWorker implements Consumer<PointChunk> {
 
   EngineWorker(List<PreparedSpan> spans, SpanIndex index, ConditionSet conditions,
       HeightModel heights, VegetationSelector vegetation, ClearanceEngine.Options options,
-      NearPointWriter out, CanopyBuilder canopy) {
+      NearPointWriter out, CanopyBuilder canopy, SetAside setAside) {
+    this.setAside = setAside;
     this.spans = spans;
     this.index = index;
     this.conditions = conditions;
@@ -64,6 +67,7 @@ final class EngineWorker implements Consumer<PointChunk> {
     kept = new long[n];
     excludedConductor = new long[n];
     excludedStructure = new long[n];
+    excludedAirborne = new long[n];
     best = new double[nc];
     bestConductor = new int[nc];
     bestAngle = new double[nc];
@@ -97,6 +101,7 @@ final class EngineWorker implements Consumer<PointChunk> {
     boolean hagDone = false;
     boolean inTreeRegion = false;
     boolean notVegetation = false;
+    SetAside.Reason reason = null;
     for (int sp : candidates) {
       PreparedSpan p = spans.get(sp);
       double s = p.frame.station(x, y);
@@ -119,8 +124,20 @@ final class EngineWorker implements Consumer<PointChunk> {
         notVegetation = true;
         continue;
       }
-      if (p.inBox(s, e, z) && measure(p, x, y, z, cls, hag) == Outcome.CONDUCTOR) {
-        notVegetation = true;
+      if (vegetation.inferred()) {
+        if (reason == null) {
+          reason = setAside.reason(SetAside.key(x, y, z));
+        }
+        if (reason != SetAside.Reason.NONE) {
+          if (p.inBox(s, e, z)) {
+            (reason == SetAside.Reason.WIRE ? excludedConductor : excludedAirborne)[sp]++;
+          }
+          notVegetation = true;
+          continue;
+        }
+      }
+      if (p.inBox(s, e, z)) {
+        measure(p, x, y, z, cls, hag);
       }
     }
     if (canopy != null && inTreeRegion && !notVegetation && hag >= CANOPY_MIN_HEIGHT_M) {
@@ -128,7 +145,7 @@ final class EngineWorker implements Consumer<PointChunk> {
     }
   }
 
-  private Outcome measure(PreparedSpan p, double x, double y, double z, int cls, double hag) {
+  private void measure(PreparedSpan p, double x, double y, double z, int cls, double hag) {
     int sp = p.index;
     int nc = conditions.size();
     // Lower bounds first: a point that cannot be stored (farther than the keep radius in every
@@ -142,8 +159,7 @@ final class EngineWorker implements Consumer<PointChunk> {
         }
       }
     }
-    boolean mayKeep = lowest <= options.keepRadius()
-        || (vegetation.inferred() && lowest < options.conductorExclusion());
+    boolean mayKeep = lowest <= options.keepRadius();
     double nearest = Double.POSITIVE_INFINITY;
     for (int k = 0; k < nc; k++) {
       best[k] = Double.POSITIVE_INFINITY;
@@ -172,10 +188,6 @@ final class EngineWorker implements Consumer<PointChunk> {
         }
       }
       nearest = Math.min(nearest, best[k]);
-    }
-    if (vegetation.inferred() && best[0] < options.conductorExclusion()) {
-      excludedConductor[sp]++;
-      return Outcome.CONDUCTOR;
     }
     measured[sp]++;
     boolean keep = nearest <= options.keepRadius();
@@ -211,7 +223,6 @@ final class EngineWorker implements Consumer<PointChunk> {
       kept[sp]++;
       buffer.add(new PointClearance(p.model.span().id(), x, y, z, cls, hag, details));
     }
-    return Outcome.MEASURED;
   }
 
   private boolean nearStructure(PreparedSpan p, double x, double y) {

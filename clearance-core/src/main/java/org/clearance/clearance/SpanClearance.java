@@ -11,12 +11,23 @@ import java.util.Optional;
  * @param minima the closest vegetation in each condition of the run, in run order
  * @param pointsMeasured vegetation points inside the span's measuring box
  * @param pointsKept points within the keep radius, stored for rule evaluation
- * @param excludedAsConductor points of an unclassified survey taken to be conductor points
- * @param excludedAsStructure points of an unclassified survey taken to be structure points
+ * @param excludedAsConductor points of an unclassified survey inside the measuring box set
+ *     aside as wire points (the wire finder's evidence, docs/wire-finder.md)
+ * @param excludedAsStructure points of an unclassified survey inside the measuring box taken to
+ *     be structure points
+ * @param excludedAsAirborne points of an unclassified survey inside the measuring box set aside
+ *     as isolated airborne points (birds, high noise)
  */
 public record SpanClearance(
     String spanId, List<ConditionMinimum> minima, long pointsMeasured, long pointsKept,
-    long excludedAsConductor, long excludedAsStructure) {
+    long excludedAsConductor, long excludedAsStructure, long excludedAsAirborne) {
+
+  /** A span's measurement without airborne points set aside. */
+  public SpanClearance(String spanId, List<ConditionMinimum> minima, long pointsMeasured,
+      long pointsKept, long excludedAsConductor, long excludedAsStructure) {
+    this(spanId, minima, pointsMeasured, pointsKept, excludedAsConductor, excludedAsStructure,
+        0);
+  }
 
   public SpanClearance {
     Objects.requireNonNull(spanId, "spanId");
