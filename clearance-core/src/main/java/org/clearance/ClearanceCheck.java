@@ -216,7 +216,8 @@ public final class ClearanceCheck {
       List<SurveyedConductor> list = new ArrayList<>();
       for (FittedConductor c : sw.fitted()) {
         list.add(new SurveyedConductor(c.name(), c.position().orElse(""),
-            c.role().name().toLowerCase(Locale.ROOT), c.curve().orElseThrow()));
+            c.role().name().toLowerCase(Locale.ROOT), c.curve().orElseThrow(),
+            c.surveySwingRad()));
       }
       out.put(sw.span().id(), list);
     }

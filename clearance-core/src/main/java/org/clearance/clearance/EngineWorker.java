@@ -23,6 +23,14 @@ final class EngineWorker implements Consumer<PointChunk> {
    * tree top and is most of the points.
    */
   static final double CANOPY_MIN_HEIGHT_M = 1.0;
+  /** Reach of a structure's arm hardware along the line from its centre, m: a 3 m strain
+   * insulator and its jumper at a dead-end, an arm on the bisector of a 35 degree turn
+   * (demo corridor geometry; common practice, no source). */
+  static final double ARM_ALONG_M = 5.0;
+  /** Reach of an arm beyond its outermost conductor end, m (arm tip and clamp). */
+  static final double ARM_MARGIN_M = 2.0;
+  /** Depth of jumper loops and insulator hardware below the lowest conductor end, m. */
+  static final double ARM_BELOW_M = 3.0;
 
   /** What happened to a point in one span. */
 
@@ -117,7 +125,7 @@ final class EngineWorker implements Consumer<PointChunk> {
         }
       }
       inTreeRegion = true;
-      if (vegetation.inferred() && nearStructure(p, x, y)) {
+      if (vegetation.inferred() && (nearStructure(p, x, y) || onCrossArm(p, s, e, z))) {
         if (p.inBox(s, e, z)) {
           excludedStructure[sp]++;
         }
@@ -232,6 +240,26 @@ final class EngineWorker implements Consumer<PointChunk> {
     double bx = p.model.span().to().x() - x;
     double by = p.model.span().to().y() - y;
     return ax * ax + ay * ay < r2 || bx * bx + by * by < r2;
+  }
+
+  /**
+   * Whether a point lies where a structure's cross arms, insulators and jumpers are: within
+   * {@link #ARM_ALONG_M} along the line of a structure, across out to {@link #ARM_MARGIN_M}
+   * beyond the outermost conductor end there, and no lower than {@link #ARM_BELOW_M} below the
+   * lowest conductor end there (the arms reach past the structure disc on wide towers).
+   */
+  private static boolean onCrossArm(PreparedSpan p, double s, double e, double z) {
+    for (int end = 0; end < 2; end++) {
+      if (Double.isNaN(p.armZLo[end])) {
+        continue;
+      }
+      double along = end == 0 ? s : s - p.model.span().lengthM();
+      if (Math.abs(along) <= ARM_ALONG_M && e >= p.armELo[end] - ARM_MARGIN_M
+          && e <= p.armEHi[end] + ARM_MARGIN_M && z >= p.armZLo[end] - ARM_BELOW_M) {
+        return true;
+      }
+    }
+    return false;
   }
 
   void flush() {

@@ -10,14 +10,25 @@ import org.clearance.wire.ConductorCurve;
  *     name for a conductor the specification lacks)
  * @param position the line specification's position it belongs to, or empty for an extra
  * @param role {@code phase}, {@code shield} or {@code unknown}
- * @param curve the fitted conductor as surveyed
+ * @param curve the fitted conductor, still air (its vertical projection as surveyed)
+ * @param surveySwingRad how far the wind swung it from the vertical while surveyed, radians,
+ *     positive towards the left looking from attachment A to B; 0 when the survey showed none
  */
-public record SurveyedConductor(String name, String position, String role, ConductorCurve curve) {
+public record SurveyedConductor(String name, String position, String role, ConductorCurve curve,
+    double surveySwingRad) {
+
+  /** A conductor that hung still when surveyed. */
+  public SurveyedConductor(String name, String position, String role, ConductorCurve curve) {
+    this(name, position, role, curve, 0);
+  }
 
   public SurveyedConductor {
     Objects.requireNonNull(name, "name");
     Objects.requireNonNull(position, "position");
     Objects.requireNonNull(role, "role");
     Objects.requireNonNull(curve, "curve");
+    if (!(Math.abs(surveySwingRad) < Math.PI / 2)) {
+      surveySwingRad = 0;
+    }
   }
 }

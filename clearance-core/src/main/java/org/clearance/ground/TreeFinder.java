@@ -11,6 +11,10 @@ import java.util.List;
  * <ol>
  *   <li>canopy height model (CHM) = highest vegetation return per cell minus the ground at the
  *       cell centre (methods.md 5.1);
+ *   <li>spikes removed: a cell with no other canopy cell within {@link #SPIKE_RADIUS_M} m
+ *       reaching within {@link #SPIKE_M} m of its height is an airborne return (bird, high
+ *       noise), not a crown, and is emptied (common practice, no source: a crown falls less than
+ *       10 m within 2 m of its apex unless it is ten times as long as it is wide);
  *   <li>pits and small holes filled: a cell with at least {@link #MIN_NEIGHBOURS_TO_FILL} of its
  *       eight neighbours in the canopy that is empty, or more than {@link TreeOptions#pitDepth()}
  *       below their median, takes that median (median pit filling: common practice, no source);
@@ -29,7 +33,44 @@ final class TreeFinder {
   /** Cells are filled only when most (5 of 8) neighbours hold canopy: a gap, not an edge. */
   static final int MIN_NEIGHBOURS_TO_FILL = 5;
 
+  /** Spike test radius, m. */
+  static final double SPIKE_RADIUS_M = 2.0;
+  /** Height a spike stands above every canopy cell around it, m. */
+  static final double SPIKE_M = 10.0;
+
   private TreeFinder() {}
+
+  /** Empties the spikes (see the class comment); returns a new raster. */
+  static float[] removeSpikes(float[] chm, int side, double cellSize) {
+    float[] out = chm.clone();
+    int reach = (int) Math.ceil(SPIKE_RADIUS_M / cellSize);
+    double r2 = (SPIKE_RADIUS_M / cellSize) * (SPIKE_RADIUS_M / cellSize);
+    for (int r = 0; r < side; r++) {
+      for (int c = 0; c < side; c++) {
+        float v = chm[r * side + c];
+        if (Float.isNaN(v) || v < SPIKE_M) {
+          continue;
+        }
+        boolean supported = false;
+        for (int dr = -reach; dr <= reach && !supported; dr++) {
+          for (int dc = -reach; dc <= reach && !supported; dc++) {
+            int rr = r + dr;
+            int cc = c + dc;
+            if ((dr == 0 && dc == 0) || rr < 0 || cc < 0 || rr >= side || cc >= side
+                || dr * dr + dc * dc > r2) {
+              continue;
+            }
+            float w = chm[rr * side + cc];
+            supported = !Float.isNaN(w) && w >= v - SPIKE_M;
+          }
+        }
+        if (!supported) {
+          out[r * side + c] = Float.NaN;
+        }
+      }
+    }
+    return out;
+  }
 
   static List<Tree> find(SparseGrid dsm, GroundModel ground, TreeOptions options) {
     int window = options.maxWindowCells();
@@ -60,7 +101,7 @@ final class TreeFinder {
     if (!tall) {
       return;
     }
-    chm = fillPits(chm, side, o.pitDepth());
+    chm = fillPits(removeSpikes(chm, side, o.cellSize()), side, o.pitDepth());
     int[] tops = findTops(chm, side, o, offsets);
     int[] area = CrownSegmenter.crownCells(chm, side, tops, o);
     for (int t = 0; t < tops.length; t++) {

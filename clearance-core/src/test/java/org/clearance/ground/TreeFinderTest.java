@@ -85,6 +85,32 @@ class TreeFinderTest {
   }
 
   @Test
+  void airborneSpikesAreEmptiedAndSteepCrownsKept() {
+    // Issue 9 item 4: a high-noise return 300 m up over open land, and a bird 40 m above a
+    // 20 m crown, made trees for the fall-in check. Hand-made 0.5 m canopy: a cone 20 m tall
+    // falling 5 m per metre (steep conifer, kept), a lone return at 300 m, one at 60 m above
+    // the crown.
+    int s = 21;
+    float[] chm = new float[s * s];
+    Arrays.fill(chm, Float.NaN);
+    for (int r = 0; r < s; r++) {
+      for (int c = 0; c < 10; c++) {
+        double d = 0.5 * Math.hypot(r - 10, c - 5);
+        if (d <= 3) {
+          chm[r * s + c] = (float) (20 - 5 * d);
+        }
+      }
+    }
+    chm[10 * s + 17] = 300f;
+    chm[12 * s + 5] = 80f;
+    float[] out = TreeFinder.removeSpikes(chm, s, 0.5);
+    assertEquals(20f, out[10 * s + 5], 0f);
+    assertEquals(chm[11 * s + 5], out[11 * s + 5], 0f);
+    assertTrue(Float.isNaN(out[10 * s + 17]));
+    assertTrue(Float.isNaN(out[12 * s + 5]));
+  }
+
+  @Test
   void plateauGivesOneTopAndTwoConesTwoCrowns() {
     // Hand-made 40 x 40 canopy (0.5 m cells): cones 14 m and 12 m tall falling 2 m per metre,
     // crowns 2.5 m in radius, tops 4.5 m apart so the crowns overlap; cone 1 has a flat 2-cell
