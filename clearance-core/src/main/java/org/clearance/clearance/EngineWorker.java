@@ -245,7 +245,8 @@ final class EngineWorker implements Consumer<PointChunk> {
   /**
    * Whether a point lies where a structure's cross arms, insulators and jumpers are: within
    * {@link #ARM_ALONG_M} along the line of a structure, across out to {@link #ARM_MARGIN_M}
-   * beyond the outermost conductor end there, and no lower than {@link #ARM_BELOW_M} below the
+   * beyond the outermost conductor end there on either side (a conductor not fitted, say with
+   * a gap in its points, still has its arm and insulator), and no lower than {@link #ARM_BELOW_M} below the
    * lowest conductor end there (the arms reach past the structure disc on wide towers).
    */
   private static boolean onCrossArm(PreparedSpan p, double s, double e, double z) {
@@ -254,8 +255,9 @@ final class EngineWorker implements Consumer<PointChunk> {
         continue;
       }
       double along = end == 0 ? s : s - p.model.span().lengthM();
-      if (Math.abs(along) <= ARM_ALONG_M && e >= p.armELo[end] - ARM_MARGIN_M
-          && e <= p.armEHi[end] + ARM_MARGIN_M && z >= p.armZLo[end] - ARM_BELOW_M) {
+      double half = Math.max(Math.abs(p.armELo[end]), Math.abs(p.armEHi[end])) + ARM_MARGIN_M;
+      if (Math.abs(along) <= ARM_ALONG_M && Math.abs(e) <= half
+          && z >= p.armZLo[end] - ARM_BELOW_M) {
         return true;
       }
     }
