@@ -136,6 +136,15 @@ final class RunModels {
           + "(sampled every %.0f m, %.0f m beyond the outer conductors); the rest was not "
           + "looked at", 100 * coverage, SurveyCoverage.STEP_M, SurveyCoverage.MARGIN_M));
     }
+    if (clearance != null && clearance.unread().count() > 0) {
+      SpanClearance.Unread u = clearance.unread();
+      problems.add(String.format(Locale.ROOT, "%d points of class %s lie within %.1f m of the "
+          + "conductors (nearest %.2f m) in classes not read as vegetation (unknown, or ground "
+          + "classes standing above the ground): they may be vegetation; reclassify them or "
+          + "name their class with --vegetation-classes", u.count(),
+          u.classes().stream().map(String::valueOf).collect(
+              java.util.stream.Collectors.joining(", ")), engine.keepRadius(), u.nearestM()));
+    }
     boolean anyFitted = !sw.fitted().isEmpty();
     SpanStatus status;
     String reason;
@@ -173,7 +182,10 @@ final class RunModels {
     return new SpanRecord(model.context(), lineName, structure(span.from()), structure(span.to()),
         status, reason, conductors, clearance == null ? List.of() : clearance.minima(),
         clearance == null ? 0 : clearance.pointsMeasured(),
-        clearance == null ? 0 : clearance.pointsKept(), notes);
+        clearance == null ? 0 : clearance.pointsKept(), notes, clearance == null
+            ? SpanRecord.SetAsideCounts.NONE : new SpanRecord.SetAsideCounts(
+                clearance.excludedAsConductor(), clearance.excludedAsStructure(),
+                clearance.excludedAsAirborne()));
   }
 
   private static StructureRecord structure(Structure s) {

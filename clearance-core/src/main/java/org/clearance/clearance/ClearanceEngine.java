@@ -199,8 +199,14 @@ public final class ClearanceEngine {
       long exConductor = 0;
       long exStructure = 0;
       long exAirborne = 0;
+      long unread = 0;
+      double unreadNearest = Double.POSITIVE_INFINITY;
+      java.util.BitSet unreadClasses = new java.util.BitSet(256);
       for (EngineWorker w : workers) {
         exAirborne += w.excludedAirborne[i];
+        unread += w.unreadCount[i];
+        unreadNearest = Math.min(unreadNearest, w.unreadNearest[i]);
+        unreadClasses.or(w.unreadClasses[i]);
         measured += w.measured[i];
         kept += w.kept[i];
         exConductor += w.excludedConductor[i];
@@ -219,7 +225,8 @@ public final class ClearanceEngine {
             Double.NaN, Double.NaN));
       }
       result.add(new SpanClearance(p.model.span().id(), minima, measured, kept, exConductor,
-          exStructure, exAirborne));
+          exStructure, exAirborne, new SpanClearance.Unread(unread,
+              unread > 0 ? unreadNearest : Double.NaN, unreadClasses.stream().boxed().toList())));
     }
     return result;
   }

@@ -27,8 +27,9 @@ final class EngineWorker implements Consumer<PointChunk> {
    * insulator and its jumper at a dead-end, an arm on the bisector of a 35 degree turn
    * (demo corridor geometry; common practice, no source). */
   static final double ARM_ALONG_M = 5.0;
-  /** Reach of an arm beyond its outermost conductor end, m (arm tip and clamp). */
-  static final double ARM_MARGIN_M = 2.0;
+  /** Reach of an arm beyond its outermost conductor end, m: arm tip and clamp, and on the open
+   * corridor tile's angle tower arms 3.5 m beyond the conductors' nominal offsets (measured). */
+  static final double ARM_MARGIN_M = 4.0;
   /** Depth of jumper loops and insulator hardware below the lowest conductor end, m. */
   static final double ARM_BELOW_M = 3.0;
 
@@ -50,6 +51,11 @@ final class EngineWorker implements Consumer<PointChunk> {
   final long[] excludedConductor;
   final long[] excludedStructure;
   final long[] excludedAirborne;
+  /** Per span: points of classes not read that may be vegetation within the keep radius, the
+   * nearest of them (m) and their classes. */
+  final long[] unreadCount;
+  final double[] unreadNearest;
+  final java.util.BitSet[] unreadClasses;
   private final SetAside setAside;
   private final double[] best;
   private final int[] bestConductor;
@@ -76,6 +82,13 @@ final class EngineWorker implements Consumer<PointChunk> {
     excludedConductor = new long[n];
     excludedStructure = new long[n];
     excludedAirborne = new long[n];
+    unreadCount = new long[n];
+    unreadNearest = new double[n];
+    java.util.Arrays.fill(unreadNearest, Double.POSITIVE_INFINITY);
+    unreadClasses = new java.util.BitSet[n];
+    for (int i = 0; i < n; i++) {
+      unreadClasses[i] = new java.util.BitSet(256);
+    }
     best = new double[nc];
     bestConductor = new int[nc];
     bestAngle = new double[nc];
@@ -90,14 +103,22 @@ final class EngineWorker implements Consumer<PointChunk> {
     short[] cls = chunk.classification();
     byte[] flags = chunk.flags();
     for (int i = 0; i < chunk.size(); i++) {
-      if (!vegetation.candidateClass(cls[i]) || (flags[i] & PointChunk.FLAG_WITHHELD) != 0) {
+      if ((flags[i] & PointChunk.FLAG_WITHHELD) != 0) {
+        continue;
+      }
+      boolean read = vegetation.candidateClass(cls[i]);
+      if (!read && !vegetation.mayBeUnread(cls[i])) {
         continue;
       }
       int[] candidates = index.spansAt(xs[i], ys[i]);
       if (candidates.length == 0) {
         continue;
       }
-      point(candidates, xs[i], ys[i], zs[i], cls[i]);
+      if (read) {
+        point(candidates, xs[i], ys[i], zs[i], cls[i]);
+      } else {
+        unreadPoint(candidates, xs[i], ys[i], zs[i], cls[i]);
+      }
     }
     if (buffer.size() >= FLUSH_POINTS) {
       flush();
@@ -151,6 +172,54 @@ final class EngineWorker implements Consumer<PointChunk> {
     if (canopy != null && inTreeRegion && !notVegetation && hag >= CANOPY_MIN_HEIGHT_M) {
       canopy.add(x, y, z);
     }
+  }
+
+  /**
+   * A point of a class the check does not read that may be vegetation all the same: counted
+   * per span when within the keep radius of a conductor in any condition, never measured as
+   * vegetation.
+   */
+  private void unreadPoint(int[] candidates, double x, double y, double z, int cls) {
+    double hag = Double.NaN;
+    boolean hagDone = false;
+    for (int sp : candidates) {
+      PreparedSpan p = spans.get(sp);
+      double s = p.frame.station(x, y);
+      double e = p.frame.offset(x, y);
+      if (!p.inBox(s, e, z)) {
+        continue;
+      }
+      if (!hagDone) {
+        hag = heights.heightAboveGround(x, y, z);
+        hagDone = true;
+        if (!vegetation.unread(cls, hag)) {
+          return;
+        }
+      }
+      double d = nearest(p, x, y, z);
+      if (d <= options.keepRadius()) {
+        unreadCount[sp]++;
+        unreadNearest[sp] = Math.min(unreadNearest[sp], d);
+        unreadClasses[sp].set(cls);
+      }
+    }
+  }
+
+  /** Least distance from a point to the span's conductors over every condition, m. */
+  private double nearest(PreparedSpan p, double x, double y, double z) {
+    double best = Double.POSITIVE_INFINITY;
+    for (int k = 0; k < conditions.size(); k++) {
+      CatenaryDistance[] row = p.kernels[k];
+      for (int j = 0; j < row.length; j++) {
+        if (row[j] == null || p.lowerBound(k, j, x, y, z) >= best) {
+          continue;
+        }
+        double phi = p.swingMin[k][j] < 0 || p.swingMax[k][j] > 0
+            ? row[j].closestSwingAngle(x, y, z, p.swingMin[k][j], p.swingMax[k][j]) : 0;
+        best = Math.min(best, row[j].distance(x, y, z, phi));
+      }
+    }
+    return best;
   }
 
   private void measure(PreparedSpan p, double x, double y, double z, int cls, double hag) {

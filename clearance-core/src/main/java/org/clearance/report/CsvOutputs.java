@@ -52,7 +52,8 @@ public final class CsvOutputs {
         u.column("min_clearance_hot"), u.column("min_clearance_blowout"),
         u.column("min_clearance_ice"), "governing_condition", "worst_zone", "n_sites", "rank",
         "worst_priority", u.column("worst_deficit"), "nominal_voltage_kv", "points_checked",
-        "points_not_assessed");
+        "points_not_assessed", "points_set_aside_wire", "points_set_aside_structure",
+        "points_set_aside_airborne");
   }
 
   /** The work list's text. */
@@ -95,7 +96,7 @@ public final class CsvOutputs {
       f.add(r.reason());
       f.add(Integer.toString(r.conductorsFitted()));
       for (String group : List.of("survey", "hot", "blowout", "ice")) {
-        f.add(u.lengthText(r.minimumOfGroup(group)));
+        f.add(u.minimumText(r.minimumOfGroup(group), run.model().keepRadiusM()));
       }
       f.add(r.governingMinimum().map(ConditionMinimum::condition).orElse(""));
       f.add(ruled ? r.worst().map(CutSite::zone).orElse("") : "");
@@ -106,6 +107,9 @@ public final class CsvOutputs {
       f.add(OutputUnit.plain(s.context().nominalVoltageKv()));
       f.add(ruled ? Long.toString(r.pointsChecked()) : "");
       f.add(ruled ? Long.toString(r.pointsNotAssessed()) : "");
+      f.add(Long.toString(s.setAside().wire()));
+      f.add(Long.toString(s.setAside().structure()));
+      f.add(Long.toString(s.setAside().airborne()));
       row(b, f);
     }
     return b.toString();

@@ -114,6 +114,9 @@ public final class RunModelJson {
     }
     w.endArray();
     w.member("points_measured", s.pointsMeasured()).member("points_kept", s.pointsKept());
+    w.member("points_set_aside_wire", s.setAside().wire())
+        .member("points_set_aside_structure", s.setAside().structure())
+        .member("points_set_aside_airborne", s.setAside().airborne());
     w.name("notes").beginArray();
     for (String n : s.notes()) {
       w.value(n);
@@ -221,7 +224,13 @@ public final class RunModelJson {
     return new SpanRecord(context, r.str(s, "line_name"), readStructure(r, s, "from"),
         readStructure(r, s, "to"), SpanStatus.valueOf(r.str(s, "status")), r.str(s, "reason"),
         conductors, minima, (long) r.num(s, "points_measured"), (long) r.num(s, "points_kept"),
-        notes);
+        notes, new SpanRecord.SetAsideCounts(count(r, s, "points_set_aside_wire"),
+            count(r, s, "points_set_aside_structure"), count(r, s, "points_set_aside_airborne")));
+  }
+
+  /** A count that runs written before it existed lack: 0 then. */
+  private static long count(JsonFields r, Json.Obj s, String key) {
+    return s.members().containsKey(key) ? (long) r.num(s, key) : 0;
   }
 
   private static StructureRecord readStructure(JsonFields r, Json.Obj s, String key) {

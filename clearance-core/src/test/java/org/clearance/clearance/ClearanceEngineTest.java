@@ -188,6 +188,29 @@ class ClearanceEngineTest {
   }
 
   @Test
+  void vegetationInAClassNotReadIsCountedNearTheConductors() {
+    // Regression, issue 10 item 3: 123 494 vegetation points delivered in class 20 (ignored
+    // ground) gave "assessed and clear". Points of classes not read that may be vegetation
+    // (ground-like classes standing above the ground, unknown classes) are counted per span.
+    ConditionSet set = new ConditionSet(List.of("survey"), List.of("survey"));
+    ConductorCurve a = conductor(0);
+    ClearanceEngine engine = new ClearanceEngine(List.of(span(set, List.of(hangingOnly("A", a,
+        1)))), set, (x, y, z) -> z, classified(), ClearanceEngine.Options.defaults(1));
+    double[][] pts = {
+      {150, 2, a.z(150) - 2, 20}, // a crown labelled ignored ground, 2.83 m from the wire
+      {160, 4, a.z(160) - 5, 64}, // a user class
+      {170, 0, 0.5, 20}, // class 20 on the ground: believed
+      {180, 0, a.z(180) - 4, 2}, // ground class: never counted
+      {190, 1, a.z(190) - 3, 5}, // read as vegetation
+    };
+    SpanClearance r = engine.measure(points(pts), null).spans().get(0);
+    assertEquals(1, r.pointsMeasured());
+    assertEquals(2, r.unread().count());
+    assertEquals(Math.hypot(2, 2), r.unread().nearestM(), 2e-3);
+    assertEquals(List.of(20, 64), r.unread().classes());
+  }
+
+  @Test
   void lowerBoundsNeverExceedTheDistance() {
     // The engine skips a conductor when a cheap bound says it cannot be nearer than what is
     // known; a bound above the true distance would lose findings. Checked against the exact
