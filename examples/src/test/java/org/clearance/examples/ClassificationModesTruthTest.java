@@ -39,7 +39,10 @@ class ClassificationModesTruthTest {
   private static final double BOUNDARY_M = 0.10;
   /** Largest share of zone sites on points that are not vegetation (issue 9's target). */
   private static final double MAX_NOT_VEGETATION_SHARE = 0.02;
-  /** Fall-in tree height tolerance, m (issue 9's target). */
+  /** Survey-state minimum against the truth, m (ClearanceAccuracyTest's survey tolerance:
+   * wire noise 2-5 cm per axis averaged by the fit). */
+  private static final double SURVEY_TOL_M = 0.05;
+    /** Fall-in tree height tolerance, m (issue 9's target). */
   private static final double FALL_IN_HEIGHT_TOL_M = 0.5;
   /** A fall-in site's position names the tree top within this plan distance, m (the canopy's
    * 0.5 m cells and flat tops; docs/ground.md measured 0.67 m). */
@@ -48,12 +51,13 @@ class ClassificationModesTruthTest {
   private record Site(String span, int priority, String zone, String condition, double x,
       double y, double z, double vegHeight) {}
 
-  @ParameterizedTest(name = "seed {0}, {1}")
-  @CsvSource({"11, FULL", "11, GROUND_ONLY", "11, UNCLASSIFIED", "23, FULL",
-      "23, GROUND_ONLY", "23, UNCLASSIFIED"})
-  void findingsMatchTheTruthInEveryClassificationMode(long seed, ClassificationMode mode)
-      throws IOException {
-    DemoRuns.Run run = DemoRuns.of(DemoRuns.small(seed, mode), PROFILE);
+  @ParameterizedTest(name = "seed {0}, {1}, wind swing up to {2} deg")
+  @CsvSource({"11, FULL, 0", "11, GROUND_ONLY, 0", "11, UNCLASSIFIED, 0", "23, FULL, 0",
+      "23, GROUND_ONLY, 0", "23, UNCLASSIFIED, 0", "37, FULL, 3", "37, GROUND_ONLY, 3"})
+  void findingsMatchTheTruthInEveryClassificationMode(long seed, ClassificationMode mode,
+      double swingDeg) throws IOException {
+    DemoRuns.Run run = DemoRuns.of(DemoRuns.small(seed, mode).withSurveySwing(swingDeg),
+        PROFILE);
     TruthDistances truth = new TruthDistances(run, false);
     ZoneEvaluator evaluator = new ZoneEvaluator(RuleProfiles.builtin(PROFILE));
     List<SpanRecord> spans = run.model().spans();
@@ -67,6 +71,8 @@ class ClassificationModesTruthTest {
     List<double[]> treeTops = new ArrayList<>();
     Map<String, int[]> zoneTrees = new HashMap<>();
     Set<Integer> spansWithZoneVegetation = new HashSet<>();
+    double[] truthSurveyMinimum = new double[spans.size()];
+    java.util.Arrays.fill(truthSurveyMinimum, Double.POSITIVE_INFINITY);
     run.scene().points((chunk, ids) -> {
       for (int i = 0; i < chunk.size(); i++) {
         TruthId.Kind kind = TruthId.kind(ids[i]);
@@ -85,8 +91,13 @@ class ClassificationModesTruthTest {
           continue;
         }
         for (int sp = 0; sp < spans.size(); sp++) {
-          if (spans.get(sp).status() != SpanStatus.ASSESSED || !truth.nearSpan(sp, x, y, 0)
-              || truth.distance(sp, 0, x, y, z) > run.model().keepRadiusM()) {
+          double keep = run.model().keepRadiusM();
+          if (spans.get(sp).status() != SpanStatus.ASSESSED || !truth.nearSpan(sp, x, y, keep)) {
+            continue;
+          }
+          double survey = truth.distance(sp, 0, x, y, z);
+          truthSurveyMinimum[sp] = Math.min(truthSurveyMinimum[sp], survey);
+          if (!truth.nearSpan(sp, x, y, 0) || survey > keep) {
             continue;
           }
           PointFinding f = rules.get(sp).evaluate(new PointClearance(spans.get(sp).id(), x, y,
@@ -154,12 +165,29 @@ class ClassificationModesTruthTest {
             + height);
       }
     }
-    String figures = String.format(Locale.ROOT, "seed %d %s: spans %d, spans with vegetation"
+    // 5. The survey-state minimum against the wire as surveyed (swung by the wind): equal
+    // within SURVEY_TOL_M where the vegetation is labelled, never larger where it is inferred
+    // (a superset of the true vegetation).
+    double worstSurvey = 0;
+    for (int sp = 0; sp < spans.size(); sp++) {
+      if (spans.get(sp).status() != SpanStatus.ASSESSED
+          || !(truthSurveyMinimum[sp] <= run.model().keepRadiusM())) {
+        continue;
+      }
+      double got = spans.get(sp).minima().get(0).distance();
+      double excess = got - truthSurveyMinimum[sp];
+      worstSurvey = Math.max(worstSurvey, mode == ClassificationMode.FULL ? Math.abs(excess)
+          : excess);
+    }
+    String figures = String.format(Locale.ROOT, "seed %d %s swing %.0f deg: worst survey-state"
+        + " minimum error %.3f m; spans %d, spans with vegetation"
         + " in a zone %d, reported without a zone site %d; trees in a zone %d, without a site"
         + " %d; zone sites %d, not on vegetation %d; fall-in sites %d, not at a tree of that"
-        + " height %d", seed, mode, spans.size(), spansWithZoneVegetation.size(), falseClear,
-        zoneTrees.size(), missed, zoneSites, notVegetation, fallIn, fallInWrong);
+        + " height %d", seed, mode, swingDeg, worstSurvey, spans.size(),
+        spansWithZoneVegetation.size(), falseClear, zoneTrees.size(), missed, zoneSites,
+        notVegetation, fallIn, fallInWrong);
     System.out.println(figures);
+    assertTrue(worstSurvey <= SURVEY_TOL_M, figures);
     assertEquals(0, falseClear, figures);
     assertEquals(0, missed, figures);
     assertTrue(notVegetation <= MAX_NOT_VEGETATION_SHARE * zoneSites, figures);
