@@ -3,6 +3,7 @@ package org.clearance;
 import java.util.Objects;
 import java.util.Set;
 import org.clearance.clearance.ClearanceEngine;
+import org.clearance.clearance.UncertaintyOptions;
 import org.clearance.ground.GroundOptions;
 import org.clearance.ground.TreeOptions;
 import org.clearance.report.ReportOptions;
@@ -21,11 +22,12 @@ import org.clearance.wire.WireFinderOptions;
  * @param engine clearance engine options
  * @param trees tree finding options, or null to skip the fall-in check
  * @param report report options
+ * @param uncertainty the input uncertainties the survey and the library do not state
  */
 public record CheckOptions(
     int threads, Set<Integer> vegetationClasses, GroundOptions ground, WireFinderOptions wires,
     ConditionSolver.Options conditions, ClearanceEngine.Options engine, TreeOptions trees,
-    ReportOptions report) {
+    ReportOptions report, UncertaintyOptions uncertainty) {
 
   public CheckOptions {
     if (threads < 1) {
@@ -37,6 +39,15 @@ public record CheckOptions(
     Objects.requireNonNull(conditions, "conditions");
     Objects.requireNonNull(engine, "engine");
     Objects.requireNonNull(report, "report");
+    Objects.requireNonNull(uncertainty, "uncertainty");
+  }
+
+  /** Options with the default input uncertainties. */
+  public CheckOptions(int threads, Set<Integer> vegetationClasses, GroundOptions ground,
+      WireFinderOptions wires, ConditionSolver.Options conditions, ClearanceEngine.Options engine,
+      TreeOptions trees, ReportOptions report) {
+    this(threads, vegetationClasses, ground, wires, conditions, engine, trees, report,
+        UncertaintyOptions.DEFAULT);
   }
 
   /** The documented defaults of every stage with the given number of threads. */
@@ -50,6 +61,12 @@ public record CheckOptions(
   /** The same options with another report unit and vegetation classes. */
   public CheckOptions with(ReportOptions newReport, Set<Integer> classes) {
     return new CheckOptions(threads, classes, ground, wires, conditions, engine, trees,
-        newReport);
+        newReport, uncertainty);
+  }
+
+  /** The same options with other input uncertainties. */
+  public CheckOptions with(UncertaintyOptions newUncertainty) {
+    return new CheckOptions(threads, vegetationClasses, ground, wires, conditions, engine, trees,
+        report, newUncertainty);
   }
 }

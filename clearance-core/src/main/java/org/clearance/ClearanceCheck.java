@@ -20,6 +20,7 @@ import org.clearance.clearance.NearPointWriter;
 import org.clearance.clearance.SpanContext;
 import org.clearance.clearance.SpanModel;
 import org.clearance.clearance.SurveyedConductor;
+import org.clearance.clearance.UncertaintyFile;
 import org.clearance.clearance.VegetationSelector;
 import org.clearance.ground.GroundModel;
 import org.clearance.ground.GroundModelBuilder;
@@ -31,6 +32,7 @@ import org.clearance.line.Span;
 import org.clearance.line.SpanLayout;
 import org.clearance.line.Structure;
 import org.clearance.line.StructureReader;
+import org.clearance.line.SurveyTemperatureSpec;
 import org.clearance.report.ReportStage;
 import org.clearance.rules.RuleProfile;
 import org.clearance.rules.RuleProfiles;
@@ -39,10 +41,14 @@ import org.clearance.run.RunModelJson;
 import org.clearance.run.RunRecord;
 import org.clearance.run.RunRecordJson;
 import org.clearance.sag.ConditionSolver;
+import org.clearance.sag.SurveyTemperatures;
+import org.clearance.sag.TemperatureEstimate;
+import org.clearance.survey.LonLat;
 import org.clearance.survey.PointChunk;
 import org.clearance.survey.Survey;
 import org.clearance.wire.ConductorTable;
 import org.clearance.wire.FittedConductor;
+import org.clearance.wire.FlightTimes;
 import org.clearance.wire.SpanWires;
 import org.clearance.wire.WireFinder;
 import org.clearance.wire.WireResult;
@@ -147,8 +153,9 @@ public final class ClearanceCheck {
     say("ground: %s", scan.ground.source().describe());
     stop("ground");
 
+    FlightTimes flight = new FlightTimes(layout.spans());
     WireResult wires = new WireFinder(options.wires()).find(consumers -> survey.readParallel(
-        options.threads(), progress.wrap("wires", consumers)), layout,
+        options.threads(), progress.wrap("wires", flight.consumers(consumers))), layout,
         scan.ground::heightAboveGround);
     long fittedCount = wires.spans().stream().mapToLong(s -> s.fitted().size()).sum();
     say("wires: %d conductors fitted in %d spans; %d structure change(s)", fittedCount,
@@ -159,8 +166,13 @@ public final class ClearanceCheck {
 
     ConditionSet conditions = ConditionModels.conditionSet(specs);
     Map<String, List<SurveyedConductor>> fitted = surveyed(wires);
+    SurveyTemperatures temperatures = surveyTemperatures(survey, flight);
     Map<String, List<ConductorModel>> models = ConditionModels.build(wires.layout(), fitted,
-        conditions, new ConditionSolver(options.conditions()));
+        conditions, new ConditionSolver(options.conditions()), temperatures,
+        options.uncertainty());
+    Map<String, TemperatureEstimate> spanTemperatures =
+        ConditionModels.spanTemperatures(wires.layout(), temperatures);
+    sayTemperatures(specs, spanTemperatures);
     say("conditions: %s", ConditionModels.summary(conditions, models));
     stop("conditions");
 
@@ -177,10 +189,12 @@ public final class ClearanceCheck {
       say("clearance: %,d vegetation points stored within %.1f m; %d trees near the line",
           out.count(), options.engine().keepRadius(), measured.trees().size());
     }
+    UncertaintyFile.write(dir.resolve(UncertaintyFile.FILE_NAME), spanModels, conditions,
+        options.uncertainty());
     stop("clearance");
 
     RunModel model = RunModels.of(toolVersion, survey.units(), conditions, options, vegetation,
-        scan.ground, wires, spanModels, measured)
+        scan.ground, wires, spanModels, measured, spanTemperatures)
         .withFacts(RunModels.facts(specs, record, survey, scan.gpsMin, scan.gpsMax));
     RunModelJson.write(model, dir.resolve(RunModel.FILE_NAME));
     RunAssessment assessed = ReportStage.assess(dir, model, profile, options.report());
@@ -197,7 +211,7 @@ public final class ClearanceCheck {
         .parameter("output_unit", options.report().outputUnit().symbol());
     timings.forEach(record::timing);
     for (String name : List.of(ConductorTable.FILE_NAME, NearPointFile.FILE_NAME,
-        RunModel.FILE_NAME)) {
+        UncertaintyFile.FILE_NAME, RunModel.FILE_NAME)) {
       record.output(name);
     }
     outcome.written().forEach(record::output);
@@ -213,12 +227,36 @@ public final class ClearanceCheck {
       List<SurveyedConductor> list = new ArrayList<>();
       for (FittedConductor c : sw.fitted()) {
         list.add(new SurveyedConductor(c.name(), c.position().orElse(""),
-            c.role().name().toLowerCase(Locale.ROOT), c.curve().orElseThrow(),
+            c.role().name().toLowerCase(Locale.ROOT), c.curve().orElseThrow(), c.covariance(),
             c.surveySwingRad()));
       }
       out.put(sw.span().id(), list);
     }
     return out;
+  }
+
+  /** The survey temperatures: given, or computed at each section's flight time. */
+  private static SurveyTemperatures surveyTemperatures(Survey survey, FlightTimes flight) {
+    boolean adjusted = survey.files().stream().allMatch(f -> f.header().adjustedGpsTime());
+    LonLat.Lookup geo = LonLat.forUnits(survey.units());
+    Map<String, Double> times = new LinkedHashMap<>();
+    flight.result().forEach((id, t) -> times.put(id, t.meanGps()));
+    return new SurveyTemperatures(new SurveyTemperatures.Clock(adjusted), geo.transform(),
+        geo.note(), times);
+  }
+
+  private void sayTemperatures(List<LineSpec> specs, Map<String, TemperatureEstimate> bySpan) {
+    if (specs.stream().noneMatch(s -> s.surveyTemperature().source()
+        == SurveyTemperatureSpec.Source.COMPUTED)) {
+      return;
+    }
+    Map<String, TemperatureEstimate> distinct = new LinkedHashMap<>();
+    bySpan.forEach((id, t) -> distinct.putIfAbsent(t.detail(), t));
+    for (TemperatureEstimate t : distinct.values()) {
+      say("  survey temperature %s: %s", t.isKnown() ? String.format(Locale.ROOT,
+          "%.1f +- %.1f degC (%s dominates)", t.temperatureC(), t.sigmaC(), t.dominant())
+          : "unknown", t.detail());
+    }
   }
 
   private static List<SpanModel> spanModels(SpanLayout layout,

@@ -21,6 +21,7 @@ import org.clearance.ground.GroundModel;
 import org.clearance.line.LineSpec;
 import org.clearance.line.Span;
 import org.clearance.line.Structure;
+import org.clearance.line.SurveyTemperatureSpec;
 import org.clearance.run.ConductorRecord;
 import org.clearance.run.CurveRecord;
 import org.clearance.run.LineFacts;
@@ -30,6 +31,7 @@ import org.clearance.run.RunRecord;
 import org.clearance.run.SpanRecord;
 import org.clearance.run.StructureRecord;
 import org.clearance.run.TreeRecord;
+import org.clearance.sag.TemperatureEstimate;
 import org.clearance.survey.GpsTime;
 import org.clearance.survey.Survey;
 import org.clearance.survey.SurveyUnits;
@@ -71,7 +73,8 @@ final class RunModels {
 
   static RunModel of(String toolVersion, SurveyUnits units, ConditionSet conditions,
       CheckOptions options, VegetationSelector vegetation, GroundModel ground, WireResult wires,
-      List<SpanModel> spanModels, Measurement measured) {
+      List<SpanModel> spanModels, Measurement measured,
+      Map<String, TemperatureEstimate> temperatures) {
     Map<String, SpanClearance> clearances = new HashMap<>();
     measured.spans().forEach(c -> clearances.put(c.spanId(), c));
     Map<String, SpanModel> models = new HashMap<>();
@@ -84,7 +87,8 @@ final class RunModels {
       SpanClearance clearance = clearances.get(sw.span().id());
       double coverage = model == null ? Double.NaN : SurveyCoverage.share(model, ground);
       spans.add(span(sw, model, clearance, wires.structureChanges(), conditions,
-          options.engine(), lineNames.getOrDefault(sw.span().lineId(), ""), coverage));
+          options.engine(), lineNames.getOrDefault(sw.span().lineId(), ""), coverage,
+          temperatures.get(sw.span().id())));
     }
     List<TreeRecord> trees = new ArrayList<>();
     int n = 0;
@@ -100,7 +104,7 @@ final class RunModels {
 
   private static SpanRecord span(SpanWires sw, SpanModel model, SpanClearance clearance,
       List<StructureChange> changes, ConditionSet conditions, ClearanceEngine.Options engine,
-      String lineName, double coverage) {
+      String lineName, double coverage, TemperatureEstimate temperature) {
     Span span = sw.span();
     Map<String, ConductorModel> byName = new HashMap<>();
     if (model != null) {
@@ -164,6 +168,9 @@ final class RunModels {
       reason = "";
     }
     List<String> notes = new ArrayList<>();
+    if (temperature != null && temperature.source() != SurveyTemperatureSpec.Source.NONE) {
+      notes.add(temperatureNote(temperature));
+    }
     for (StructureChange ch : changes) {
       if (ch.structureId().equals(span.from().id()) || ch.structureId().equals(span.to().id())) {
         notes.add("structure " + ch.structureId() + " " + ch.kind().name().toLowerCase(Locale.ROOT)
@@ -186,6 +193,20 @@ final class RunModels {
             ? SpanRecord.SetAsideCounts.NONE : new SpanRecord.SetAsideCounts(
                 clearance.excludedAsConductor(), clearance.excludedAsStructure(),
                 clearance.excludedAsAirborne()));
+  }
+
+  /** The survey temperature a span's change of state used, for the report. */
+  static String temperatureNote(TemperatureEstimate t) {
+    if (!t.isKnown()) {
+      return "survey conductor temperature unknown: " + t.detail();
+    }
+    if (t.source() != SurveyTemperatureSpec.Source.COMPUTED) {
+      return String.format(Locale.ROOT, "survey conductor temperature %.1f degC, standard "
+          + "uncertainty %.1f degC (%s)", t.temperatureC(), t.sigmaC(), t.detail());
+    }
+    return String.format(Locale.ROOT, "survey conductor temperature %.1f degC, standard "
+        + "uncertainty %.1f degC (computed by the %s; %s dominates the uncertainty)",
+        t.temperatureC(), t.sigmaC(), t.detail(), t.dominant());
   }
 
   private static StructureRecord structure(Structure s) {

@@ -1,10 +1,12 @@
 package org.clearance.cli;
 
+import java.util.List;
 import java.util.Locale;
 import java.util.Set;
 import java.util.TreeSet;
 import org.clearance.CheckOptions;
 import org.clearance.clearance.ClearanceEngine;
+import org.clearance.clearance.UncertaintyOptions;
 import org.clearance.report.ReportOptions;
 import org.clearance.survey.LinearUnit;
 import picocli.CommandLine;
@@ -35,6 +37,12 @@ public final class CheckSettings {
           + "evaluation and re-evaluation (default 10).")
   Double keepRadius;
 
+  @Option(names = "--survey-accuracy", paramLabel = "H_M,V_M", split = ",",
+      description = "Accuracy of the survey's points, RMSE in metres: horizontal per axis, "
+          + "vertical (default 0.15,0.10: the ASPRS 10-cm vertical class); part of every "
+          + "distance's uncertainty.")
+  List<Double> surveyAccuracy;
+
   /** The check options these settings describe. */
   CheckOptions options(CommandLine.Model.CommandSpec spec) {
     int n = threads != null ? threads
@@ -63,6 +71,18 @@ public final class CheckSettings {
           o.conditions(), new ClearanceEngine.Options(keepRadius, e.threads(),
               e.structureExclusion(),
               Math.max(keepRadius, e.treeReach())), o.trees(), o.report());
+    }
+    if (surveyAccuracy != null) {
+      if (surveyAccuracy.size() != 2 || !(surveyAccuracy.get(0) >= 0
+          && surveyAccuracy.get(0) <= 10 && surveyAccuracy.get(1) >= 0
+          && surveyAccuracy.get(1) <= 10)) {
+        throw new CommandLine.ParameterException(spec.commandLine(),
+            "--survey-accuracy needs two RMSE values 0 to 10 m, horizontal,vertical: "
+                + surveyAccuracy);
+      }
+      UncertaintyOptions u = o.uncertainty();
+      o = o.with(new UncertaintyOptions(surveyAccuracy.get(0), surveyAccuracy.get(1),
+          u.modulusRelative(), u.expansionRelative(), u.massRelative()));
     }
     return o.with(ReportOptions.defaults().withUnit(unit),
         vegetationClasses == null ? null : new TreeSet<>(vegetationClasses));

@@ -31,7 +31,7 @@ import picocli.CommandLine.Option;
 public final class DemoCommand implements Callable<Integer> {
 
   /** The rule profile the demo uses unless told. */
-  static final String DEFAULT_PROFILE = "example-utility";
+  static final String DEFAULT_PROFILE = "example-utility-95";
 
   @Option(names = "--out", paramLabel = "DIR", defaultValue = "demo-run",
       description = "Folder for the demo (default: ${DEFAULT-VALUE}).")

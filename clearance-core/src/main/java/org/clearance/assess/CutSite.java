@@ -1,6 +1,7 @@
 package org.clearance.assess;
 
 import java.util.Objects;
+import java.util.Optional;
 import java.util.OptionalInt;
 
 /**
@@ -42,13 +43,27 @@ import java.util.OptionalInt;
  *     circle), NaN when not known
  * @param yearsToViolation years until the site grows into the violation-reference zone: 0 when
  *     it is inside it, +infinity when never at the profile's rates, NaN when not computed
+ * @param interval the governing distance's interval at the profile's confidence level and the
+ *     site's verdict (a violation when any of its points is one), or empty when the profile asks
+ *     for no confidence level (and for fall-in sites)
  */
 public record CutSite(
     String siteId, String spanId, Kind kind, int priority, String zone,
     boolean violationReference, String condition, double minClearanceM, double requiredM,
     double deficitM, double x, double y, double z, double lon, double lat, double chainageM,
     Side side, double offsetM, double vegHeightM, double cutToHeightM, OptionalInt points,
-    double areaM2, double yearsToViolation) {
+    double areaM2, double yearsToViolation, Optional<FindingInterval> interval) {
+
+  /** A site without an interval. */
+  public CutSite(String siteId, String spanId, Kind kind, int priority, String zone,
+      boolean violationReference, String condition, double minClearanceM, double requiredM,
+      double deficitM, double x, double y, double z, double lon, double lat, double chainageM,
+      Side side, double offsetM, double vegHeightM, double cutToHeightM, OptionalInt points,
+      double areaM2, double yearsToViolation) {
+    this(siteId, spanId, kind, priority, zone, violationReference, condition, minClearanceM,
+        requiredM, deficitM, x, y, z, lon, lat, chainageM, side, offsetM, vegHeightM,
+        cutToHeightM, points, areaM2, yearsToViolation, Optional.empty());
+  }
 
   /** Zone name of fall-in sites. */
   public static final String FALL_IN_ZONE = "fall-in";
@@ -82,19 +97,26 @@ public record CutSite(
     Objects.requireNonNull(condition, "condition");
     Objects.requireNonNull(side, "side");
     Objects.requireNonNull(points, "points");
+    Objects.requireNonNull(interval, "interval");
   }
 
   /** The same site under another id. */
   public CutSite withId(String id) {
     return new CutSite(id, spanId, kind, priority, zone, violationReference, condition,
         minClearanceM, requiredM, deficitM, x, y, z, lon, lat, chainageM, side, offsetM,
-        vegHeightM, cutToHeightM, points, areaM2, yearsToViolation);
+        vegHeightM, cutToHeightM, points, areaM2, yearsToViolation, interval);
+  }
+
+  /** Whether the site is only a possible violation (its interval straddles the zone). */
+  public boolean possibleOnly() {
+    return interval.map(i -> i.verdict() == FindingInterval.Verdict.POSSIBLE_VIOLATION)
+        .orElse(false);
   }
 
   /** The same site with a longitude and latitude. */
   public CutSite withLonLat(double longitude, double latitude) {
     return new CutSite(siteId, spanId, kind, priority, zone, violationReference, condition,
         minClearanceM, requiredM, deficitM, x, y, z, longitude, latitude, chainageM, side,
-        offsetM, vegHeightM, cutToHeightM, points, areaM2, yearsToViolation);
+        offsetM, vegHeightM, cutToHeightM, points, areaM2, yearsToViolation, interval);
   }
 }

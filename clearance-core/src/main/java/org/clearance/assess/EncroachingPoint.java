@@ -1,6 +1,7 @@
 package org.clearance.assess;
 
 import java.util.Objects;
+import java.util.Optional;
 import org.clearance.rules.ZoneViolation;
 
 /**
@@ -13,12 +14,21 @@ import org.clearance.rules.ZoneViolation;
  * @param violation the most urgent zone it is inside
  * @param years years to the violation-reference zone (0 inside, +infinity never, NaN unknown)
  * @param allowedTop highest elevation the vegetation may keep ({@link CutHeight}), m
+ * @param interval the distance interval and verdict at the profile's confidence level, or empty
+ *     when the profile asks for none
  */
 record EncroachingPoint(double x, double y, double z, double heightAboveGround,
-    ZoneViolation violation, double years, double allowedTop) {
+    ZoneViolation violation, double years, double allowedTop,
+    Optional<FindingInterval> interval) {
+
+  EncroachingPoint(double x, double y, double z, double heightAboveGround,
+      ZoneViolation violation, double years, double allowedTop) {
+    this(x, y, z, heightAboveGround, violation, years, allowedTop, Optional.empty());
+  }
 
   EncroachingPoint {
     Objects.requireNonNull(violation, "violation");
+    Objects.requireNonNull(interval, "interval");
   }
 
   int priority() {

@@ -17,6 +17,7 @@ import org.clearance.clearance.NearPointFile;
 import org.clearance.clearance.NearPointReader;
 import org.clearance.clearance.PointClearance;
 import org.clearance.clearance.SpanStatus;
+import org.clearance.clearance.UncertaintyFile;
 import org.clearance.line.SpanFrame;
 import org.clearance.rules.PointFinding;
 import org.clearance.rules.Requirement;
@@ -29,6 +30,7 @@ import org.clearance.run.RunModel;
 import org.clearance.run.SpanRecord;
 import org.clearance.run.StructureRecord;
 import org.clearance.run.TreeRecord;
+import org.clearance.survey.LonLat;
 
 /**
  * Evaluates a finished run under a rule profile: streams {@code near-points.bin} once, checks
@@ -79,9 +81,10 @@ public final class RunAssessor {
           geo.transform().isPresent());
     }
     ZoneEvaluator evaluator = new ZoneEvaluator(profile);
+    DistanceIntervals intervals = intervals(nearPoints);
     Map<String, SpanState> states = new LinkedHashMap<>();
     for (SpanRecord s : model.spans()) {
-      states.put(s.id(), new SpanState(s, evaluator.forSpan(s.context())));
+      states.put(s.id(), new SpanState(s, evaluator.forSpan(s.context()), intervals));
     }
     NearPointFile layout = NearPointReader.header(nearPoints);
     if (!layout.conditions().equals(model.conditions().names())) {
@@ -116,6 +119,20 @@ public final class RunAssessor {
         drawings(nearPoints, states, ranked), geo.note(), geo.transform().isPresent());
   }
 
+  /** The distance intervals the profile asks for, or null when it asks for none. */
+  private DistanceIntervals intervals(Path nearPoints) throws IOException {
+    double k = profile.coverageFactor();
+    if (Double.isNaN(k)) {
+      return null;
+    }
+    Path file = nearPoints.resolveSibling(UncertaintyFile.FILE_NAME);
+    UncertaintyFile u = UncertaintyFile.read(file).orElseThrow(() -> new InputException(file,
+        null, null, "rule profile " + profile.name() + " asks for findings at a "
+            + profile.confidencePercent() + " % confidence level, but the run folder has no "
+            + UncertaintyFile.FILE_NAME + " (made by an older version): run the check again"));
+    return new DistanceIntervals(u, k, profile.confidencePercent());
+  }
+
   /**
    * Point samples of the spans the report draws (the first spans with sites in ranking
    * order), from a second pass over the file, so that memory stays bounded by the drawn spans.
@@ -136,7 +153,7 @@ public final class RunAssessor {
       if (sample == null) {
         return;
       }
-      PointFinding f = states.get(p.spanId()).rules.evaluate(p);
+      PointFinding f = states.get(p.spanId()).evaluate(p).finding();
       if (f.violation().isPresent()) {
         sample.addInside(p.x(), p.y(), p.z(), f.violation().get().zone().priority());
       } else {
@@ -155,22 +172,32 @@ public final class RunAssessor {
   private final class SpanState {
     final SpanRecord span;
     final SpanRules rules;
+    final DistanceIntervals intervals;
     final List<EncroachingPoint> inside = new ArrayList<>();
     long checked;
     long notAssessed;
     String firstNotAssessed = "";
 
-    SpanState(SpanRecord span, SpanRules rules) {
+    SpanState(SpanRecord span, SpanRules rules, DistanceIntervals intervals) {
       this.span = span;
       this.rules = rules;
+      this.intervals = intervals;
+    }
+
+    /** The finding of a point: with its interval when the profile asks for a confidence level. */
+    DistanceIntervals.Outcome evaluate(PointClearance p) {
+      return intervals == null ? new DistanceIntervals.Outcome(rules.evaluate(p),
+          Optional.empty()) : intervals.evaluate(rules, p);
     }
 
     void add(PointClearance p) {
       checked++;
-      PointFinding f = rules.evaluate(p);
+      DistanceIntervals.Outcome o = evaluate(p);
+      PointFinding f = o.finding();
       if (f.verdict() == PointFinding.Verdict.INSIDE_ZONE) {
         inside.add(new EncroachingPoint(p.x(), p.y(), p.z(), p.heightAboveGround(),
-            f.violation().orElseThrow(), f.yearsToViolation(), CutHeight.allowedTop(rules, p)));
+            f.violation().orElseThrow(), f.yearsToViolation(), CutHeight.allowedTop(rules, p),
+            o.interval()));
       } else if (f.verdict() == PointFinding.Verdict.NOT_ASSESSED && notAssessed++ == 0) {
         firstNotAssessed = f.notAssessedReason().orElse("");
       }

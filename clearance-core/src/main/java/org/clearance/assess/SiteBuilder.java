@@ -2,6 +2,7 @@ package org.clearance.assess;
 
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Optional;
 import java.util.OptionalInt;
 import org.clearance.line.SpanFrame;
 import org.locationtech.jts.geom.Coordinate;
@@ -112,7 +113,21 @@ final class SiteBuilder {
     return new CutSite("", spanId, CutSite.Kind.GROW_IN, v.zone().priority(), v.zone().name(),
         v.zone().violationReference(), v.condition(), v.actualM(), v.requiredM(), v.deficitM(),
         gov.x(), gov.y(), gov.z(), Double.NaN, Double.NaN, chainage, side, offset, tallest,
-        cutTo, OptionalInt.of(g.size()), planArea(g), years);
+        cutTo, OptionalInt.of(g.size()), planArea(g), years, siteInterval(gov, g));
+  }
+
+  /** The governing point's interval, a violation when any point of the site is one. */
+  private static Optional<FindingInterval> siteInterval(EncroachingPoint gov,
+      List<EncroachingPoint> g) {
+    if (gov.interval().isEmpty()) {
+      return Optional.empty();
+    }
+    boolean any = g.stream().anyMatch(p -> p.interval().map(i -> i.verdict()
+        == FindingInterval.Verdict.VIOLATION).orElse(true));
+    FindingInterval i = gov.interval().get();
+    return Optional.of(new FindingInterval(i.distanceM(), i.sigmaM(), i.lowM(), i.highM(),
+        i.confidencePercent(), any ? FindingInterval.Verdict.VIOLATION
+            : FindingInterval.Verdict.POSSIBLE_VIOLATION, i.dominant()));
   }
 
   /** Side of a signed offset (positive left). */

@@ -21,7 +21,9 @@ import org.clearance.sag.ConditionState;
 import org.clearance.sag.InsulatorSwing;
 import org.clearance.sag.SectionSurvey;
 import org.clearance.sag.SectionTension;
+import org.clearance.sag.SurveyTemperatures;
 import org.clearance.sag.SuspensionString;
+import org.clearance.sag.TemperatureEstimate;
 import org.clearance.wire.ConductorCurve;
 
 /**
@@ -79,9 +81,38 @@ public final class ConditionModels {
   public static Map<String, List<ConductorModel>> build(SpanLayout layout,
       Map<String, List<SurveyedConductor>> fitted, ConditionSet conditions,
       ConditionSolver solver) {
+    return build(layout, fitted, conditions, solver, SurveyTemperatures.givenOnly());
+  }
+
+  /**
+   * Conductor models for every span with fitted conductors, the survey temperature of each tension
+   * section and position from {@code temperatures}.
+   *
+   * @see #build(SpanLayout, Map, ConditionSet, ConditionSolver)
+   */
+  public static Map<String, List<ConductorModel>> build(SpanLayout layout,
+      Map<String, List<SurveyedConductor>> fitted, ConditionSet conditions,
+      ConditionSolver solver, SurveyTemperatures temperatures) {
+    return build(layout, fitted, conditions, solver, temperatures, null);
+  }
+
+  /**
+   * Conductor models with the uncertainty of every state ({@link UncertaintyPropagation}).
+   *
+   * @param uncertainty input uncertainties, or null for models without uncertainties
+   * @see #build(SpanLayout, Map, ConditionSet, ConditionSolver, SurveyTemperatures)
+   */
+  public static Map<String, List<ConductorModel>> build(SpanLayout layout,
+      Map<String, List<SurveyedConductor>> fitted, ConditionSet conditions,
+      ConditionSolver solver, SurveyTemperatures temperatures, UncertaintyOptions uncertainty) {
+    UncertaintyPropagation propagation = uncertainty == null ? null
+        : new UncertaintyPropagation(solver, uncertainty);
     Map<String, List<ConductorModel>> out = new LinkedHashMap<>();
     for (LineLayout line : layout.lines()) {
-      Map<String, SectionSurvey> sections = sectionSurveys(line, fitted);
+      Map<String, String> why = new HashMap<>();
+      Map<String, Double> sigmas = new HashMap<>();
+      Map<String, SectionSurvey> sections = sectionSurveys(line, fitted, temperatures, why,
+          sigmas);
       List<Span> spans = line.spans();
       for (int i = 0; i < spans.size(); i++) {
         Span span = spans.get(i);
@@ -91,8 +122,11 @@ public final class ConditionModels {
         for (SurveyedConductor c : fitted.getOrDefault(span.id(), List.of())) {
           SectionSurvey section = sections.getOrDefault(sectionKey(line.section(span), c.name()),
               SectionSurvey.unknown());
-          models.add(model(line.spec(), span, c, section, conditions, solver, before, after,
-              spans, i));
+          String key = sectionKey(line.section(span), c.name());
+          ConductorModel m = model(line.spec(), span, c, section, conditions, solver, before,
+              after, spans, i, why.get(key));
+          models.add(propagation == null ? m : withUncertainty(m, line.spec(), c, section,
+              sigmas.getOrDefault(key, Double.NaN), conditions, solver, propagation));
         }
         out.put(span.id(), models);
       }
@@ -102,7 +136,7 @@ public final class ConditionModels {
 
   private static ConductorModel model(LineSpec spec, Span span, SurveyedConductor c,
       SectionSurvey section, ConditionSet conditions, ConditionSolver solver, double before,
-      double after, List<Span> spans, int index) {
+      double after, List<Span> spans, int index, String temperatureProblem) {
     Optional<ConductorPosition> position = spec.position(c.position());
     ConductorType type = position.map(ConductorPosition::conductor).orElse(null);
     List<Optional<ConductorState>> states = new ArrayList<>();
@@ -128,12 +162,41 @@ public final class ConditionModels {
         failures.add(Optional.empty());
       } catch (IllegalArgumentException e) {
         states.add(Optional.empty());
+        String message = temperatureProblem != null
+            && Double.isNaN(section.conductorTemperatureC())
+            && condition.get().needsChangeOfState() ? temperatureProblem : e.getMessage();
         failures.add(Optional.of(position.isEmpty() && type == null
-            ? "conductor " + c.name() + " is not in the line specification: " + e.getMessage()
-            : e.getMessage()));
+            ? "conductor " + c.name() + " is not in the line specification: " + message
+            : message));
       }
     }
     return new ConductorModel(c.name(), c.role(), states, failures);
+  }
+
+  /** The model with the uncertainty of each state it has. */
+  private static ConductorModel withUncertainty(ConductorModel m, LineSpec spec,
+      SurveyedConductor c, SectionSurvey section, double sigmaT, ConditionSet conditions,
+      ConditionSolver solver, UncertaintyPropagation propagation) {
+    ConductorType type = spec.position(c.position()).map(ConductorPosition::conductor)
+        .orElse(null);
+    List<Optional<StateUncertainty>> u = new ArrayList<>();
+    u.add(Optional.of(propagation.survey(c.curve(), c.covariance())));
+    for (int k = 1; k < conditions.size(); k++) {
+      Optional<LineCondition> condition = spec.condition(baseName(conditions.names().get(k)));
+      if (m.states().get(k).isEmpty() || condition.isEmpty()) {
+        u.add(Optional.empty());
+        continue;
+      }
+      try {
+        ConditionState base = solver.state(c.curve(), type, section, condition.get());
+        u.add(Optional.of(propagation.condition(c.curve(), c.covariance(), type, section, sigmaT,
+            condition.get(), base)));
+      } catch (IllegalArgumentException e) {
+        // A perturbed state without a solution: the uncertainty is unknown, never zero.
+        u.add(Optional.empty());
+      }
+    }
+    return new ConductorModel(m.name(), m.role(), m.states(), m.failures(), u);
   }
 
   private static ConditionState withStrings(ConditionState state, Span span,
@@ -166,7 +229,8 @@ public final class ConditionModels {
   }
 
   private static Map<String, SectionSurvey> sectionSurveys(LineLayout line,
-      Map<String, List<SurveyedConductor>> fitted) {
+      Map<String, List<SurveyedConductor>> fitted, SurveyTemperatures temperatures,
+      Map<String, String> why, Map<String, Double> sigmas) {
     LineSpec spec = line.spec();
     Map<String, List<ConductorCurve>> curves = new HashMap<>();
     Map<String, String> positions = new HashMap<>();
@@ -183,11 +247,36 @@ public final class ConditionModels {
         if (!e.getKey().startsWith(section.id() + "|")) {
           continue;
         }
-        double w = spec.position(positions.get(e.getKey()))
-            .map(p -> p.conductor().weightPerLength()).orElse(Double.NaN);
+        Optional<ConductorPosition> position = spec.position(positions.get(e.getKey()));
+        double w = position.map(p -> p.conductor().weightPerLength()).orElse(Double.NaN);
         SectionTension tension = SectionTension.estimate(e.getValue(), w);
+        TemperatureEstimate t = temperatures.estimate(spec, section, position.orElse(null));
+        if (!t.isKnown()) {
+          why.put(e.getKey(), t.detail());
+        }
+        sigmas.put(e.getKey(), t.sigmaC());
         out.put(e.getKey(), new SectionSurvey(section.rulingSpanM(), tension.horizontalTension(),
-            spec.surveyConductorTemperatureC()));
+            t.temperatureC()));
+      }
+    }
+    return out;
+  }
+
+  /**
+   * Per span id, the survey temperature of its first phase position (the one its change of state
+   * uses), for reports.
+   */
+  public static Map<String, TemperatureEstimate> spanTemperatures(SpanLayout layout,
+      SurveyTemperatures temperatures) {
+    Map<String, TemperatureEstimate> out = new LinkedHashMap<>();
+    for (LineLayout line : layout.lines()) {
+      LineSpec spec = line.spec();
+      ConductorPosition phase = spec.phases().isEmpty() ? null : spec.phases().get(0);
+      Map<String, TemperatureEstimate> bySection = new HashMap<>();
+      for (Span span : line.spans()) {
+        TensionSection section = line.section(span);
+        out.put(span.id(), bySection.computeIfAbsent(section.id(),
+            k -> temperatures.estimate(spec, section, phase)));
       }
     }
     return out;

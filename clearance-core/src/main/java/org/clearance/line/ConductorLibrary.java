@@ -42,8 +42,11 @@ public final class ConductorLibrary {
       "rated_strength_kn", "final_modulus_gpa", "thermal_expansion_per_c");
   private static final List<String> CORE =
       List.of("core_area_mm2", "core_modulus_gpa", "core_thermal_expansion_per_c");
+  /** Heat-balance columns (IEEE Std 738-2012): optional, all four or none. */
+  private static final List<String> THERMAL = List.of("ac_resistance_25c_ohm_per_km",
+      "ac_resistance_75c_ohm_per_km", "absorptivity", "emissivity");
   private static final List<String> SOURCES = List.of("source_size", "source_elastic",
-      "source_core");
+      "source_core", "source_thermal");
   private static final List<String> COLUMNS = columns();
 
   /** Entries by lower-case code, in load order. */
@@ -59,6 +62,7 @@ public final class ConductorLibrary {
     List<String> c = new ArrayList<>(List.of(CODE, "stranding"));
     c.addAll(NUMBERS);
     c.addAll(CORE);
+    c.addAll(THERMAL);
     c.addAll(SOURCES);
     return List.copyOf(c);
   }
@@ -208,6 +212,7 @@ public final class ConductorLibrary {
     }
     checkMax(t, row, "core_modulus_gpa", core[1], MAX_MODULUS_GPA);
     checkMax(t, row, "core_thermal_expansion_per_c", core[2], MAX_EXPANSION_PER_C);
+    Optional<ConductorThermal> thermal = thermal(t, row);
     List<String> parts = new ArrayList<>();
     for (String s : SOURCES) {
       String src = text(t, row, s);
@@ -218,7 +223,40 @@ public final class ConductorLibrary {
     String source = t.file() + " line " + row.line()
         + (parts.isEmpty() ? "" : " (" + String.join("; ", parts) + ")");
     return new ConductorType(code, v[0] * 1e-3, v[1] * 1e-6, v[2], v[3] * 1e3, v[4] * 1e9, v[5],
-        core[0] * 1e-6, core[1] * 1e9, core[2], source);
+        core[0] * 1e-6, core[1] * 1e9, core[2], source, thermal);
+  }
+
+  /** The heat-balance columns of a row: all four or none (a type without them cannot have its
+   * survey temperature computed). */
+  private static Optional<ConductorThermal> thermal(CsvTable t, CsvTable.Row row) {
+    double[] v = new double[THERMAL.size()];
+    int given = 0;
+    for (int k = 0; k < v.length; k++) {
+      v[k] = positive(t, row, THERMAL.get(k), false);
+      given += Double.isNaN(v[k]) ? 0 : 1;
+    }
+    if (given == 0) {
+      return Optional.empty();
+    }
+    for (int k = 0; k < v.length; k++) {
+      if (Double.isNaN(v[k])) {
+        throw new InputException(t.file(), row.where(), THERMAL.get(k),
+            "give all four heat-balance values (" + String.join(", ", THERMAL) + ") or none");
+      }
+    }
+    if (v[1] < v[0]) {
+      throw new InputException(t.file(), row.where(), THERMAL.get(1),
+          "the resistance at 75 degC must not be below the one at 25 degC");
+    }
+    for (int k = 2; k < 4; k++) {
+      if (v[k] > 1) {
+        throw new InputException(t.file(), row.where(), THERMAL.get(k),
+            "must be at most 1 (a fraction): " + text(t, row, THERMAL.get(k)));
+      }
+    }
+    String src = text(t, row, "source_thermal");
+    return Optional.of(new ConductorThermal(v[0] * 1e-3, v[1] * 1e-3, v[2], v[3],
+        t.file() + " line " + row.line() + (src.isEmpty() ? "" : " (" + src + ")")));
   }
 
   private static String text(CsvTable t, CsvTable.Row row, String column) {
@@ -261,6 +299,10 @@ public final class ConductorLibrary {
       return "kN";
     } else if (column.endsWith("_gpa")) {
       return "GPa";
+    } else if (column.endsWith("_ohm_per_km")) {
+      return "ohm/km";
+    } else if (column.equals("absorptivity") || column.equals("emissivity")) {
+      return "(a fraction, 0-1)";
     }
     return "1/degC";
   }

@@ -1,6 +1,7 @@
 package org.clearance.line;
 
 import java.util.Objects;
+import java.util.Optional;
 
 /**
  * Mechanical data of one conductor type (a library entry such as ACSR "Drake"), in SI units.
@@ -20,6 +21,8 @@ import java.util.Objects;
  * @param coreModulus steel core modulus, Pa, or NaN
  * @param coreThermalExpansion steel core expansion coefficient, 1/degC, or NaN
  * @param source where the values come from, with confidence marks
+ * @param thermal resistance and surface data for the heat balance, or empty when the library
+ *     does not give them (then the survey temperature of this type cannot be computed)
  */
 public record ConductorType(
     String code,
@@ -32,7 +35,8 @@ public record ConductorType(
     double coreArea,
     double coreModulus,
     double coreThermalExpansion,
-    String source) {
+    String source,
+    Optional<ConductorThermal> thermal) {
 
   /** Standard gravity, m/s^2 (CGPM 1901, exact). */
   public static final double STANDARD_GRAVITY = 9.80665;
@@ -40,12 +44,21 @@ public record ConductorType(
   public ConductorType {
     Objects.requireNonNull(code, "code");
     Objects.requireNonNull(source, "source");
+    Objects.requireNonNull(thermal, "thermal");
     requirePositive("diameter", diameter);
     requirePositive("area", area);
     requirePositive("massPerLength", massPerLength);
     requirePositive("ratedStrength", ratedStrength);
     requirePositive("finalModulus", finalModulus);
     requirePositive("thermalExpansion", thermalExpansion);
+  }
+
+  /** A type without heat-balance data. */
+  public ConductorType(String code, double diameter, double area, double massPerLength,
+      double ratedStrength, double finalModulus, double thermalExpansion, double coreArea,
+      double coreModulus, double coreThermalExpansion, String source) {
+    this(code, diameter, area, massPerLength, ratedStrength, finalModulus, thermalExpansion,
+        coreArea, coreModulus, coreThermalExpansion, source, Optional.empty());
   }
 
   private static void requirePositive(String name, double v) {

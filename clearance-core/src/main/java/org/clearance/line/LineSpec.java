@@ -19,6 +19,9 @@ import java.util.Optional;
  * @param conductors conductor positions, at least one phase, unique names (unmodifiable)
  * @param conditions line conditions to check, unique names, possibly empty (unmodifiable)
  * @param sourceFile the specification file, for messages
+ * @param surveyTemperature how the survey-time conductor temperature is known (given with a range,
+ *     or computed by the IEEE Std 738-2012 heat balance); {@code surveyConductorTemperatureC} is
+ *     the given value, NaN when computed
  */
 public record LineSpec(
     String lineId,
@@ -29,17 +32,28 @@ public record LineSpec(
     double rowHalfWidthM,
     List<ConductorPosition> conductors,
     List<LineCondition> conditions,
-    String sourceFile) {
+    String sourceFile,
+    SurveyTemperatureSpec surveyTemperature) {
 
   public LineSpec {
     Objects.requireNonNull(lineId, "lineId");
     Objects.requireNonNull(name, "name");
     Objects.requireNonNull(sourceFile, "sourceFile");
+    Objects.requireNonNull(surveyTemperature, "surveyTemperature");
     if (!(Double.isFinite(nominalVoltageKv) && nominalVoltageKv > 0)) {
       throw new IllegalArgumentException("voltage must be positive: " + nominalVoltageKv);
     }
     conductors = List.copyOf(conductors);
     conditions = List.copyOf(conditions);
+  }
+
+  /** A specification whose survey temperature, when given, is assumed with the default range. */
+  public LineSpec(String lineId, String name, double nominalVoltageKv, double altitudeM,
+      double surveyConductorTemperatureC, double rowHalfWidthM, List<ConductorPosition> conductors,
+      List<LineCondition> conditions, String sourceFile) {
+    this(lineId, name, nominalVoltageKv, altitudeM, surveyConductorTemperatureC, rowHalfWidthM,
+        conductors, conditions, sourceFile,
+        SurveyTemperatureSpec.assumed(surveyConductorTemperatureC));
   }
 
   /** A specification without a right-of-way width. */

@@ -44,14 +44,19 @@ public final class LineSpecReader {
   /** Position names appear in structure column names ({@code attach_z_<position>}). */
   private static final Pattern POSITION_NAME = Pattern.compile("[A-Za-z0-9_.-]+");
 
-  private static final List<String> TOP_KEYS = List.of("line_id", "name", "nominal_voltage_kv",
-      "altitude_m", "survey_conductor_temperature_c", "row_half_width_m", "conductors",
-      "conditions");
+  private static final List<String> TOP_KEYS = topKeys();
   private static final List<String> POSITION_KEYS = List.of("position", "role", "circuit",
       "conductor", "offset_m", "attach_height_m", "bundle", "bundle_spacing_m",
       "insulator_length_m", "strain_length_m");
 
   private LineSpecReader() {}
+
+  private static List<String> topKeys() {
+    List<String> k = new ArrayList<>(List.of("line_id", "name", "nominal_voltage_kv",
+        "altitude_m", "row_half_width_m", "conductors", "conditions"));
+    k.addAll(SurveyTemperatureReader.TOP_KEYS);
+    return List.copyOf(k);
+  }
 
   /**
    * Reads one line specification.
@@ -74,11 +79,8 @@ public final class LineSpecReader {
     }
     double altitude = top.number("altitude_m", 0);
     checkRange(top, "altitude_m", altitude, MIN_ALTITUDE_M, MAX_ALTITUDE_M);
-    double surveyT = top.number("survey_conductor_temperature_c", Double.NaN);
-    if (!Double.isNaN(surveyT)) {
-      checkRange(top, "survey_conductor_temperature_c", surveyT, MIN_TEMPERATURE_C,
-          MAX_TEMPERATURE_C);
-    }
+    SurveyTemperatureSpec survey = SurveyTemperatureReader.read(top, file);
+    double surveyT = survey.temperatureC();
     double rowHalf = top.number("row_half_width_m", Double.NaN);
     if (!Double.isNaN(rowHalf)) {
       checkRange(top, "row_half_width_m", rowHalf, MIN_ROW_HALF_WIDTH_M, MAX_ROW_HALF_WIDTH_M);
@@ -94,16 +96,28 @@ public final class LineSpecReader {
         throw m.error("name", "condition name '" + c.name() + "' used twice (first on line "
             + twin + ")");
       }
-      if (c.needsChangeOfState() && Double.isNaN(surveyT)) {
+      if (c.needsChangeOfState() && !survey.isKnown()) {
         throw new InputException(name, "line " + m.line(), "survey_conductor_temperature_c",
-            "the top-level key survey_conductor_temperature_c is required: condition '"
+            "the top-level key survey_conductor_temperature_c (or survey_heat_balance) is"
+                + " required: condition '"
                 + c.name() + "' (kind " + c.kind().name().toLowerCase(Locale.ROOT)
                 + ") is computed by a change of state from the surveyed conductor");
       }
       conditions.add(c);
     }
+    if (survey.source() == SurveyTemperatureSpec.Source.COMPUTED) {
+      for (ConductorPosition p : positions) {
+        if (p.conductor().thermal().isEmpty()) {
+          throw top.error("survey_heat_balance", "conductor type '" + p.conductor().code()
+              + "' (position " + p.position() + ") has no heat-balance data in the conductor"
+              + " library (ac_resistance_25c_ohm_per_km, ac_resistance_75c_ohm_per_km,"
+              + " absorptivity, emissivity), so its survey temperature cannot be computed; add"
+              + " them or give survey_conductor_temperature_c");
+        }
+      }
+    }
     return new LineSpec(lineId, top.text("name", ""), kv, altitude, surveyT, rowHalf, positions,
-        conditions, name);
+        conditions, name, survey);
   }
 
   private static Node compose(String text, String file) {

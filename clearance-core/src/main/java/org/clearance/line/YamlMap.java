@@ -164,6 +164,11 @@ final class YamlMap {
     return Integer.parseInt(text);
   }
 
+  /** The node of a required key (for a nested mapping). */
+  Node node(String key) {
+    return required(key);
+  }
+
   /** The items of a list; an empty list when the key is absent and not required. */
   List<Node> list(String key, boolean required) {
     if (!has(key) && !required) {
@@ -184,6 +189,14 @@ final class YamlMap {
       return "mm";
     } else if (key.endsWith("_kg_m3")) {
       return "kg/m^3";
+    } else if (key.endsWith("_m_s")) {
+      return "m/s";
+    } else if (key.endsWith("_a")) {
+      return "A";
+    } else if (key.endsWith("_range") || key.equals("absorptivity")) {
+      return "(a fraction, 0-1)";
+    } else if (key.endsWith("_percent")) {
+      return "%";
     } else if (key.endsWith("_m")) {
       return "m";
     } else if (key.endsWith("_c")) {

@@ -48,6 +48,11 @@ public final class ConsoleSummary {
       List<String> parts = new ArrayList<>();
       perZone.forEach((z, c) -> parts.add(z + " " + c[1]));
       line(b, "Sites per zone: %s", parts.isEmpty() ? "none" : String.join(", ", parts));
+      run.profile().filter(p -> !Double.isNaN(p.confidencePercent())).ifPresent(p -> line(b,
+          "At %s %% confidence: %d violation site(s), %d possible violation site(s) (the zone "
+              + "lies within the distance's interval)", OutputUnit.plain(p.confidencePercent()),
+          run.sites().stream().filter(x -> x.interval().isPresent() && !x.possibleOnly())
+              .count(), run.sites().stream().filter(CutSite::possibleOnly).count()));
     }
     for (SpanStatus s : List.of(SpanStatus.NOT_ASSESSED, SpanStatus.INCOMPLETE)) {
       List<SpanResult> list = run.spans().stream().filter(r -> r.status() == s).toList();

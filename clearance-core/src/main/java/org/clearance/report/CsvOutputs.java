@@ -5,6 +5,7 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import org.clearance.assess.CutSite;
+import org.clearance.assess.FindingInterval;
 import org.clearance.assess.RunAssessment;
 import org.clearance.assess.SpanResult;
 import org.clearance.clearance.ConditionMinimum;
@@ -43,7 +44,9 @@ public final class CsvOutputs {
     return List.of("site_id", "span_id", "priority", "zone", "condition",
         u.column("min_clearance"), u.column("required"), u.column("deficit"), "x", "y", "z",
         "lon", "lat", u.column("chainage"), "side", u.column("offset"), u.column("veg_height"),
-        u.column("cut_to_height"), "n_points", u.areaColumn(), "years_to_violation");
+        u.column("cut_to_height"), "n_points", u.areaColumn(), "years_to_violation",
+        "verdict", "confidence_percent", u.column("clearance_sigma"), u.column("clearance_low"),
+        u.column("clearance_high"), "uncertainty_dominant");
   }
 
   /** The span-table header for an output unit. */
@@ -54,8 +57,8 @@ public final class CsvOutputs {
         u.column("min_clearance_hot"), u.column("min_clearance_blowout"),
         u.column("min_clearance_ice"), "governing_condition", "worst_zone", "n_sites", "rank",
         "worst_priority", u.column("worst_deficit"), "nominal_voltage_kv", "points_checked",
-        "points_not_assessed", "points_set_aside_wire", "points_set_aside_structure",
-        "points_set_aside_airborne");
+        "points_not_assessed", "n_possible_violation_sites", "points_set_aside_wire",
+        "points_set_aside_structure", "points_set_aside_airborne");
   }
 
   /** The work list's text. */
@@ -75,7 +78,13 @@ public final class CsvOutputs {
           u.lengthText(s.chainageM()), t(s.side().word()), u.lengthText(s.offsetM()),
           u.lengthText(s.vegHeightM()), u.lengthText(s.cutToHeightM()),
           s.points().isPresent() ? Integer.toString(s.points().getAsInt()) : "",
-          u.areaText(s.areaM2()), years(s.yearsToViolation())));
+          u.areaText(s.areaM2()), years(s.yearsToViolation()),
+          s.interval().map(i -> i.verdict().words()).orElse(""),
+          s.interval().map(i -> OutputUnit.plain(i.confidencePercent())).orElse(""),
+          u.lengthText(s.interval().map(FindingInterval::sigmaM).orElse(Double.NaN)),
+          u.lengthText(s.interval().map(FindingInterval::lowM).orElse(Double.NaN)),
+          u.lengthText(s.interval().map(FindingInterval::highM).orElse(Double.NaN)),
+          s.interval().map(FindingInterval::dominant).orElse("")));
     }
     return b.toString();
   }
@@ -109,6 +118,8 @@ public final class CsvOutputs {
       f.add(OutputUnit.plain(s.context().nominalVoltageKv()));
       f.add(ruled ? Long.toString(r.pointsChecked()) : "");
       f.add(ruled ? Long.toString(r.pointsNotAssessed()) : "");
+      f.add(ruled && r.sitesCounted()
+          ? Long.toString(r.sites().stream().filter(CutSite::possibleOnly).count()) : "");
       f.add(Long.toString(s.setAside().wire()));
       f.add(Long.toString(s.setAside().structure()));
       f.add(Long.toString(s.setAside().airborne()));

@@ -4,6 +4,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
 import org.clearance.assess.CutSite;
+import org.clearance.assess.FindingInterval;
 import org.clearance.assess.RunAssessment;
 import org.clearance.assess.SpanResult;
 import org.clearance.clearance.ConditionMinimum;
@@ -40,7 +41,9 @@ final class GpkgLayers {
         col(u.column("chainage"), "REAL"), col("side", "TEXT"), col(u.column("offset"), "REAL"),
         col(u.column("veg_height"), "REAL"), col(u.column("cut_to_height"), "REAL"),
         col("n_points", "INTEGER"), col(u.areaColumn(), "REAL"),
-        col("years_to_violation", "REAL"));
+        col("years_to_violation", "REAL"), col("verdict", "TEXT"),
+        col(u.column("clearance_sigma"), "REAL"), col(u.column("clearance_low"), "REAL"),
+        col(u.column("clearance_high"), "REAL"), col("uncertainty_dominant", "TEXT"));
     List<Feature> features = new ArrayList<>();
     Extent e = new Extent();
     for (CutSite s : run.sites()) {
@@ -58,7 +61,12 @@ final class GpkgLayers {
           s.lat(), u.length(s.chainageM()), s.side().word(), u.length(s.offsetM()),
           u.length(s.vegHeightM()), u.length(s.cutToHeightM()),
           s.points().isPresent() ? (Object) (long) s.points().getAsInt() : null,
-          u.area(s.areaM2()), s.yearsToViolation())));
+          u.area(s.areaM2()), s.yearsToViolation(),
+          s.interval().map(i -> i.verdict().words()).orElse(null),
+          u.length(s.interval().map(FindingInterval::sigmaM).orElse(Double.NaN)),
+          u.length(s.interval().map(FindingInterval::lowM).orElse(Double.NaN)),
+          u.length(s.interval().map(FindingInterval::highM).orElse(Double.NaN)),
+          s.interval().map(FindingInterval::dominant).orElse(null))));
     }
     return new Layer("sites", "Vegetation sites inside a clearance zone, and fall-in trees",
         "POINT", false, cols, features, e.box());

@@ -157,6 +157,9 @@ public final class HtmlReport {
     if (!r.reason().isEmpty()) {
       b.append("<p class=\"reason\">").append(Html.esc(r.reason())).append("</p>");
     }
+    for (String note : s.notes()) {
+      b.append("<p class=\"note\">").append(Html.esc(note)).append("</p>");
+    }
     HtmlSections.siteTable(b, r, u);
     SpanRules rules = run.profile().map(p -> new ZoneEvaluator(p).forSpan(s.context()))
         .orElse(null);

@@ -4,6 +4,7 @@ import java.util.List;
 import java.util.Map;
 import java.util.TreeMap;
 import org.clearance.assess.CutSite;
+import org.clearance.assess.FindingInterval;
 import org.clearance.assess.RunAssessment;
 import org.clearance.assess.SpanResult;
 import org.clearance.clearance.SpanStatus;
@@ -100,7 +101,7 @@ final class HtmlSections {
     b.append("<table class=\"sites\"><thead><tr><th>site</th><th>zone</th><th>condition</th>"
         + "<th>clearance</th><th>required</th><th>deficit</th><th>chainage</th><th>side</th>"
         + "<th>offset</th><th>vegetation height</th><th>cut to</th><th>points</th>"
-        + "<th>years to violation</th></tr></thead><tbody>");
+        + "<th>years to violation</th><th>verdict (interval)</th></tr></thead><tbody>");
     for (CutSite s : r.sites()) {
       b.append("<tr><td>").append(Html.esc(s.siteId())).append("</td><td>")
           .append(HtmlReport.swatch(s)).append(Html.esc(s.zone())).append("</td><td>")
@@ -115,9 +116,21 @@ final class HtmlSections {
           .append("</td><td class=\"num\">")
           .append(s.points().isPresent() ? Integer.toString(s.points().getAsInt()) : "tree")
           .append("</td><td class=\"num\">").append(Html.years(s.yearsToViolation()))
-          .append("</td></tr>");
+          .append("</td><td>").append(verdict(s, u)).append("</td></tr>");
     }
     b.append("</tbody></table>");
+  }
+
+  /** A site's verdict with its interval and the input that dominates its uncertainty (HTML). */
+  static String verdict(CutSite s, OutputUnit u) {
+    if (s.interval().isEmpty()) {
+      return "";
+    }
+    FindingInterval i = s.interval().get();
+    return Html.esc(i.verdict().words()) + ": " + Html.len(u, i.lowM()) + " to "
+        + Html.len(u, i.highM()) + " at " + Html.esc(OutputUnit.plain(i.confidencePercent()))
+        + " % (standard uncertainty " + Html.len(u, i.sigmaM()) + "; "
+        + Html.esc(i.dominant()) + " dominates)";
   }
 
   static void legend(StringBuilder b, SpanResult r, RunAssessment run, int governing) {

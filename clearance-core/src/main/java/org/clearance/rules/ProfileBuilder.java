@@ -111,7 +111,24 @@ final class ProfileBuilder {
       check.fallIn(fallIn.allowance(), m.fallIn().required("reach_allowance_m"));
     }
     double appliesFrom = m.appliesFrom() == null ? 0 : m.appliesFrom().nonNegative();
-    return new RuleProfile(origins, zones, growth, cycle, fallIn, appliesFrom, covered, hash);
+    return new RuleProfile(origins, zones, growth, cycle, fallIn, appliesFrom, covered, hash,
+        confidence(chain));
+  }
+
+  /** The confidence level of the most derived file that gives one, %, or NaN. */
+  private static double confidence(List<RuleProfileReader.Layer> chain) {
+    for (RuleProfileReader.Layer layer : chain) {
+      Optional<YamlMap.Entry> e = layer.top().optional("confidence_percent");
+      if (e.isPresent() && !e.get().isNull()) {
+        double p = e.get().positive();
+        if (!(p >= RuleProfile.MIN_CONFIDENCE_PERCENT && p < 100)) {
+          throw e.get().error("must be at least " + RuleProfile.MIN_CONFIDENCE_PERCENT
+              + " and below 100 %, found " + p);
+        }
+        return p;
+      }
+    }
+    return Double.NaN;
   }
 
   private static ProfileOrigin origin(RuleProfileReader.Layer layer) {

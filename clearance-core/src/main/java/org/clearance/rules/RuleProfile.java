@@ -4,6 +4,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
 import java.util.Set;
+import org.apache.commons.math3.distribution.NormalDistribution;
 
 /**
  * A resolved rule profile: its own values merged over those of the profiles it extends.
@@ -18,6 +19,8 @@ import java.util.Set;
  * @param coveredLines ids of lines the profile covers even below {@code appliesFromKv} (e.g.
  *     lower-voltage lines a regional entity names); a distance table still needs a row for them
  * @param contentHash SHA-256 (hex) of the texts of every file of the chain, for the run record
+ * @param confidencePercent two-sided confidence level of the distance intervals, %, or NaN when
+ *     the profile asks for none (then findings use the distances as measured)
  */
 public record RuleProfile(
     List<ProfileOrigin> origins,
@@ -27,7 +30,11 @@ public record RuleProfile(
     FallInRule fallIn,
     double appliesFromKv,
     Set<String> coveredLines,
-    String contentHash) {
+    String contentHash,
+    double confidencePercent) {
+
+  /** Lowest confidence level accepted, %: below it an interval says little. */
+  public static final double MIN_CONFIDENCE_PERCENT = 50;
 
   public RuleProfile {
     origins = List.copyOf(origins);
@@ -41,6 +48,26 @@ public record RuleProfile(
     if (origins.isEmpty() || zones.isEmpty()) {
       throw new IllegalArgumentException("a profile needs an origin and a zone");
     }
+  }
+
+  /** A profile without a confidence level. */
+  public RuleProfile(List<ProfileOrigin> origins, List<Zone> zones, Optional<GrowthRates> growth,
+      double trimCycleYears, FallInRule fallIn, double appliesFromKv, Set<String> coveredLines,
+      String contentHash) {
+    this(origins, zones, growth, trimCycleYears, fallIn, appliesFromKv, coveredLines, contentHash,
+        Double.NaN);
+  }
+
+  /**
+   * The coverage factor k of the two-sided interval d +- k sigma at the profile's confidence
+   * level (normal distribution: 1.960 at 95 %), or NaN when the profile asks for none.
+   */
+  public double coverageFactor() {
+    if (Double.isNaN(confidencePercent)) {
+      return Double.NaN;
+    }
+    return new NormalDistribution().inverseCumulativeProbability(
+        0.5 + confidencePercent / 200);
   }
 
   /** The profile's name. */

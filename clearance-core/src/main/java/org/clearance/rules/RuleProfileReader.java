@@ -38,7 +38,7 @@ public final class RuleProfileReader {
   /** Keys allowed at the top level of a profile file. */
   static final Set<String> TOP_KEYS = Set.of("name", "title", "source", "cautions", "extends",
       "zones", "growth_m_per_year", "trim_cycle_years", "fall_in", "applies_from_kv",
-      "covered_lines");
+      "covered_lines", "confidence_percent");
 
   private RuleProfileReader() {}
 

@@ -1,8 +1,10 @@
 package org.clearance.survey;
 
+import java.time.DayOfWeek;
 import java.time.Instant;
 import java.time.LocalDate;
 import java.time.ZoneOffset;
+import java.time.temporal.TemporalAdjusters;
 import java.util.Optional;
 
 /**
@@ -10,8 +12,9 @@ import java.util.Optional;
  * standard GPS time: GPS seconds since 1980-01-06 00:00:00 UTC minus 10^9 (ASPRS LAS 1.4 R15,
  * section 2.4, global encoding). GPS time runs without leap seconds, so UTC = GPS - (leap seconds
  * inserted since 1980), taken from the IERS table (Bulletin C) below. With bit 0 clear the file
- * stores GPS week seconds (0 to 604 800 within a week that the file does not name): no date can
- * be derived from those.
+ * stores GPS week seconds (0 to 604 800 within a week that the file does not name): a date can be
+ * derived from those only with the survey day from elsewhere ({@link #toUtc}); GPS weeks start on
+ * Sunday 00:00 GPS time.
  */
 public final class GpsTime {
 
@@ -32,7 +35,43 @@ public final class GpsTime {
     LocalDate.of(1999, 1, 1), LocalDate.of(2006, 1, 1), LocalDate.of(2009, 1, 1),
     LocalDate.of(2012, 7, 1), LocalDate.of(2015, 7, 1), LocalDate.of(2017, 1, 1)};
 
+  private static final long SECONDS_PER_WEEK = 7L * 86_400;
+
   private GpsTime() {}
+
+  /**
+   * The UTC instant of a point's GPS time, adjusted or of the GPS week.
+   *
+   * @param gpsTime the point's GPS time field, s
+   * @param adjusted whether the file stores adjusted standard GPS time (global encoding bit 0)
+   * @param surveyDay for GPS week time, a UTC day within the survey's GPS week
+   * @return the instant, or empty when the time is not finite or the week is not known
+   */
+  public static Optional<Instant> toUtc(double gpsTime, boolean adjusted,
+      Optional<LocalDate> surveyDay) {
+    if (adjusted) {
+      return utcOfAdjusted(gpsTime);
+    }
+    if (!Double.isFinite(gpsTime) || surveyDay.isEmpty()) {
+      return Optional.empty();
+    }
+    LocalDate sunday = surveyDay.get().with(TemporalAdjusters.previousOrSame(DayOfWeek.SUNDAY));
+    long weekStart = sunday.atStartOfDay(ZoneOffset.UTC).toEpochSecond() - EPOCH.getEpochSecond();
+    weekStart -= weekStart % SECONDS_PER_WEEK;
+    return utcOfAdjusted(weekStart + gpsTime - ADJUSTED_OFFSET_S);
+  }
+
+  /** GPS - UTC at a moment of the GPS scale, s. */
+  static int leapSeconds(Instant gps) {
+    int leap = 0;
+    for (LocalDate d : LEAP_DAYS) {
+      Instant effective = d.atStartOfDay(ZoneOffset.UTC).toInstant().plusSeconds(leap + 1);
+      if (!gps.isBefore(effective)) {
+        leap++;
+      }
+    }
+    return leap;
+  }
 
   /**
    * The UTC instant of an adjusted standard GPS time.
@@ -46,15 +85,8 @@ public final class GpsTime {
     }
     long ms = Math.round((adjustedSeconds + ADJUSTED_OFFSET_S) * 1000.0);
     Instant gps = EPOCH.plusMillis(ms);
-    int leap = 0;
-    for (LocalDate d : LEAP_DAYS) {
-      // the instant a leap second took effect, expressed on the GPS scale
-      Instant effective = d.atStartOfDay(ZoneOffset.UTC).toInstant().plusSeconds(leap + 1);
-      if (!gps.isBefore(effective)) {
-        leap++;
-      }
-    }
-    return Optional.of(gps.minusSeconds(leap));
+    // the instants leap seconds took effect, expressed on the GPS scale
+    return Optional.of(gps.minusSeconds(leapSeconds(gps)));
   }
 
   /** The UTC day of an adjusted standard GPS time, or empty when not finite. */

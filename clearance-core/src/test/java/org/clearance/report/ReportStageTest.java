@@ -68,7 +68,9 @@ class ReportStageTest {
     assertEquals(List.of("site_id", "span_id", "priority", "zone", "condition",
         "min_clearance_m", "required_m", "deficit_m", "x", "y", "z", "lon", "lat", "chainage_m",
         "side", "offset_m", "veg_height_m", "cut_to_height_m", "n_points", "area_m2",
-        "years_to_violation"), CsvText.header(Files.readString(dir.resolve("worklist.csv"))));
+        "years_to_violation", "verdict", "confidence_percent",
+        "clearance_sigma_m", "clearance_low_m", "clearance_high_m", "uncertainty_dominant"),
+        CsvText.header(Files.readString(dir.resolve("worklist.csv"))));
   }
 
   @Test
@@ -223,7 +225,9 @@ class ReportStageTest {
     assertEquals(List.of("site_id", "span_id", "priority", "zone", "condition",
         "min_clearance_ft", "required_ft", "deficit_ft", "x", "y", "z", "lon", "lat",
         "chainage_ft", "side", "offset_ft", "veg_height_ft", "cut_to_height_ft", "n_points",
-        "area_ft2", "years_to_violation"), header);
+        "area_ft2", "years_to_violation", "verdict", "confidence_percent",
+        "clearance_sigma_ft", "clearance_low_ft", "clearance_high_ft", "uncertainty_dominant"),
+        header);
     Map<String, String> m = worklist().get(0);
     Map<String, String> f = CsvText.rows(text).get(0);
     // 1 ft = 0.3048 m exactly (NIST; check-values.md section 1, published)

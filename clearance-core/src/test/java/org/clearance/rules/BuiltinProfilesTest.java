@@ -36,7 +36,8 @@ class BuiltinProfilesTest {
   @Test
   void namesListEveryBuiltinAndEachLoads() {
     assertEquals(List.of("us-fac003-mvcd", "ca-prc4293", "ca-go95-appendix-e",
-        "ca-go95-appendix-e-fire", "example-utility"), RuleProfiles.names());
+        "ca-go95-appendix-e-fire", "example-utility", "example-utility-95"),
+        RuleProfiles.names());
     for (String name : RuleProfiles.names()) {
       RuleProfile p = RuleProfiles.builtin(name);
       assertEquals(name, p.name());

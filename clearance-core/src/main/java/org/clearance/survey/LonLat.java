@@ -1,8 +1,7 @@
-package org.clearance.assess;
+package org.clearance.survey;
 
 import java.util.Objects;
 import java.util.Optional;
-import org.clearance.survey.SurveyUnits;
 import org.locationtech.proj4j.CRSFactory;
 import org.locationtech.proj4j.CoordinateReferenceSystem;
 import org.locationtech.proj4j.CoordinateTransform;
