@@ -185,7 +185,7 @@ public final class ClearanceCheck {
     try (NearPointWriter out = new NearPointWriter(dir.resolve(NearPointFile.FILE_NAME),
         engine.nearPointLayout())) {
       measured = engine.measure((threads, consumers) -> survey.readParallel(threads,
-          progress.wrap("clearance", consumers)), out);
+          progress.wrap("clearance", consumers)), out, wires.setAside());
       say("clearance: %,d vegetation points stored within %.1f m; %d trees near the line",
           out.count(), options.engine().keepRadius(), measured.trees().size());
     }
@@ -227,7 +227,8 @@ public final class ClearanceCheck {
       List<SurveyedConductor> list = new ArrayList<>();
       for (FittedConductor c : sw.fitted()) {
         list.add(new SurveyedConductor(c.name(), c.position().orElse(""),
-            c.role().name().toLowerCase(Locale.ROOT), c.curve().orElseThrow(), c.covariance()));
+            c.role().name().toLowerCase(Locale.ROOT), c.curve().orElseThrow(), c.covariance(),
+            c.surveySwingRad()));
       }
       out.put(sw.span().id(), list);
     }

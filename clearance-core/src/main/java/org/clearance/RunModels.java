@@ -140,6 +140,15 @@ final class RunModels {
           + "(sampled every %.0f m, %.0f m beyond the outer conductors); the rest was not "
           + "looked at", 100 * coverage, SurveyCoverage.STEP_M, SurveyCoverage.MARGIN_M));
     }
+    if (clearance != null && clearance.unread().count() > 0) {
+      SpanClearance.Unread u = clearance.unread();
+      problems.add(String.format(Locale.ROOT, "%d points of class %s lie within %.1f m of the "
+          + "conductors (nearest %.2f m) in classes not read as vegetation (unknown, or ground "
+          + "classes standing above the ground): they may be vegetation; reclassify them or "
+          + "name their class with --vegetation-classes", u.count(),
+          u.classes().stream().map(String::valueOf).collect(
+              java.util.stream.Collectors.joining(", ")), engine.keepRadius(), u.nearestM()));
+    }
     boolean anyFitted = !sw.fitted().isEmpty();
     SpanStatus status;
     String reason;
@@ -169,16 +178,21 @@ final class RunModels {
             ch.fromX(), ch.fromY(), ch.toX(), ch.toY(), ch.evidence()));
       }
     }
-    if (clearance != null && clearance.excludedAsConductor() + clearance.excludedAsStructure() > 0) {
-      notes.add(String.format(Locale.ROOT, "unclassified survey: %d points within %.2f m of a "
-          + "conductor taken as the conductor, %d points within %.1f m of a structure taken as "
-          + "the structure", clearance.excludedAsConductor(), engine.conductorExclusion(),
-          clearance.excludedAsStructure(), engine.structureExclusion()));
+    if (clearance != null && clearance.excludedAsConductor() + clearance.excludedAsStructure()
+        + clearance.excludedAsAirborne() > 0) {
+      notes.add(String.format(Locale.ROOT, "unclassified points set aside: %d on a wire (on a "
+          + "fitted curve within its fit tolerance, or on a long linear piece), %d within %.1f m "
+          + "of a structure, %d isolated airborne (birds, noise)",
+          clearance.excludedAsConductor(), clearance.excludedAsStructure(),
+          engine.structureExclusion(), clearance.excludedAsAirborne()));
     }
     return new SpanRecord(model.context(), lineName, structure(span.from()), structure(span.to()),
         status, reason, conductors, clearance == null ? List.of() : clearance.minima(),
         clearance == null ? 0 : clearance.pointsMeasured(),
-        clearance == null ? 0 : clearance.pointsKept(), notes);
+        clearance == null ? 0 : clearance.pointsKept(), notes, clearance == null
+            ? SpanRecord.SetAsideCounts.NONE : new SpanRecord.SetAsideCounts(
+                clearance.excludedAsConductor(), clearance.excludedAsStructure(),
+                clearance.excludedAsAirborne()));
   }
 
   /** The survey temperature a span's change of state used, for the report. */

@@ -69,7 +69,7 @@ public final class CheckSettings {
       ClearanceEngine.Options e = o.engine();
       o = new CheckOptions(o.threads(), o.vegetationClasses(), o.ground(), o.wires(),
           o.conditions(), new ClearanceEngine.Options(keepRadius, e.threads(),
-              e.conductorExclusion(), e.structureExclusion(),
+              e.structureExclusion(),
               Math.max(keepRadius, e.treeReach())), o.trees(), o.report());
     }
     if (surveyAccuracy != null) {

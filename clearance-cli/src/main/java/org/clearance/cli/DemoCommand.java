@@ -47,7 +47,7 @@ public final class DemoCommand implements Callable<Integer> {
       description = "Ground point density, points per square metre (default 3).")
   Double density;
 
-  @Option(names = "--mode", paramLabel = "full|wires-unlabelled|unclassified",
+  @Option(names = "--mode", paramLabel = "full|wires-unlabelled|ground-only|unclassified",
       defaultValue = "full",
       description = "How the demo survey is classified (default: ${DEFAULT-VALUE}).")
   String mode;
@@ -101,11 +101,13 @@ public final class DemoCommand implements Callable<Integer> {
         return ClassificationMode.FULL;
       case "wires-unlabelled":
         return ClassificationMode.WIRES_UNLABELLED;
+      case "ground-only":
+        return ClassificationMode.GROUND_ONLY;
       case "unclassified":
         return ClassificationMode.UNCLASSIFIED;
       default:
         throw new CommandLine.ParameterException(spec.commandLine(),
-            "--mode must be full, wires-unlabelled or unclassified: " + mode);
+            "--mode must be full, wires-unlabelled, ground-only or unclassified: " + mode);
     }
   }
 }

@@ -11,6 +11,7 @@ import org.clearance.ground.GroundModel;
 import org.clearance.ground.Tree;
 import org.clearance.ground.TreeOptions;
 import org.clearance.survey.PointChunk;
+import org.clearance.wire.SetAside;
 
 /**
  * Measures, for every vegetation point near the line, its true 3D distance to every conductor of
@@ -40,27 +41,23 @@ public final class ClearanceEngine {
    * @param keepRadius points closer than this to a conductor in any condition are stored for
    *     rule evaluation, m (&gt; 0); must exceed the widest zone of any profile to be evaluated
    * @param threads worker threads (&gt;= 1)
-   * @param conductorExclusion in an unclassified survey, points closer than this to a conductor
-   *     in the surveyed state are taken to be the conductor itself, m (&gt;= 0)
    * @param structureExclusion in an unclassified survey, points closer than this in plan to a
    *     structure centre are taken to be the structure, m (&gt;= 0)
    * @param treeReach trees are collected up to this plan distance from the conductors' envelope,
    *     m (&gt;= keepRadius)
    */
   public record Options(
-      double keepRadius, int threads, double conductorExclusion, double structureExclusion,
-      double treeReach) {
+      double keepRadius, int threads, double structureExclusion, double treeReach) {
 
     /**
      * Keep radius 10 m (wider than every built-in zone: the widest, 20 ft in GO 95 fire-threat
      * areas and the example profile's watch band, stay below 8 m; a wider profile zone makes
-     * its spans INCOMPLETE and asks for a larger radius), conductor exclusion 0.5 m (a twin
-     * bundle's half spacing plus lidar noise), structure
-     * exclusion 8 m (a lattice tower's half cross-arm length), tree reach 50 m (taller than
-     * almost any tree near a line; common practice, no source).
+     * its spans INCOMPLETE and asks for a larger radius), structure exclusion 8 m (a lattice
+     * tower's half cross-arm length), tree reach 50 m (taller than almost any tree near a line;
+     * common practice, no source).
      */
     public static Options defaults(int threads) {
-      return new Options(10.0, threads, 0.5, 8.0, 50.0);
+      return new Options(10.0, threads, 8.0, 50.0);
     }
 
     public Options {
@@ -70,8 +67,8 @@ public final class ClearanceEngine {
       if (threads < 1) {
         throw new IllegalArgumentException("threads must be at least 1: " + threads);
       }
-      if (!(conductorExclusion >= 0 && structureExclusion >= 0)) {
-        throw new IllegalArgumentException("exclusions must be >= 0");
+      if (!(structureExclusion >= 0)) {
+        throw new IllegalArgumentException("structure exclusion must be >= 0");
       }
       if (!(treeReach >= keepRadius)) {
         throw new IllegalArgumentException("tree reach must be at least the keep radius: "
@@ -164,12 +161,24 @@ public final class ClearanceEngine {
    * @return per span what was measured (in the order of the models) and the trees near the line
    */
   public Measurement measure(ChunkSource source, NearPointWriter out) {
+    return measure(source, out, SetAside.none());
+  }
+
+  /**
+   * Streams all points of the source and measures them; in a survey whose vegetation is
+   * inferred, the points the wire finder set aside (wire, isolated airborne) are counted, not
+   * measured. Every other unclassified point near a conductor is measured as vegetation.
+   *
+   * @param setAside the wire finder's points set aside ({@code WireResult.setAside()})
+   */
+  public Measurement measure(ChunkSource source, NearPointWriter out, SetAside setAside) {
+    Objects.requireNonNull(setAside, "setAside");
     List<EngineWorker> workers = Collections.synchronizedList(new ArrayList<>());
     source.readParallel(options.threads(), () -> {
       CanopyBuilder canopy = treeOptions == null ? null
           : new CanopyBuilder(treeOptions, (x, y) -> true);
       EngineWorker w = new EngineWorker(spans, index, conditions, heights, vegetation, options,
-          out, canopy);
+          out, canopy, setAside);
       workers.add(w);
       return w;
     });
@@ -189,7 +198,15 @@ public final class ClearanceEngine {
       long kept = 0;
       long exConductor = 0;
       long exStructure = 0;
+      long exAirborne = 0;
+      long unread = 0;
+      double unreadNearest = Double.POSITIVE_INFINITY;
+      java.util.BitSet unreadClasses = new java.util.BitSet(256);
       for (EngineWorker w : workers) {
+        exAirborne += w.excludedAirborne[i];
+        unread += w.unreadCount[i];
+        unreadNearest = Math.min(unreadNearest, w.unreadNearest[i]);
+        unreadClasses.or(w.unreadClasses[i]);
         measured += w.measured[i];
         kept += w.kept[i];
         exConductor += w.excludedConductor[i];
@@ -208,7 +225,8 @@ public final class ClearanceEngine {
             Double.NaN, Double.NaN));
       }
       result.add(new SpanClearance(p.model.span().id(), minima, measured, kept, exConductor,
-          exStructure));
+          exStructure, exAirborne, new SpanClearance.Unread(unread,
+              unread > 0 ? unreadNearest : Double.NaN, unreadClasses.stream().boxed().toList())));
     }
     return result;
   }

@@ -141,7 +141,7 @@ public final class ConditionModels {
     ConductorType type = position.map(ConductorPosition::conductor).orElse(null);
     List<Optional<ConductorState>> states = new ArrayList<>();
     List<Optional<String>> failures = new ArrayList<>();
-    states.add(Optional.of(ConductorState.hanging(c.curve())));
+    states.add(Optional.of(ConductorState.surveyed(c.curve(), c.surveySwingRad())));
     failures.add(Optional.empty());
     for (int k = 1; k < conditions.size(); k++) {
       String name = conditions.names().get(k);

@@ -7,6 +7,7 @@ import java.util.List;
 import java.util.function.Consumer;
 import org.clearance.ground.CanopyBuilder;
 import org.clearance.survey.PointChunk;
+import org.clearance.wire.SetAside;
 
 /**
  * One worker thread of the {@link ClearanceEngine}: measures the chunks it is given and keeps its
@@ -22,9 +23,17 @@ final class EngineWorker implements Consumer<PointChunk> {
    * tree top and is most of the points.
    */
   static final double CANOPY_MIN_HEIGHT_M = 1.0;
+  /** Reach of a structure's arm hardware along the line from its centre, m: a 3 m strain
+   * insulator and its jumper at a dead-end, an arm on the bisector of a 35 degree turn
+   * (demo corridor geometry; common practice, no source). */
+  static final double ARM_ALONG_M = 5.0;
+  /** Reach of an arm beyond its outermost conductor end, m: arm tip and clamp, and on the open
+   * corridor tile's angle tower arms 3.5 m beyond the conductors' nominal offsets (measured). */
+  static final double ARM_MARGIN_M = 4.0;
+  /** Depth of jumper loops and insulator hardware below the lowest conductor end, m. */
+  static final double ARM_BELOW_M = 3.0;
 
   /** What happened to a point in one span. */
-  private enum Outcome { MEASURED, CONDUCTOR, STRUCTURE }
 
   private final List<PreparedSpan> spans;
   private final SpanIndex index;
@@ -41,6 +50,13 @@ final class EngineWorker implements Consumer<PointChunk> {
   final long[] kept;
   final long[] excludedConductor;
   final long[] excludedStructure;
+  final long[] excludedAirborne;
+  /** Per span: points of classes not read that may be vegetation within the keep radius, the
+   * nearest of them (m) and their classes. */
+  final long[] unreadCount;
+  final double[] unreadNearest;
+  final java.util.BitSet[] unreadClasses;
+  private final SetAside setAside;
   private final double[] best;
   private final int[] bestConductor;
   private final double[] bestAngle;
@@ -48,7 +64,8 @@ final class EngineWorker implements Consumer<PointChunk> {
 
   EngineWorker(List<PreparedSpan> spans, SpanIndex index, ConditionSet conditions,
       HeightModel heights, VegetationSelector vegetation, ClearanceEngine.Options options,
-      NearPointWriter out, CanopyBuilder canopy) {
+      NearPointWriter out, CanopyBuilder canopy, SetAside setAside) {
+    this.setAside = setAside;
     this.spans = spans;
     this.index = index;
     this.conditions = conditions;
@@ -64,6 +81,14 @@ final class EngineWorker implements Consumer<PointChunk> {
     kept = new long[n];
     excludedConductor = new long[n];
     excludedStructure = new long[n];
+    excludedAirborne = new long[n];
+    unreadCount = new long[n];
+    unreadNearest = new double[n];
+    java.util.Arrays.fill(unreadNearest, Double.POSITIVE_INFINITY);
+    unreadClasses = new java.util.BitSet[n];
+    for (int i = 0; i < n; i++) {
+      unreadClasses[i] = new java.util.BitSet(256);
+    }
     best = new double[nc];
     bestConductor = new int[nc];
     bestAngle = new double[nc];
@@ -78,14 +103,22 @@ final class EngineWorker implements Consumer<PointChunk> {
     short[] cls = chunk.classification();
     byte[] flags = chunk.flags();
     for (int i = 0; i < chunk.size(); i++) {
-      if (!vegetation.candidateClass(cls[i]) || (flags[i] & PointChunk.FLAG_WITHHELD) != 0) {
+      if ((flags[i] & PointChunk.FLAG_WITHHELD) != 0) {
+        continue;
+      }
+      boolean read = vegetation.candidateClass(cls[i]);
+      if (!read && !vegetation.mayBeUnread(cls[i])) {
         continue;
       }
       int[] candidates = index.spansAt(xs[i], ys[i]);
       if (candidates.length == 0) {
         continue;
       }
-      point(candidates, xs[i], ys[i], zs[i], cls[i]);
+      if (read) {
+        point(candidates, xs[i], ys[i], zs[i], cls[i]);
+      } else {
+        unreadPoint(candidates, xs[i], ys[i], zs[i], cls[i]);
+      }
     }
     if (buffer.size() >= FLUSH_POINTS) {
       flush();
@@ -97,6 +130,7 @@ final class EngineWorker implements Consumer<PointChunk> {
     boolean hagDone = false;
     boolean inTreeRegion = false;
     boolean notVegetation = false;
+    SetAside.Reason reason = null;
     for (int sp : candidates) {
       PreparedSpan p = spans.get(sp);
       double s = p.frame.station(x, y);
@@ -112,15 +146,27 @@ final class EngineWorker implements Consumer<PointChunk> {
         }
       }
       inTreeRegion = true;
-      if (vegetation.inferred() && nearStructure(p, x, y)) {
+      if (vegetation.inferred() && (nearStructure(p, x, y) || onCrossArm(p, s, e, z))) {
         if (p.inBox(s, e, z)) {
           excludedStructure[sp]++;
         }
         notVegetation = true;
         continue;
       }
-      if (p.inBox(s, e, z) && measure(p, x, y, z, cls, hag) == Outcome.CONDUCTOR) {
-        notVegetation = true;
+      if (vegetation.inferred()) {
+        if (reason == null) {
+          reason = setAside.reason(SetAside.key(x, y, z));
+        }
+        if (reason != SetAside.Reason.NONE) {
+          if (p.inBox(s, e, z)) {
+            (reason == SetAside.Reason.WIRE ? excludedConductor : excludedAirborne)[sp]++;
+          }
+          notVegetation = true;
+          continue;
+        }
+      }
+      if (p.inBox(s, e, z)) {
+        measure(p, x, y, z, cls, hag);
       }
     }
     if (canopy != null && inTreeRegion && !notVegetation && hag >= CANOPY_MIN_HEIGHT_M) {
@@ -128,7 +174,55 @@ final class EngineWorker implements Consumer<PointChunk> {
     }
   }
 
-  private Outcome measure(PreparedSpan p, double x, double y, double z, int cls, double hag) {
+  /**
+   * A point of a class the check does not read that may be vegetation all the same: counted
+   * per span when within the keep radius of a conductor in any condition, never measured as
+   * vegetation.
+   */
+  private void unreadPoint(int[] candidates, double x, double y, double z, int cls) {
+    double hag = Double.NaN;
+    boolean hagDone = false;
+    for (int sp : candidates) {
+      PreparedSpan p = spans.get(sp);
+      double s = p.frame.station(x, y);
+      double e = p.frame.offset(x, y);
+      if (!p.inBox(s, e, z)) {
+        continue;
+      }
+      if (!hagDone) {
+        hag = heights.heightAboveGround(x, y, z);
+        hagDone = true;
+        if (!vegetation.unread(cls, hag)) {
+          return;
+        }
+      }
+      double d = nearest(p, x, y, z);
+      if (d <= options.keepRadius()) {
+        unreadCount[sp]++;
+        unreadNearest[sp] = Math.min(unreadNearest[sp], d);
+        unreadClasses[sp].set(cls);
+      }
+    }
+  }
+
+  /** Least distance from a point to the span's conductors over every condition, m. */
+  private double nearest(PreparedSpan p, double x, double y, double z) {
+    double best = Double.POSITIVE_INFINITY;
+    for (int k = 0; k < conditions.size(); k++) {
+      CatenaryDistance[] row = p.kernels[k];
+      for (int j = 0; j < row.length; j++) {
+        if (row[j] == null || p.lowerBound(k, j, x, y, z) >= best) {
+          continue;
+        }
+        double phi = p.swingMin[k][j] < 0 || p.swingMax[k][j] > 0
+            ? row[j].closestSwingAngle(x, y, z, p.swingMin[k][j], p.swingMax[k][j]) : 0;
+        best = Math.min(best, row[j].distance(x, y, z, phi));
+      }
+    }
+    return best;
+  }
+
+  private void measure(PreparedSpan p, double x, double y, double z, int cls, double hag) {
     int sp = p.index;
     int nc = conditions.size();
     // Lower bounds first: a point that cannot be stored (farther than the keep radius in every
@@ -142,8 +236,7 @@ final class EngineWorker implements Consumer<PointChunk> {
         }
       }
     }
-    boolean mayKeep = lowest <= options.keepRadius()
-        || (vegetation.inferred() && lowest < options.conductorExclusion());
+    boolean mayKeep = lowest <= options.keepRadius();
     double nearest = Double.POSITIVE_INFINITY;
     for (int k = 0; k < nc; k++) {
       best[k] = Double.POSITIVE_INFINITY;
@@ -172,10 +265,6 @@ final class EngineWorker implements Consumer<PointChunk> {
         }
       }
       nearest = Math.min(nearest, best[k]);
-    }
-    if (vegetation.inferred() && best[0] < options.conductorExclusion()) {
-      excludedConductor[sp]++;
-      return Outcome.CONDUCTOR;
     }
     measured[sp]++;
     boolean keep = nearest <= options.keepRadius();
@@ -211,7 +300,6 @@ final class EngineWorker implements Consumer<PointChunk> {
       kept[sp]++;
       buffer.add(new PointClearance(p.model.span().id(), x, y, z, cls, hag, details));
     }
-    return Outcome.MEASURED;
   }
 
   private boolean nearStructure(PreparedSpan p, double x, double y) {
@@ -221,6 +309,28 @@ final class EngineWorker implements Consumer<PointChunk> {
     double bx = p.model.span().to().x() - x;
     double by = p.model.span().to().y() - y;
     return ax * ax + ay * ay < r2 || bx * bx + by * by < r2;
+  }
+
+  /**
+   * Whether a point lies where a structure's cross arms, insulators and jumpers are: within
+   * {@link #ARM_ALONG_M} along the line of a structure, across out to {@link #ARM_MARGIN_M}
+   * beyond the outermost conductor end there on either side (a conductor not fitted, say with
+   * a gap in its points, still has its arm and insulator), and no lower than {@link #ARM_BELOW_M} below the
+   * lowest conductor end there (the arms reach past the structure disc on wide towers).
+   */
+  private static boolean onCrossArm(PreparedSpan p, double s, double e, double z) {
+    for (int end = 0; end < 2; end++) {
+      if (Double.isNaN(p.armZLo[end])) {
+        continue;
+      }
+      double along = end == 0 ? s : s - p.model.span().lengthM();
+      double half = Math.max(Math.abs(p.armELo[end]), Math.abs(p.armEHi[end])) + ARM_MARGIN_M;
+      if (Math.abs(along) <= ARM_ALONG_M && Math.abs(e) <= half
+          && z >= p.armZLo[end] - ARM_BELOW_M) {
+        return true;
+      }
+    }
+    return false;
   }
 
   void flush() {

@@ -40,6 +40,14 @@ final class PreparedSpan {
   final double[][] vertexZ;
   final double[][] constant;
   final String[] names;
+  /**
+   * Cross-arm boxes at the span's two structures, in the span frame: per end (0 at the first
+   * structure, 1 at the second) the least and largest offset and the lowest elevation of the
+   * surveyed conductors' ends there (m); NaN where no conductor ends there.
+   */
+  final double[] armELo = {Double.NaN, Double.NaN};
+  final double[] armEHi = {Double.NaN, Double.NaN};
+  final double[] armZLo = {Double.NaN, Double.NaN};
 
   /**
    * @param reach measuring box margin around the conductors in every condition, m
@@ -100,6 +108,18 @@ final class PreparedSpan {
           zHi = Math.max(zHi, curve.z(s));
         }
         zLo = Math.min(zLo, lowestZ(curve));
+        if (k == 0) {
+          for (double s : new double[] {0, curve.length()}) {
+            double x = curve.x(s);
+            double y = curve.y(s);
+            int end = frame.station(x, y) < model.span().lengthM() / 2 ? 0 : 1;
+            double e = frame.offset(x, y);
+            armELo[end] = Double.isNaN(armELo[end]) ? e : Math.min(armELo[end], e);
+            armEHi[end] = Double.isNaN(armEHi[end]) ? e : Math.max(armEHi[end], e);
+            armZLo[end] = Double.isNaN(armZLo[end]) ? curve.z(s)
+                : Math.min(armZLo[end], curve.z(s));
+          }
+        }
       }
     }
     sMin = sLo - reach;

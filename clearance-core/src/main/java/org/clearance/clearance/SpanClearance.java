@@ -11,16 +11,54 @@ import java.util.Optional;
  * @param minima the closest vegetation in each condition of the run, in run order
  * @param pointsMeasured vegetation points inside the span's measuring box
  * @param pointsKept points within the keep radius, stored for rule evaluation
- * @param excludedAsConductor points of an unclassified survey taken to be conductor points
- * @param excludedAsStructure points of an unclassified survey taken to be structure points
+ * @param excludedAsConductor points of an unclassified survey inside the measuring box set
+ *     aside as wire points (the wire finder's evidence, docs/wire-finder.md)
+ * @param excludedAsStructure points of an unclassified survey inside the measuring box taken to
+ *     be structure points
+ * @param excludedAsAirborne points of an unclassified survey inside the measuring box set aside
+ *     as isolated airborne points (birds, high noise)
+ * @param unread points of classes the check does not read that may be vegetation
+ *     ({@link VegetationSelector#unread}) within the keep radius of a conductor
  */
 public record SpanClearance(
     String spanId, List<ConditionMinimum> minima, long pointsMeasured, long pointsKept,
-    long excludedAsConductor, long excludedAsStructure) {
+    long excludedAsConductor, long excludedAsStructure, long excludedAsAirborne, Unread unread) {
+
+  /**
+   * Points not read as vegetation that may be vegetation, near the conductors.
+   *
+   * @param count how many lie within the keep radius of a conductor in some condition
+   * @param nearestM the nearest of them, m (NaN when none)
+   * @param classes their ASPRS classes, ascending
+   */
+  public record Unread(long count, double nearestM, List<Integer> classes) {
+    /** None. */
+    public static final Unread NONE = new Unread(0, Double.NaN, List.of());
+
+    public Unread {
+      classes = List.copyOf(classes);
+    }
+  }
+
+  /** A span's measurement without unread points. */
+  public SpanClearance(String spanId, List<ConditionMinimum> minima, long pointsMeasured,
+      long pointsKept, long excludedAsConductor, long excludedAsStructure,
+      long excludedAsAirborne) {
+    this(spanId, minima, pointsMeasured, pointsKept, excludedAsConductor, excludedAsStructure,
+        excludedAsAirborne, Unread.NONE);
+  }
+
+  /** A span's measurement without airborne points set aside. */
+  public SpanClearance(String spanId, List<ConditionMinimum> minima, long pointsMeasured,
+      long pointsKept, long excludedAsConductor, long excludedAsStructure) {
+    this(spanId, minima, pointsMeasured, pointsKept, excludedAsConductor, excludedAsStructure,
+        0, Unread.NONE);
+  }
 
   public SpanClearance {
     Objects.requireNonNull(spanId, "spanId");
     minima = List.copyOf(minima);
+    Objects.requireNonNull(unread, "unread");
   }
 
   /** The smallest distance over the conditions of a group, or empty when none was measured. */

@@ -26,6 +26,19 @@ public final class VegetationSelector {
    */
   public static final double UNCLASSIFIED_MIN_HEIGHT = 0.3;
 
+  /**
+   * ASPRS classes whose meaning rules out vegetation wherever they lie (LAS 1.4 R15 Table 17):
+   * ground, building, low point, wires, tower, wire-structure connector, bridge deck, high
+   * noise, overhead structure, temporal exclusion.
+   */
+  static final Set<Integer> NOT_VEGETATION = Set.of(2, 6, 7, 13, 14, 15, 16, 17, 18, 19, 22);
+  /** ASPRS classes that lie on the ground (water, rail, road surface, ignored ground, snow): a
+   * point of these classes standing high above it is labelled wrongly. */
+  static final Set<Integer> GROUND_LIKE = Set.of(9, 10, 11, 20, 21);
+  /** Height above ground beyond which a ground-like class is not believed, m (snow banks, rail
+   * and road furniture stay below; common practice, no source). */
+  static final double GROUND_LIKE_MAX_HEIGHT = 2.0;
+
   private final BitSet classes;
   private final boolean inferred;
 
@@ -59,6 +72,34 @@ public final class VegetationSelector {
     unclassified.set(0);
     unclassified.set(1);
     return new VegetationSelector(unclassified, true);
+  }
+
+  /**
+   * Whether a point that is not read as vegetation may be vegetation all the same: a class of
+   * unknown meaning (reserved 8, 12, 23-63, user-defined 64-255) at least
+   * {@link #UNCLASSIFIED_MIN_HEIGHT} above ground, or a ground-like class more than
+   * {@link #GROUND_LIKE_MAX_HEIGHT} above it. Such points near a conductor keep a span from being
+   * called clear (issue 10 item 3: vegetation delivered in class 20). Classes 0 and 1 of a survey
+   * that labels its vegetation are taken as the vendor left them: not vegetation.
+   *
+   * @param classification the point's ASPRS class
+   * @param hag its height above ground, m (NaN: unknown, not counted)
+   */
+  public boolean unread(int classification, double hag) {
+    if (classes.get(classification) || classification <= 1
+        || NOT_VEGETATION.contains(classification)) {
+      return false;
+    }
+    if (GROUND_LIKE.contains(classification)) {
+      return hag > GROUND_LIKE_MAX_HEIGHT;
+    }
+    return hag >= UNCLASSIFIED_MIN_HEIGHT;
+  }
+
+  /** Whether points of this class may be {@link #unread} at some height (a quick first test). */
+  public boolean mayBeUnread(int classification) {
+    return !classes.get(classification) && classification > 1
+        && !NOT_VEGETATION.contains(classification);
   }
 
   /** Whether the class may hold vegetation. */

@@ -11,6 +11,11 @@ import java.util.List;
  * <ol>
  *   <li>canopy height model (CHM) = highest vegetation return per cell minus the ground at the
  *       cell centre (methods.md 5.1);
+ *   <li>airborne groups removed ({@link #removeSpikes}): a few cells standing more than
+ *       {@link #SPIKE_M} m above every other canopy cell within {@link #SPIKE_RADIUS_M} m are
+ *       birds or high noise, not a crown, and are emptied (common practice, no source: a crown
+ *       falls less than 10 m within 2 m of its apex unless it is ten times as long as it is
+ *       wide);
  *   <li>pits and small holes filled: a cell with at least {@link #MIN_NEIGHBOURS_TO_FILL} of its
  *       eight neighbours in the canopy that is empty, or more than {@link TreeOptions#pitDepth()}
  *       below their median, takes that median (median pit filling: common practice, no source);
@@ -29,7 +34,87 @@ final class TreeFinder {
   /** Cells are filled only when most (5 of 8) neighbours hold canopy: a gap, not an edge. */
   static final int MIN_NEIGHBOURS_TO_FILL = 5;
 
+  /** Spike test radius, m. */
+  static final double SPIKE_RADIUS_M = 2.0;
+  /** Height a spike stands above every canopy cell around it, m. */
+  static final double SPIKE_M = 10.0;
+
   private TreeFinder() {}
+
+  /** Most cells of an airborne group: a bird or a small flock (1-6 returns in the demo). */
+  static final int MAX_SPIKE_CELLS = 6;
+
+  /**
+   * Empties the airborne groups (see the class comment); returns a new raster. Cells are
+   * grouped when they lie within {@link #SPIKE_RADIUS_M} and {@link #SPIKE_M} in height of each
+   * other; a group of at most {@link #MAX_SPIKE_CELLS} cells, all at least {@link #SPIKE_M}
+   * high, with every other canopy cell within {@link #SPIKE_RADIUS_M} more than {@link #SPIKE_M}
+   * below it, floats: a bird, a flock or high noise, never a crown (a crown falls continuously
+   * to its base).
+   */
+  static float[] removeSpikes(float[] chm, int side, double cellSize) {
+    float[] out = chm.clone();
+    int reach = (int) Math.ceil(SPIKE_RADIUS_M / cellSize);
+    double r2 = (SPIKE_RADIUS_M / cellSize) * (SPIKE_RADIUS_M / cellSize);
+    boolean[] seen = new boolean[chm.length];
+    int[] group = new int[MAX_SPIKE_CELLS + 1];
+    for (int start = 0; start < chm.length; start++) {
+      if (seen[start] || Float.isNaN(chm[start]) || chm[start] < SPIKE_M) {
+        continue;
+      }
+      // Grow the group from the start cell; give up once it is too big to be airborne.
+      int n = 0;
+      group[n++] = start;
+      seen[start] = true;
+      boolean floats = true;
+      for (int g = 0; g < n && floats; g++) {
+        int i = group[g];
+        int r = i / side;
+        int c = i % side;
+        float v = chm[i];
+        for (int dr = -reach; dr <= reach && floats; dr++) {
+          for (int dc = -reach; dc <= reach && floats; dc++) {
+            int rr = r + dr;
+            int cc = c + dc;
+            if ((dr == 0 && dc == 0) || rr < 0 || cc < 0 || rr >= side || cc >= side
+                || dr * dr + dc * dc > r2) {
+              continue;
+            }
+            int j = rr * side + cc;
+            float w = chm[j];
+            if (Float.isNaN(w) || w < v - SPIKE_M) {
+              continue; // empty, or far below: air between
+            }
+            if (w > v + SPIKE_M || w < SPIKE_M) {
+              floats = false; // something far above, or a link down to low canopy
+            } else if (!contains(group, n, j)) {
+              if (n == group.length) {
+                floats = false;
+              } else {
+                group[n++] = j;
+                seen[j] = true;
+              }
+            }
+          }
+        }
+      }
+      if (floats) {
+        for (int g = 0; g < n; g++) {
+          out[group[g]] = Float.NaN;
+        }
+      }
+    }
+    return out;
+  }
+
+  private static boolean contains(int[] a, int n, int v) {
+    for (int k = 0; k < n; k++) {
+      if (a[k] == v) {
+        return true;
+      }
+    }
+    return false;
+  }
 
   static List<Tree> find(SparseGrid dsm, GroundModel ground, TreeOptions options) {
     int window = options.maxWindowCells();
@@ -60,7 +145,7 @@ final class TreeFinder {
     if (!tall) {
       return;
     }
-    chm = fillPits(chm, side, o.pitDepth());
+    chm = fillPits(removeSpikes(chm, side, o.cellSize()), side, o.pitDepth());
     int[] tops = findTops(chm, side, o, offsets);
     int[] area = CrownSegmenter.crownCells(chm, side, tops, o);
     for (int t = 0; t < tops.length; t++) {

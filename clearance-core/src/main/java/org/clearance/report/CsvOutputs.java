@@ -63,7 +63,8 @@ public final class CsvOutputs {
         u.column("min_clearance_hot"), u.column("min_clearance_blowout"),
         u.column("min_clearance_ice"), "governing_condition", "worst_zone", "n_sites", "rank",
         "worst_priority", u.column("worst_deficit"), "nominal_voltage_kv", "points_checked",
-        "points_not_assessed", "n_possible_violation_sites");
+        "points_not_assessed", "n_possible_violation_sites", "points_set_aside_wire",
+        "points_set_aside_structure", "points_set_aside_airborne");
   }
 
   /** The work list's text: one line per tree or vegetation patch. */
@@ -122,7 +123,7 @@ public final class CsvOutputs {
       f.add(t(r.reason()));
       f.add(Integer.toString(r.conductorsFitted()));
       for (String group : List.of("survey", "hot", "blowout", "ice")) {
-        f.add(u.lengthText(r.minimumOfGroup(group)));
+        f.add(u.minimumText(r.minimumOfGroup(group), run.model().keepRadiusM()));
       }
       f.add(t(r.governingMinimum().map(ConditionMinimum::condition).orElse("")));
       f.add(t(ruled ? r.worst().map(CutSite::zone).orElse("") : ""));
@@ -135,6 +136,9 @@ public final class CsvOutputs {
       f.add(ruled ? Long.toString(r.pointsNotAssessed()) : "");
       f.add(ruled && r.sitesCounted()
           ? Long.toString(r.sites().stream().filter(CutSite::possibleOnly).count()) : "");
+      f.add(Long.toString(s.setAside().wire()));
+      f.add(Long.toString(s.setAside().structure()));
+      f.add(Long.toString(s.setAside().airborne()));
       row(b, f);
     }
     return b.toString();

@@ -143,6 +143,22 @@ final class GpkgLayers {
         "POINT", false, cols, features, e.box());
   }
 
+  /** A span minimum in the output unit, or null where it lies beyond the keep radius and is
+   * only a bound (the column {@code min_clearance_beyond} then gives the bound). */
+  private static Object within(OutputUnit u, double metres, double keepRadiusM) {
+    return metres > keepRadiusM ? null : u.length(metres);
+  }
+
+  /** Whether any of the span's minima lies beyond the keep radius. */
+  private static boolean beyond(SpanResult r, double keepRadiusM) {
+    for (String g : List.of("survey", "hot", "blowout", "ice")) {
+      if (r.minimumOfGroup(g) > keepRadiusM) {
+        return true;
+      }
+    }
+    return false;
+  }
+
   private static Layer spans(RunAssessment run, ReportOptions options, int srs) {
     OutputUnit u = new OutputUnit(options.outputUnit());
     LinearUnit h = run.model().units().horizontal();
@@ -153,7 +169,9 @@ final class GpkgLayers {
         col("n_conductors_fitted", "INTEGER"), col(u.column("min_clearance_survey"), "REAL"),
         col(u.column("min_clearance_hot"), "REAL"), col(u.column("min_clearance_blowout"), "REAL"),
         col(u.column("min_clearance_ice"), "REAL"), col("governing_condition", "TEXT"),
-        col("worst_zone", "TEXT"), col("n_sites", "INTEGER"), col("rank", "INTEGER"));
+        col("worst_zone", "TEXT"), col("n_sites", "INTEGER"), col("rank", "INTEGER"),
+        col(u.column("min_clearance_beyond"), "REAL"));
+    double keep = run.model().keepRadiusM();
     List<Feature> features = new ArrayList<>();
     Extent e = new Extent();
     for (SpanResult r : run.spans()) {
@@ -169,12 +187,13 @@ final class GpkgLayers {
       features.add(new Feature(GpkgGeometry.lineString(srs, xy, false), values(s.id(),
           s.context().lineId(), s.from().id(), s.to().id(), u.length(s.context().lengthM()),
           r.status().name(), r.reason(), (long) r.conductorsFitted(),
-          u.length(r.minimumOfGroup("survey")), u.length(r.minimumOfGroup("hot")),
-          u.length(r.minimumOfGroup("blowout")), u.length(r.minimumOfGroup("ice")),
+          within(u, r.minimumOfGroup("survey"), keep), within(u, r.minimumOfGroup("hot"), keep),
+          within(u, r.minimumOfGroup("blowout"), keep), within(u, r.minimumOfGroup("ice"), keep),
           r.governingMinimum().map(ConditionMinimum::condition).orElse(null),
           ruled ? r.worst().map(CutSite::zone).orElse(null) : null,
           r.sitesCounted() ? (Object) (long) r.sites().size() : null,
-          r.rank().isPresent() ? (Object) (long) r.rank().getAsInt() : null)));
+          r.rank().isPresent() ? (Object) (long) r.rank().getAsInt() : null,
+          beyond(r, keep) ? (Object) u.length(keep) : null)));
     }
     return new Layer("spans", "Spans from structure to structure, with their status and rank",
         "LINESTRING", false, cols, features, e.box());

@@ -40,6 +40,11 @@ final class Html {
         + u.symbol();
   }
 
+  /** A span minimum for reading: "&gt; R" beyond the keep radius R, where it is a bound. */
+  static String minimum(OutputUnit u, double metres, double keepRadiusM) {
+    return metres > keepRadiusM ? "&gt;&nbsp;" + len(u, keepRadiusM) : len(u, metres);
+  }
+
   /** Years for reading: one decimal, "never", or an en dash when not computed. */
   static String years(double y) {
     if (Double.isNaN(y)) {

@@ -153,8 +153,8 @@ public final class HtmlReport {
           .append(r.sitesCounted() ? Integer.toString(r.sites().size()) : "&ndash;")
           .append("</td><td class=\"num\">")
           .append(Html.len(u, r.worst().map(CutSite::deficitM).orElse(Double.NaN)))
-          .append("</td><td class=\"num\">").append(Html.len(u, gov == null ? Double.NaN
-              : gov.distance())).append("</td><td>")
+          .append("</td><td class=\"num\">").append(Html.minimum(u, gov == null ? Double.NaN
+              : gov.distance(), run.model().keepRadiusM())).append("</td><td>")
           .append(gov == null ? "&ndash;" : Html.esc(gov.condition())).append("</td></tr>");
     }
     b.append("</tbody></table></section>\n");

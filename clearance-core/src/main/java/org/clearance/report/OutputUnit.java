@@ -50,6 +50,17 @@ final class OutputUnit {
     return fixed(length(metres), 3);
   }
 
+  /**
+   * A span minimum as text: beyond the keep radius the engine stored nothing and the value is
+   * only a bound, written "&gt; R" with R the keep radius (issue 9 item 7); empty when NaN.
+   *
+   * @param metres the minimum, m
+   * @param keepRadiusM the run's keep radius, m
+   */
+  String minimumText(double metres, double keepRadiusM) {
+    return metres > keepRadiusM ? "> " + lengthText(keepRadiusM) : lengthText(metres);
+  }
+
   /** An area in square metres as text in the output unit, 2 decimals; empty when NaN. */
   String areaText(double squareMetres) {
     return fixed(area(squareMetres), 2);

@@ -145,6 +145,9 @@ public final class RunModelJson {
       n.set("z", JsonFiles.number(mm.z()));
     }
     o.put("points_measured", s.pointsMeasured()).put("points_kept", s.pointsKept());
+    o.put("points_set_aside_wire", s.setAside().wire())
+        .put("points_set_aside_structure", s.setAside().structure())
+        .put("points_set_aside_airborne", s.setAside().airborne());
     ArrayNode notes = o.putArray("notes");
     s.notes().forEach(notes::add);
     return o;
@@ -273,13 +276,20 @@ public final class RunModelJson {
       return new SpanRecord(context, s.str("line_name"), structure(s.obj("from")),
           structure(s.obj("to")), s.constant("status", SpanStatus.class), s.str("reason"),
           conductors, minima, s.integer("points_measured", 0, Long.MAX_VALUE),
-          s.integer("points_kept", 0, Long.MAX_VALUE), s.strings("notes"));
+          s.integer("points_kept", 0, Long.MAX_VALUE), s.strings("notes"),
+          new SpanRecord.SetAsideCounts(count(s, "points_set_aside_wire"),
+              count(s, "points_set_aside_structure"), count(s, "points_set_aside_airborne")));
     } catch (IllegalArgumentException e) {
       throw s.error(null, e.getMessage() + RERUN);
     }
   }
 
-  private static StructureRecord structure(JsonAt o) {
+  /** A count that runs written before it existed lack: 0 then. */
+  private static long count(JsonAt s, String key) {
+    return s.has(key) ? s.integer(key, 0, Long.MAX_VALUE) : 0;
+  }
+
+    private static StructureRecord structure(JsonAt o) {
     return new StructureRecord(o.str("id"), o.num("x"), o.num("y"), o.num("ground_z"),
         o.str("type"));
   }

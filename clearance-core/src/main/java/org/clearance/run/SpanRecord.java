@@ -20,11 +20,34 @@ import org.clearance.clearance.SpanStatus;
  * @param pointsMeasured vegetation points measured in the span's box
  * @param pointsKept points stored within the keep radius
  * @param notes further remarks for the report (structure refinements, excluded points ...)
+ * @param setAside unclassified points in the span's measuring box set aside as not vegetation
  */
 public record SpanRecord(
     SpanContext context, String lineName, StructureRecord from, StructureRecord to,
     SpanStatus status, String reason, List<ConductorRecord> conductors,
-    List<ConditionMinimum> minima, long pointsMeasured, long pointsKept, List<String> notes) {
+    List<ConditionMinimum> minima, long pointsMeasured, long pointsKept, List<String> notes,
+    SetAsideCounts setAside) {
+
+  /**
+   * Unclassified points set aside in a span instead of measured, with the reason
+   * (docs/wire-finder.md, "Points set aside").
+   *
+   * @param wire on a wire
+   * @param structure on a structure (within the structure radius or on its cross arms)
+   * @param airborne isolated airborne points (birds, high noise)
+   */
+  public record SetAsideCounts(long wire, long structure, long airborne) {
+    /** Nothing set aside. */
+    public static final SetAsideCounts NONE = new SetAsideCounts(0, 0, 0);
+  }
+
+  /** A span without points set aside. */
+  public SpanRecord(SpanContext context, String lineName, StructureRecord from,
+      StructureRecord to, SpanStatus status, String reason, List<ConductorRecord> conductors,
+      List<ConditionMinimum> minima, long pointsMeasured, long pointsKept, List<String> notes) {
+    this(context, lineName, from, to, status, reason, conductors, minima, pointsMeasured,
+        pointsKept, notes, SetAsideCounts.NONE);
+  }
 
   public SpanRecord {
     Objects.requireNonNull(context, "context");
@@ -33,6 +56,7 @@ public record SpanRecord(
     conductors = List.copyOf(conductors);
     minima = List.copyOf(minima);
     notes = List.copyOf(notes);
+    Objects.requireNonNull(setAside, "setAside");
   }
 
   /** The span id. */

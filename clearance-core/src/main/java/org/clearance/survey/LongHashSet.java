@@ -2,9 +2,10 @@ package org.clearance.survey;
 
 /**
  * A set of {@code long} keys with open addressing and linear probing, for counting occupied grid
- * cells without boxing (memory: 16 bytes per key at most).
+ * cells and keeping point keys without boxing (memory: 16 bytes per key at most). Not
+ * thread-safe while it is filled; reading from many threads once filled is safe.
  */
-final class LongHashSet {
+public final class LongHashSet {
   /** Marks an empty slot; the key itself is tracked apart. */
   private static final long EMPTY = Long.MIN_VALUE;
   /** Grow when more than half the slots are used: keeps probe sequences short. */
@@ -16,7 +17,7 @@ final class LongHashSet {
   private boolean hasEmptyKey;
 
   /** Adds a key; returns true when it was not there. */
-  boolean add(long key) {
+  public boolean add(long key) {
     if (key == EMPTY) {
       boolean added = !hasEmptyKey;
       hasEmptyKey = true;
@@ -38,7 +39,7 @@ final class LongHashSet {
   }
 
   /** Adds all keys of {@code other}. */
-  void addAll(LongHashSet other) {
+  public void addAll(LongHashSet other) {
     for (long k : other.slots) {
       if (k != EMPTY) {
         add(k);
@@ -49,8 +50,24 @@ final class LongHashSet {
     }
   }
 
+  /** Whether the key is in the set. */
+  public boolean contains(long key) {
+    if (key == EMPTY) {
+      return hasEmptyKey;
+    }
+    int mask = slots.length - 1;
+    int i = mix(key) & mask;
+    while (slots[i] != EMPTY) {
+      if (slots[i] == key) {
+        return true;
+      }
+      i = (i + 1) & mask;
+    }
+    return false;
+  }
+
   /** Number of keys. */
-  long size() {
+  public long size() {
     return used + (hasEmptyKey ? 1 : 0);
   }
 

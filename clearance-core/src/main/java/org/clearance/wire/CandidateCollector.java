@@ -27,6 +27,7 @@ final class CandidateCollector implements Consumer<PointChunk> {
   private final HeightModel heights;
   private final SpanPoints[] points;
   private final long[] seen;
+  private final boolean[] sortedOnce;
 
   CandidateCollector(List<SpanCorridor> corridors, CorridorIndex index, HeightModel heights) {
     this.corridors = List.copyOf(corridors);
@@ -34,6 +35,7 @@ final class CandidateCollector implements Consumer<PointChunk> {
     this.heights = Objects.requireNonNull(heights, "heights");
     this.points = new SpanPoints[corridors.size()];
     this.seen = new long[corridors.size()];
+    this.sortedOnce = new boolean[corridors.size()];
     for (int k = 0; k < points.length; k++) {
       points[k] = new SpanPoints(corridors.get(k).zRef());
     }
@@ -76,7 +78,7 @@ final class CandidateCollector implements Consumer<PointChunk> {
           hagDone = true;
         }
         if (label || hag >= corridor.minHeightM()) {
-          points[c].add(s, e, z[i], hag, k);
+          points[c].add(s, e, z[i], hag, k, SetAside.key(x[i], y[i], z[i]));
         }
       }
     }
@@ -90,9 +92,12 @@ final class CandidateCollector implements Consumer<PointChunk> {
     }
   }
 
-  /** The candidates of corridor k, sorted by station (sorts in place). */
+  /** The candidates of corridor k, sorted by station (sorts in place, once). */
   SpanPoints sorted(int k) {
-    points[k].sort();
+    if (!sortedOnce[k]) {
+      points[k].sort();
+      sortedOnce[k] = true;
+    }
     return points[k];
   }
 

@@ -8,7 +8,10 @@ import java.util.Arrays;
  * org.clearance.line.SpanFrame}), elevation z (m, stored relative to a reference elevation so
  * that floats keep millimetres), height above ground (m, NaN where unknown) and ASPRS class.
  *
- * <p>18 bytes a point: memory follows the number of candidates, never the survey. Not
+ * <p>Each point also keeps its key ({@link SetAside#key}) so that the points found to be wire can
+ * be named to the clearance engine.
+ *
+ * <p>26 bytes a point: memory follows the number of candidates, never the survey. Not
  * thread-safe; one instance per reading thread, merged with {@link #addAll}.
  */
 final class SpanPoints {
@@ -25,6 +28,7 @@ final class SpanPoints {
   private float[] z = new float[INITIAL];
   private float[] h = new float[INITIAL];
   private byte[] c = new byte[INITIAL];
+  private long[] k = new long[INITIAL];
   private int n;
 
   /** @param zRef reference elevation subtracted before storing, m, finite */
@@ -35,8 +39,14 @@ final class SpanPoints {
     this.zRef = zRef;
   }
 
-  /** Adds one point: station, offset, elevation (all m), height above ground (m or NaN), class. */
+  /** Adds one point: station, offset, elevation (all m), height above ground (m or NaN), class;
+   * its key is 0 (for points made up in tests). */
   void add(double station, double offset, double elevation, double hag, int cls) {
+    add(station, offset, elevation, hag, cls, 0L);
+  }
+
+  /** Adds one point with its key ({@link SetAside#key}). */
+  void add(double station, double offset, double elevation, double hag, int cls, long key) {
     if (n == s.length) {
       grow(n + (n >> 1) + 1);
     }
@@ -45,6 +55,7 @@ final class SpanPoints {
     z[n] = (float) (elevation - zRef);
     h[n] = (float) hag;
     c[n] = (byte) cls;
+    k[n] = key;
     n++;
   }
 
@@ -54,6 +65,7 @@ final class SpanPoints {
     z = Arrays.copyOf(z, capacity);
     h = Arrays.copyOf(h, capacity);
     c = Arrays.copyOf(c, capacity);
+    k = Arrays.copyOf(k, capacity);
   }
 
   /** Appends every point of another buffer with the same reference elevation. */
@@ -69,6 +81,7 @@ final class SpanPoints {
     System.arraycopy(other.z, 0, z, n, other.n);
     System.arraycopy(other.h, 0, h, n, other.n);
     System.arraycopy(other.c, 0, c, n, other.n);
+    System.arraycopy(other.k, 0, k, n, other.n);
     n += other.n;
   }
 
@@ -86,13 +99,15 @@ final class SpanPoints {
       k = k != 0 ? k : Float.compare(e[a], e[b]);
       k = k != 0 ? k : Float.compare(z[a], z[b]);
       k = k != 0 ? k : Float.compare(h[a], h[b]);
-      return k != 0 ? k : Byte.compare(c[a], c[b]);
+      k = k != 0 ? k : Byte.compare(c[a], c[b]);
+      return k != 0 ? k : Long.compare(this.k[a], this.k[b]);
     });
     float[] s2 = new float[n];
     float[] e2 = new float[n];
     float[] z2 = new float[n];
     float[] h2 = new float[n];
     byte[] c2 = new byte[n];
+    long[] k2 = new long[n];
     for (int i = 0; i < n; i++) {
       int j = order[i];
       s2[i] = s[j];
@@ -100,12 +115,14 @@ final class SpanPoints {
       z2[i] = z[j];
       h2[i] = h[j];
       c2[i] = c[j];
+      k2[i] = k[j];
     }
     s = s2;
     e = e2;
     z = z2;
     h = h2;
     c = c2;
+    k = k2;
   }
 
   int size() {
@@ -135,6 +152,11 @@ final class SpanPoints {
   /** ASPRS class, 0-255. */
   int cls(int i) {
     return c[i] & 0xFF;
+  }
+
+  /** The point's key ({@link SetAside#key}), 0 when not given. */
+  long key(int i) {
+    return k[i];
   }
 
   /** True for a point the survey labelled as a wire (class 13 or 14). */

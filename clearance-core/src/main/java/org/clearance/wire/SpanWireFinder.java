@@ -44,6 +44,21 @@ final class SpanWireFinder {
    */
   SpanWires find(SpanPoints p, long seen, Span span, LineSpec spec, double groundA,
       double groundB, ConductorEnds arms) {
+    return findWithEvidence(p, seen, span, spec, groundA, groundB, arms).wires();
+  }
+
+  /**
+   * The span's conductors and the evidence of which candidates are wire points.
+   *
+   * @param wires the span's conductors
+   * @param onWire per candidate, true when it lies on a wire ({@link PointEvidence#onCurve})
+   * @param linear per candidate, linear evidence
+   */
+  record Found(SpanWires wires, boolean[] onWire, boolean[] linear) {}
+
+  /** As {@link #find}, with the evidence of which candidates are wire points. */
+  Found findWithEvidence(SpanPoints p, long seen, Span span, LineSpec spec, double groundA,
+      double groundB, ConductorEnds arms) {
     List<ConductorPosition> positions = spec.conductors();
     if (p.size() == 0) {
       String why = seen == 0
@@ -52,7 +67,8 @@ final class SpanWireFinder {
               + " span's corridor", seen);
       List<FittedConductor> all = positions.stream()
           .map(pos -> FittedConductor.missing(pos, why)).toList();
-      return new SpanWires(span, WireStatus.NOT_ASSESSED, Optional.of(why), all, 0, false);
+      return new Found(new SpanWires(span, WireStatus.NOT_ASSESSED, Optional.of(why), all, 0,
+          false), new boolean[0], new boolean[0]);
     }
     double length = span.lengthM();
     int labelledCount = 0;
@@ -92,14 +108,17 @@ final class SpanWireFinder {
       summaries.add(summary(p, r, span));
     }
     int[] slotOf = PositionMatcher.match(summaries, slots, groundA, groundB);
+    List<ConductorFit.Result> finals = new ArrayList<>(failed);
     ConductorNaming naming = new ConductorNaming(options.quality(), span);
     for (int j = 0; j < positions.size(); j++) {
       ConductorPosition pos = positions.get(j);
       for (int i = 0; i < fits.size(); i++) {
         if (slotOf[i] == j) {
-          naming.addPosition(pos, BundleSplit.split(p, fits.get(i), span, pos.position(),
-              pos.bundle(), pos.bundleSpacingM(), slots.get(j).attachZA(),
-              slots.get(j).attachZB(), ends(span, pos, arms)));
+          List<BundleSplit.Part> parts = BundleSplit.split(p, fits.get(i), span,
+              pos.position(), pos.bundle(), pos.bundleSpacingM(), slots.get(j).attachZA(),
+              slots.get(j).attachZB(), ends(span, pos, arms));
+          parts.forEach(part -> finals.add(part.fit()));
+          naming.addPosition(pos, parts);
         }
       }
       naming.closePosition(pos, where(pos));
@@ -114,14 +133,16 @@ final class SpanWireFinder {
         + summaries.get(i).offsetB())));
     for (int i : extras) {
       String name = naming.nextExtraName();
-      naming.addExtra(summaries.get(i).role().orElse(ConductorPosition.Role.PHASE),
-          BundleSplit.split(p, fits.get(i), span, name, 1, Double.NaN, Double.NaN,
-              Double.NaN, arms));
+      List<BundleSplit.Part> parts = BundleSplit.split(p, fits.get(i), span, name, 1,
+          Double.NaN, Double.NaN, Double.NaN, arms);
+      parts.forEach(part -> finals.add(part.fit()));
+      naming.addExtra(summaries.get(i).role().orElse(ConductorPosition.Role.PHASE), parts);
     }
     for (ConductorFit.Result r : failed) {
       naming.addFailedExtra(roleHint(p, r.members()).orElse(ConductorPosition.Role.PHASE), r);
     }
-    return naming.spanWires(p.size(), labelled);
+    return new Found(naming.spanWires(p.size(), labelled), PointEvidence.onCurve(p, finals,
+        linear), linear);
   }
 
   /**

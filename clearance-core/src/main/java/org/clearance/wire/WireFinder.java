@@ -99,7 +99,8 @@ public final class WireFinder {
       all.absorb(collectors.get(k));
     }
     collectors.clear();
-    return new WireResult(used, processSpans(spans, specs, arms, all, heights), changes);
+    Processed done = processSpans(spans, specs, arms, corridors, all, heights);
+    return new WireResult(used, done.spans(), changes, done.setAside());
   }
 
   /**
@@ -116,27 +117,61 @@ public final class WireFinder {
     return new ConductorEnds(tanA, 0, tanB, 0);
   }
 
-  private List<SpanWires> processSpans(List<Span> spans, List<LineSpec> specs,
-      List<ConductorEnds> arms, CandidateCollector all, HeightModel heights) {
+  /** The spans' conductors and the points set aside. */
+  private record Processed(List<SpanWires> spans, SetAside setAside) {}
+
+  /**
+   * Fits every span, then, once every span's wire points are known, sets aside the points that
+   * are not vegetation ({@link PointEvidence}); a span's candidates are dropped after that.
+   */
+  private Processed processSpans(List<Span> spans, List<LineSpec> specs,
+      List<ConductorEnds> arms, List<SpanCorridor> corridors, CandidateCollector all,
+      HeightModel heights) {
     SpanWireFinder finder = new SpanWireFinder(options);
     ExecutorService pool = Executors.newFixedThreadPool(options.threads());
     try {
-      List<Future<SpanWires>> futures = new ArrayList<>();
+      List<Future<SpanWireFinder.Found>> futures = new ArrayList<>();
       for (int k = 0; k < spans.size(); k++) {
         int idx = k;
         futures.add(pool.submit(() -> {
           Span span = spans.get(idx);
-          SpanWires w = finder.find(all.sorted(idx), all.seen(idx), span, specs.get(idx),
+          return finder.findWithEvidence(all.sorted(idx), all.seen(idx), span, specs.get(idx),
               groundAt(span.from(), heights), groundAt(span.to(), heights), arms.get(idx));
-          all.release(idx);
-          return w;
         }));
       }
-      List<SpanWires> out = new ArrayList<>();
-      for (Future<SpanWires> f : futures) {
-        out.add(f.get());
+      List<SpanWireFinder.Found> found = new ArrayList<>();
+      SetAside onWire = new SetAside();
+      for (Future<SpanWireFinder.Found> f : futures) {
+        SpanWireFinder.Found r = f.get();
+        found.add(r);
       }
-      return out;
+      for (int k = 0; k < spans.size(); k++) {
+        SpanPoints p = all.sorted(k);
+        boolean[] on = found.get(k).onWire();
+        for (int i = 0; i < on.length; i++) {
+          if (on[i]) {
+            onWire.addWire(p.key(i));
+          }
+        }
+      }
+      SetAside out = new SetAside();
+      List<Future<?>> second = new ArrayList<>();
+      for (int k = 0; k < spans.size(); k++) {
+        int idx = k;
+        second.add(pool.submit(() -> {
+          SpanWireFinder.Found r = found.get(idx);
+          SpanPoints p = all.sorted(idx);
+          if (r.onWire().length == p.size()) {
+            PointEvidence.setAside(p, r.onWire(), r.linear(), onWire,
+                corridors.get(idx).minHeightM(), out);
+          }
+          all.release(idx);
+        }));
+      }
+      for (Future<?> f : second) {
+        f.get();
+      }
+      return new Processed(found.stream().map(SpanWireFinder.Found::wires).toList(), out);
     } catch (InterruptedException e) {
       Thread.currentThread().interrupt();
       throw new IllegalStateException("interrupted while fitting spans", e);

@@ -21,6 +21,7 @@ import org.clearance.line.StructureType;
 import org.clearance.survey.PointChunk;
 import org.clearance.wire.Catenary;
 import org.clearance.wire.ConductorCurve;
+import org.clearance.wire.SetAside;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
@@ -116,7 +117,7 @@ class ClearanceEngineTest {
     ConductorCurve b = conductor(5);
     SpanModel model = span(set, List.of(hangingOnly("A", a, 1), hangingOnly("B", b, 1)));
     ClearanceEngine engine = new ClearanceEngine(List.of(model), set, (x, y, z) -> 1.0,
-        classified(), new ClearanceEngine.Options(3.0, 1, 0.5, 8.0, 50.0));
+        classified(), new ClearanceEngine.Options(3.0, 1, 8.0, 50.0));
     double[][] pts = {{100, 7, a.z(100), 5}, {100, 0, a.z(100) - 20, 5}};
     Path file = dir.resolve(NearPointFile.FILE_NAME);
     List<SpanClearance> result;
@@ -156,22 +157,57 @@ class ClearanceEngineTest {
   }
 
   @Test
-  void unclassifiedSurveyExcludesConductorAndStructurePoints() {
+  void unclassifiedSurveySetsAsideOnlyPointsShownToBeWireStructureOrAirborne() {
+    // Regression, issue 9 item 1: every unclassified point within 0.5 m of a conductor was taken
+    // as the conductor, so vegetation touching a wire was dropped and the span read clear. Now
+    // only the points the wire finder's evidence names are set aside.
     ConditionSet set = new ConditionSet(List.of("survey"), List.of("survey"));
     ConductorCurve a = conductor(0);
     ClearanceEngine engine = new ClearanceEngine(List.of(span(set, List.of(hangingOnly("A", a,
         1)))), set, (x, y, z) -> z, VegetationSelector.forSurvey(new long[256], null),
         ClearanceEngine.Options.defaults(1));
     double[][] pts = {
-      {150, 0.1, a.z(150), 1}, // on the wire
+      {150, 0.0, a.z(150), 1}, // on the wire, named by the evidence
       {2, 1, 25, 1}, // on the tower
       {150, 3, a.z(150) - 3, 1}, // a tree top
+      {120, 0.0, a.z(120) + 0.3, 1}, // a bird, named by the evidence
+      {180, 0.0, a.z(180) - 0.1, 1}, // a branch touching the wire: not named, so measured
+    };
+    SetAside aside = SetAside.of(new long[] {SetAside.key(150, 0.0, a.z(150))},
+        new long[] {SetAside.key(120, 0.0, a.z(120) + 0.3)});
+    SpanClearance r = engine.measure(points(pts), null, aside).spans().get(0);
+    assertEquals(2, r.pointsMeasured());
+    assertEquals(1, r.excludedAsConductor());
+    assertEquals(1, r.excludedAsStructure());
+    assertEquals(1, r.excludedAsAirborne());
+    assertEquals(0.1, r.minima().get(0).distance(), 2e-3);
+    // Without evidence nothing near the wire is dropped.
+    SpanClearance none = engine.measure(points(pts), null).spans().get(0);
+    assertEquals(4, none.pointsMeasured());
+    assertEquals(0.0, none.minima().get(0).distance(), 1e-3);
+  }
+
+  @Test
+  void vegetationInAClassNotReadIsCountedNearTheConductors() {
+    // Regression, issue 10 item 3: 123 494 vegetation points delivered in class 20 (ignored
+    // ground) gave "assessed and clear". Points of classes not read that may be vegetation
+    // (ground-like classes standing above the ground, unknown classes) are counted per span.
+    ConditionSet set = new ConditionSet(List.of("survey"), List.of("survey"));
+    ConductorCurve a = conductor(0);
+    ClearanceEngine engine = new ClearanceEngine(List.of(span(set, List.of(hangingOnly("A", a,
+        1)))), set, (x, y, z) -> z, classified(), ClearanceEngine.Options.defaults(1));
+    double[][] pts = {
+      {150, 2, a.z(150) - 2, 20}, // a crown labelled ignored ground, 2.83 m from the wire
+      {160, 4, a.z(160) - 5, 64}, // a user class
+      {170, 0, 0.5, 20}, // class 20 on the ground: believed
+      {180, 0, a.z(180) - 4, 2}, // ground class: never counted
+      {190, 1, a.z(190) - 3, 5}, // read as vegetation
     };
     SpanClearance r = engine.measure(points(pts), null).spans().get(0);
     assertEquals(1, r.pointsMeasured());
-    assertEquals(1, r.excludedAsConductor());
-    assertEquals(1, r.excludedAsStructure());
-    assertEquals(Math.hypot(3, 3), r.minima().get(0).distance(), 1e-3);
+    assertEquals(2, r.unread().count());
+    assertEquals(Math.hypot(2, 2), r.unread().nearestM(), 2e-3);
+    assertEquals(List.of(20, 64), r.unread().classes());
   }
 
   @Test

@@ -183,6 +183,41 @@ class GroundModelTest {
   }
 
   @Test
+  void deepAndClusteredLowOutliersDoNotPullTheTerrainDown() {
+    // Issue 9 item 5: multipath returns far below the terrain (here 20 m, 150 m and 300 m) in
+    // an unlabelled survey, single and in clusters filling 2 x 2 cells, gave tree heights of
+    // hundreds of metres when they became ground. SMRF sets low outliers aside before the
+    // opening (Pingel et al. 2013, methods.md 4.3); the terrain must stay at 50 m.
+    PointChunk c = flatChunk(1);
+    double[][] pits = {{30.5, 30.5, 20}, {60.5, 20.5, 150}, {20.5, 75.5, 300}};
+    for (double[] p : pits) {
+      c.add(p[0], p[1], 50 - p[2], 1);
+    }
+    double[][] clusters = {{70.2, 70.2, 150}, {15.2, 40.2, 300}};
+    for (double[] q : clusters) {
+      for (int dx = 0; dx < 2; dx++) {
+        for (int dy = 0; dy < 2; dy++) {
+          c.add(q[0] + dx, q[1] + dy, 50 - q[2] - 0.3 * (dx + dy), 1);
+        }
+      }
+    }
+    GroundModel g = GroundModelBuilder.build(List.of(c),
+        GroundOptions.defaults().withSource(GroundOptions.Source.FILTER));
+    for (double[] p : pits) {
+      assertEquals(50.0, g.groundZ(p[0], p[1]), 0.05);
+    }
+    for (double[] q : clusters) {
+      for (int dx = 0; dx < 2; dx++) {
+        for (int dy = 0; dy < 2; dy++) {
+          assertEquals(50.0, g.groundZ(q[0] + dx, q[1] + dy), 0.05);
+        }
+      }
+    }
+    // and a tree top 20 m up is 20 m above the ground there
+    assertEquals(20.0, g.heightAboveGround(70.7, 70.7, 70.0), 0.05);
+  }
+
+  @Test
   void blocksJoinWithoutSteps() {
     // The same small scene processed in 32 m blocks and in one 256 m block: cells with ground
     // agree exactly, filled cells (under the box) within 5 cm.

@@ -85,6 +85,40 @@ class TreeFinderTest {
   }
 
   @Test
+  void airborneSpikesAreEmptiedAndSteepCrownsKept() {
+    // Issue 9 item 4: a high-noise return 300 m up over open land, a bird 60 m above a 20 m
+    // crown and a flock 72 m up made trees for the fall-in check. Hand-made 0.5 m canopy: a cone 20 m tall
+    // falling 5 m per metre (steep conifer, kept), a lone return at 300 m, one at 60 m above
+    // the crown.
+    int s = 21;
+    float[] chm = new float[s * s];
+    Arrays.fill(chm, Float.NaN);
+    for (int r = 0; r < s; r++) {
+      for (int c = 0; c < 10; c++) {
+        double d = 0.5 * Math.hypot(r - 10, c - 5);
+        if (d <= 3) {
+          chm[r * s + c] = (float) (20 - 5 * d);
+        }
+      }
+    }
+    chm[10 * s + 17] = 300f;
+    chm[12 * s + 5] = 80f;
+    // a flock of three birds 72 m up, over open land at the block's far side
+    chm[2 * s + 15] = 72f;
+    chm[2 * s + 16] = 72.4f;
+    chm[3 * s + 16] = 71.8f;
+    float[] out = TreeFinder.removeSpikes(chm, s, 0.5);
+    assertEquals(20f, out[10 * s + 5], 0f);
+    assertEquals(chm[11 * s + 5], out[11 * s + 5], 0f);
+    assertEquals(chm[10 * s + 8], out[10 * s + 8], 0f);
+    assertTrue(Float.isNaN(out[10 * s + 17]));
+    assertTrue(Float.isNaN(out[12 * s + 5]));
+    assertTrue(Float.isNaN(out[2 * s + 15]));
+    assertTrue(Float.isNaN(out[2 * s + 16]));
+    assertTrue(Float.isNaN(out[3 * s + 16]));
+  }
+
+  @Test
   void plateauGivesOneTopAndTwoConesTwoCrowns() {
     // Hand-made 40 x 40 canopy (0.5 m cells): cones 14 m and 12 m tall falling 2 m per metre,
     // crowns 2.5 m in radius, tops 4.5 m apart so the crowns overlap; cone 1 has a flat 2-cell

@@ -12,11 +12,24 @@ public enum ClassificationMode {
   FULL,
   /** As {@link #FULL} but wires (13, 14) stay unclassified (1) and there are no stray labels. */
   WIRES_UNLABELLED,
+  /**
+   * What public lidar often carries: only ground (2), water (9) and noise (7, 18) labelled;
+   * every other point, vegetation, wires, towers, buildings and birds, class 1.
+   */
+  GROUND_ONLY,
   /** Every point class 1, not even ground. */
   UNCLASSIFIED;
 
   /** ASPRS class 1, unclassified. */
   static final int UNCLASSIFIED_CLASS = 1;
+  /** ASPRS class 2, ground. */
+  static final int GROUND_CLASS = 2;
+  /** ASPRS class 7, low point (noise). */
+  static final int LOW_NOISE_CLASS = 7;
+  /** ASPRS class 9, water. */
+  static final int WATER_CLASS = 9;
+  /** ASPRS class 18, high noise. */
+  static final int HIGH_NOISE_CLASS = 18;
   /** ASPRS class 13, wire - guard (shield). */
   static final int SHIELD_CLASS = 13;
   /** ASPRS class 14, wire - conductor (phase). */
@@ -35,6 +48,10 @@ public enum ClassificationMode {
       case WIRES_UNLABELLED:
         return fullClass == SHIELD_CLASS || fullClass == CONDUCTOR_CLASS
             ? UNCLASSIFIED_CLASS : fullClass;
+      case GROUND_ONLY:
+        return fullClass == GROUND_CLASS || fullClass == WATER_CLASS
+            || fullClass == LOW_NOISE_CLASS || fullClass == HIGH_NOISE_CLASS
+            ? fullClass : UNCLASSIFIED_CLASS;
       case UNCLASSIFIED:
         return UNCLASSIFIED_CLASS;
       default:

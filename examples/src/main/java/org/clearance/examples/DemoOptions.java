@@ -17,6 +17,8 @@ import org.clearance.InputException;
  * @param corridorHalfWidth surveyed half width either side of the line centre, m,
  *     {@value #MIN_HALF_WIDTH} to {@value #MAX_HALF_WIDTH} (default {@value #DEFAULT_HALF_WIDTH})
  * @param structureEdit a deliberate error in the written structures file (none by default)
+ * @param surveySwingDeg largest swing of the wires by the wind of the survey day, degrees,
+ *     0 to {@value #MAX_SURVEY_SWING_DEG} (default 0: still air; {@link SurveyWind})
  */
 public record DemoOptions(
     long seed,
@@ -24,7 +26,17 @@ public record DemoOptions(
     double pointDensity,
     ClassificationMode mode,
     double corridorHalfWidth,
-    StructureEdit structureEdit) {
+    StructureEdit structureEdit,
+    double surveySwingDeg) {
+
+  /** Largest survey-day swing offered, degrees: surveys are flown in light wind. */
+  public static final double MAX_SURVEY_SWING_DEG = 10;
+
+  /** Options in still air. */
+  public DemoOptions(long seed, int spanCount, double pointDensity, ClassificationMode mode,
+      double corridorHalfWidth, StructureEdit structureEdit) {
+    this(seed, spanCount, pointDensity, mode, corridorHalfWidth, structureEdit, 0);
+  }
 
   /** Default seed. */
   public static final long DEFAULT_SEED = 230_017L;
@@ -54,6 +66,10 @@ public record DemoOptions(
       throw bad("corridorHalfWidth", "must be " + MIN_HALF_WIDTH + " to " + MAX_HALF_WIDTH
           + " m: " + corridorHalfWidth);
     }
+    if (!(surveySwingDeg >= 0 && surveySwingDeg <= MAX_SURVEY_SWING_DEG)) {
+      throw bad("surveySwingDeg", "must be 0 to " + MAX_SURVEY_SWING_DEG + " degrees: "
+          + surveySwingDeg);
+    }
     if (structureEdit.structureIndex() > spanCount) {
       throw bad("structureEdit", "structure index " + structureEdit.structureIndex()
           + " beyond the last structure " + spanCount);
@@ -72,27 +88,37 @@ public record DemoOptions(
 
   public DemoOptions withSeed(long newSeed) {
     return new DemoOptions(newSeed, spanCount, pointDensity, mode, corridorHalfWidth,
-        structureEdit);
+        structureEdit, surveySwingDeg);
   }
 
   public DemoOptions withSpanCount(int spans) {
-    return new DemoOptions(seed, spans, pointDensity, mode, corridorHalfWidth, structureEdit);
+    return new DemoOptions(seed, spans, pointDensity, mode, corridorHalfWidth, structureEdit,
+        surveySwingDeg);
   }
 
   public DemoOptions withPointDensity(double density) {
-    return new DemoOptions(seed, spanCount, density, mode, corridorHalfWidth, structureEdit);
+    return new DemoOptions(seed, spanCount, density, mode, corridorHalfWidth, structureEdit,
+        surveySwingDeg);
   }
 
   public DemoOptions withMode(ClassificationMode newMode) {
     return new DemoOptions(seed, spanCount, pointDensity, newMode, corridorHalfWidth,
-        structureEdit);
+        structureEdit, surveySwingDeg);
   }
 
   public DemoOptions withCorridorHalfWidth(double halfWidth) {
-    return new DemoOptions(seed, spanCount, pointDensity, mode, halfWidth, structureEdit);
+    return new DemoOptions(seed, spanCount, pointDensity, mode, halfWidth, structureEdit,
+        surveySwingDeg);
   }
 
   public DemoOptions withStructureEdit(StructureEdit edit) {
-    return new DemoOptions(seed, spanCount, pointDensity, mode, corridorHalfWidth, edit);
+    return new DemoOptions(seed, spanCount, pointDensity, mode, corridorHalfWidth, edit,
+        surveySwingDeg);
+  }
+
+  /** The same options with the wires swung by the survey day's wind, up to this many degrees. */
+  public DemoOptions withSurveySwing(double degrees) {
+    return new DemoOptions(seed, spanCount, pointDensity, mode, corridorHalfWidth, structureEdit,
+        degrees);
   }
 }

@@ -76,15 +76,22 @@ final class ObjectPoints {
         : ClassificationMode.SHIELD_CLASS;
     int id = TruthId.wire(span, index);
     double sigma = w.noiseSigmaM();
+    double swing = SurveyWind.swingRad(scene.options(), span);
+    double[] a = {curve.x(0), curve.y(0), curve.zA()};
+    double[] b = {curve.x(curve.length()), curve.y(curve.length()), curve.zB()};
     for (long j = 0; j < count; j++) {
       double l = rng.nextDouble(0, arc);
       double s = k.s0() + k.c() * asinh(l / k.c() + sinhA); // station at arc length l
       if (w.inGap(s)) {
         continue;
       }
-      double x = curve.x(s) + sigma * rng.nextGaussian();
-      double y = curve.y(s) + sigma * rng.nextGaussian();
-      double z = curve.z(s) + sigma * rng.nextGaussian();
+      double[] q = {curve.x(s), curve.y(s), curve.z(s)};
+      if (swing != 0) {
+        SurveyWind.rotate(q, a, b, swing);
+      }
+      double x = q[0] + sigma * rng.nextGaussian();
+      double y = q[1] + sigma * rng.nextGaussian();
+      double z = q[2] + sigma * rng.nextGaussian();
       pulse(span, x, y, rng, out);
       int returns = rng.nextDouble() < WIRE_FIRST_OF_TWO ? 2 : 1;
       out.emit(x, y, z, cls, id, 5000 + rng.nextInt(5000), 1, returns);

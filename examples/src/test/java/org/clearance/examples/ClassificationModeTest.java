@@ -13,15 +13,16 @@ class ClassificationModeTest {
 
   @ParameterizedTest
   @CsvSource({
-    // full class, WIRES_UNLABELLED, UNCLASSIFIED. ASPRS LAS 1.4 R15 classes (check-values.md
-    // section 1): 2 ground, 5 high vegetation, 6 building, 13 shield, 14 conductor, 15 tower,
-    // 16 insulator, 18 high noise.
-    "2, 2, 1", "5, 5, 1", "6, 6, 1", "13, 1, 1", "14, 1, 1", "15, 15, 1", "16, 16, 1",
-    "18, 18, 1", "1, 1, 1"
+    // full class, WIRES_UNLABELLED, GROUND_ONLY, UNCLASSIFIED. ASPRS LAS 1.4 R15 classes
+    // (check-values.md section 1): 2 ground, 5 high vegetation, 6 building, 7 low noise,
+    // 9 water, 13 shield, 14 conductor, 15 tower, 16 insulator, 18 high noise.
+    "2, 2, 2, 1", "5, 5, 1, 1", "6, 6, 1, 1", "7, 7, 7, 1", "9, 9, 9, 1", "13, 1, 1, 1",
+    "14, 1, 1, 1", "15, 15, 1, 1", "16, 16, 1, 1", "18, 18, 18, 1", "1, 1, 1, 1"
   })
-  void mapsFullClasses(int full, int wiresUnlabelled, int unclassified) {
+  void mapsFullClasses(int full, int wiresUnlabelled, int groundOnly, int unclassified) {
     assertEquals(full, ClassificationMode.FULL.label(full));
     assertEquals(wiresUnlabelled, ClassificationMode.WIRES_UNLABELLED.label(full));
+    assertEquals(groundOnly, ClassificationMode.GROUND_ONLY.label(full));
     assertEquals(unclassified, ClassificationMode.UNCLASSIFIED.label(full));
   }
 

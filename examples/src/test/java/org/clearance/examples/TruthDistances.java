@@ -118,7 +118,10 @@ final class TruthDistances {
         continue;
       }
       double d;
-      if (k == 0) {
+      double wind = SurveyWind.swingRad(run.options(), sp);
+      if (k == 0 && wind != 0) {
+        d = kernels.get(sp).get(j)[0].distance(x, y, z, wind); // the wire as surveyed
+      } else if (k == 0) {
         d = CurveDistance.distance(st.curve(), x, y, z);
       } else {
         CatenaryDistance kernel = kernels.get(sp).get(j)[k];
@@ -144,8 +147,9 @@ final class TruthDistances {
           continue;
         }
         CatenaryDistance kernel = kernels.get(sp).get(j)[k];
-        ConductorDistance d = kernel.closest(x, y, z, kernel.closestSwingAngle(x, y, z,
-            st.swingMin(), st.swingMax()));
+        double wind = SurveyWind.swingRad(run.options(), sp);
+        ConductorDistance d = kernel.closest(x, y, z, k == 0 && wind != 0 ? wind
+            : kernel.closestSwingAngle(x, y, z, st.swingMin(), st.swingMax()));
         if (best == null || d.distance() < best.distance()) {
           best = d;
           name = names.get(sp).get(j);

@@ -1,0 +1,84 @@
+package org.clearance.wire;
+
+import org.clearance.survey.LongHashSet;
+
+/**
+ * Survey points of classes 0 and 1 that the wire finder's evidence shows are not vegetation, so
+ * that the clearance engine may set them aside: points on a wire, and isolated airborne points
+ * (birds, high noise). Every other unclassified point near a conductor stays vegetation.
+ *
+ * <p>Points are known by a key made from their exact coordinates as read ({@link #key}); the
+ * engine reads the same survey and so finds the same keys. The evidence and its thresholds are
+ * in {@link PointEvidence} and docs/wire-finder.md ("Points set aside"). Filled by the wire
+ * finder, then only read: safe to read from many threads.
+ */
+public final class SetAside {
+
+  /** Why a point is set aside. */
+  public enum Reason {
+    /** Not set aside: vegetation when its class and height say so. */
+    NONE,
+    /** A point of a wire: on a fitted conductor within its fit tolerance, or on a long linear
+     * piece no conductor was fitted to. */
+    WIRE,
+    /** An isolated airborne point: a few points with nothing else within the isolation
+     * distance, high above anything below them (a bird, high noise). */
+    AIRBORNE
+  }
+
+  private final LongHashSet wire = new LongHashSet();
+  private final LongHashSet airborne = new LongHashSet();
+
+  /** An empty set: nothing is set aside. */
+  public static SetAside none() {
+    return new SetAside();
+  }
+
+  /** The key of a point from its coordinates as read (any unit, the same for every reader). */
+  public static long key(double x, double y, double z) {
+    long h = Double.doubleToLongBits(x);
+    h = h * 0x9E3779B97F4A7C15L + Double.doubleToLongBits(y);
+    h = h * 0x9E3779B97F4A7C15L + Double.doubleToLongBits(z);
+    h ^= h >>> 31;
+    h *= 0xBF58476D1CE4E5B9L;
+    return h ^ (h >>> 29);
+  }
+
+  /** A set of the given keys ({@link #key}): wire points, then isolated airborne points. */
+  public static SetAside of(long[] wireKeys, long[] airborneKeys) {
+    SetAside s = new SetAside();
+    for (long k : wireKeys) {
+      s.addWire(k);
+    }
+    for (long k : airborneKeys) {
+      s.addAirborne(k);
+    }
+    return s;
+  }
+
+  synchronized void addWire(long key) {
+    wire.add(key);
+  }
+
+  synchronized void addAirborne(long key) {
+    airborne.add(key);
+  }
+
+  /** Why the point with this key is set aside, {@link Reason#NONE} when it is not. */
+  public Reason reason(long key) {
+    if (wire.contains(key)) {
+      return Reason.WIRE;
+    }
+    return airborne.contains(key) ? Reason.AIRBORNE : Reason.NONE;
+  }
+
+  /** Points set aside as wire. */
+  public long wireCount() {
+    return wire.size();
+  }
+
+  /** Points set aside as isolated airborne points. */
+  public long airborneCount() {
+    return airborne.size();
+  }
+}
