@@ -45,6 +45,12 @@ public record ValueRange(double min, double max, String unit, String source) {
     if (v == Math.rint(v) && Math.abs(v) < 1e7) {
       return String.format(Locale.ROOT, "%d", (long) v);
     }
-    return String.format(Locale.ROOT, "%.6g", v).replaceAll("\\.?0+(e|$)", "$1");
+    String text = String.format(Locale.ROOT, "%.6g", v);
+    int e = text.indexOf('e');
+    String mantissa = e < 0 ? text : text.substring(0, e);
+    if (mantissa.contains(".")) {
+      mantissa = mantissa.replaceAll("\\.?0+$", "");
+    }
+    return e < 0 ? mantissa : mantissa + text.substring(e);
   }
 }
