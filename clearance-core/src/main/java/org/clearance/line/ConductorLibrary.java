@@ -17,6 +17,7 @@ import java.util.Map;
 import java.util.Optional;
 import java.util.TreeMap;
 import org.clearance.InputException;
+import org.clearance.io.TextFiles;
 import org.clearance.io.ValueRange;
 
 /**
@@ -154,7 +155,7 @@ public final class ConductorLibrary {
   }
 
   private static Map<String, ConductorType> parseFile(Path file) {
-    String text = TextFiles.read(file);
+    String text = TextFiles.read(file, TextFiles.MAX_TABLE_BYTES);
     try {
       return parse(new BufferedReader(new StringReader(text)), file.toString());
     } catch (IOException e) {

@@ -9,6 +9,7 @@ import java.util.Locale;
 import java.util.Map;
 import java.util.regex.Pattern;
 import org.clearance.InputException;
+import org.clearance.io.TextFiles;
 import org.clearance.io.ValueRange;
 import org.clearance.line.ConductorPosition.Role;
 import org.yaml.snakeyaml.LoaderOptions;
@@ -81,7 +82,7 @@ public final class LineSpecReader {
    */
   public static LineSpec read(Path file, ConductorLibrary library) {
     String name = file.toString();
-    Node root = compose(TextFiles.read(file), name);
+    Node root = compose(TextFiles.read(file, TextFiles.MAX_YAML_BYTES), name);
     YamlMap top = new YamlMap(root, name, "the line specification", TOP_KEYS);
     String lineId = top.text("line_id");
     if (lineId.isEmpty()) {

@@ -11,6 +11,7 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 import org.clearance.InputException;
+import org.clearance.io.TextFiles;
 import org.clearance.io.Json;
 import org.clearance.io.ValueRange;
 import org.clearance.survey.LinearUnit;
@@ -81,7 +82,7 @@ public final class StructureReader {
    */
   public static List<Structure> read(Path file, SurveyUnits units) {
     String name = file.toString();
-    String text = TextFiles.read(file);
+    String text = TextFiles.read(file, TextFiles.MAX_STRUCTURES_BYTES);
     String lower = name.toLowerCase(Locale.ROOT);
     boolean json = lower.endsWith(".geojson") || lower.endsWith(".json")
         || text.stripLeading().startsWith("{");

@@ -15,6 +15,7 @@ import java.util.List;
 import java.util.Map;
 import java.util.Set;
 import org.clearance.InputException;
+import org.clearance.io.TextFiles;
 import org.yaml.snakeyaml.LoaderOptions;
 import org.yaml.snakeyaml.Yaml;
 import org.yaml.snakeyaml.error.Mark;
@@ -118,12 +119,7 @@ public final class RuleProfileReader {
   }
 
   private static Layer fromFile(Path path, String label) {
-    String text;
-    try {
-      text = Files.readString(path, StandardCharsets.UTF_8);
-    } catch (IOException e) {
-      throw new InputException(label, null, null, "cannot read the rule profile: " + e);
-    }
+    String text = TextFiles.read(path, TextFiles.MAX_YAML_BYTES);
     return layer(text, label, "file:" + path, path.getParent(), false);
   }
 

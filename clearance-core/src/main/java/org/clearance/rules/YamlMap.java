@@ -10,6 +10,7 @@ import java.util.Optional;
 import java.util.Set;
 import java.util.TreeSet;
 import org.clearance.InputException;
+import org.clearance.io.ValueRange;
 import org.yaml.snakeyaml.nodes.MappingNode;
 import org.yaml.snakeyaml.nodes.Node;
 import org.yaml.snakeyaml.nodes.NodeTuple;
@@ -94,6 +95,20 @@ final class YamlMap {
       double x = numberOf(node);
       if (!(x > 0)) {
         throw error(node, "must be greater than zero, found " + fmt(x));
+      }
+      return x;
+    }
+
+    /** A number inside a plausible range, else an error naming the range and its source. */
+    double within(ValueRange range) {
+      return withinOf(value, range);
+    }
+
+    double withinOf(Node node, ValueRange range) {
+      double x = numberOf(node);
+      String problem = range.problem(x);
+      if (problem != null) {
+        throw error(node, problem);
       }
       return x;
     }
