@@ -143,8 +143,10 @@ public record SpanLayout(List<LineLayout> lines) {
         throw new InputException(b.sourceFile(), "line " + b.sourceLine(), "x", String.format(
             java.util.Locale.ROOT, "structure '%s' stands %.0f m from '%s' (%s), the structure"
                 + " before it in sequence; no span is longer than %.0f m (the longest in service"
-                + " are about 5.4 km): check x and y of both", b.id(), length, a.id(), a.where(),
-            MAX_SPAN_M));
+                + " are about 5.4 km): check x and y of both%s", b.id(), length, a.id(),
+            a.where(), MAX_SPAN_M, b.sequence() - a.sequence() > 1 ? String.format(
+                java.util.Locale.ROOT, ", or give the structures between sequence %d and %d",
+                a.sequence(), b.sequence()) : ""));
       }
       Span span = new Span(prefix + a.id() + "-" + b.id(), id, a, b,
           SpanFrame.between(a.x(), a.y(), b.x(), b.y()), length, sections.size());
