@@ -61,12 +61,16 @@ public final class LineSpecReader {
       Map.entry("wind_pressure_pa", new ValueRange(0, 4000, "Pa",
           "a 4 000 Pa pressure is a wind of about 80 m/s (q = rho v^2 / 2, rho 1.225 kg/m^3)")),
       Map.entry("extra_sag_m", new ValueRange(0.001, 50, "m", TRADE)));
-
+  /** Right-of-way half widths accepted, m: from a narrow feeder easement to the widest EHV
+   * corridors, rounded out (common practice, no source). */
+  private static final double MIN_ROW_HALF_WIDTH_M = 0.5;
+  private static final double MAX_ROW_HALF_WIDTH_M = 200;
   /** Position names appear in structure column names ({@code attach_z_<position>}). */
   private static final Pattern POSITION_NAME = Pattern.compile("[A-Za-z0-9_.-]+");
 
   private static final List<String> TOP_KEYS = List.of("line_id", "name", "nominal_voltage_kv",
-      "altitude_m", "survey_conductor_temperature_c", "conductors", "conditions");
+      "altitude_m", "survey_conductor_temperature_c", "row_half_width_m", "conductors",
+      "conditions");
   private static final List<String> POSITION_KEYS = List.of("position", "role", "circuit",
       "conductor", "offset_m", "attach_height_m", "bundle", "bundle_spacing_m",
       "insulator_length_m", "strain_length_m");
@@ -96,6 +100,10 @@ public final class LineSpecReader {
       checkRange(top, "survey_conductor_temperature_c", surveyT, MIN_TEMPERATURE_C,
           MAX_TEMPERATURE_C);
     }
+    double rowHalf = top.number("row_half_width_m", Double.NaN);
+    if (!Double.isNaN(rowHalf)) {
+      checkRange(top, "row_half_width_m", rowHalf, MIN_ROW_HALF_WIDTH_M, MAX_ROW_HALF_WIDTH_M);
+    }
     List<ConductorPosition> positions = positions(top, name, library);
     List<LineCondition> conditions = new ArrayList<>();
     Map<String, Integer> conditionLines = new HashMap<>();
@@ -115,7 +123,7 @@ public final class LineSpecReader {
       }
       conditions.add(c);
     }
-    return new LineSpec(lineId, top.text("name", ""), kv, altitude, surveyT, positions,
+    return new LineSpec(lineId, top.text("name", ""), kv, altitude, surveyT, rowHalf, positions,
         conditions, name);
   }
 
