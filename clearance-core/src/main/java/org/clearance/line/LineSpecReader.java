@@ -185,8 +185,12 @@ public final class LineSpecReader {
       case "shield":
         role = Role.SHIELD;
         break;
+      case "neutral":
+        role = Role.NEUTRAL;
+        break;
       default:
-        throw m.error("role", "'" + m.text("role") + "' is not a role; use phase or shield");
+        throw m.error("role", "'" + m.text("role")
+            + "' is not a role; use phase, shield or neutral");
     }
     int circuit = (int) plausible(m, "circuit", m.integer("circuit", 1));
     String code = m.text("conductor");

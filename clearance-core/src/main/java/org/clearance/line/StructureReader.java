@@ -12,7 +12,6 @@ import java.util.Locale;
 import java.util.Map;
 import org.clearance.InputException;
 import org.clearance.io.TextFiles;
-import org.clearance.io.Json;
 import org.clearance.io.ValueRange;
 import org.clearance.survey.LinearUnit;
 import org.clearance.survey.SurveyUnits;
@@ -87,7 +86,7 @@ public final class StructureReader {
     boolean json = lower.endsWith(".geojson") || lower.endsWith(".json")
         || text.stripLeading().startsWith("{");
     List<RawRecord> records = json
-        ? GeoJsonStructures.records(Json.parse(text, name), name)
+        ? GeoJsonStructures.records(text, name)
         : csvRecords(text, name);
     return build(records, name, units);
   }
