@@ -17,6 +17,7 @@ import java.util.Map;
 import java.util.Optional;
 import java.util.TreeMap;
 import org.clearance.InputException;
+import org.clearance.io.Decimal;
 import org.clearance.io.TextFiles;
 import org.clearance.io.ValueRange;
 

@@ -2,6 +2,7 @@ package org.clearance.line;
 
 import java.util.List;
 import java.util.Locale;
+import org.clearance.io.YamlMap;
 import org.clearance.line.LineCondition.Kind;
 
 /**

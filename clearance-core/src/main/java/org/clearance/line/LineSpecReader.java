@@ -1,6 +1,5 @@
 package org.clearance.line;
 
-import java.io.StringReader;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.HashMap;
@@ -11,13 +10,8 @@ import java.util.regex.Pattern;
 import org.clearance.InputException;
 import org.clearance.io.TextFiles;
 import org.clearance.io.ValueRange;
+import org.clearance.io.YamlMap;
 import org.clearance.line.ConductorPosition.Role;
-import org.yaml.snakeyaml.LoaderOptions;
-import org.yaml.snakeyaml.Yaml;
-import org.yaml.snakeyaml.constructor.SafeConstructor;
-import org.yaml.snakeyaml.error.Mark;
-import org.yaml.snakeyaml.error.MarkedYAMLException;
-import org.yaml.snakeyaml.error.YAMLException;
 import org.yaml.snakeyaml.nodes.Node;
 
 /**
@@ -86,8 +80,8 @@ public final class LineSpecReader {
    */
   public static LineSpec read(Path file, ConductorLibrary library) {
     String name = file.toString();
-    Node root = compose(TextFiles.read(file, TextFiles.MAX_YAML_BYTES), name);
-    YamlMap top = new YamlMap(root, name, "the line specification", TOP_KEYS);
+    Node root = YamlMap.compose(TextFiles.read(file, TextFiles.MAX_YAML_BYTES), name);
+    YamlMap top = YamlMap.strict(root, name, "the line specification", TOP_KEYS);
     String lineId = top.text("line_id");
     if (lineId.isEmpty()) {
       throw top.error("line_id", "line_id is empty");
@@ -108,7 +102,7 @@ public final class LineSpecReader {
     List<LineCondition> conditions = new ArrayList<>();
     Map<String, Integer> conditionLines = new HashMap<>();
     for (Node n : top.list("conditions", false)) {
-      YamlMap m = new YamlMap(n, name, "a condition", LineConditionReader.KEYS);
+      YamlMap m = YamlMap.strict(n, name, "a condition", LineConditionReader.KEYS);
       LineCondition c = LineConditionReader.condition(m);
       Integer twin = conditionLines.putIfAbsent(c.name(), m.line());
       if (twin != null) {
@@ -127,25 +121,6 @@ public final class LineSpecReader {
         conditions, name);
   }
 
-  private static Node compose(String text, String file) {
-    LoaderOptions options = new LoaderOptions();
-    Yaml yaml = new Yaml(new SafeConstructor(options));
-    Node root;
-    try {
-      root = yaml.compose(new StringReader(text));
-    } catch (MarkedYAMLException e) {
-      Mark mark = e.getProblemMark() != null ? e.getProblemMark() : e.getContextMark();
-      String where = mark == null ? null : "line " + (mark.getLine() + 1);
-      throw new InputException(file, where, null, "YAML syntax: " + e.getProblem());
-    } catch (YAMLException e) {
-      throw new InputException(file, null, null, "YAML: " + e.getMessage());
-    }
-    if (root == null) {
-      throw new InputException(file, null, null, "the file is empty");
-    }
-    return root;
-  }
-
   private static List<ConductorPosition> positions(YamlMap top, String file,
       ConductorLibrary library) {
     List<Node> items = top.list("conductors", true);
@@ -155,7 +130,7 @@ public final class LineSpecReader {
     List<ConductorPosition> out = new ArrayList<>();
     Map<String, Integer> seen = new HashMap<>();
     for (Node n : items) {
-      YamlMap m = new YamlMap(n, file, "a conductor position", POSITION_KEYS);
+      YamlMap m = YamlMap.strict(n, file, "a conductor position", POSITION_KEYS);
       ConductorPosition p = position(m, library);
       Integer twin = seen.putIfAbsent(p.position().toLowerCase(Locale.ROOT), m.line());
       if (twin != null) {

@@ -11,6 +11,7 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 import org.clearance.InputException;
+import org.clearance.io.Decimal;
 import org.clearance.io.TextFiles;
 import org.clearance.io.ValueRange;
 import org.clearance.survey.LinearUnit;

@@ -10,6 +10,7 @@ import java.util.Optional;
 import java.util.Set;
 import java.util.regex.Pattern;
 import org.clearance.io.ValueRange;
+import org.clearance.io.YamlMap;
 
 /** Merges the files of a profile's chain and builds the validated {@link RuleProfile}. */
 final class ProfileBuilder {

@@ -272,7 +272,7 @@ class LineSpecReaderTest {
             "extra_sag_m", "0 m is outside the plausible range 0.001 to 50 m"),
         edit("duplicate key", "line_id: L1", "line_id: L1\nline_id: L2", 2, "line_id",
             "given twice"),
-        edit("YAML syntax", "line_id: L1", "line_id: [L1", 2, null, "YAML syntax"));
+        edit("YAML syntax", "line_id: L1", "line_id: [L1", 2, null, "not valid YAML"));
   }
 
   @ParameterizedTest(name = "{0}")

@@ -45,7 +45,7 @@ class ProfileValidationTest {
             source: S
             zones:
               - {name: a, priority: 1, violation_reference: true, conditions: [all], radial_m: 2}
-            """, 1, "title", "required key is missing"),
+            """, 1, "title", "required key missing"),
         error("priority is not a number", HEAD + """
               - {name: a, priority: high, violation_reference: true, conditions: [all],
                  radial_m: 2}
