@@ -39,6 +39,51 @@ public final class InputException extends RuntimeException {
   }
 
   private static String format(String file, String location, String field, String problem) {
+    return printable(layout(file, location, field, problem));
+  }
+
+  /**
+   * The text with every control character (C0, DEL, C1, line and paragraph separators, and the
+   * bidirectional overrides that can reorder a terminal line) written as {@code \\uXXXX}, and
+   * tabs, newlines and returns as {@code \\t}, {@code \\n}, {@code \\r}, so that text copied
+   * from an input file cannot break the one-line message or drive the terminal.
+   */
+  public static String printable(String text) {
+    StringBuilder sb = null;
+    for (int i = 0; i < text.length(); i++) {
+      char c = text.charAt(i);
+      String escaped = escape(c);
+      if (escaped != null && sb == null) {
+        sb = new StringBuilder(text.length() + 16).append(text, 0, i);
+      }
+      if (sb != null) {
+        if (escaped != null) {
+          sb.append(escaped);
+        } else {
+          sb.append(c);
+        }
+      }
+    }
+    return sb == null ? text : sb.toString();
+  }
+
+  private static String escape(char c) {
+    switch (c) {
+      case '\t':
+        return "\\t";
+      case '\n':
+        return "\\n";
+      case '\r':
+        return "\\r";
+      default:
+        break;
+    }
+    boolean control = c < 0x20 || (c >= 0x7F && c <= 0x9F) || c == '\u2028' || c == '\u2029'
+        || (c >= '\u202A' && c <= '\u202E') || (c >= '\u2066' && c <= '\u2069');
+    return control ? String.format(java.util.Locale.ROOT, "\\u%04X", (int) c) : null;
+  }
+
+  private static String layout(String file, String location, String field, String problem) {
     StringBuilder sb = new StringBuilder();
     if (file != null) {
       sb.append(file);

@@ -58,6 +58,7 @@ public final class ClearanceCommand implements Runnable {
     CommandLine cl = new CommandLine(new ClearanceCommand());
     cl.setExitCodeExceptionMapper(ClearanceCommand::exitCodeOf);
     cl.setExecutionExceptionHandler(ClearanceCommand::handleExecutionException);
+    cl.setParameterExceptionHandler(ClearanceCommand::handleParameterException);
     cl.getCommandSpec().exitCodeOnInvalidInput(EXIT_INPUT);
     cl.getCommandSpec().exitCodeOnUsageHelp(EXIT_OK);
     cl.getCommandSpec().exitCodeOnVersionHelp(EXIT_OK);
@@ -94,20 +95,39 @@ public final class ClearanceCommand implements Runnable {
     return t instanceof InputException || t instanceof CommandLine.ParameterException;
   }
 
+  /**
+   * A usage error: one line naming the problem and one pointing to the command's help, instead
+   * of the whole usage text.
+   */
+  private static int handleParameterException(CommandLine.ParameterException ex, String[] args) {
+    CommandLine cl = ex.getCommandLine();
+    PrintWriter err = cl.getErr();
+    err.println("clearance: " + InputException.printable(ex.getMessage()));
+    String name = cl.getCommandSpec().qualifiedName();
+    err.println("Try '" + name + " --help' for the options.");
+    err.flush();
+    return EXIT_INPUT;
+  }
+
   private static int handleExecutionException(
       Exception ex, CommandLine cl, CommandLine.ParseResult parseResult) {
     PrintWriter err = cl.getErr();
     Throwable cause = ex;
+    String context = "";
     if (cause instanceof UncheckedIOException && cause.getCause() != null) {
+      String wrapper = cause.getMessage();
       cause = cause.getCause();
+      if (wrapper != null && !wrapper.equals(cause.toString())) {
+        context = wrapper + ": ";
+      }
     }
     if (cause instanceof InputException) {
       err.println("clearance: " + cause.getMessage());
       err.flush();
       return EXIT_INPUT;
     }
-    if (cause instanceof IOException) {
-      err.println("clearance: I/O error: " + cause.getMessage());
+    if (cause instanceof IOException io) {
+      err.println("clearance: I/O error: " + InputException.printable(context + describe(io)));
       err.flush();
       return EXIT_FAILURE;
     }
@@ -115,6 +135,25 @@ public final class ClearanceCommand implements Runnable {
     cause.printStackTrace(err);
     err.flush();
     return EXIT_FAILURE;
+  }
+
+  /**
+   * An I/O failure in words that name the file: the file system's own exceptions carry the path
+   * (and the other path of a move); an exception without one gets its class name only when it
+   * has no message at all.
+   */
+  static String describe(IOException e) {
+    if (e instanceof java.nio.file.FileSystemException fs && fs.getFile() != null) {
+      String reason = fs.getReason() != null ? fs.getReason()
+          : e instanceof java.nio.file.NoSuchFileException ? "no such file or folder"
+          : e instanceof java.nio.file.AccessDeniedException ? "permission denied"
+          : e instanceof java.nio.file.FileAlreadyExistsException ? "already exists"
+          : e instanceof java.nio.file.DirectoryNotEmptyException ? "folder not empty"
+          : e.getClass().getSimpleName();
+      return fs.getFile() + (fs.getOtherFile() != null ? " -> " + fs.getOtherFile() : "") + ": "
+          + reason;
+    }
+    return e.getMessage() != null ? e.getMessage() : e.getClass().getSimpleName();
   }
 
   /** Reads the version Maven wrote into the jar. */

@@ -84,9 +84,9 @@ class WiresCommandTest {
         "line_id,structure_id,sequence,type,x,y",
         "OV380,OV-12,12,suspension,229911.676,569995.314",
         "OV380,OV-13,13,suspension,230037.549,570324.039",
-        // two structures 20 km away, outside the survey
-        "OV380,OV-20,20,suspension,250000.000,569995.314",
-        "OV380,OV-21,21,suspension,250300.000,569995.314", ""));
+        // two structures 5 km away, outside the survey (a span may not exceed 6 km)
+        "OV380,OV-20,20,suspension,235000.000,569995.314",
+        "OV380,OV-21,21,suspension,235300.000,569995.314", ""));
     Path line = dir.resolve("line.yaml");
     Files.writeString(line, Files.readString(FIXTURE.resolve("line.yaml"))
         + "  - position: X9\n    role: phase\n    conductor: Cardinal\n    offset_m: 25\n"

@@ -3,6 +3,7 @@ package org.clearance.io;
 import java.io.IOException;
 import java.io.OutputStream;
 import java.nio.charset.StandardCharsets;
+import java.nio.file.FileSystemException;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.nio.file.StandardCopyOption;
@@ -53,9 +54,13 @@ public final class AtomicFiles {
       }
       Files.move(temp, target, StandardCopyOption.REPLACE_EXISTING,
           StandardCopyOption.ATOMIC_MOVE);
-    } catch (IOException | RuntimeException e) {
+    } catch (FileSystemException | RuntimeException e) {
       Files.deleteIfExists(temp);
       throw e;
+    } catch (IOException e) {
+      Files.deleteIfExists(temp);
+      // a full disk says only "No space left on device": name the file
+      throw new IOException("cannot write " + target + ": " + e.getMessage(), e);
     }
   }
 }

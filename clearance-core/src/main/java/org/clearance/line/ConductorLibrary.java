@@ -17,6 +17,9 @@ import java.util.Map;
 import java.util.Optional;
 import java.util.TreeMap;
 import org.clearance.InputException;
+import org.clearance.io.Decimal;
+import org.clearance.io.TextFiles;
+import org.clearance.io.ValueRange;
 
 /**
  * The conductor types a line specification may name: the built-in library
@@ -32,10 +35,38 @@ public final class ConductorLibrary {
    * #BUILTIN_RESOURCE}; a code in both is a packaging fault. */
   public static final String DISTRIBUTION_RESOURCE = "/span-specs/conductors/distribution.csv";
 
-  /** Largest plausible expansion, 1/degC: metals are below 3e-5; above is a unit slip. */
-  private static final double MAX_EXPANSION_PER_C = 1e-4;
-  /** Largest plausible modulus, GPa: steel is about 200; far above is a unit slip (Pa, MPa). */
-  private static final double MAX_MODULUS_GPA = 1000;
+  /** Where the plausible ranges below come from. */
+  private static final String TRADE = "values of bare overhead conductors, common practice, no"
+      + " source";
+  /**
+   * Plausible range of every number column, in the column's unit. Sizes span the smallest
+   * distribution wire (about 3 mm, 5 mm^2) to the largest transmission conductors (about 60 mm,
+   * 2 500 mm^2). Moduli span aluminium alloys (55-60 GPa) to steel (200 GPa). Expansion spans
+   * carbon-fibre and invar cores (about 1e-6 /degC) to aluminium (23e-6); an exponent slip such
+   * as 18.9e-9 or 4.9e-324 falls below it.
+   */
+  static final Map<String, ValueRange> RANGES = Map.ofEntries(
+      Map.entry("diameter_mm", new ValueRange(2, 80, "mm", TRADE)),
+      Map.entry("area_mm2", new ValueRange(2, 3000, "mm^2", TRADE)),
+      Map.entry("mass_kg_per_m", new ValueRange(0.01, 10, "kg/m", TRADE)),
+      Map.entry("rated_strength_kn", new ValueRange(0.5, 2000, "kN", TRADE)),
+      Map.entry("final_modulus_gpa", new ValueRange(20, 250, "GPa", TRADE)),
+      Map.entry("thermal_expansion_per_c", new ValueRange(5e-7, 3e-5, "1/degC", TRADE)),
+      Map.entry("core_area_mm2", new ValueRange(0.5, 2000, "mm^2", TRADE)),
+      Map.entry("core_modulus_gpa", new ValueRange(20, 250, "GPa", TRADE)),
+      Map.entry("core_thermal_expansion_per_c", new ValueRange(1e-7, 3e-5, "1/degC", TRADE)));
+  /**
+   * Plausible mass per volume of a whole conductor, kg/m^3: aluminium alloys are 2 700, copper
+   * 8 900 (handbook densities, from memory); a stranded conductor lies between, lay and grease
+   * add a few per cent.
+   */
+  static final ValueRange DENSITY = new ValueRange(2000, 10000, "kg/m^3",
+      "aluminium 2 700 to copper 8 900, from memory");
+  /**
+   * Strands fill at most the conductor's circle: the area may not exceed pi/4 d^2 by more than
+   * the rounding of the tabled values (geometry).
+   */
+  private static final double AREA_ROUNDING = 1.01;
 
   private static final String CODE = "code";
   private static final List<String> NUMBERS = List.of("diameter_mm", "area_mm2", "mass_kg_per_m",
@@ -145,7 +176,8 @@ public final class ConductorLibrary {
   }
 
   private static Map<String, ConductorType> parseFile(Path file) {
-    String text = TextFiles.read(file, "a conductor table (CSV text)");
+    String text = TextFiles.read(file, TextFiles.MAX_TABLE_BYTES,
+        "a conductor table (CSV text)");
     try {
       return parse(new BufferedReader(new StringReader(text)), file.toString());
     } catch (IOException e) {
@@ -197,8 +229,7 @@ public final class ConductorLibrary {
     for (int k = 0; k < v.length; k++) {
       v[k] = positive(t, row, NUMBERS.get(k), true);
     }
-    checkMax(t, row, "final_modulus_gpa", v[4], MAX_MODULUS_GPA);
-    checkMax(t, row, "thermal_expansion_per_c", v[5], MAX_EXPANSION_PER_C);
+    checkConsistent(t, row, v[0], v[1], v[2]);
     double[] core = new double[CORE.size()];
     int given = 0;
     for (int k = 0; k < core.length; k++) {
@@ -210,8 +241,11 @@ public final class ConductorLibrary {
       throw new InputException(t.file(), row.where(), missing,
           "give all three core values or none (none for a single-material conductor)");
     }
-    checkMax(t, row, "core_modulus_gpa", core[1], MAX_MODULUS_GPA);
-    checkMax(t, row, "core_thermal_expansion_per_c", core[2], MAX_EXPANSION_PER_C);
+    if (core[0] >= v[1]) {
+      throw new InputException(t.file(), row.where(), "core_area_mm2", String.format(Locale.ROOT,
+          "the core (%s mm^2) must be smaller than the whole conductor (area_mm2 %s mm^2)",
+          ValueRange.format(core[0]), ValueRange.format(v[1])));
+    }
     Optional<ConductorThermal> thermal = thermal(t, row);
     List<String> parts = new ArrayList<>();
     for (String s : SOURCES) {
@@ -278,13 +312,27 @@ public final class ConductorLibrary {
     if (!(v > 0)) {
       throw new InputException(t.file(), row.where(), column, "must be greater than 0: " + s);
     }
+    ValueRange range = RANGES.get(column);
+    String implausible = range == null ? null : range.problem(v);
+    if (implausible != null) {
+      throw new InputException(t.file(), row.where(), column, implausible);
+    }
     return v;
   }
 
-  private static void checkMax(CsvTable t, CsvTable.Row row, String column, double v, double max) {
-    if (v > max) {
-      throw new InputException(t.file(), row.where(), column, String.format(Locale.ROOT,
-          "%s is implausibly large (over %s %s): check the unit", v, max, unitOf(column)));
+  /** Area within the diameter's circle, and a mass per volume of a real conductor. */
+  private static void checkConsistent(CsvTable t, CsvTable.Row row, double diameterMm,
+      double areaMm2, double massKgPerM) {
+    double circle = Math.PI / 4 * diameterMm * diameterMm;
+    if (areaMm2 > circle * AREA_ROUNDING) {
+      throw new InputException(t.file(), row.where(), "area_mm2", String.format(Locale.ROOT,
+          "%s mm^2 does not fit in a conductor of diameter_mm %s (its circle is %s mm^2)",
+          ValueRange.format(areaMm2), ValueRange.format(diameterMm), ValueRange.format(circle)));
+    }
+    String density = DENSITY.problem(massKgPerM / (areaMm2 * 1e-6));
+    if (density != null) {
+      throw new InputException(t.file(), row.where(), "mass_kg_per_m", "mass per volume "
+          + density + " (mass_kg_per_m / area_mm2)");
     }
   }
 

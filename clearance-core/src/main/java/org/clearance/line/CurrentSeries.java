@@ -10,6 +10,8 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 import org.clearance.InputException;
+import org.clearance.io.Decimal;
+import org.clearance.io.TextFiles;
 
 /**
  * Line current against time, from a CSV file with the columns {@code time_utc} (ISO-8601 instant
@@ -39,7 +41,8 @@ public record CurrentSeries(String file, long[] times, double[] currents) {
     String file = path.toString();
     CsvTable t;
     try {
-      t = CsvTable.read(new BufferedReader(new StringReader(TextFiles.read(path))), file);
+      t = CsvTable.read(new BufferedReader(new StringReader(TextFiles.read(path, TextFiles.MAX_TABLE_BYTES,
+          "a table of time and current (CSV text)"))), file);
     } catch (IOException e) {
       throw new AssertionError("reading a string cannot fail", e);
     }

@@ -2,6 +2,7 @@ package org.clearance.line;
 
 import java.util.List;
 import java.util.Locale;
+import org.clearance.io.YamlMap;
 import org.clearance.line.LineCondition.Kind;
 
 /**
@@ -112,11 +113,8 @@ final class LineConditionReader {
   }
 
   private static double creep(YamlMap m) {
-    double c = m.number("creep_allowance_c", 0);
-    if (!(c >= 0)) {
-      throw m.error("creep_allowance_c", "must be 0 degC or more: " + LineSpecReader.fmt(c));
-    }
-    return c;
+    return m.has("creep_allowance_c")
+        ? LineSpecReader.plausible(m, "creep_allowance_c", m.number("creep_allowance_c")) : 0;
   }
 
   /** Radial ice thickness in metres from the mm key; 0 when optional and absent. */
@@ -127,10 +125,7 @@ final class LineConditionReader {
       }
       return 0;
     }
-    double t = m.number("ice_thickness_mm");
-    if (!(t >= 0)) {
-      throw m.error("ice_thickness_mm", "must be 0 mm or more: " + LineSpecReader.fmt(t));
-    }
+    double t = LineSpecReader.plausible(m, "ice_thickness_mm", m.number("ice_thickness_mm"));
     return t * 1e-3;
   }
 
@@ -144,11 +139,7 @@ final class LineConditionReader {
   }
 
   private static double windPressure(YamlMap m) {
-    double p = m.number("wind_pressure_pa");
-    if (!(p >= 0)) {
-      throw m.error("wind_pressure_pa", "must be 0 Pa or more: " + LineSpecReader.fmt(p));
-    }
-    return p;
+    return LineSpecReader.plausible(m, "wind_pressure_pa", m.number("wind_pressure_pa"));
   }
 
   private static double swingAngle(YamlMap m) {
@@ -158,10 +149,6 @@ final class LineConditionReader {
   }
 
   private static double extraSag(YamlMap m) {
-    double s = m.number("extra_sag_m");
-    if (!(s > 0)) {
-      throw m.error("extra_sag_m", "must be greater than 0 m: " + LineSpecReader.fmt(s));
-    }
-    return s;
+    return LineSpecReader.plausible(m, "extra_sag_m", m.number("extra_sag_m"));
   }
 }

@@ -1,6 +1,5 @@
 package org.clearance.line;
 
-import java.io.StringReader;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.HashMap;
@@ -9,13 +8,10 @@ import java.util.Locale;
 import java.util.Map;
 import java.util.regex.Pattern;
 import org.clearance.InputException;
+import org.clearance.io.TextFiles;
+import org.clearance.io.ValueRange;
+import org.clearance.io.YamlMap;
 import org.clearance.line.ConductorPosition.Role;
-import org.yaml.snakeyaml.LoaderOptions;
-import org.yaml.snakeyaml.Yaml;
-import org.yaml.snakeyaml.constructor.SafeConstructor;
-import org.yaml.snakeyaml.error.Mark;
-import org.yaml.snakeyaml.error.MarkedYAMLException;
-import org.yaml.snakeyaml.error.YAMLException;
 import org.yaml.snakeyaml.nodes.Node;
 
 /**
@@ -37,6 +33,28 @@ public final class LineSpecReader {
   /** Longest strain assembly accepted, m: EHV dead-end assemblies run to about 10 m (common
    * practice, no source); anything longer is a typo. */
   private static final double MAX_STRAIN_LENGTH_M = 15;
+  /** Where the ranges below come from. */
+  static final String TRADE = "overhead line practice, common practice, no source";
+  /**
+   * Plausible range of every number key of a line specification, in the key's unit. Voltages span
+   * low-voltage distribution (0.12 kV) to the highest AC lines in service (1 150 kV); offsets
+   * and heights the widest and tallest towers (crossarms to about 25 m, towers to about 380 m);
+   * bundles up to 12 sub-conductors; insulator strings to about 15 m. A value outside is a typo:
+   * {@code offset_m: 1e308} ran 35 s and died of OutOfMemoryError before these checks.
+   */
+  static final Map<String, ValueRange> RANGES = Map.ofEntries(
+      Map.entry("nominal_voltage_kv", new ValueRange(0.1, 1200, "kV", TRADE)),
+      Map.entry("offset_m", new ValueRange(-50, 50, "m", TRADE)),
+      Map.entry("attach_height_m", new ValueRange(1, 400, "m", TRADE)),
+      Map.entry("bundle", new ValueRange(1, 12, "sub-conductors", TRADE)),
+      Map.entry("bundle_spacing_m", new ValueRange(0.05, 1.5, "m", TRADE)),
+      Map.entry("insulator_length_m", new ValueRange(0, 20, "m", TRADE)),
+      Map.entry("circuit", new ValueRange(1, 12, "", TRADE)),
+      Map.entry("creep_allowance_c", new ValueRange(0, 50, "degC", TRADE)),
+      Map.entry("ice_thickness_mm", new ValueRange(0, 100, "mm", TRADE)),
+      Map.entry("wind_pressure_pa", new ValueRange(0, 4000, "Pa",
+          "a 4 000 Pa pressure is a wind of about 80 m/s (q = rho v^2 / 2, rho 1.225 kg/m^3)")),
+      Map.entry("extra_sag_m", new ValueRange(0.001, 50, "m", TRADE)));
   /** Right-of-way half widths accepted, m: from a narrow feeder easement to the widest EHV
    * corridors, rounded out (common practice, no source). */
   private static final double MIN_ROW_HALF_WIDTH_M = 0.5;
@@ -67,16 +85,14 @@ public final class LineSpecReader {
    */
   public static LineSpec read(Path file, ConductorLibrary library) {
     String name = file.toString();
-    Node root = compose(TextFiles.read(file, "the line specification (YAML text)"), name);
-    YamlMap top = new YamlMap(root, name, "the line specification", TOP_KEYS);
+    Node root = YamlMap.compose(TextFiles.read(file, TextFiles.MAX_YAML_BYTES,
+        "the line specification (YAML text)"), name);
+    YamlMap top = YamlMap.strict(root, name, "the line specification", TOP_KEYS);
     String lineId = top.text("line_id");
     if (lineId.isEmpty()) {
       throw top.error("line_id", "line_id is empty");
     }
-    double kv = top.number("nominal_voltage_kv");
-    if (!(kv > 0)) {
-      throw top.error("nominal_voltage_kv", "must be greater than 0 kV: " + fmt(kv));
-    }
+    double kv = plausible(top, "nominal_voltage_kv", top.number("nominal_voltage_kv"));
     double altitude = top.number("altitude_m", 0);
     checkRange(top, "altitude_m", altitude, MIN_ALTITUDE_M, MAX_ALTITUDE_M);
     SurveyTemperatureSpec survey = SurveyTemperatureReader.read(top, file);
@@ -89,7 +105,7 @@ public final class LineSpecReader {
     List<LineCondition> conditions = new ArrayList<>();
     Map<String, Integer> conditionLines = new HashMap<>();
     for (Node n : top.list("conditions", false)) {
-      YamlMap m = new YamlMap(n, name, "a condition", LineConditionReader.KEYS);
+      YamlMap m = YamlMap.strict(n, name, "a condition", LineConditionReader.KEYS);
       LineCondition c = LineConditionReader.condition(m);
       Integer twin = conditionLines.putIfAbsent(c.name(), m.line());
       if (twin != null) {
@@ -120,25 +136,6 @@ public final class LineSpecReader {
         conditions, name, survey);
   }
 
-  private static Node compose(String text, String file) {
-    LoaderOptions options = new LoaderOptions();
-    Yaml yaml = new Yaml(new SafeConstructor(options));
-    Node root;
-    try {
-      root = yaml.compose(new StringReader(text));
-    } catch (MarkedYAMLException e) {
-      Mark mark = e.getProblemMark() != null ? e.getProblemMark() : e.getContextMark();
-      String where = mark == null ? null : "line " + (mark.getLine() + 1);
-      throw new InputException(file, where, null, "YAML syntax: " + e.getProblem());
-    } catch (YAMLException e) {
-      throw new InputException(file, null, null, "YAML: " + e.getMessage());
-    }
-    if (root == null) {
-      throw new InputException(file, null, null, "the file is empty");
-    }
-    return root;
-  }
-
   private static List<ConductorPosition> positions(YamlMap top, String file,
       ConductorLibrary library) {
     List<Node> items = top.list("conductors", true);
@@ -148,7 +145,7 @@ public final class LineSpecReader {
     List<ConductorPosition> out = new ArrayList<>();
     Map<String, Integer> seen = new HashMap<>();
     for (Node n : items) {
-      YamlMap m = new YamlMap(n, file, "a conductor position", POSITION_KEYS);
+      YamlMap m = YamlMap.strict(n, file, "a conductor position", POSITION_KEYS);
       ConductorPosition p = position(m, library);
       Integer twin = seen.putIfAbsent(p.position().toLowerCase(Locale.ROOT), m.line());
       if (twin != null) {
@@ -185,23 +182,14 @@ public final class LineSpecReader {
         throw m.error("role", "'" + m.text("role")
             + "' is not a role; use phase, shield or neutral");
     }
-    int circuit = m.integer("circuit", 1);
-    if (circuit < 1) {
-      throw m.error("circuit", "circuit number must be 1 or more: " + circuit);
-    }
+    int circuit = (int) plausible(m, "circuit", m.integer("circuit", 1));
     String code = m.text("conductor");
     ConductorType type = library.find(code).orElseThrow(() -> m.error("conductor",
         "unknown conductor code '" + code + "'; known codes: " + String.join(", ",
             library.codes())));
-    double offset = m.number("offset_m", Double.NaN);
-    double height = m.number("attach_height_m", Double.NaN);
-    if (m.has("attach_height_m") && !(height > 0)) {
-      throw m.error("attach_height_m", "must be greater than 0 m: " + fmt(height));
-    }
-    int bundle = m.integer("bundle", 1);
-    if (bundle < 1) {
-      throw m.error("bundle", "bundle must be 1 or more sub-conductors: " + bundle);
-    }
+    double offset = optional(m, "offset_m");
+    double height = optional(m, "attach_height_m");
+    int bundle = (int) plausible(m, "bundle", m.integer("bundle", 1));
     double spacing = m.number("bundle_spacing_m", Double.NaN);
     if (bundle > 1 && !m.has("bundle_spacing_m")) {
       throw m.error("bundle_spacing_m", "required when bundle is more than 1");
@@ -209,13 +197,10 @@ public final class LineSpecReader {
     if (bundle == 1 && m.has("bundle_spacing_m")) {
       throw m.error("bundle_spacing_m", "given but bundle is 1; remove it or set bundle");
     }
-    if (m.has("bundle_spacing_m") && !(spacing > 0)) {
-      throw m.error("bundle_spacing_m", "must be greater than 0 m: " + fmt(spacing));
+    if (m.has("bundle_spacing_m")) {
+      plausible(m, "bundle_spacing_m", spacing);
     }
-    double insulator = m.number("insulator_length_m", Double.NaN);
-    if (m.has("insulator_length_m") && !(insulator >= 0)) {
-      throw m.error("insulator_length_m", "must be 0 m or more: " + fmt(insulator));
-    }
+    double insulator = optional(m, "insulator_length_m");
     double strain = m.number("strain_length_m", 0.0);
     if (!(strain >= 0 && strain <= MAX_STRAIN_LENGTH_M)) {
       throw m.error("strain_length_m", "must be between 0 and " + fmt(MAX_STRAIN_LENGTH_M)
@@ -223,6 +208,20 @@ public final class LineSpecReader {
     }
     return new ConductorPosition(position, role, circuit, type, offset, height, bundle, spacing,
         insulator, strain);
+  }
+
+  /** An optional number key checked against {@link #RANGES}, or NaN when absent. */
+  private static double optional(YamlMap m, String key) {
+    return m.has(key) ? plausible(m, key, m.number(key)) : Double.NaN;
+  }
+
+  /** The value when inside its key's range in {@link #RANGES}; else an error naming the key. */
+  static double plausible(YamlMap m, String key, double v) {
+    String problem = RANGES.get(key).problem(v);
+    if (problem != null) {
+      throw m.error(key, problem);
+    }
+    return v;
   }
 
   /** Throws naming the key when v is outside [lo, hi]. */

@@ -23,6 +23,12 @@ public record SpanLayout(List<LineLayout> lines) {
    * coordinates are good to centimetres, and no span is this short.
    */
   static final double SAME_PLACE_M = 0.01;
+  /**
+   * Longest span accepted, m: the longest overhead spans in service (fjord and strait crossings)
+   * are about 5.4 km (from memory). A longer one is a coordinate typo (x = 1487195 for 487195
+   * gave a 1 000 km span that ran 35 s and died of OutOfMemoryError).
+   */
+  static final double MAX_SPAN_M = 6000;
 
   public SpanLayout {
     lines = List.copyOf(lines);
@@ -63,7 +69,29 @@ public record SpanLayout(List<LineLayout> lines) {
     for (LineSpec spec : byId.values()) {
       out.add(line(spec, groups.get(spec.lineId())));
     }
+    checkSpanIds(out);
     return new SpanLayout(out);
+  }
+
+  /**
+   * Span ids join structure ids with '-', so ids that contain '-' can collide (A, B-C and A-B, C
+   * both give "A-B-C"): one span would overwrite the other's results. Refused with both places.
+   */
+  private static void checkSpanIds(List<LineLayout> lines) {
+    Map<String, Span> seen = new HashMap<>();
+    for (LineLayout l : lines) {
+      for (Span s : l.spans()) {
+        Span twin = seen.putIfAbsent(s.id(), s);
+        if (twin != null) {
+          Structure a = s.from();
+          throw new InputException(a.sourceFile(), "line " + a.sourceLine(), "structure_id",
+              "the span from '" + a.id() + "' to '" + s.to().id() + "' gets the id '" + s.id()
+                  + "', which the span from '" + twin.from().id() + "' to '" + twin.to().id()
+                  + "' (" + twin.from().where() + ") already has; rename a structure so that"
+                  + " no id joined with '-' repeats another");
+        }
+      }
+    }
   }
 
   private static String lineOf(Structure s, Map<String, LineSpec> specs) {
@@ -110,6 +138,15 @@ public record SpanLayout(List<LineLayout> lines) {
         throw new InputException(b.sourceFile(), "line " + b.sourceLine(), "x",
             "structure '" + b.id() + "' stands at the same plan position as the structure before"
                 + " it in sequence, '" + a.id() + "' (" + a.where() + ")");
+      }
+      if (length > MAX_SPAN_M) {
+        throw new InputException(b.sourceFile(), "line " + b.sourceLine(), "x", String.format(
+            java.util.Locale.ROOT, "structure '%s' stands %.0f m from '%s' (%s), the structure"
+                + " before it in sequence; no span is longer than %.0f m (the longest in service"
+                + " are about 5.4 km): check x and y of both%s", b.id(), length, a.id(),
+            a.where(), MAX_SPAN_M, b.sequence() - a.sequence() > 1 ? String.format(
+                java.util.Locale.ROOT, ", or give the structures between sequence %d and %d",
+                a.sequence(), b.sequence()) : ""));
       }
       Span span = new Span(prefix + a.id() + "-" + b.id(), id, a, b,
           SpanFrame.between(a.x(), a.y(), b.x(), b.y()), length, sections.size());

@@ -11,6 +11,9 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 import org.clearance.InputException;
+import org.clearance.io.Decimal;
+import org.clearance.io.TextFiles;
+import org.clearance.io.ValueRange;
 import org.clearance.survey.LinearUnit;
 import org.clearance.survey.SurveyUnits;
 
@@ -35,6 +38,18 @@ public final class StructureReader {
   static final String ATTACH_PREFIX = "attach_z_";
   static final List<String> REQUIRED = List.of(ID, X, Y);
   private static final List<String> FIXED = List.of(ID, X, Y, LINE_ID, SEQUENCE, TYPE, GROUND_Z);
+  /**
+   * Plausible projected coordinates, metres: eastings and northings of every projected CRS in
+   * use stay within 1e8 m (UTM northings reach 1e7 m). Common practice, no source.
+   */
+  static final ValueRange PLAN = new ValueRange(-1e8, 1e8, "m",
+      "projected coordinates, common practice, no source");
+  /**
+   * Plausible elevations, metres: from the Dead Sea shore (about -430 m) to above the highest
+   * lines (about 5 500 m), rounded out; the same limits as the line specification's altitude.
+   */
+  static final ValueRange ELEVATION = new ValueRange(-1000, 10000, "m",
+      "lowest and highest ground with lines, rounded out, from memory");
   private static final String COLUMN_LIST =
       String.join(", ", FIXED) + ", " + ATTACH_PREFIX + "<position>";
 
@@ -67,7 +82,8 @@ public final class StructureReader {
    */
   public static List<Structure> read(Path file, SurveyUnits units) {
     String name = file.toString();
-    String text = TextFiles.read(file, "the structures table (CSV or GeoJSON text)");
+    String text = TextFiles.read(file, TextFiles.MAX_STRUCTURES_BYTES,
+        "the structures table (CSV or GeoJSON text)");
     String lower = name.toLowerCase(Locale.ROOT);
     boolean json = lower.endsWith(".geojson") || lower.endsWith(".json")
         || text.stripLeading().startsWith("{");
@@ -188,8 +204,8 @@ public final class StructureReader {
     }
     LinearUnit h = units.horizontal();
     LinearUnit v = units.vertical();
-    double x = h.toMetres(number(f.get(X), X, h, file));
-    double y = h.toMetres(number(f.get(Y), Y, h, file));
+    double x = plausible(h.toMetres(number(f.get(X), X, h, file)), PLAN, f.get(X), X, file);
+    double y = plausible(h.toMetres(number(f.get(Y), Y, h, file)), PLAN, f.get(Y), Y, file);
     Field lineField = f.get(LINE_ID);
     String lineId = lineField == null ? "" : lineField.text();
     StructureType type = type(f.get(TYPE), file);
@@ -199,13 +215,27 @@ public final class StructureReader {
       if (e.getKey().startsWith(ATTACH_PREFIX)) {
         double z = optionalNumber(e.getValue(), e.getKey(), v, file);
         if (!Double.isNaN(z)) {
+          plausible(v.toMetres(z), ELEVATION, e.getValue(), e.getKey(), file);
           attach.put(e.getKey().substring(ATTACH_PREFIX.length()), z);
         }
       }
     }
+    if (!Double.isNaN(groundZ)) {
+      plausible(v.toMetres(groundZ), ELEVATION, f.get(GROUND_Z), GROUND_Z, file);
+    }
     return new Structure(id.text(), lineId, sequence, type, x, y,
         Double.isNaN(groundZ) ? Double.NaN : v.toMetres(groundZ), toMetres(attach, v), file,
         r.line());
+  }
+
+  /** The value in metres when inside the range, else an error naming the field. */
+  private static double plausible(double metres, ValueRange range, Field field, String column,
+      String file) {
+    String problem = range.problem(metres);
+    if (problem != null) {
+      throw new InputException(file, "line " + field.line(), column, "in metres, " + problem);
+    }
+    return metres;
   }
 
   private static Map<String, Double> toMetres(Map<String, Double> values, LinearUnit unit) {

@@ -7,6 +7,7 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Optional;
 import org.clearance.InputException;
+import org.clearance.io.YamlMap;
 import org.clearance.line.SurveyTemperatureSpec.HeatInputs;
 import org.clearance.line.SurveyTemperatureSpec.Source;
 
@@ -68,7 +69,7 @@ final class SurveyTemperatureReader {
           throw top.error(k, "belongs to survey_conductor_temperature_c, which is not given");
         }
       }
-      YamlMap m = new YamlMap(top.node("survey_heat_balance"), specFile.toString(),
+      YamlMap m = YamlMap.strict(top.required("survey_heat_balance").value(), specFile.toString(),
           "the survey_heat_balance block", HEAT_KEYS);
       return new SurveyTemperatureSpec(Source.COMPUTED, Double.NaN, Double.NaN,
           Optional.of(heat(m, specFile)));

@@ -3,6 +3,8 @@ package org.clearance.rules;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Set;
+import org.clearance.io.ValueRange;
+import org.clearance.io.YamlMap;
 import org.yaml.snakeyaml.nodes.Node;
 import org.yaml.snakeyaml.nodes.ScalarNode;
 import org.yaml.snakeyaml.nodes.SequenceNode;
@@ -19,6 +21,22 @@ final class DistanceParser {
   private static final Set<String> ALLOWANCE_KEYS =
       Set.of("middle_fraction", "add_m_per_100m", "beyond_span_m");
 
+  /** Where the ranges below come from. */
+  private static final String PRACTICE = "vegetation clearance rules, common practice, no source";
+  /**
+   * Plausible distance of a rule, m: clearance distances are metres to tens of metres (the
+   * largest are fall-in reaches and right-of-way widths); 0 only where a distance may be zero.
+   */
+  static final ValueRange DISTANCE = new ValueRange(0, 200, "m", PRACTICE);
+  /** Plausible voltage band edge, kV: the highest AC lines in service run at 1 150 kV. */
+  static final ValueRange VOLTAGE = new ValueRange(0, 2000, "kV", PRACTICE);
+  /** Plausible altitude band top, m: the highest ground with lines is about 5 500 m. */
+  static final ValueRange ALTITUDE = new ValueRange(-500, 9000, "m", PRACTICE);
+  /** Plausible rise of a distance with altitude, percent per km. */
+  static final ValueRange RISE = new ValueRange(0, 100, "percent per km", PRACTICE);
+  /** Plausible midspan allowance rate, m per 100 m of span. */
+  static final ValueRange RATE = new ValueRange(0, 10, "m per 100 m", PRACTICE);
+
   private DistanceParser() {}
 
   /**
@@ -30,7 +48,7 @@ final class DistanceParser {
   static DistanceSpec distance(YamlMap.Entry entry, boolean allowZero) {
     if (entry.value() instanceof ScalarNode) {
       double m = allowZero ? entry.nonNegative() : entry.positive();
-      return new DistanceSpec.Fixed(m);
+      return new DistanceSpec.Fixed(entry.within(DISTANCE));
     }
     YamlMap map = entry.map();
     if (map.has("by_voltage")) {
@@ -40,7 +58,7 @@ final class DistanceParser {
     if (map.has("based_on_zone")) {
       map.checkKeys(RELATIVE_KEYS);
       String zone = map.required("based_on_zone").text();
-      double plus = map.optional("plus_m").map(YamlMap.Entry::nonNegative).orElse(0.0);
+      double plus = map.optional("plus_m").map(e -> e.within(DISTANCE)).orElse(0.0);
       boolean growth = map.optional("plus_cycle_growth").map(YamlMap.Entry::bool).orElse(false);
       return new DistanceSpec.Relative(zone, plus, growth);
     }
@@ -53,7 +71,7 @@ final class DistanceParser {
     YamlMap.Entry topsEntry = map.optional("altitude_tops_m").orElse(null);
     if (topsEntry != null) {
       for (Node item : topsEntry.items()) {
-        double top = topsEntry.numberOf(item);
+        double top = topsEntry.withinOf(item, ALTITUDE);
         if (!tops.isEmpty() && !(top > tops.get(tops.size() - 1))) {
           throw topsEntry.error(item, "altitude band tops must increase");
         }
@@ -67,7 +85,7 @@ final class DistanceParser {
         throw riseEntry.error("an altitude rise needs at least two altitude bands "
             + "(altitude_tops_m)");
       }
-      rise = riseEntry.nonNegative();
+      rise = riseEntry.within(RISE);
     }
     int columns = riseEntry != null ? 1 : Math.max(1, tops.size());
     List<DistanceTable.Row> rows = new ArrayList<>();
@@ -80,7 +98,8 @@ final class DistanceParser {
       List<Double> metres = new ArrayList<>();
       List<Node> values = m.value() instanceof SequenceNode ? m.items() : List.of(m.value());
       for (Node v : values) {
-        metres.add(m.positiveOf(v));
+        m.positiveOf(v);
+        metres.add(m.withinOf(v, DISTANCE));
       }
       if (metres.size() != columns) {
         throw m.error("expected " + columns + (columns == 1 ? " distance" : " distances (one per "
@@ -102,7 +121,7 @@ final class DistanceParser {
 
   /** A voltage band from {@code min_kv} and one of {@code below_kv} / {@code max_kv}. */
   static VoltageBand band(YamlMap map) {
-    double min = map.optional("min_kv").map(YamlMap.Entry::nonNegative).orElse(0.0);
+    double min = map.optional("min_kv").map(e -> e.within(VOLTAGE)).orElse(0.0);
     YamlMap.Entry below = map.optional("below_kv").orElse(null);
     YamlMap.Entry max = map.optional("max_kv").orElse(null);
     if (below != null && max != null) {
@@ -112,7 +131,7 @@ final class DistanceParser {
     if (upper == null) {
       return new VoltageBand(min, Double.POSITIVE_INFINITY, false);
     }
-    double top = upper.number();
+    double top = upper.within(VOLTAGE);
     if (!(top > min)) {
       throw upper.error("must be greater than min_kv (" + YamlMap.fmt(min) + ")");
     }
@@ -135,8 +154,8 @@ final class DistanceParser {
     if (f > 1) {
       throw fraction.error("must be at most 1 (the whole span)");
     }
-    double rate = map.required("add_m_per_100m").nonNegative();
-    double beyond = map.optional("beyond_span_m").map(YamlMap.Entry::nonNegative).orElse(0.0);
+    double rate = map.required("add_m_per_100m").within(RATE);
+    double beyond = map.optional("beyond_span_m").map(e -> e.within(DISTANCE)).orElse(0.0);
     return new MidspanAllowance(f, rate, beyond);
   }
 }

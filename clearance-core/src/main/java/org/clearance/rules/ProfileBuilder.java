@@ -9,6 +9,8 @@ import java.util.Map;
 import java.util.Optional;
 import java.util.Set;
 import java.util.regex.Pattern;
+import org.clearance.io.ValueRange;
+import org.clearance.io.YamlMap;
 
 /** Merges the files of a profile's chain and builds the validated {@link RuleProfile}. */
 final class ProfileBuilder {
@@ -23,6 +25,20 @@ final class ProfileBuilder {
   private static final Pattern CLASS_KEY = Pattern.compile("class_([0-9]{1,3})");
   /** Largest ASPRS class number (LAS 1.4 classification byte). */
   private static final int MAX_CLASS = 255;
+  /**
+   * Plausible trim cycle, years: utilities trim every 1 to about 10 years (common practice, no
+   * source); 30 leaves room for rarely visited lines.
+   */
+  static final ValueRange TRIM_CYCLE = new ValueRange(0.1, 30, "years",
+      "trim cycles, common practice, no source");
+  /**
+   * Plausible growth rate, m per year: the fastest trees grow a few metres a year (common
+   * practice, no source).
+   */
+  static final ValueRange GROWTH = new ValueRange(0, 10, "m per year",
+      "tree growth, common practice, no source");
+  /** Plausible zone priority: a profile has a handful of zones. */
+  static final int MAX_PRIORITY = 1000;
 
   private ProfileBuilder() {}
 
@@ -82,7 +98,7 @@ final class ProfileBuilder {
       origins.add(origin(layer));
     }
     Optional<GrowthRates> growth = Optional.ofNullable(m.growth()).map(ProfileBuilder::growth);
-    double cycle = m.trimCycle() == null ? Double.NaN : m.trimCycle().positive();
+    double cycle = m.trimCycle() == null ? Double.NaN : m.trimCycle().within(TRIM_CYCLE);
     if (m.zones().isEmpty()) {
       throw m.rootTop().missing("zones", "a profile needs at least one zone");
     }
@@ -110,7 +126,8 @@ final class ProfileBuilder {
     if (fallIn.enabled()) {
       check.fallIn(fallIn.allowance(), m.fallIn().required("reach_allowance_m"));
     }
-    double appliesFrom = m.appliesFrom() == null ? 0 : m.appliesFrom().nonNegative();
+    double appliesFrom = m.appliesFrom() == null ? 0
+        : m.appliesFrom().within(DistanceParser.VOLTAGE);
     return new RuleProfile(origins, zones, growth, cycle, fallIn, appliesFrom, covered, hash,
         confidence(chain));
   }
@@ -137,6 +154,10 @@ final class ProfileBuilder {
     if (!NAME.matcher(name.text()).matches()) {
       throw name.error("a profile name uses letters, digits, '_', '-' and '.' only");
     }
+    if (!layer.builtin() && RuleProfiles.names().contains(name.text())) {
+      throw name.error("'" + name.text() + "' is the name of a built-in profile; give your"
+          + " profile its own name (extend the built-in one with extends: " + name.text() + ")");
+    }
     String cautions = top.optional("cautions").map(YamlMap.Entry::text).orElse("");
     return new ProfileOrigin(name.text(), top.required("title").text(),
         top.required("source").text(), cautions, layer.label());
@@ -150,6 +171,10 @@ final class ProfileBuilder {
       throw nameEntry.error("a zone name uses letters, digits, '_', '-' and '.' only");
     }
     int priority = map.required("priority").integer(1);
+    if (priority > MAX_PRIORITY) {
+      throw map.required("priority").error("must be at most " + MAX_PRIORITY + ", found "
+          + priority);
+    }
     boolean reference =
         map.optional("violation_reference").map(YamlMap.Entry::bool).orElse(false);
     VoltageBand band =
@@ -193,11 +218,24 @@ final class ProfileBuilder {
               + String.join(", ", ConditionSelector.GROUPS) + ", or " + ConditionSelector.ALL
               + " (name single conditions under condition_names)");
         }
-        groups.add(g);
+        if (!groups.add(g)) {
+          throw groupEntry.error("condition group '" + g + "' is listed twice");
+        }
       }
     }
+    if (groups.contains(ConditionSelector.ALL) && groups.size() > 1) {
+      throw groupEntry.error("'" + ConditionSelector.ALL + "' already holds every group; list"
+          + " it alone");
+    }
     Set<String> names = new LinkedHashSet<>();
-    map.optional("condition_names").ifPresent(e -> names.addAll(e.texts()));
+    YamlMap.Entry namesEntry = map.optional("condition_names").orElse(null);
+    if (namesEntry != null) {
+      for (String n : namesEntry.texts()) {
+        if (!names.add(n)) {
+          throw namesEntry.error("condition name '" + n + "' is listed twice");
+        }
+      }
+    }
     if (groups.isEmpty() && names.isEmpty()) {
       throw map.missing("conditions", owner + " needs the conditions it applies in");
     }
@@ -217,7 +255,12 @@ final class ProfileBuilder {
       if (!matcher.matches() || Integer.parseInt(matcher.group(1)) > MAX_CLASS) {
         throw e.error("unknown key; growth rates are keyed class_<ASPRS class 0-255> or default");
       }
-      byClass.put(Integer.parseInt(matcher.group(1)), rate);
+      int cls = Integer.parseInt(matcher.group(1));
+      if (!matcher.group(1).equals(Integer.toString(cls))) {
+        // class_05 beside class_5 would silently replace one rate with the other
+        throw e.error("write class_" + cls + " (no leading zeros)");
+      }
+      byClass.put(cls, rate);
     }
     if (fallback == null) {
       throw map.missing("default", "growth rates need a default for other classes");
@@ -228,8 +271,8 @@ final class ProfileBuilder {
   private static GrowthRates.Rate rate(YamlMap.Entry entry) {
     YamlMap map = entry.map();
     map.checkKeys(RATE_KEYS);
-    return new GrowthRates.Rate(map.required("vertical").nonNegative(),
-        map.required("lateral").nonNegative());
+    return new GrowthRates.Rate(map.required("vertical").within(GROWTH),
+        map.required("lateral").within(GROWTH));
   }
 
   private static FallInRule fallIn(YamlMap map) {

@@ -2,7 +2,6 @@ package org.clearance.rules;
 
 import java.io.IOException;
 import java.io.InputStream;
-import java.io.StringReader;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -15,11 +14,8 @@ import java.util.List;
 import java.util.Map;
 import java.util.Set;
 import org.clearance.InputException;
-import org.yaml.snakeyaml.LoaderOptions;
-import org.yaml.snakeyaml.Yaml;
-import org.yaml.snakeyaml.error.Mark;
-import org.yaml.snakeyaml.error.MarkedYAMLException;
-import org.yaml.snakeyaml.error.YAMLException;
+import org.clearance.io.TextFiles;
+import org.clearance.io.YamlMap;
 import org.yaml.snakeyaml.nodes.Node;
 
 /**
@@ -118,12 +114,7 @@ public final class RuleProfileReader {
   }
 
   private static Layer fromFile(Path path, String label) {
-    String text;
-    try {
-      text = Files.readString(path, StandardCharsets.UTF_8);
-    } catch (IOException e) {
-      throw new InputException(label, null, null, "cannot read the rule profile: " + e);
-    }
+    String text = TextFiles.read(path, TextFiles.MAX_YAML_BYTES);
     return layer(text, label, "file:" + path, path.getParent(), false);
   }
 
@@ -149,21 +140,7 @@ public final class RuleProfileReader {
 
   /** Parses one file's text into its top-level mapping and checks its top-level keys. */
   static Layer layer(String text, String label, String identity, Path folder, boolean builtin) {
-    Node root;
-    try {
-      LoaderOptions options = new LoaderOptions();
-      options.setAllowDuplicateKeys(false);
-      root = new Yaml(options).compose(new StringReader(text));
-    } catch (MarkedYAMLException e) {
-      Mark mark = e.getProblemMark() != null ? e.getProblemMark() : e.getContextMark();
-      String where = mark == null ? null : "line " + (mark.getLine() + 1);
-      throw new InputException(label, where, null, "not valid YAML: " + e.getProblem());
-    } catch (YAMLException e) {
-      throw new InputException(label, null, null, "not valid YAML: " + e.getMessage());
-    }
-    if (root == null) {
-      throw new InputException(label, null, null, "the rule profile is empty");
-    }
+    Node root = YamlMap.compose(text, label);
     YamlMap top = YamlMap.of(root, label, null);
     top.checkKeys(TOP_KEYS);
     return new Layer(label, identity, text, top, folder, builtin);

@@ -88,7 +88,8 @@ final class GeoKeysCrs {
       } else {
         h = LinearUnit.fromEpsgCode(code);
         if (h.isEmpty()) {
-          problem = "horizontal unit code " + code + " in " + hSource
+          problem = "horizontal unit code " + describeShort(keys, PROJ_LINEAR_UNITS) + " in "
+              + hSource
               + " is not 9001 (metre), 9002 (foot) or 9003 (US survey foot)";
         }
       }
@@ -112,7 +113,8 @@ final class GeoKeysCrs {
       vSource = "GeoTIFF VerticalUnitsGeoKey " + VERTICAL_UNITS;
       v = LinearUnit.fromEpsgCode(code);
       if (v.isEmpty()) {
-        problem = CrsStatement.join(problem, "vertical unit code " + code + " in " + vSource
+        problem = CrsStatement.join(problem, "vertical unit code "
+            + describeShort(keys, VERTICAL_UNITS) + " in " + vSource
             + " is not 9001 (metre), 9002 (foot) or 9003 (US survey foot)");
       }
     } else {
@@ -124,6 +126,19 @@ final class GeoKeysCrs {
   private static int shortOf(Map<Integer, Value> keys, int id) {
     Value v = keys.get(id);
     return v == null ? -1 : v.shortValue();
+  }
+
+  /**
+   * A short key's value for messages: the number, or what was found instead when the key points
+   * into the double or text parameters (never the internal -1).
+   */
+  private static String describeShort(Map<Integer, Value> keys, int id) {
+    Value v = keys.get(id);
+    if (v.shortValue() >= 0) {
+      return Integer.toString(v.shortValue());
+    }
+    return v.text() != null ? "(given as text '" + v.text() + "', not a number)"
+        : "(given as the double " + v.doubleValue() + ", not a short integer)";
   }
 
   private static String text(Map<Integer, Value> keys, int id) {

@@ -20,6 +20,23 @@ final class LasHeaderParser {
   private static final int COMPRESSED_FORMAT_BITS = 0xC0;
   /** Largest value of an unsigned 32-bit field. */
   private static final long U32_MAX = 0xFFFFFFFFL;
+  /**
+   * Finest scale factor accepted, file units per step: a nanometre (or nano-foot) is far below
+   * any survey's precision; a smaller one is a damaged field. Common practice, no source.
+   */
+  static final double MIN_SCALE = 1e-9;
+  /**
+   * Coarsest scale factor accepted, file units per step: one metre or foot per step cannot
+   * describe a conductor; a larger one (1e308 gave infinite coordinates) is a damaged field.
+   * Common practice, no source.
+   */
+  static final double MAX_SCALE = 1;
+  /**
+   * Largest coordinate offset or header bound accepted, file units: projected coordinates stay
+   * below about 1e8 (UTM northings reach 1e7 m, state plane feet about 3e7). Common practice, no
+   * source.
+   */
+  static final double MAX_COORDINATE = 1e9;
 
   private LasHeaderParser() {}
 
@@ -74,6 +91,13 @@ final class LasHeaderParser {
           "%d lies past the end of the file (%d bytes)", offset, fileSize));
     }
     PointFormat format = format(path, b.get(104) & 0xFF);
+    int introduced = format.isExtended() ? 4 : format.hasWavePacket() ? 3 : 0;
+    if (minor < introduced) {
+      throw new InputException(path, "header", "version", String.format(Locale.ROOT,
+          "LAS %d.%d cannot hold point format %d (it was introduced in LAS 1.%d, whose header"
+              + " carries its point count); the version or the format field is wrong",
+          major, minor, format.id(), introduced));
+    }
     int recordLength = u16(b, 105);
     if (recordLength < format.minRecordLength()) {
       throw new InputException(path, "header", "point data record length", String.format(
@@ -82,12 +106,16 @@ final class LasHeaderParser {
     }
     double[] scale = finiteTriple(path, b, 131, "scale factor", true);
     double[] shift = finiteTriple(path, b, 155, "offset", false);
+    checkScaleAndOffset(path, scale, shift);
     double[] bounds = new double[6];
     String[] boundNames = {"max x", "min x", "max y", "min y", "max z", "min z"};
     for (int i = 0; i < 6; i++) {
       bounds[i] = b.getDouble(179 + 8 * i);
-      if (!Double.isFinite(bounds[i])) {
-        throw new InputException(path, "header", boundNames[i], "not a finite number");
+      if (!(Math.abs(bounds[i]) <= MAX_COORDINATE)) {
+        throw new InputException(path, "header", boundNames[i], Double.isFinite(bounds[i])
+            ? String.format(Locale.ROOT, "%s is beyond the plausible %.0e file units",
+                bounds[i], MAX_COORDINATE)
+            : "not a finite number");
       }
     }
     long legacyCount = u32(b, 107);
@@ -127,11 +155,44 @@ final class LasHeaderParser {
           Locale.ROOT, "%d points of %d bytes from byte %d need %s bytes but the file has %d",
           count, recordLength, offset, bytesNeeded(offset, count, recordLength), fileSize));
     }
+    boolean extendedRecords = minor >= 4 && evlrCount > 0 || minor == 3 && waveformStart != 0;
+    long unread = (fileSize - offset) / recordLength - count;
+    if (!extendedRecords && unread > 0) {
+      throw new InputException(path, "header", minor >= 4 && count != legacyCount
+          ? "number of point records" : "legacy number of point records", String.format(
+          Locale.ROOT, "the header counts %d points but %d more whole %d-byte records follow"
+              + " them up to the end of the file (byte %d); the count or the offset to point"
+              + " data is wrong", count, unread, recordLength, fileSize));
+    }
+    if (count > 0) {
+      for (int i = 0; i < 6; i += 2) {
+        if (bounds[i + 1] > bounds[i]) {
+          throw new InputException(path, "header", boundNames[i + 1], String.format(Locale.ROOT,
+              "%s is greater than %s %s", bounds[i + 1], boundNames[i], bounds[i]));
+        }
+      }
+    }
     return new LasHeader(major, minor, u16(b, 4), u16(b, 6), guid(b), text(b, 26, 32),
         text(b, 58, 32), u16(b, 90), u16(b, 92), headerSize, offset, u32(b, 100), format,
         recordLength, count, legacyCount, byReturn, scale[0], scale[1], scale[2], shift[0],
         shift[1], shift[2], bounds[1], bounds[3], bounds[5], bounds[0], bounds[2], bounds[4],
         waveformStart, evlrStart, evlrCount);
+  }
+
+  private static void checkScaleAndOffset(Path path, double[] scale, double[] shift) {
+    String[] axes = {"x", "y", "z"};
+    for (int i = 0; i < 3; i++) {
+      double s = Math.abs(scale[i]);
+      if (s < MIN_SCALE || s > MAX_SCALE) {
+        throw new InputException(path, "header", axes[i] + " scale factor", String.format(
+            Locale.ROOT, "%s is outside the plausible %.0e to %.0f file units per step",
+            scale[i], MIN_SCALE, MAX_SCALE));
+      }
+      if (Math.abs(shift[i]) > MAX_COORDINATE) {
+        throw new InputException(path, "header", axes[i] + " offset", String.format(Locale.ROOT,
+            "%s is beyond the plausible %.0e file units", shift[i], MAX_COORDINATE));
+      }
+    }
   }
 
   private static String bytesNeeded(long offset, long count, int recordLength) {

@@ -28,6 +28,12 @@ final class PointDecoder {
   private final double oz;
   private final double horizontalFactor;
   private final double verticalFactor;
+  /** The header's bounding box widened by the tolerance, in output units: x, y, z lows, highs. */
+  private final double[] low = new double[3];
+  private final double[] high = new double[3];
+  /** The header's bounding box as written, file units. */
+  private final double[] headerMin;
+  private final double[] headerMax;
 
   /**
    * @param header the file's header
@@ -45,6 +51,76 @@ final class PointDecoder {
     this.oz = header.offsetZ();
     this.horizontalFactor = horizontalFactor;
     this.verticalFactor = verticalFactor;
+    headerMin = new double[] {header.minX(), header.minY(), header.minZ()};
+    headerMax = new double[] {header.maxX(), header.maxY(), header.maxZ()};
+    double[] scale = {sx, sy, sz};
+    double[] factor = {horizontalFactor, horizontalFactor, verticalFactor};
+    for (int a = 0; a < 3; a++) {
+      double tol = boundsTolerance(scale[a], headerMin[a], headerMax[a]);
+      low[a] = (headerMin[a] - tol) * factor[a];
+      high[a] = (headerMax[a] + tol) * factor[a];
+    }
+  }
+
+  /**
+   * How far a point may lie outside the header's bounding box, file units: one scale step (a
+   * writer may round the box to the coordinate grid) plus a few units in the last place of the
+   * largest bound (the box and the points are computed in doubles). Decided here, no source.
+   */
+  static double boundsTolerance(double scale, double min, double max) {
+    return Math.abs(scale) + 4 * Math.ulp(Math.max(Math.abs(min), Math.abs(max)));
+  }
+
+  /**
+   * The first point of a decoded chunk outside the header's bounding box (with
+   * {@link #boundsTolerance}), or -1 when all lie inside.
+   */
+  int firstOutsideBounds(PointChunk c) {
+    double[][] axes = {c.x(), c.y(), c.z()};
+    for (int a = 0; a < 3; a++) {
+      double[] v = axes[a];
+      double lo = low[a];
+      double hi = high[a];
+      for (int i = 0, n = c.size(); i < n; i++) {
+        if (!(v[i] >= lo && v[i] <= hi)) {
+          return firstOutside(c);
+        }
+      }
+    }
+    return -1;
+  }
+
+  private int firstOutside(PointChunk c) {
+    for (int i = 0; i < c.size(); i++) {
+      if (outsideAxis(c, i) != null) {
+        return i;
+      }
+    }
+    return -1;
+  }
+
+  /** The axis (x, y or z) on which point {@code i} of the chunk lies outside, or null. */
+  String outsideAxis(PointChunk c, int i) {
+    double[] v = {c.x()[i], c.y()[i], c.z()[i]};
+    String[] names = {"x", "y", "z"};
+    for (int a = 0; a < 3; a++) {
+      if (!(v[a] >= low[a] && v[a] <= high[a])) {
+        return names[a];
+      }
+    }
+    return null;
+  }
+
+  /** What is wrong with point {@code i}, which lies outside, in file units. */
+  String outsideProblem(PointChunk c, int i) {
+    String axis = outsideAxis(c, i);
+    int a = axis.charAt(0) - 'x';
+    double factor = a == 2 ? verticalFactor : horizontalFactor;
+    double value = (a == 0 ? c.x() : a == 1 ? c.y() : c.z())[i] / factor;
+    return String.format(java.util.Locale.ROOT, "%s = %s lies outside the header's bounding"
+        + " box, min %s %s to max %s %s (tolerance one scale step); the header, its scale or"
+        + " offset, or the record is damaged", axis, value, axis, headerMin[a], axis,
+        headerMax[a]);
   }
 
   /** Decodes {@code count} records from the start of {@code b} (little-endian) into the chunk. */

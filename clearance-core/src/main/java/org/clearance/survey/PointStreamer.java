@@ -26,6 +26,12 @@ import org.clearance.InputException;
 final class PointStreamer {
   /** Most threads a parallel read may use; more would only contend for the disk. */
   static final int MAX_THREADS = 256;
+  /**
+   * Largest read buffer per thread, bytes: 65 536 points of the longest standard record (67
+   * bytes) fit; files with long records (extra bytes, up to 65 535 per record) get fewer points
+   * per chunk instead of a buffer of gigabytes.
+   */
+  static final int MAX_BUFFER_BYTES = 8 << 20;
 
   private final List<LasFile> files;
   private final double horizontalFactor;
@@ -39,7 +45,8 @@ final class PointStreamer {
    * @param files the files, in order
    * @param horizontalFactor metres per horizontal file unit (1 keeps file units)
    * @param verticalFactor metres per vertical file unit (1 keeps file units)
-   * @param chunkPoints points per chunk, at least 1
+   * @param chunkPoints most points per chunk, at least 1; fewer when the records are so long
+   *     that the chunk would need more than {@link #MAX_BUFFER_BYTES}
    */
   PointStreamer(List<LasFile> files, double horizontalFactor, double verticalFactor,
       int chunkPoints) {
@@ -50,18 +57,22 @@ final class PointStreamer {
     this.horizontalFactor = horizontalFactor;
     this.verticalFactor = verticalFactor;
     int longest = 1;
+    for (LasFile f : this.files) {
+      longest = Math.max(longest, f.header().recordLength());
+    }
+    int points = chunkPoints(chunkPoints, longest);
     starts = new long[this.files.size() + 1];
     for (int i = 0; i < this.files.size(); i++) {
       LasHeader h = this.files.get(i).header();
-      longest = Math.max(longest, h.recordLength());
-      starts[i + 1] = starts[i] + (h.pointCount() + chunkPoints - 1) / chunkPoints;
+      starts[i + 1] = starts[i] + (h.pointCount() + points - 1) / points;
     }
-    long bytes = (long) chunkPoints * longest;
-    if (bytes > Integer.MAX_VALUE - 8) {
-      throw new IllegalArgumentException("chunk of " + chunkPoints + " points is too large");
-    }
-    this.chunkPoints = chunkPoints;
-    this.bufferBytes = (int) bytes;
+    this.chunkPoints = points;
+    this.bufferBytes = points * longest;
+  }
+
+  /** Points per chunk for records of {@code recordLength} bytes: at most {@code wanted}. */
+  static int chunkPoints(int wanted, int recordLength) {
+    return Math.max(1, Math.min(wanted, MAX_BUFFER_BYTES / Math.max(1, recordLength)));
   }
 
   /** Reads all chunks in file and record order on the calling thread. */
@@ -97,17 +108,21 @@ final class PointStreamer {
     for (int t = 0; t < threads; t++) {
       Consumer<PointChunk> consumer = perWorker.get(t);
       Thread thread = new Thread(() -> {
-        Worker w = new Worker();
+        Worker w = null;
         try {
+          w = new Worker();
           for (long k = next.getAndIncrement(); k < total && !stop.get();
               k = next.getAndIncrement()) {
             consumer.accept(w.load(k));
           }
-        } catch (RuntimeException | Error e) {
+        } catch (Throwable e) {
+          // every failure, an OutOfMemoryError in the buffers included, reaches the caller
           failure.compareAndSet(null, e);
           stop.set(true);
         } finally {
-          w.close();
+          if (w != null) {
+            w.close();
+          }
         }
       }, "survey-reader-" + t);
       thread.setDaemon(true);
@@ -129,6 +144,9 @@ final class PointStreamer {
     }
     if (f instanceof Error err) {
       throw err;
+    }
+    if (f != null) {
+      throw new IllegalStateException("a survey reader failed", f);
     }
   }
 
@@ -199,6 +217,11 @@ final class PointStreamer {
       }
       chunk.reset(i, first);
       decoder.decode(buf, n, chunk);
+      int outside = decoder.firstOutsideBounds(chunk);
+      if (outside >= 0) {
+        throw new InputException(f.path(), "point record " + (first + outside + 1),
+            decoder.outsideAxis(chunk, outside), decoder.outsideProblem(chunk, outside));
+      }
       return chunk;
     }
 

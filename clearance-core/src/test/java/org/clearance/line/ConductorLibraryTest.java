@@ -165,9 +165,24 @@ class ConductorLibraryTest {
         Arguments.of("blank required", HEADER + "\nX,28.1,468,1.6,,70,19e-6\n", 2,
             "rated_strength_kn", "no value"),
         Arguments.of("expansion unit slip", HEADER + "\nX,28.1,468,1.6,140,70,19\n", 2,
-            "thermal_expansion_per_c", "implausibly large"),
+            "thermal_expansion_per_c", "19 1/degC is outside the plausible range"),
+        // issue 10 item 5: 4.9e-324 (and an exponent typo such as 18.9e-9) were accepted, so the
+        // hot clearance equalled the survey clearance and a violation was missed
+        Arguments.of("expansion denormal", HEADER + "\nX,28.1,468,1.6,140,70,4.9e-324\n", 2,
+            "thermal_expansion_per_c", "is outside the plausible range 5e-07 to 3e-05"),
+        Arguments.of("expansion exponent typo", HEADER + "\nX,28.1,468,1.6,140,70,18.9e-9\n", 2,
+            "thermal_expansion_per_c", "1.89e-08 1/degC is outside"),
+        Arguments.of("area beyond the circle", HEADER + "\nX,18.1,468,1.6,140,70,19e-6\n", 2,
+            "area_mm2", "does not fit in a conductor of diameter_mm 18.1"),
+        Arguments.of("mass in g/m", HEADER + "\nX,28.1,468,1600,140,70,19e-6\n", 2,
+            "mass_kg_per_m", "1600 kg/m is outside"),
+        Arguments.of("mass per volume", HEADER + "\nX,28.1,468,0.16,140,70,19e-6\n", 2,
+            "mass_kg_per_m", "mass per volume 341.88 kg/m^3 is outside"),
+        Arguments.of("core larger than the whole", HEADER + ",core_area_mm2,core_modulus_gpa,"
+            + "core_thermal_expansion_per_c\nX" + row + ",500,200,11.5e-6\n", 2, "core_area_mm2",
+            "must be smaller than the whole conductor"),
         Arguments.of("modulus in Pa", HEADER + "\nX,28.1,468,1.6,140,70e9,19e-6\n", 2,
-            "final_modulus_gpa", "implausibly large"),
+            "final_modulus_gpa", "7e+10 GPa is outside the plausible range 20 to 250 GPa"),
         Arguments.of("partial core", HEADER + ",core_area_mm2,core_modulus_gpa\nX" + row
             + ",65,200\n", 2, "core_thermal_expansion_per_c", "all three"),
         Arguments.of("duplicate code", HEADER + "\nX" + row + "\n# c\nx" + row + "\n", 4, "code",

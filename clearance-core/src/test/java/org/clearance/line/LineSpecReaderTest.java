@@ -202,7 +202,25 @@ class LineSpecReaderTest {
         edit("circuit not whole", "    role: phase", "    role: phase\n    circuit: 1.5", 7,
             "circuit", "whole number"),
         edit("bundle below 1", "    role: phase", "    role: phase\n    bundle: 0", 7, "bundle",
-            "1 or more"),
+            "0 sub-conductors is outside the plausible range 1 to 12"),
+        // issue 10 item 13: bundle: 100000 was accepted
+        edit("bundle huge", "    role: phase", "    role: phase\n    bundle: 100000\n"
+            + "    bundle_spacing_m: 0.45", 7, "bundle", "outside the plausible range 1 to 12"),
+        // issue 10 item 7: offset_m: 1e308 ran 35 s and died with OutOfMemoryError
+        edit("offset huge", "    role: phase", "    role: phase\n    offset_m: 1e308", 7,
+            "offset_m", "outside the plausible range -50 to 50 m"),
+        edit("circuit huge", "    role: phase", "    role: phase\n    circuit: 40", 7,
+            "circuit", "outside the plausible range 1 to 12"),
+        edit("spacing in mm", "    role: phase", "    role: phase\n    bundle: 2\n"
+            + "    bundle_spacing_m: 450", 8, "bundle_spacing_m", "450 m is outside"),
+        edit("insulator too long", "    role: phase", "    role: phase\n"
+            + "    insulator_length_m: 45", 7, "insulator_length_m", "45 m is outside"),
+        edit("voltage in volts", "nominal_voltage_kv: 230", "nominal_voltage_kv: 230000", 2,
+            "nominal_voltage_kv", "230000 kV is outside"),
+        // issue 10 item 13: creep_allowance_c: 100000 was accepted
+        edit("huge creep", "    temperature_c: 100",
+            "    temperature_c: 100\n    creep_allowance_c: 100000", 12, "creep_allowance_c",
+            "100000 degC is outside"),
         edit("bundle without spacing", "    role: phase", "    role: phase\n    bundle: 2", 5,
             "bundle_spacing_m", "required when bundle"),
         edit("spacing without bundle", "    role: phase",
@@ -210,9 +228,9 @@ class LineSpecReaderTest {
         edit("strain assembly too long", "    role: phase",
             "    role: phase\n    strain_length_m: 40", 7, "strain_length_m", "between 0 and 15"),
         edit("negative attach height", "    role: phase",
-            "    role: phase\n    attach_height_m: -3", 7, "attach_height_m", "greater than 0"),
+            "    role: phase\n    attach_height_m: -3", 7, "attach_height_m", "-3 m is outside"),
         edit("voltage zero", "nominal_voltage_kv: 230", "nominal_voltage_kv: 0", 2,
-            "nominal_voltage_kv", "greater than 0"),
+            "nominal_voltage_kv", "0 kV is outside the plausible range 0.1 to 1200 kV"),
         edit("altitude out of range", "line_id: L1", "line_id: L1\naltitude_m: 12000", 2,
             "altitude_m", "between -500 and 9000"),
         edit("temperature too low", "temperature_c: 100", "temperature_c: -70", 11,
@@ -230,11 +248,11 @@ class LineSpecReaderTest {
             "not used by kind temperature"),
         edit("negative creep", "    temperature_c: 100",
             "    temperature_c: 100\n    creep_allowance_c: -5", 12, "creep_allowance_c",
-            "0 degC or more"),
+            "-5 degC is outside the plausible range 0 to 50 degC"),
         edit("ice without thickness", "kind: temperature", "kind: ice", 9, "ice_thickness_mm",
             "required key missing"),
         edit("negative ice", "    kind: temperature", "    kind: ice\n    ice_thickness_mm: -1",
-            11, "ice_thickness_mm", "0 mm or more"),
+            11, "ice_thickness_mm", "-1 mm is outside the plausible range"),
         edit("ice density too high", "    kind: temperature",
             "    kind: ice\n    ice_thickness_mm: 10\n    ice_density_kg_m3: 9130", 12,
             "ice_density_kg_m3", "at most 1000"),
@@ -242,7 +260,7 @@ class LineSpecReaderTest {
             "required key missing"),
         edit("negative wind pressure", "    kind: temperature",
             "    kind: wind\n    wind_pressure_pa: -290", 11, "wind_pressure_pa",
-            "0 Pa or more"),
+            "-290 Pa is outside the plausible range 0 to 4000 Pa"),
         edit("ice density without ice", "    kind: temperature",
             "    kind: wind\n    wind_pressure_pa: 290\n    ice_density_kg_m3: 900", 12,
             "ice_density_kg_m3", "without ice_thickness_mm"),
@@ -251,10 +269,10 @@ class LineSpecReaderTest {
         edit("swing angle negative", cond, "  - {name: s, kind: swing, swing_angle_deg: -1}\n", 9,
             "swing_angle_deg", "between 0 and 90"),
         edit("extra sag zero", cond, "  - {name: e, kind: extra_sag, extra_sag_m: 0}\n", 9,
-            "extra_sag_m", "greater than 0"),
+            "extra_sag_m", "0 m is outside the plausible range 0.001 to 50 m"),
         edit("duplicate key", "line_id: L1", "line_id: L1\nline_id: L2", 2, "line_id",
             "given twice"),
-        edit("YAML syntax", "line_id: L1", "line_id: [L1", 2, null, "YAML syntax"));
+        edit("YAML syntax", "line_id: L1", "line_id: [L1", 2, null, "not valid YAML"));
   }
 
   @ParameterizedTest(name = "{0}")

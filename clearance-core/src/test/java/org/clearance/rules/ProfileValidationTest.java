@@ -45,7 +45,7 @@ class ProfileValidationTest {
             source: S
             zones:
               - {name: a, priority: 1, violation_reference: true, conditions: [all], radial_m: 2}
-            """, 1, "title", "required key is missing"),
+            """, 1, "title", "required key missing"),
         error("priority is not a number", HEAD + """
               - {name: a, priority: high, violation_reference: true, conditions: [all],
                  radial_m: 2}
@@ -201,7 +201,42 @@ class ProfileValidationTest {
         error("trim cycle of zero years", HEAD + """
               - {name: a, priority: 1, violation_reference: true, conditions: [all], radial_m: 2}
             trim_cycle_years: 0
-            """, 6, "trim_cycle_years", "greater than zero"),
+            """, 6, "trim_cycle_years", "0 years is outside the plausible range 0.1 to 30"),
+        // issue 10 item 13: class_05 beside class_5 silently replaced one rate with the other
+        error("growth class with a leading zero", HEAD + """
+              - {name: a, priority: 1, violation_reference: true, conditions: [all], radial_m: 2}
+            growth_m_per_year:
+              class_5: {vertical: 1, lateral: 0.5}
+              class_05: {vertical: 3, lateral: 0.5}
+              default: {vertical: 1, lateral: 0.5}
+            """, 8, "class_05", "write class_5"),
+        // issue 10 item 13: conditions: [all, all] was accepted
+        error("condition group twice", HEAD + """
+              - {name: a, priority: 1, violation_reference: true, conditions: [all, all],
+                 radial_m: 2}
+            """, 5, "conditions", "listed twice"),
+        error("all beside a group", HEAD + """
+              - {name: a, priority: 1, violation_reference: true, conditions: [all, hot],
+                 radial_m: 2}
+            """, 5, "conditions", "list it alone"),
+        error("growth in cm per year", HEAD + """
+              - {name: a, priority: 1, violation_reference: true, conditions: [all], radial_m: 2}
+            growth_m_per_year:
+              default: {vertical: 30, lateral: 0.5}
+            """, 7, "vertical", "30 m per year is outside"),
+        error("distance in mm", HEAD + """
+              - {name: a, priority: 1, violation_reference: true, conditions: [all],
+                 radial_m: 1500}
+            """, 6, "radial_m", "1500 m is outside the plausible range 0 to 200 m"),
+        error("voltage in volts", HEAD + """
+              - {name: a, priority: 1, violation_reference: true, conditions: [all],
+                 radial_m: 2, voltage: {min_kv: 0, below_kv: 230000}}
+            """, 6, "below_kv", "230000 kV is outside"),
+        // issue 10 item 13: a user profile could take a built-in profile's name
+        error("user profile with a built-in name", HEAD.replace("name: t",
+            "name: us-fac003-mvcd") + """
+              - {name: a, priority: 1, violation_reference: true, conditions: [all], radial_m: 2}
+            """, 1, "name", "is the name of a built-in profile"),
         error("fall-in without conditions", HEAD + """
               - {name: a, priority: 1, violation_reference: true, conditions: [all], radial_m: 2}
             fall_in: {enabled: true, reach_allowance_m: 0.5}

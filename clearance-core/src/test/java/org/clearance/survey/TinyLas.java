@@ -28,6 +28,8 @@ final class TinyLas {
   private int vlrCount;
   private final ByteArrayOutputStream points = new ByteArrayOutputStream();
   private long pointRecords;
+  /** Bounding box as max x, min x, max y, min y, max z, min z; null: computed from the points. */
+  private double[] bounds;
 
   TinyLas minor(int m) {
     minor = m;
@@ -76,6 +78,12 @@ final class TinyLas {
 
   TinyLas offset(double x, double y, double z) {
     offset = new double[] {x, y, z};
+    return this;
+  }
+
+  /** Header bounds in the header's order: max x, min x, max y, min y, max z, min z. */
+  TinyLas bounds(double... maxMinXyz) {
+    bounds = maxMinXyz.clone();
     return this;
   }
 
@@ -155,6 +163,10 @@ final class TinyLas {
       b.putDouble(131 + 8 * i, scale[i]);
       b.putDouble(155 + 8 * i, offset[i]);
     }
+    double[] box = bounds != null ? bounds : pointBounds(rl);
+    for (int i = 0; i < 6; i++) {
+      b.putDouble(179 + 8 * i, box[i]);
+    }
     if (minor >= 4) {
       b.putLong(247, count64 >= 0 ? count64 : n);
     }
@@ -162,6 +174,20 @@ final class TinyLas {
     all.writeBytes(b.array());
     all.writeBytes(v);
     return all.toByteArray();
+  }
+
+  /** The box of the point records' coordinates (first 12 bytes of each), header order. */
+  private double[] pointBounds(int rl) {
+    double[] box = new double[6];
+    ByteBuffer p = ByteBuffer.wrap(points.toByteArray()).order(ByteOrder.LITTLE_ENDIAN);
+    for (int at = 0; rl >= 12 && at + 12 <= p.capacity(); at += rl) {
+      for (int a = 0; a < 3; a++) {
+        double v = p.getInt(at + 4 * a) * scale[a] + offset[a];
+        box[2 * a] = at == 0 ? v : Math.max(box[2 * a], v);
+        box[2 * a + 1] = at == 0 ? v : Math.min(box[2 * a + 1], v);
+      }
+    }
+    return box;
   }
 
   /** The whole file: header, VLRs, padding up to the point offset, points. */

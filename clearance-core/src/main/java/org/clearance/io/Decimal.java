@@ -1,4 +1,4 @@
-package org.clearance.line;
+package org.clearance.io;
 
 import java.util.regex.Pattern;
 
@@ -8,7 +8,7 @@ import java.util.regex.Pattern;
  * {@link Double#parseDouble} would also take but a user never means (hexadecimal, {@code NaN},
  * {@code Infinity}, a trailing {@code d} or {@code f}).
  */
-final class Decimal {
+public final class Decimal {
 
   private static final Pattern DECIMAL =
       Pattern.compile("[+-]?(\\d+\\.?\\d*|\\.\\d+)([eE][+-]?\\d+)?");
@@ -20,17 +20,17 @@ final class Decimal {
   private Decimal() {}
 
   /** True when the text (already trimmed) is a plain decimal number. */
-  static boolean isDecimal(String text) {
+  public static boolean isDecimal(String text) {
     return DECIMAL.matcher(text).matches();
   }
 
   /** True when the text (already trimmed) is a plain integer of at most nine digits. */
-  static boolean isInteger(String text) {
+  public static boolean isInteger(String text) {
     return INTEGER.matcher(text).matches();
   }
 
   /** True when the text looks like a number with a unit or other word after it. */
-  static boolean looksLikeNumberWithUnit(String text) {
+  public static boolean looksLikeNumberWithUnit(String text) {
     return NUMBER_WITH_UNIT.matcher(text).matches();
   }
 
@@ -40,7 +40,7 @@ final class Decimal {
    * @param text trimmed field text
    * @param unit the unit the value is expected in, for the message, e.g. {@code "metres"}
    */
-  static String problem(String text, String unit) {
+  public static String problem(String text, String unit) {
     if (text.isEmpty()) {
       return "no value; a number in " + unit + " is required";
     }
