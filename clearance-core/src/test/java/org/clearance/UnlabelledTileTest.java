@@ -213,7 +213,7 @@ class UnlabelledTileTest {
     return out;
   }
 
-  /** Column of a coordinate in sites.csv, named with the survey unit ({@code x_m}, {@code x_ft}). */
+  /** The sites.csv column of a coordinate, named with its unit ({@code x_m}, {@code x_ft}). */
   private static int coord(List<String> header, String axis) {
     for (int i = 0; i < header.size(); i++) {
       if (header.get(i).startsWith(axis + "_")) {
