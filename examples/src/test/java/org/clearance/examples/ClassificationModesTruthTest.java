@@ -213,7 +213,7 @@ class ClassificationModesTruthTest {
   }
 
   private static List<Site> sites(DemoRuns.Run run) throws IOException {
-    List<String> lines = Files.readAllLines(run.runDir().resolve("worklist.csv"),
+    List<String> lines = Files.readAllLines(run.runDir().resolve("sites.csv"),
         StandardCharsets.UTF_8);
     List<String> header = List.of(lines.get(0).split(",", -1));
     List<Site> out = new ArrayList<>();
@@ -222,10 +222,20 @@ class ClassificationModesTruthTest {
       String h = f[header.indexOf("veg_height_m")];
       out.add(new Site(f[header.indexOf("span_id")],
           Integer.parseInt(f[header.indexOf("priority")]), f[header.indexOf("zone")],
-          f[header.indexOf("condition")], Double.parseDouble(f[header.indexOf("x")]),
-          Double.parseDouble(f[header.indexOf("y")]), Double.parseDouble(f[header.indexOf("z")]),
+          f[header.indexOf("condition")], Double.parseDouble(f[coord(header, "x")]),
+          Double.parseDouble(f[coord(header, "y")]), Double.parseDouble(f[coord(header, "z")]),
           h.isEmpty() ? Double.NaN : Double.parseDouble(h)));
     }
     return out;
+  }
+
+  /** The sites.csv column of a coordinate, named with its unit ({@code x_m}, {@code x_ft}). */
+  private static int coord(List<String> header, String axis) {
+    for (int i = 0; i < header.size(); i++) {
+      if (header.get(i).startsWith(axis + "_")) {
+        return i;
+      }
+    }
+    throw new AssertionError("no " + axis + " column in " + header);
   }
 }

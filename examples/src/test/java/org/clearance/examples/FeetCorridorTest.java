@@ -144,7 +144,7 @@ class FeetCorridorTest {
 
   /** Work-list sites, positions in metres (file unit {@code unitM} m). */
   private static List<Site> sites(Path run, double unitM) throws IOException {
-    List<String> lines = Files.readAllLines(run.resolve("worklist.csv"), StandardCharsets.UTF_8);
+    List<String> lines = Files.readAllLines(run.resolve("sites.csv"), StandardCharsets.UTF_8);
     List<String> header = List.of(lines.get(0).split(",", -1));
     List<Site> out = new ArrayList<>();
     for (String line : lines.subList(1, lines.size())) {
@@ -152,10 +152,20 @@ class FeetCorridorTest {
       out.add(new Site(f[header.indexOf("span_id")] + "|" + f[header.indexOf("zone")] + "|"
           + f[header.indexOf("priority")],
           Double.parseDouble(f[header.indexOf("min_clearance_m")]),
-          unitM * Double.parseDouble(f[header.indexOf("x")]),
-          unitM * Double.parseDouble(f[header.indexOf("y")]),
-          unitM * Double.parseDouble(f[header.indexOf("z")])));
+          unitM * Double.parseDouble(f[coord(header, "x")]),
+          unitM * Double.parseDouble(f[coord(header, "y")]),
+          unitM * Double.parseDouble(f[coord(header, "z")])));
     }
     return out;
+  }
+
+  /** The sites.csv column of a coordinate, named with its unit ({@code x_m}, {@code x_ft}). */
+  private static int coord(List<String> header, String axis) {
+    for (int i = 0; i < header.size(); i++) {
+      if (header.get(i).startsWith(axis + "_")) {
+        return i;
+      }
+    }
+    throw new AssertionError("no " + axis + " column in " + header);
   }
 }
