@@ -23,9 +23,9 @@ class MessagesTest {
     assertEquals(2, r.exit());
     String[] lines = r.err().strip().split("\n");
     assertEquals(2, lines.length, r.err());
-    assertTrue(lines[0].startsWith("clearance: ") && lines[0].contains("--no-such-option"),
-        r.err());
-    assertEquals("Try 'clearance survey --help' for the options.", lines[1]);
+    assertTrue(lines[0].startsWith("clearance survey: ")
+        && lines[0].contains("unknown option --no-such-option"), r.err());
+    assertEquals("See: clearance survey --help", lines[1]);
     assertFalse(r.err().contains("Usage:"), r.err());
   }
 
