@@ -209,8 +209,11 @@ public final class ClearanceCheck {
     return outcome;
   }
 
-  /** Per span, the fitted conductors as the line conditions need them. */
-  static Map<String, List<SurveyedConductor>> surveyed(WireResult wires) {
+  /**
+   * Per span, the fitted conductors as the line conditions need them. Public for runs that fit
+   * the spans elsewhere (the Spark job), so both hand the conditions the same input.
+   */
+  public static Map<String, List<SurveyedConductor>> surveyed(WireResult wires) {
     Map<String, List<SurveyedConductor>> out = new LinkedHashMap<>();
     for (SpanWires sw : wires.spans()) {
       List<SurveyedConductor> list = new ArrayList<>();
@@ -223,7 +226,11 @@ public final class ClearanceCheck {
     return out;
   }
 
-  private static List<SpanModel> spanModels(SpanLayout layout,
+  /**
+   * The spans of the layout, in layout order, with their conductors in every condition (an empty
+   * list for a span without models) and the context the rules need.
+   */
+  public static List<SpanModel> spanModels(SpanLayout layout,
       Map<String, List<ConductorModel>> models) {
     List<SpanModel> out = new ArrayList<>();
     for (LineLayout line : layout.lines()) {

@@ -85,6 +85,47 @@ public final class WireFinder {
             k + 1 < ls.size() ? ls.get(k + 1) : null));
       }
     }
+    CandidateCollector all = collect(source, corridors, heights);
+    return new WireResult(used, processSpans(spans, specs, arms, all, heights), changes);
+  }
+
+  /**
+   * Finds the wires of one span from points of its neighbourhood: the span-level entry point
+   * that a distributed run calls once per span (docs/spark.md), with the same steps and the same
+   * code per span as {@link #find}. The layout is used as given: structure refinement pairs
+   * towers over a whole line and is done by {@link #find} only. The span's neighbours in the
+   * layout give the directions of its cross arms.
+   *
+   * @param source points of at least the span's corridor (others are ignored)
+   * @param layout the spans, with the line specifications
+   * @param spanId the span to fit
+   * @param heights heights above ground of survey points (a ground model)
+   * @throws IllegalArgumentException when the layout has no span {@code spanId}
+   */
+  public SpanWires findSpan(PointSource source, SpanLayout layout, String spanId,
+      HeightModel heights) {
+    Objects.requireNonNull(source, "source");
+    Objects.requireNonNull(heights, "heights");
+    for (LineLayout line : layout.lines()) {
+      List<Span> ls = line.spans();
+      for (int k = 0; k < ls.size(); k++) {
+        Span span = ls.get(k);
+        if (!span.id().equals(spanId)) {
+          continue;
+        }
+        ConductorEnds arm = arms(span, k > 0 ? ls.get(k - 1) : null,
+            k + 1 < ls.size() ? ls.get(k + 1) : null);
+        CandidateCollector all = collect(source,
+            List.of(corridor(span, line.spec(), heights)), heights);
+        return fitSpan(new SpanWireFinder(options), all, 0, span, line.spec(), arm, heights);
+      }
+    }
+    throw new IllegalArgumentException("no span " + spanId + " in the layout");
+  }
+
+  /** One streaming pass: the wire candidates of every corridor. */
+  private static CandidateCollector collect(PointSource source, List<SpanCorridor> corridors,
+      HeightModel heights) {
     CorridorIndex index = new CorridorIndex(corridors.stream().map(SpanCorridor::corners)
         .toList());
     List<CandidateCollector> collectors = Collections.synchronizedList(new ArrayList<>());
@@ -99,7 +140,16 @@ public final class WireFinder {
       all.absorb(collectors.get(k));
     }
     collectors.clear();
-    return new WireResult(used, processSpans(spans, specs, arms, all, heights), changes);
+    return all;
+  }
+
+  /** Fits the span whose candidates are corridor {@code idx} of {@code all}, then frees them. */
+  private static SpanWires fitSpan(SpanWireFinder finder, CandidateCollector all, int idx,
+      Span span, LineSpec spec, ConductorEnds arms, HeightModel heights) {
+    SpanWires w = finder.find(all.sorted(idx), all.seen(idx), span, spec,
+        groundAt(span.from(), heights), groundAt(span.to(), heights), arms);
+    all.release(idx);
+    return w;
   }
 
   /**
@@ -124,13 +174,8 @@ public final class WireFinder {
       List<Future<SpanWires>> futures = new ArrayList<>();
       for (int k = 0; k < spans.size(); k++) {
         int idx = k;
-        futures.add(pool.submit(() -> {
-          Span span = spans.get(idx);
-          SpanWires w = finder.find(all.sorted(idx), all.seen(idx), span, specs.get(idx),
-              groundAt(span.from(), heights), groundAt(span.to(), heights), arms.get(idx));
-          all.release(idx);
-          return w;
-        }));
+        futures.add(pool.submit(() -> fitSpan(finder, all, idx, spans.get(idx),
+            specs.get(idx), arms.get(idx), heights)));
       }
       List<SpanWires> out = new ArrayList<>();
       for (Future<SpanWires> f : futures) {
