@@ -10,7 +10,7 @@ import java.nio.file.attribute.PosixFileAttributeView;
 import java.nio.file.attribute.PosixFilePermissions;
 import java.util.Comparator;
 import java.util.stream.Stream;
-import org.clearance.report.RunRecord;
+import org.clearance.run.RunRecord;
 
 /**
  * A run folder is written in a staging folder beside it and published only when complete: a

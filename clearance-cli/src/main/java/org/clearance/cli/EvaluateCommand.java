@@ -10,17 +10,17 @@ import org.clearance.clearance.NearPointFile;
 import org.clearance.io.AtomicFiles;
 import org.clearance.report.ReportOptions;
 import org.clearance.report.ReportStage;
-import org.clearance.report.RunModel;
-import org.clearance.report.RunModelJson;
-import org.clearance.report.RunRecord;
-import org.clearance.report.RunRecordJson;
 import org.clearance.rules.RuleProfile;
 import org.clearance.rules.RuleProfiles;
+import org.clearance.run.RunModel;
+import org.clearance.run.RunModelJson;
+import org.clearance.run.RunRecord;
+import org.clearance.run.RunRecordJson;
 import org.clearance.survey.LinearUnit;
-import picocli.CommandLine;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
+import picocli.CommandLine;
 
 /**
  * {@code clearance evaluate RUN_DIR --rules PROFILE|FILE [--out NEW_DIR] [--units m|ft]}:

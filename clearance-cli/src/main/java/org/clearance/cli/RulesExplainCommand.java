@@ -5,14 +5,14 @@ import java.util.concurrent.Callable;
 import java.util.stream.Collectors;
 import org.clearance.InputException;
 import org.clearance.clearance.SpanContext;
-import org.clearance.report.RunModel;
-import org.clearance.report.RunModelJson;
-import org.clearance.report.SpanRecord;
 import org.clearance.rules.RuleExplainer;
 import org.clearance.rules.RuleProfiles;
-import picocli.CommandLine;
+import org.clearance.run.RunModel;
+import org.clearance.run.RunModelJson;
+import org.clearance.run.SpanRecord;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
+import picocli.CommandLine;
 
 /**
  * {@code clearance rules explain}: which zones and distances a profile applies to a span, and

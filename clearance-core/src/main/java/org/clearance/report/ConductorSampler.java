@@ -1,6 +1,7 @@
 package org.clearance.report;
 
 import org.clearance.line.SpanFrame;
+import org.clearance.run.CurveRecord;
 import org.clearance.wire.Catenary;
 
 /**

@@ -3,6 +3,9 @@ package org.clearance.report;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
+import org.clearance.assess.CutSite;
+import org.clearance.assess.RunAssessment;
+import org.clearance.assess.SpanResult;
 import org.clearance.clearance.SpanStatus;
 
 /**

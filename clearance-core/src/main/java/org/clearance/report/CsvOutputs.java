@@ -4,8 +4,12 @@ import java.io.IOException;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
+import org.clearance.assess.CutSite;
+import org.clearance.assess.RunAssessment;
+import org.clearance.assess.SpanResult;
 import org.clearance.clearance.ConditionMinimum;
 import org.clearance.io.AtomicFiles;
+import org.clearance.run.SpanRecord;
 import org.clearance.survey.SurveyUnits;
 
 /**

@@ -3,6 +3,8 @@ package org.clearance.report;
 import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import org.clearance.assess.CutSite;
+import org.clearance.assess.RunAssessment;
 import org.clearance.io.AtomicFiles;
 import org.clearance.io.JsonWriter;
 

@@ -11,6 +11,7 @@ import java.sql.Statement;
 import java.sql.Types;
 import java.util.ArrayList;
 import java.util.List;
+import org.clearance.assess.RunAssessment;
 import org.clearance.io.AtomicFiles;
 import org.clearance.survey.SurveyUnits;
 

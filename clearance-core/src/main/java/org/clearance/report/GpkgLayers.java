@@ -3,10 +3,16 @@ package org.clearance.report;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
+import org.clearance.assess.CutSite;
+import org.clearance.assess.RunAssessment;
+import org.clearance.assess.SpanResult;
 import org.clearance.clearance.ConditionMinimum;
 import org.clearance.report.GeoPackageWriter.Column;
 import org.clearance.report.GeoPackageWriter.Feature;
 import org.clearance.report.GeoPackageWriter.Layer;
+import org.clearance.run.ConductorRecord;
+import org.clearance.run.CurveRecord;
+import org.clearance.run.SpanRecord;
 import org.clearance.survey.LinearUnit;
 
 /**

@@ -7,12 +7,17 @@ import java.time.temporal.ChronoUnit;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
+import org.clearance.assess.CutSite;
+import org.clearance.assess.RunAssessment;
+import org.clearance.assess.RunAssessor;
+import org.clearance.assess.SpanResult;
 import org.clearance.clearance.ConditionMinimum;
 import org.clearance.clearance.SpanStatus;
 import org.clearance.io.AtomicFiles;
 import org.clearance.rules.RuleProfile;
 import org.clearance.rules.SpanRules;
 import org.clearance.rules.ZoneEvaluator;
+import org.clearance.run.SpanRecord;
 
 /**
  * Writes {@code report.html}: one self-contained page (inline CSS and SVG, no scripts, no

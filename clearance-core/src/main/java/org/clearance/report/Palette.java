@@ -1,5 +1,7 @@
 package org.clearance.report;
 
+import org.clearance.assess.CutSite;
+
 /**
  * Colours of the HTML report, chosen for this project: zones by priority on a violet-to-teal
  * ramp (darkest = most urgent), fall-in trees in bark brown, NOT ASSESSED in slate.

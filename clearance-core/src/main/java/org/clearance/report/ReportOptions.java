@@ -1,6 +1,7 @@
 package org.clearance.report;
 
 import java.util.Objects;
+import org.clearance.assess.AssessOptions;
 import org.clearance.survey.LinearUnit;
 
 /**
@@ -19,14 +20,14 @@ public record ReportOptions(
     LinearUnit outputUnit, double linkDistanceM, int consoleSpans, int drawnSpans,
     int drawnPointsPerSpan) {
 
-  /** Link distance of a site: about a crown radius (issue 5; common practice, no source). */
-  public static final double DEFAULT_LINK_M = 1.5;
+  /** Link distance of a site, m: {@link AssessOptions#DEFAULT_LINK_M}. */
+  public static final double DEFAULT_LINK_M = AssessOptions.DEFAULT_LINK_M;
   /** Console lines for spans: a screenful. */
   public static final int DEFAULT_CONSOLE_SPANS = 10;
-  /** Drawn spans: with the points below, keeps the report under about 5 MB on any network. */
-  public static final int DEFAULT_DRAWN_SPANS = 100;
-  /** Drawn points per span, view and kind (inside a zone, other): shows the vegetation's shape. */
-  public static final int DEFAULT_DRAWN_POINTS = 600;
+  /** Drawn spans: {@link AssessOptions#DEFAULT_DRAWN_SPANS}. */
+  public static final int DEFAULT_DRAWN_SPANS = AssessOptions.DEFAULT_DRAWN_SPANS;
+  /** Drawn points per span, view and kind: {@link AssessOptions#DEFAULT_DRAWN_POINTS}. */
+  public static final int DEFAULT_DRAWN_POINTS = AssessOptions.DEFAULT_DRAWN_POINTS;
 
   public ReportOptions {
     Objects.requireNonNull(outputUnit, "outputUnit");
@@ -45,6 +46,11 @@ public record ReportOptions(
   public static ReportOptions defaults() {
     return new ReportOptions(LinearUnit.METRE, DEFAULT_LINK_M, DEFAULT_CONSOLE_SPANS,
         DEFAULT_DRAWN_SPANS, DEFAULT_DRAWN_POINTS);
+  }
+
+  /** The options of the assessment stage. */
+  public AssessOptions assessOptions() {
+    return new AssessOptions(linkDistanceM, drawnSpans, drawnPointsPerSpan);
   }
 
   /** The same options with another output unit. */

@@ -6,8 +6,12 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Objects;
+import org.clearance.assess.RunAssessment;
+import org.clearance.assess.RunAssessor;
 import org.clearance.clearance.NearPointFile;
 import org.clearance.rules.RuleProfile;
+import org.clearance.run.RunModel;
+import org.clearance.run.RunRecord;
 
 /**
  * The report stage of a run folder: evaluates the stored distances under a rule profile
@@ -67,7 +71,8 @@ public final class ReportStage {
    */
   public static RunAssessment assess(Path runDir, RunModel model, RuleProfile profile,
       ReportOptions options) throws IOException {
-    return RunAssessor.assess(model, runDir.resolve(NearPointFile.FILE_NAME), profile, options);
+    return RunAssessor.assess(model, runDir.resolve(NearPointFile.FILE_NAME), profile,
+        options.assessOptions());
   }
 
   /**

@@ -5,11 +5,19 @@ import java.util.List;
 import java.util.Map;
 import java.util.Optional;
 import java.util.TreeMap;
+import org.clearance.assess.CutSite;
+import org.clearance.assess.RunAssessor;
+import org.clearance.assess.SpanPoints;
+import org.clearance.assess.SpanResult;
 import org.clearance.clearance.ConditionMinimum;
 import org.clearance.line.SpanFrame;
 import org.clearance.rules.Requirement;
 import org.clearance.rules.ResolvedZone;
 import org.clearance.rules.SpanRules;
+import org.clearance.run.ConductorRecord;
+import org.clearance.run.CurveRecord;
+import org.clearance.run.RunModel;
+import org.clearance.run.StructureRecord;
 
 /**
  * The two drawings of a span in the HTML report, as inline SVG: a plan view in the span's own

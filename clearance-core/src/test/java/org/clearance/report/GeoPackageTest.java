@@ -20,6 +20,7 @@ import java.util.OptionalInt;
 import java.util.TreeMap;
 import java.util.concurrent.TimeUnit;
 import org.clearance.rules.RuleProfiles;
+import org.clearance.run.RunFixture;
 import org.clearance.survey.LinearUnit;
 import org.clearance.survey.SurveyUnits;
 import org.junit.jupiter.api.Assumptions;

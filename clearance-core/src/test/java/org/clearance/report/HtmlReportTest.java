@@ -12,7 +12,10 @@ import java.util.List;
 import java.util.concurrent.TimeUnit;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
+import org.clearance.assess.RunAssessment;
+import org.clearance.assess.RunAssessor;
 import org.clearance.rules.RuleProfiles;
+import org.clearance.run.RunFixture;
 import org.junit.jupiter.api.Assumptions;
 import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
@@ -61,7 +64,7 @@ class HtmlReportTest {
     ReportOptions none = new ReportOptions(org.clearance.survey.LinearUnit.METRE, 1.5, 10, 0,
         600);
     RunAssessment a = RunAssessor.assess(f.model(), dir.resolve("near-points.bin"),
-        RuleProfiles.builtin("example-utility"), none);
+        RuleProfiles.builtin("example-utility"), none.assessOptions());
     String page = HtmlReport.page(a, none, java.time.Instant.EPOCH);
     assertEquals(0, count(page, "<svg "));
     assertTrue(page.contains("Only the first 0 spans with findings are drawn"));

@@ -16,7 +16,7 @@ import org.clearance.clearance.ConditionMinimum;
 import org.clearance.clearance.NearPointFile;
 import org.clearance.clearance.NearPointReader;
 import org.clearance.clearance.SpanStatus;
-import org.clearance.report.SpanRecord;
+import org.clearance.run.SpanRecord;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.Arguments;

@@ -13,8 +13,8 @@ import java.util.Optional;
 import org.clearance.CheckInputs;
 import org.clearance.CheckOptions;
 import org.clearance.ClearanceCheck;
-import org.clearance.report.RunModel;
-import org.clearance.report.RunModelJson;
+import org.clearance.run.RunModel;
+import org.clearance.run.RunModelJson;
 import org.clearance.survey.UnitsChoice;
 
 /**

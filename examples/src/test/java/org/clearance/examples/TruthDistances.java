@@ -19,8 +19,8 @@ import org.clearance.line.LineSpecReader;
 import org.clearance.line.SpanFrame;
 import org.clearance.line.SpanLayout;
 import org.clearance.line.StructureReader;
-import org.clearance.report.ConductorRecord;
-import org.clearance.report.SpanRecord;
+import org.clearance.run.ConductorRecord;
+import org.clearance.run.SpanRecord;
 import org.clearance.sag.ConditionSolver;
 
 /**

@@ -15,12 +15,12 @@ import org.clearance.clearance.NearPointFile;
 import org.clearance.clearance.NearPointReader;
 import org.clearance.clearance.PointClearance;
 import org.clearance.clearance.SpanStatus;
-import org.clearance.report.SpanRecord;
 import org.clearance.rules.PointFinding;
 import org.clearance.rules.RuleProfiles;
 import org.clearance.rules.SpanRules;
 import org.clearance.rules.ZoneEvaluator;
 import org.clearance.rules.ZoneViolation;
+import org.clearance.run.SpanRecord;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.ValueSource;
 

@@ -1,4 +1,4 @@
-package org.clearance.report;
+package org.clearance.assess;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
@@ -14,6 +14,7 @@ import org.clearance.clearance.NearPointFile;
 import org.clearance.clearance.NearPointWriter;
 import org.clearance.clearance.PointClearance;
 import org.clearance.clearance.SpanStatus;
+import org.clearance.run.RunFixture;
 import org.clearance.rules.RuleProfile;
 import org.clearance.rules.RuleProfileReader;
 import org.junit.jupiter.api.Test;
@@ -36,7 +37,7 @@ class SpanStatusTest {
   private RunAssessment assess(RunFixture f, RuleProfile p) throws IOException {
     f.write(dir);
     return RunAssessor.assess(f.model(), dir.resolve(NearPointFile.FILE_NAME), p,
-        ReportOptions.defaults());
+        AssessOptions.defaults());
   }
 
   private static SpanResult span(RunAssessment a, String id) {
@@ -117,7 +118,7 @@ class SpanStatusTest {
       w.write(List.of());
     }
     InputException e = assertThrows(InputException.class, () -> RunAssessor.assess(f.model(),
-        other, profile("zones:", REF), ReportOptions.defaults()));
+        other, profile("zones:", REF), AssessOptions.defaults()));
     assertTrue(e.getMessage().contains("different runs"), e.getMessage());
   }
 }

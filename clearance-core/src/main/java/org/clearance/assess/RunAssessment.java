@@ -1,10 +1,11 @@
-package org.clearance.report;
+package org.clearance.assess;
 
 import java.util.List;
 import java.util.Map;
 import java.util.Objects;
 import java.util.Optional;
 import org.clearance.rules.RuleProfile;
+import org.clearance.run.RunModel;
 
 /**
  * A run evaluated under a rule profile: every span's outcome in ranking order, and the point

@@ -1,4 +1,4 @@
-package org.clearance.report;
+package org.clearance.assess;
 
 import org.clearance.clearance.ConditionDistance;
 import org.clearance.clearance.PointClearance;

@@ -1,4 +1,4 @@
-package org.clearance.report;
+package org.clearance.assess;
 
 import java.io.IOException;
 import java.nio.file.Path;
@@ -25,6 +25,10 @@ import org.clearance.rules.RuleProfile;
 import org.clearance.rules.SpanRules;
 import org.clearance.rules.ZoneEvaluator;
 import org.clearance.rules.ZoneGap;
+import org.clearance.run.RunModel;
+import org.clearance.run.SpanRecord;
+import org.clearance.run.StructureRecord;
+import org.clearance.run.TreeRecord;
 
 /**
  * Evaluates a finished run under a rule profile: streams {@code near-points.bin} once, checks
@@ -37,20 +41,20 @@ import org.clearance.rules.ZoneGap;
 public final class RunAssessor {
 
   private final RuleProfile profile;
-  private final ReportOptions options;
+  private final AssessOptions options;
 
   /**
    * @param profile the profile to apply, or null for none
-   * @param options report options
+   * @param options assessment options
    */
-  public RunAssessor(RuleProfile profile, ReportOptions options) {
+  public RunAssessor(RuleProfile profile, AssessOptions options) {
     this.profile = profile;
     this.options = options;
   }
 
   /** Shortcut: {@code new RunAssessor(profile, options).assess(model, nearPoints)}. */
   public static RunAssessment assess(RunModel model, Path nearPoints, RuleProfile profile,
-      ReportOptions options) throws IOException {
+      AssessOptions options) throws IOException {
     return new RunAssessor(profile, options).assess(model, nearPoints);
   }
 
@@ -143,7 +147,7 @@ public final class RunAssessor {
   }
 
   /** Site order within a span: priority, then deficit (largest first), then chainage. */
-  static final Comparator<CutSite> SITE_ORDER = Comparator.comparingInt(CutSite::priority)
+  public static final Comparator<CutSite> SITE_ORDER = Comparator.comparingInt(CutSite::priority)
       .thenComparingDouble(s -> -s.deficitM())
       .thenComparingDouble(CutSite::chainageM);
 
@@ -283,7 +287,7 @@ public final class RunAssessor {
   }
 
   /** The span's plan frame from its first structure to its second, or null. */
-  static SpanFrame frameOf(SpanRecord span) {
+  public static SpanFrame frameOf(SpanRecord span) {
     StructureRecord a = span.from();
     StructureRecord b = span.to();
     if (!(Double.isFinite(a.x()) && Double.isFinite(a.y()) && Double.isFinite(b.x())

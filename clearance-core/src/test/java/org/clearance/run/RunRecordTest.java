@@ -1,4 +1,4 @@
-package org.clearance.report;
+package org.clearance.run;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;

@@ -1,4 +1,4 @@
-package org.clearance.report;
+package org.clearance.run;
 
 import java.io.IOException;
 import java.nio.charset.StandardCharsets;

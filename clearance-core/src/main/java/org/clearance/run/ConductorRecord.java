@@ -1,4 +1,4 @@
-package org.clearance.report;
+package org.clearance.run;
 
 import java.util.List;
 import java.util.Objects;

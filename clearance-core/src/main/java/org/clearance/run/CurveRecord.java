@@ -1,4 +1,4 @@
-package org.clearance.report;
+package org.clearance.run;
 
 import org.clearance.clearance.ConductorState;
 import org.clearance.line.SpanFrame;

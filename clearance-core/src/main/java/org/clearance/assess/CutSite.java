@@ -1,4 +1,4 @@
-package org.clearance.report;
+package org.clearance.assess;
 
 import java.util.Objects;
 import java.util.OptionalInt;

@@ -1,4 +1,4 @@
-package org.clearance.report;
+package org.clearance.assess;
 
 import java.util.ArrayList;
 import java.util.List;
@@ -8,6 +8,7 @@ import org.clearance.clearance.ConditionSet;
 import org.clearance.line.SpanFrame;
 import org.clearance.rules.FallInFinding;
 import org.clearance.rules.SpanRules;
+import org.clearance.run.TreeRecord;
 
 /**
  * Fall-in sites: the trees near a span that the profile's fall-in rule says can strike it

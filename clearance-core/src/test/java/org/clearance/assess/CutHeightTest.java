@@ -1,4 +1,4 @@
-package org.clearance.report;
+package org.clearance.assess;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 

@@ -1,4 +1,4 @@
-package org.clearance.report;
+package org.clearance.run;
 
 /**
  * A structure at a span end as stored in the run model.

@@ -1,4 +1,4 @@
-package org.clearance.report;
+package org.clearance.assess;
 
 import java.util.List;
 import java.util.Objects;
@@ -6,6 +6,8 @@ import java.util.Optional;
 import java.util.OptionalInt;
 import org.clearance.clearance.ConditionMinimum;
 import org.clearance.clearance.SpanStatus;
+import org.clearance.run.ConductorRecord;
+import org.clearance.run.SpanRecord;
 
 /**
  * The outcome of one span under a rule profile.

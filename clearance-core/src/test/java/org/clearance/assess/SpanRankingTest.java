@@ -1,4 +1,4 @@
-package org.clearance.report;
+package org.clearance.assess;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 
@@ -7,6 +7,8 @@ import java.util.List;
 import java.util.OptionalInt;
 import org.clearance.clearance.SpanContext;
 import org.clearance.clearance.SpanStatus;
+import org.clearance.run.SpanRecord;
+import org.clearance.run.StructureRecord;
 import org.junit.jupiter.api.Test;
 
 /** Ranking order: NOT ASSESSED first, then priority, deficit, number of sites. */

@@ -1,4 +1,4 @@
-package org.clearance.report;
+package org.clearance.run;
 
 import java.io.IOException;
 import java.nio.file.Path;
@@ -40,22 +40,22 @@ public final class RunFixture {
   static final double C_SURVEY = 1000;
   static final double C_HOT = 700;
   static final double SWING = 0.6;
-  static final double ATTACH_Z = 120;
-  static final double GROUND = 100;
-  static final double KV = 115;
-  static final double[] PHASE_OFFSETS = {-4, 0, 4};
-  static final List<String> PHASES = List.of("B1", "B2", "B3");
+  public static final double ATTACH_Z = 120;
+  public static final double GROUND = 100;
+  public static final double KV = 115;
+  public static final double[] PHASE_OFFSETS = {-4, 0, 4};
+  public static final List<String> PHASES = List.of("B1", "B2", "B3");
 
   /** Tree T1: 18 m tall, base at station 150 of KV-10-11, 14 m left. */
-  static final double TREE_STATION = 150;
-  static final double TREE_OFFSET = 14;
-  static final double TREE_HEIGHT = 18;
+  public static final double TREE_STATION = 150;
+  public static final double TREE_OFFSET = 14;
+  public static final double TREE_HEIGHT = 18;
 
   final double x0;
   final double y0;
   final SurveyUnits units;
-  final List<SpanRecord> spans = new ArrayList<>();
-  final List<PointClearance> points = new ArrayList<>();
+  public final List<SpanRecord> spans = new ArrayList<>();
+  public final List<PointClearance> points = new ArrayList<>();
   final List<TreeRecord> trees = new ArrayList<>();
 
   /** The standard run at an origin (metres) in a CRS. */
