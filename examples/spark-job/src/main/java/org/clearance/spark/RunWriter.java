@@ -22,13 +22,13 @@ import org.clearance.ground.GroundSource;
 import org.clearance.line.LineLayout;
 import org.clearance.report.ReportOptions;
 import org.clearance.report.ReportStage;
-import org.clearance.report.RunModel;
-import org.clearance.report.RunModelJson;
-import org.clearance.report.RunRecord;
-import org.clearance.report.RunRecordJson;
-import org.clearance.report.SpanRecord;
-import org.clearance.report.TreeRecord;
 import org.clearance.rules.RuleProfile;
+import org.clearance.run.RunModel;
+import org.clearance.run.RunModelJson;
+import org.clearance.run.RunRecord;
+import org.clearance.run.RunRecordJson;
+import org.clearance.run.SpanRecord;
+import org.clearance.run.TreeRecord;
 import org.clearance.wire.ConductorTable;
 
 /**

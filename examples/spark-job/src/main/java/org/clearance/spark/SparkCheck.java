@@ -17,9 +17,9 @@ import org.clearance.RunFolder;
 import org.clearance.line.LineLayout;
 import org.clearance.report.ReportOptions;
 import org.clearance.report.ReportStage;
-import org.clearance.report.RunRecord;
 import org.clearance.rules.RuleProfile;
 import org.clearance.rules.RuleProfiles;
+import org.clearance.run.RunRecord;
 import scala.Tuple2;
 
 /**

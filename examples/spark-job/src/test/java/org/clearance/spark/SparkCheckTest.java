@@ -104,7 +104,7 @@ class SparkCheckTest {
     assertEquals(1, o.key());
     Path json = dir.resolve("failed-span.json");
     Files.writeString(json, o.modelJson());
-    var span = org.clearance.report.RunModelJson.read(json).spans().get(0);
+    var span = org.clearance.run.RunModelJson.read(json).spans().get(0);
     assertEquals(org.clearance.clearance.SpanStatus.NOT_ASSESSED, span.status());
     assertTrue(span.reason().contains("piece 3 of tile 7 is gone"), span.reason());
     assertTrue(o.failure().contains("piece 3 of tile 7 is gone"), o.failure());
