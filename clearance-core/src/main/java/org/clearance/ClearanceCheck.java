@@ -184,7 +184,8 @@ public final class ClearanceCheck {
     stop("clearance");
 
     RunModel model = RunModels.of(toolVersion, survey.units(), conditions, options, vegetation,
-        scan.ground, wires, spanModels, measured);
+        scan.ground, wires, spanModels, measured)
+        .withFacts(RunModels.facts(specs, record, survey, scan.gpsMin, scan.gpsMax));
     RunModelJson.write(model, dir.resolve(RunModel.FILE_NAME));
     RunAssessment assessed = ReportStage.assess(dir, model, profile, options.report());
     stop("rules");
@@ -244,27 +245,43 @@ public final class ClearanceCheck {
   }
 
   /** What the first pass over the survey collects. */
-  private record SurveyScan(GroundModel ground, long[] classCounts) {}
+  private record SurveyScan(GroundModel ground, long[] classCounts, double gpsMin,
+      double gpsMax) {}
 
   private SurveyScan scan(Survey survey, Progress progress) {
     List<GroundModelBuilder> builders = new ArrayList<>();
     List<long[]> counts = new ArrayList<>();
+    List<double[]> times = new ArrayList<>();
     survey.readParallel(options.threads(), progress.wrap("ground", () -> {
       GroundModelBuilder b = new GroundModelBuilder(options.ground());
       long[] c = new long[256];
+      double[] t = {Double.NaN, Double.NaN};
       builders.add(b);
       counts.add(c);
+      times.add(t);
       Consumer<PointChunk> worker = chunk -> {
         b.accept(chunk);
         short[] cls = chunk.classification();
+        double[] gps = chunk.gpsTime();
         for (int i = 0; i < chunk.size(); i++) {
           c[cls[i] & 0xFF]++;
+          double g = gps[i];
+          if (!Double.isNaN(g)) {
+            t[0] = Double.isNaN(t[0]) ? g : Math.min(t[0], g);
+            t[1] = Double.isNaN(t[1]) ? g : Math.max(t[1], g);
+          }
         }
       };
       return worker;
     }));
     GroundModelBuilder first = builders.get(0);
     long[] total = new long[256];
+    double gpsMin = Double.NaN;
+    double gpsMax = Double.NaN;
+    for (double[] t : times) {
+      gpsMin = Double.isNaN(gpsMin) ? t[0] : Double.isNaN(t[0]) ? gpsMin : Math.min(gpsMin, t[0]);
+      gpsMax = Double.isNaN(gpsMax) ? t[1] : Double.isNaN(t[1]) ? gpsMax : Math.max(gpsMax, t[1]);
+    }
     for (int i = 0; i < builders.size(); i++) {
       if (i > 0) {
         first.absorb(builders.get(i));
@@ -273,7 +290,7 @@ public final class ClearanceCheck {
         total[c] += counts.get(i)[c];
       }
     }
-    return new SurveyScan(first.build(), total);
+    return new SurveyScan(first.build(), total, gpsMin, gpsMax);
   }
 
   private void start() {

@@ -1,5 +1,6 @@
 package org.clearance;
 
+import java.time.LocalDate;
 import java.util.ArrayList;
 import java.util.HashMap;
 import java.util.List;
@@ -17,14 +18,20 @@ import org.clearance.clearance.SpanStatus;
 import org.clearance.clearance.TreeClearance;
 import org.clearance.clearance.VegetationSelector;
 import org.clearance.ground.GroundModel;
+import org.clearance.line.LineSpec;
 import org.clearance.line.Span;
 import org.clearance.line.Structure;
 import org.clearance.run.ConductorRecord;
 import org.clearance.run.CurveRecord;
+import org.clearance.run.LineFacts;
+import org.clearance.run.RunFacts;
 import org.clearance.run.RunModel;
+import org.clearance.run.RunRecord;
 import org.clearance.run.SpanRecord;
 import org.clearance.run.StructureRecord;
 import org.clearance.run.TreeRecord;
+import org.clearance.survey.GpsTime;
+import org.clearance.survey.Survey;
 import org.clearance.survey.SurveyUnits;
 import org.clearance.wire.FittedConductor;
 import org.clearance.wire.SpanWires;
@@ -38,6 +45,32 @@ import org.clearance.wire.WireResult;
 public final class RunModels {
 
   private RunModels() {}
+
+  /**
+   * The header facts of a check: the lines as specified, the input files hashed so far, the
+   * survey's acquisition days when every file stores adjusted standard GPS time, and the run day.
+   *
+   * @param gpsMin earliest GPS time of the survey, s, or NaN
+   * @param gpsMax latest GPS time, s, or NaN
+   */
+  public static RunFacts facts(List<LineSpec> specs, RunRecord.Builder record, Survey survey,
+      double gpsMin, double gpsMax) {
+    List<LineFacts> lines = specs.stream().map(LineFacts::of).toList();
+    Optional<LocalDate> first = Optional.empty();
+    Optional<LocalDate> last = Optional.empty();
+    String note;
+    if (Double.isNaN(gpsMin)) {
+      note = "not known: the point format carries no GPS time";
+    } else if (survey.files().stream().allMatch(f -> f.header().adjustedGpsTime())) {
+      first = GpsTime.utcDayOfAdjusted(gpsMin);
+      last = GpsTime.utcDayOfAdjusted(gpsMax);
+      note = "UTC days of the earliest and latest point, from adjusted standard GPS time";
+    } else {
+      note = "not known: the files store GPS week seconds, which do not name the week";
+    }
+    return new RunFacts(lines, record.inputs(), first, last, note,
+        Optional.of(RunFacts.runDay(record.started())));
+  }
 
   /**
    * The run model.

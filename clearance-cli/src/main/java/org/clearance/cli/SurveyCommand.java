@@ -107,7 +107,14 @@ public final class SurveyCommand implements Callable<Integer> {
     if (Double.isNaN(s.gpsTimeMin())) {
       line(b, "GPS time: not recorded by these point formats");
     } else {
-      line(b, "GPS time: %s .. %s s", fixed(s.gpsTimeMin(), 6), fixed(s.gpsTimeMax(), 6));
+      var days = s.acquisitionDays();
+      if (days.isPresent()) {
+        line(b, "acquired: %s .. %s (UTC, from adjusted standard GPS time %s .. %s s)",
+            days.get()[0], days.get()[1], fixed(s.gpsTimeMin(), 3), fixed(s.gpsTimeMax(), 3));
+      } else {
+        line(b, "acquired: date not known: the files store GPS week seconds (%s .. %s s) "
+            + "without the week", fixed(s.gpsTimeMin(), 3), fixed(s.gpsTimeMax(), 3));
+      }
     }
     if (s.occupiedCells().isPresent()) {
       line(b, "density: %s points per square metre over %d occupied %s m cells (%s ha)",
@@ -196,7 +203,10 @@ public final class SurveyCommand implements Callable<Integer> {
     field(b, "crs_name", s.crsName().isEmpty() ? "null" : str(s.crsName()));
     field(b, "epsg", s.epsg().isPresent() ? Integer.toString(s.epsg().getAsInt()) : "null");
     field(b, "gps_time", Double.isNaN(s.gpsTimeMin()) ? "null"
-        : "{\"min\": " + num(s.gpsTimeMin()) + ", \"max\": " + num(s.gpsTimeMax()) + "}");
+        : "{\"min\": " + num(s.gpsTimeMin()) + ", \"max\": " + num(s.gpsTimeMax())
+            + ", \"adjusted_standard\": " + s.acquisitionDays().isPresent()
+            + s.acquisitionDays().map(d -> ", \"first_day_utc\": \"" + d[0]
+                + "\", \"last_day_utc\": \"" + d[1] + "\"").orElse("") + "}");
     field(b, "withheld_count", Long.toString(s.withheldCount()));
     b.append("  \"density\": {\"cell_size_m\": ").append(num(s.cellSize()))
         .append(", \"occupied_cells\": ").append(s.occupiedCells().isPresent()

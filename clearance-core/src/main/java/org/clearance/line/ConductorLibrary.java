@@ -20,7 +20,7 @@ import org.clearance.InputException;
 
 /**
  * The conductor types a line specification may name: the built-in library
- * ({@code span-specs/conductors/acsr.csv}) plus any user files. Immutable; lookup by code is
+ * ({@code span-specs/conductors/acsr.csv} and {@code distribution.csv}) plus any user files. Immutable; lookup by code is
  * case-insensitive. The CSV columns are described in the built-in file's header comments and in
  * docs/line-inputs.md.
  */
@@ -28,6 +28,9 @@ public final class ConductorLibrary {
 
   /** Classpath resource of the built-in library. */
   public static final String BUILTIN_RESOURCE = "/span-specs/conductors/acsr.csv";
+  /** Classpath resource of the built-in distribution sizes, loaded after {@link
+   * #BUILTIN_RESOURCE}; a code in both is a packaging fault. */
+  public static final String DISTRIBUTION_RESOURCE = "/span-specs/conductors/distribution.csv";
 
   /** Largest plausible expansion, 1/degC: metals are below 3e-5; above is a unit slip. */
   private static final double MAX_EXPANSION_PER_C = 1e-4;
@@ -66,12 +69,25 @@ public final class ConductorLibrary {
    * @throws IllegalStateException when the resource is missing or broken (a packaging fault)
    */
   public static ConductorLibrary builtin() {
-    try (InputStream in = ConductorLibrary.class.getResourceAsStream(BUILTIN_RESOURCE)) {
+    Map<String, ConductorType> all = new LinkedHashMap<>();
+    for (String resource : List.of(BUILTIN_RESOURCE, DISTRIBUTION_RESOURCE)) {
+      for (Map.Entry<String, ConductorType> e : resource(resource).entrySet()) {
+        if (all.put(e.getKey(), e.getValue()) != null) {
+          throw new IllegalStateException("built-in conductor code " + e.getValue().code()
+              + " appears in two files, the second " + resource);
+        }
+      }
+    }
+    return new ConductorLibrary(all, List.of());
+  }
+
+  private static Map<String, ConductorType> resource(String name) {
+    try (InputStream in = ConductorLibrary.class.getResourceAsStream(name)) {
       if (in == null) {
-        throw new IllegalStateException("built-in conductor library missing: " + BUILTIN_RESOURCE);
+        throw new IllegalStateException("built-in conductor library missing: " + name);
       }
       BufferedReader r = new BufferedReader(new InputStreamReader(in, StandardCharsets.UTF_8));
-      return new ConductorLibrary(parse(r, "built-in " + BUILTIN_RESOURCE), List.of());
+      return parse(r, "built-in " + name);
     } catch (IOException e) {
       throw new UncheckedIOException(e);
     } catch (InputException e) {

@@ -8,7 +8,7 @@ import java.util.Objects;
  *
  * @param position unique position name within the line, e.g. {@code A} or {@code SW1}; matches
  *     {@code attach_z_<position>} in the structures file
- * @param role phase conductor or shield (earth) wire
+ * @param role phase conductor, shield (earth) wire, or neutral / secondary conductor
  * @param circuit circuit number, &ge; 1 (1 when not given)
  * @param conductor the conductor type hung at this position
  * @param offsetM nominal horizontal offset of the attachment from the structure centre line, m,
@@ -38,7 +38,12 @@ public record ConductorPosition(
     /** A phase conductor (ASPRS LAS class 14, wire - conductor). */
     PHASE,
     /** A shield (guard, earth) wire (ASPRS LAS class 13, wire - guard). */
-    SHIELD
+    SHIELD,
+    /**
+     * A neutral or secondary (low-voltage) conductor of a distribution line, hung below the
+     * primaries and not energised at the line's voltage (ASPRS LAS class 14, wire - conductor).
+     */
+    NEUTRAL
   }
 
   public ConductorPosition {

@@ -14,6 +14,8 @@ import java.util.Optional;
  * @param altitudeM line altitude above sea level, m (0 when not given)
  * @param surveyConductorTemperatureC conductor temperature during the survey, degC, or NaN when
  *     not given (then no condition needs a change of state)
+ * @param rowHalfWidthM half width of the right-of-way either side of the centre line
+ *     (structure to structure), m, or NaN when not given
  * @param conductors conductor positions, at least one phase, unique names (unmodifiable)
  * @param conditions line conditions to check, unique names, possibly empty (unmodifiable)
  * @param sourceFile the specification file, for messages
@@ -24,6 +26,7 @@ public record LineSpec(
     double nominalVoltageKv,
     double altitudeM,
     double surveyConductorTemperatureC,
+    double rowHalfWidthM,
     List<ConductorPosition> conductors,
     List<LineCondition> conditions,
     String sourceFile) {
@@ -37,6 +40,14 @@ public record LineSpec(
     }
     conductors = List.copyOf(conductors);
     conditions = List.copyOf(conditions);
+  }
+
+  /** A specification without a right-of-way width. */
+  public LineSpec(String lineId, String name, double nominalVoltageKv, double altitudeM,
+      double surveyConductorTemperatureC, List<ConductorPosition> conductors,
+      List<LineCondition> conditions, String sourceFile) {
+    this(lineId, name, nominalVoltageKv, altitudeM, surveyConductorTemperatureC, Double.NaN,
+        conductors, conditions, sourceFile);
   }
 
   /** The conductor position with this name (exact match), if any. */

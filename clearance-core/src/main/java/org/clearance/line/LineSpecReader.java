@@ -37,11 +37,16 @@ public final class LineSpecReader {
   /** Longest strain assembly accepted, m: EHV dead-end assemblies run to about 10 m (common
    * practice, no source); anything longer is a typo. */
   private static final double MAX_STRAIN_LENGTH_M = 15;
+  /** Right-of-way half widths accepted, m: from a narrow feeder easement to the widest EHV
+   * corridors, rounded out (common practice, no source). */
+  private static final double MIN_ROW_HALF_WIDTH_M = 0.5;
+  private static final double MAX_ROW_HALF_WIDTH_M = 200;
   /** Position names appear in structure column names ({@code attach_z_<position>}). */
   private static final Pattern POSITION_NAME = Pattern.compile("[A-Za-z0-9_.-]+");
 
   private static final List<String> TOP_KEYS = List.of("line_id", "name", "nominal_voltage_kv",
-      "altitude_m", "survey_conductor_temperature_c", "conductors", "conditions");
+      "altitude_m", "survey_conductor_temperature_c", "row_half_width_m", "conductors",
+      "conditions");
   private static final List<String> POSITION_KEYS = List.of("position", "role", "circuit",
       "conductor", "offset_m", "attach_height_m", "bundle", "bundle_spacing_m",
       "insulator_length_m", "strain_length_m");
@@ -74,6 +79,10 @@ public final class LineSpecReader {
       checkRange(top, "survey_conductor_temperature_c", surveyT, MIN_TEMPERATURE_C,
           MAX_TEMPERATURE_C);
     }
+    double rowHalf = top.number("row_half_width_m", Double.NaN);
+    if (!Double.isNaN(rowHalf)) {
+      checkRange(top, "row_half_width_m", rowHalf, MIN_ROW_HALF_WIDTH_M, MAX_ROW_HALF_WIDTH_M);
+    }
     List<ConductorPosition> positions = positions(top, name, library);
     List<LineCondition> conditions = new ArrayList<>();
     Map<String, Integer> conditionLines = new HashMap<>();
@@ -93,7 +102,7 @@ public final class LineSpecReader {
       }
       conditions.add(c);
     }
-    return new LineSpec(lineId, top.text("name", ""), kv, altitude, surveyT, positions,
+    return new LineSpec(lineId, top.text("name", ""), kv, altitude, surveyT, rowHalf, positions,
         conditions, name);
   }
 
@@ -155,8 +164,12 @@ public final class LineSpecReader {
       case "shield":
         role = Role.SHIELD;
         break;
+      case "neutral":
+        role = Role.NEUTRAL;
+        break;
       default:
-        throw m.error("role", "'" + m.text("role") + "' is not a role; use phase or shield");
+        throw m.error("role", "'" + m.text("role")
+            + "' is not a role; use phase, shield or neutral");
     }
     int circuit = m.integer("circuit", 1);
     if (circuit < 1) {

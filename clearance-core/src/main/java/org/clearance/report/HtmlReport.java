@@ -3,7 +3,6 @@ package org.clearance.report;
 import java.io.IOException;
 import java.nio.file.Path;
 import java.time.Instant;
-import java.time.temporal.ChronoUnit;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
@@ -14,7 +13,6 @@ import org.clearance.assess.SpanResult;
 import org.clearance.clearance.ConditionMinimum;
 import org.clearance.clearance.SpanStatus;
 import org.clearance.io.AtomicFiles;
-import org.clearance.rules.RuleProfile;
 import org.clearance.rules.SpanRules;
 import org.clearance.rules.ZoneEvaluator;
 import org.clearance.run.SpanRecord;
@@ -41,13 +39,18 @@ public final class HtmlReport {
   /** The page's text. */
   public static String page(RunAssessment run, ReportOptions options, Instant generated) {
     OutputUnit u = new OutputUnit(options.outputUnit());
+    String day = run.model().facts().runDay().map(Object::toString)
+        .orElse(generated.atZone(java.time.ZoneOffset.UTC).toLocalDate().toString());
+    String title = HtmlHeader.title(run);
     StringBuilder b = new StringBuilder(1 << 16);
     b.append("<!DOCTYPE html>\n<html lang=\"en\"><head><meta charset=\"utf-8\">")
         .append("<meta name=\"viewport\" content=\"width=device-width, initial-scale=1\">")
-        .append("<title>Clearance screening report</title><style>").append(HtmlStyle.CSS)
-        .append("</style></head><body>\n");
-    header(b, run, generated);
+        .append("<title>").append(Html.esc(title)).append(" &ndash; vegetation clearance "
+            + "screening</title><style>").append(HtmlStyle.CSS)
+        .append(HtmlStyle.print(title + " \u00b7 run " + day)).append("</style></head><body>\n");
+    HtmlHeader.write(b, run, day);
     cautions(b, run);
+    HtmlHeader.inputs(b, run);
     HtmlSections.summary(b, run);
     HtmlSections.attention(b, run);
     spanTable(b, run, u);
@@ -65,35 +68,10 @@ public final class HtmlReport {
     }
     HtmlSections.profile(b, run);
     HtmlSections.notes(b, run, u);
-    b.append(Html.f("<footer>Clearance %s &middot; generated %s</footer>\n",
-        Html.esc(run.model().toolVersion()),
-        Html.esc(generated.truncatedTo(ChronoUnit.SECONDS).toString())));
+    b.append(Html.f("<footer>Clearance %s &middot; run %s (UTC)</footer>\n",
+        Html.esc(run.model().toolVersion()), Html.esc(day)));
     b.append("</body></html>\n");
     return b.toString();
-  }
-
-  private static void header(StringBuilder b, RunAssessment run, Instant generated) {
-    var units = run.model().units();
-    String crs = units.crsName().isEmpty() ? "not named" : units.crsName();
-    if (units.epsg().isPresent()) {
-      crs += " (EPSG:" + units.epsg().getAsInt() + ")";
-    }
-    b.append("<header><p class=\"kicker\">Vegetation clearance screening</p>");
-    b.append("<h1>").append(run.profile().map(p -> Html.esc(p.title()))
-        .orElse("Distances measured, no rule profile applied")).append("</h1>");
-    b.append("<dl class=\"meta\">");
-    meta(b, "rule profile", run.profile().map(RuleProfile::name).orElse("none"));
-    meta(b, "spans", Integer.toString(run.spans().size()));
-    meta(b, "conditions", String.join(", ", run.model().conditions().names()));
-    meta(b, "survey CRS", crs);
-    meta(b, "x, y / z units", units.horizontal().symbol() + " / " + units.vertical().symbol());
-    meta(b, "vegetation", run.model().vegetation());
-    b.append("</dl></header>\n");
-  }
-
-  private static void meta(StringBuilder b, String name, String value) {
-    b.append("<div><dt>").append(Html.esc(name)).append("</dt><dd>").append(Html.esc(value))
-        .append("</dd></div>");
   }
 
   private static void cautions(StringBuilder b, RunAssessment run) {
@@ -187,6 +165,7 @@ public final class HtmlReport {
     if (!views.drawable()) {
       b.append("<p class=\"note\">The span's structures coincide in plan: not drawn.</p>");
     } else {
+      b.append("<div class=\"figblock\">");
       Map<String, SvgSpanViews.View> both = new LinkedHashMap<>();
       both.put("Plan", views.plan());
       both.put("Profile", views.profile());
@@ -201,6 +180,7 @@ public final class HtmlReport {
         b.append("</figcaption></figure>");
       }
       HtmlSections.legend(b, r, run, SvgSpanViews.governingIndex(r, run.model()));
+      b.append("</div>");
     }
     b.append("</section>\n");
   }

@@ -65,5 +65,30 @@ final class HtmlStyle {
       "section.span{margin-top:34px}",
       "footer{margin-top:36px;font-size:12px;color:var(--muted);border-top:1px solid "
           + "var(--rule);padding-top:8px}",
-      "@media print{body{background:#fff}.attention{background:#fff}}");
+      "h3{font-size:16px;margin:18px 0 6px}h3 small{font-weight:400;color:var(--muted)}",
+      ".sub{margin:0 0 10px;color:var(--muted)}",
+      "td.hash{font-family:ui-monospace,monospace;font-size:11px;word-break:break-all}",
+      "figure,.figblock{break-inside:avoid;page-break-inside:avoid}",
+      "h2,h3{break-after:avoid;page-break-after:avoid}",
+      "tr{break-inside:avoid}",
+      "@media print{body{background:#fff;max-width:none;padding:0;font-size:12px}"
+          + ".attention{background:#fff}section.span{break-before:page}"
+          + "#overview{break-before:page}}");
+
+  /**
+   * Rules for printed pages: A4 with margins, and in the page margins the line and run (top) and
+   * the page number of the total (bottom), through CSS Paged Media margin boxes.
+   *
+   * @param running the text at the top of every page
+   */
+  static String print(String running) {
+    String quoted = running.replace("\\", "\\\\").replace("\"", "\\\"")
+        .replace("<", "\\3c ").replace("\n", " ");
+    return "@page{size:A4;margin:18mm 14mm 16mm;"
+        + "@top-left{content:\"" + quoted + "\";font:9px system-ui,sans-serif;color:#555}"
+        + "@bottom-right{content:\"page \" counter(page) \" of \" counter(pages);"
+        + "font:9px system-ui,sans-serif;color:#555}"
+        + "@bottom-left{content:\"Clearance screening report \\2014  a screening aid\";"
+        + "font:9px system-ui,sans-serif;color:#555}}";
+  }
 }

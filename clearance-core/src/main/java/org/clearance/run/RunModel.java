@@ -19,10 +19,12 @@ import org.clearance.survey.SurveyUnits;
  * @param groundSource how the ground model was made
  * @param spans the spans in line and sequence order
  * @param trees trees near the line, for fall-in
+ * @param facts the lines as specified, input files, survey and run days, for the report header
  */
 public record RunModel(
     String toolVersion, SurveyUnits units, ConditionSet conditions, double keepRadiusM,
-    String vegetation, String groundSource, List<SpanRecord> spans, List<TreeRecord> trees) {
+    String vegetation, String groundSource, List<SpanRecord> spans, List<TreeRecord> trees,
+    RunFacts facts) {
 
   /** File name inside a run folder. */
   public static final String FILE_NAME = "model.json";
@@ -35,5 +37,20 @@ public record RunModel(
     Objects.requireNonNull(groundSource, "groundSource");
     spans = List.copyOf(spans);
     trees = List.copyOf(trees);
+    Objects.requireNonNull(facts, "facts");
+  }
+
+  /** A model without header facts ({@link RunFacts#none}). */
+  public RunModel(String toolVersion, SurveyUnits units, ConditionSet conditions,
+      double keepRadiusM, String vegetation, String groundSource, List<SpanRecord> spans,
+      List<TreeRecord> trees) {
+    this(toolVersion, units, conditions, keepRadiusM, vegetation, groundSource, spans, trees,
+        RunFacts.none());
+  }
+
+  /** The same model with header facts. */
+  public RunModel withFacts(RunFacts f) {
+    return new RunModel(toolVersion, units, conditions, keepRadiusM, vegetation, groundSource,
+        spans, trees, f);
   }
 }

@@ -71,6 +71,7 @@ public final class RunModelJson {
       w.endArray().member("nearest_conductor", t.nearestConductor()).endObject();
     }
     w.endArray();
+    RunFactsJson.write(w, m.facts());
     return w.endObject().toString();
   }
 
@@ -176,7 +177,9 @@ public final class RunModelJson {
     }
     return new RunModel(r.str(o, "tool_version"), units, new ConditionSet(names, groups),
         r.num(o, "keep_radius_m"), r.str(o, "vegetation"), r.str(o, "ground_source"), spans,
-        trees);
+        trees, o.members().containsKey(RunFactsJson.KEY)
+            ? RunFactsJson.read(r, r.obj(o.members().get(RunFactsJson.KEY), RunFactsJson.KEY))
+            : RunFacts.none());
   }
 
   private static SpanRecord readSpan(JsonFields r, Json.Obj s) {

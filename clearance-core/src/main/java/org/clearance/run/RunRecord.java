@@ -137,6 +137,16 @@ public record RunRecord(
       return this;
     }
 
+    /** The input files added so far. */
+    public List<InputFile> inputs() {
+      return List.copyOf(inputs);
+    }
+
+    /** When the run started, UTC. */
+    public Instant started() {
+      return started;
+    }
+
     /** The rule profile applied. */
     public Builder profile(RuleProfile p) {
       this.profile = ProfileRef.of(p);

@@ -66,10 +66,26 @@ public record SurveySummary(
    * @param recordLength record length, bytes
    * @param pointCount points in the file
    * @param crsRecords which CRS records the file carries and which governs
+   * @param adjustedGpsTime whether its GPS times are adjusted standard GPS time (global encoding
+   *     bit 0), from which dates follow ({@link GpsTime}); otherwise GPS week seconds
    */
   public record FileSummary(
       Path path, String version, int pointFormat, int recordLength, long pointCount,
-      String crsRecords) {}
+      String crsRecords, boolean adjustedGpsTime) {}
+
+  /**
+   * The UTC days of the earliest and latest GPS time, when every file stores adjusted standard
+   * GPS time; empty otherwise (week seconds carry no date).
+   */
+  public java.util.Optional<java.time.LocalDate[]> acquisitionDays() {
+    if (Double.isNaN(gpsTimeMin) || files.isEmpty()
+        || !files.stream().allMatch(FileSummary::adjustedGpsTime)) {
+      return java.util.Optional.empty();
+    }
+    return java.util.Optional.of(new java.time.LocalDate[] {
+        GpsTime.utcDayOfAdjusted(gpsTimeMin).orElseThrow(),
+        GpsTime.utcDayOfAdjusted(gpsTimeMax).orElseThrow()});
+  }
 
   /**
    * Points of one class.
@@ -127,7 +143,7 @@ public record SurveySummary(
       legacy |= !h.pointFormat().isExtended();
       extended |= h.pointFormat().isExtended();
       fileSummaries.add(new FileSummary(f.path(), h.version(), h.pointFormat().id(),
-          h.recordLength(), h.pointCount(), f.crs().records()));
+          h.recordLength(), h.pointCount(), f.crs().records(), h.adjustedGpsTime()));
     }
     List<ClassCount> classes = new ArrayList<>();
     long[] counts = all.classCounts();

@@ -159,6 +159,11 @@ final class PositionMatcher {
     return answer;
   }
 
+  /** The role a position's labels show: neutrals are labelled conductors (class 14). */
+  private static ConductorPosition.Role labelRole(ConductorPosition.Role role) {
+    return role == ConductorPosition.Role.NEUTRAL ? ConductorPosition.Role.PHASE : role;
+  }
+
   private static double prior(double a, double b, double sigma) {
     return 0.5 * (a * a + b * b) / (sigma * sigma);
   }
@@ -211,7 +216,8 @@ final class PositionMatcher {
 
   static double pairCost(Wire w, Slot s, double groundA, double groundB, double[] shift) {
     ConductorPosition p = s.position();
-    double cost = w.role().isPresent() && w.role().get() != p.role() ? ROLE_MISMATCH : 0;
+    double cost = w.role().isPresent() && w.role().get() != labelRole(p.role())
+        ? ROLE_MISMATCH : 0;
     double off = p.offsetM();
     if (Double.isFinite(off)) {
       double a = w.nearA() ? (w.offsetA() - off - shift[2]) / SIGMA_OFFSET_M : 0;

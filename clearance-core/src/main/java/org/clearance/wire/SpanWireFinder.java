@@ -60,7 +60,9 @@ final class SpanWireFinder {
       labelledCount += p.labelled(i) ? 1 : 0;
     }
     boolean labelled = labelledCount >= MIN_LABELLED;
-    boolean[] linear = new WireEvidence(options.evidence()).evaluate(p);
+    CloseSpacing close = CloseSpacing.of(spec, options.growth());
+    boolean[] linear = close == null ? new WireEvidence(options.evidence()).evaluate(p)
+        : SleeveEvidence.evaluate(p, close.tubeM());
     IntList seeds = new IntList();
     for (int i = 0; i < p.size(); i++) {
       if ((p.labelled(i) || linear[i]) && p.s(i) >= 0 && p.s(i) <= length) {
@@ -68,9 +70,12 @@ final class SpanWireFinder {
       }
     }
     WireFinderOptions.Growth g = options.growth();
-    List<int[]> clusters = WireClusters.of(p, seeds.toArray(), g.stationStretch(),
-        g.clusterRadiusM(), g.clusterMinPoints());
-    double[] tube = tube(spec);
+    List<int[]> clusters = close == null
+        ? WireClusters.of(p, seeds.toArray(), g.stationStretch(), g.clusterRadiusM(),
+            g.clusterMinPoints())
+        : WireClusters.of(p, seeds.toArray(), close.stationStretch(), close.clusterRadiusM(),
+            g.clusterMinPoints());
+    double[] tube = close == null ? tube(spec) : new double[] {close.tubeM(), close.tubeM()};
     List<int[]> wires = WireGrowth.grow(p, clusters, 0, length, g, tube[0], tube[1]);
     List<ConductorFit.Result> fits = new ArrayList<>();
     List<ConductorFit.Result> failed = new ArrayList<>();

@@ -27,6 +27,10 @@ final class TubeModel {
   static final double MAX_EXTRA_LATERAL_M = 1.0;
   /** Most the vertical tube may widen beyond the piece, m. */
   static final double MAX_EXTRA_VERTICAL_M = 1.5;
+  /** The default tube's half-sizes ({@link WireFinderOptions.Growth#defaults()}), m: narrower
+   * tubes widen less beyond the piece. */
+  static final double DEFAULT_TUBE_LATERAL_M = 0.6;
+  static final double DEFAULT_TUBE_VERTICAL_M = 0.45;
   /** Smallest curvature radius (c = 1 / (2 b2)) of a parabola accepted, m ({@link
    * CatenaryFitter#C_MIN}). */
   static final double MIN_C = CatenaryFitter.C_MIN;
@@ -212,13 +216,19 @@ final class TubeModel {
     return curved;
   }
 
-  /** True when point i lies in the tube, widened for its distance beyond the piece's ends. */
+  /**
+   * True when point i lies in the tube, widened for its distance beyond the piece's ends. A tube
+   * narrower than the default (closely spaced conductors) widens at most in proportion, so that
+   * it does not reach the next conductor of the framing.
+   */
   boolean contains(SpanPoints p, int i) {
     double s = p.s(i);
     double d = s < lo ? lo - s : s > hi ? s - hi : 0;
-    double lat = tolLateral + Math.min(MAX_EXTRA_LATERAL_M, SLOPE_ALLOWANCE * d);
+    double k = Math.min(1, Math.min(tolLateral / DEFAULT_TUBE_LATERAL_M,
+        tolVertical / DEFAULT_TUBE_VERTICAL_M));
+    double lat = tolLateral + Math.min(k * MAX_EXTRA_LATERAL_M, SLOPE_ALLOWANCE * d);
     double bend = curved ? 0 : d * d / (2 * CURVE_ALLOWANCE_C);
-    double vert = tolVertical + Math.min(MAX_EXTRA_VERTICAL_M, SLOPE_ALLOWANCE * d + bend);
+    double vert = tolVertical + Math.min(k * MAX_EXTRA_VERTICAL_M, SLOPE_ALLOWANCE * d + bend);
     return Math.abs(p.e(i) - e(s)) <= lat && Math.abs(p.z(i) - z(s)) <= vert;
   }
 }

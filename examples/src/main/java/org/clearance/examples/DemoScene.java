@@ -29,17 +29,19 @@ public final class DemoScene {
   public static final String LINE_NAME = "Orrindale - Kestrowe 230 kV";
   /** Nominal phase-to-phase voltage, kV. */
   public static final double NOMINAL_VOLTAGE_KV = 230;
-  /** EPSG code of the CRS the coordinates are given in: WGS 84 / UTM zone 11S. */
-  public static final int EPSG = 32711;
+  /** EPSG code of the CRS the coordinates are given in: WGS 84 / UTM zone 11N. */
+  public static final int EPSG = 32611;
   /** Name of the compound CRS: the projected CRS plus gravity-related heights in metres. */
-  public static final String CRS_NAME = "WGS 84 / UTM zone 11S + EGM96 height";
+  public static final String CRS_NAME = "WGS 84 / UTM zone 11N + EGM96 height";
   /**
-   * OGC WKT (OGC 01-009 COMPD_CS) of EPSG:32711, WGS 84 / UTM zone 11S, with EGM96 heights
-   * (EPSG:5773), both in metres, so the file states its vertical unit too. The invented site lies
-   * in the open South Pacific, far from any real line. EPSG codes and parameters from memory.
+   * OGC WKT (OGC 01-009 COMPD_CS) of EPSG:32611, WGS 84 / UTM zone 11N, with EGM96 heights
+   * (EPSG:5773), both in metres, so the file states its vertical unit too. The invented line
+   * lies on land in the boreal forest near 60.2 N, 117.2 W (about where the Alberta - Northwest
+   * Territories border meets the Hay River lowlands), with invented names and data; the
+   * terrain's elevations are invented too. EPSG codes and parameters from memory.
    */
   public static final String CRS_WKT = "COMPD_CS[\"" + CRS_NAME + "\","
-      + "PROJCS[\"WGS 84 / UTM zone 11S\","
+      + "PROJCS[\"WGS 84 / UTM zone 11N\","
       + "GEOGCS[\"WGS 84\",DATUM[\"WGS_1984\",SPHEROID[\"WGS 84\",6378137,298.257223563,"
       + "AUTHORITY[\"EPSG\",\"7030\"]],AUTHORITY[\"EPSG\",\"6326\"]],"
       + "PRIMEM[\"Greenwich\",0,AUTHORITY[\"EPSG\",\"8901\"]],"
@@ -47,8 +49,8 @@ public final class DemoScene {
       + "AUTHORITY[\"EPSG\",\"4326\"]],PROJECTION[\"Transverse_Mercator\"],"
       + "PARAMETER[\"latitude_of_origin\",0],PARAMETER[\"central_meridian\",-117],"
       + "PARAMETER[\"scale_factor\",0.9996],PARAMETER[\"false_easting\",500000],"
-      + "PARAMETER[\"false_northing\",10000000],UNIT[\"metre\",1,AUTHORITY[\"EPSG\",\"9001\"]],"
-      + "AXIS[\"Easting\",EAST],AXIS[\"Northing\",NORTH],AUTHORITY[\"EPSG\",\"32711\"]],"
+      + "PARAMETER[\"false_northing\",0],UNIT[\"metre\",1,AUTHORITY[\"EPSG\",\"9001\"]],"
+      + "AXIS[\"Easting\",EAST],AXIS[\"Northing\",NORTH],AUTHORITY[\"EPSG\",\"32611\"]],"
       + "VERT_CS[\"EGM96 height\",VERT_DATUM[\"EGM96 geoid\",2005,AUTHORITY[\"EPSG\",\"5171\"]],"
       + "UNIT[\"metre\",1,AUTHORITY[\"EPSG\",\"9001\"]],AXIS[\"Gravity-related height\",UP],"
       + "AUTHORITY[\"EPSG\",\"5773\"]]]";
@@ -163,7 +165,7 @@ public final class DemoScene {
     return options;
   }
 
-  /** Units and CRS of the survey: metres, EPSG:32711 plus EGM96 heights, with the WKT. */
+  /** Units and CRS of the survey: metres, EPSG:32611 plus EGM96 heights, with the WKT. */
   public SurveyUnits units() {
     return new SurveyUnits(LinearUnit.METRE, LinearUnit.METRE, CRS_NAME,
         OptionalInt.of(EPSG), CRS_WKT, "demo generator");

@@ -15,7 +15,8 @@ final class RoutePlan {
   /** Line deflection at an angle structure, degrees. */
   static final double MIN_DEFLECTION_DEG = 12;
   static final double MAX_DEFLECTION_DEG = 35;
-  /** Start of the line: an invented site in WGS 84 / UTM zone 11S (open South Pacific). */
+  /** Start of the line: an invented line on land in WGS 84 / UTM zone 11N (near
+   * 60.2 N, 117.2 W). */
   static final double START_X = 486_250.0;
   static final double START_Y = 6_671_400.0;
   static final double ROAD_WIDTH_M = 7.0;

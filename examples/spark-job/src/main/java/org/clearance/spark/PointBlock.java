@@ -17,6 +17,9 @@ final class PointBlock implements Serializable {
   private static final int FIRST_CAPACITY = 1024;
 
   private int size;
+  /** Earliest and latest GPS time of the points added, s; NaN when none carries one. */
+  private double gpsMin = Double.NaN;
+  private double gpsMax = Double.NaN;
   private double[] x = new double[FIRST_CAPACITY];
   private double[] y = new double[FIRST_CAPACITY];
   private double[] z = new double[FIRST_CAPACITY];
@@ -50,6 +53,21 @@ final class PointBlock implements Serializable {
     returnNumber[size] = c.returnNumber()[i];
     numberOfReturns[size] = c.numberOfReturns()[i];
     size++;
+    double g = c.gpsTime()[i];
+    if (!Double.isNaN(g)) {
+      gpsMin = Double.isNaN(gpsMin) ? g : Math.min(gpsMin, g);
+      gpsMax = Double.isNaN(gpsMax) ? g : Math.max(gpsMax, g);
+    }
+  }
+
+  /** Earliest GPS time of the points, s, or NaN (the times themselves do not travel). */
+  double gpsMin() {
+    return gpsMin;
+  }
+
+  /** Latest GPS time of the points, s, or NaN. */
+  double gpsMax() {
+    return gpsMax;
   }
 
   /**

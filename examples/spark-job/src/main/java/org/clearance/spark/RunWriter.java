@@ -14,6 +14,7 @@ import java.util.Map;
 import java.util.Optional;
 import java.util.TreeMap;
 import org.clearance.RunFolder;
+import org.clearance.RunModels;
 import org.clearance.clearance.NearPointFile;
 import org.clearance.clearance.NearPointReader;
 import org.clearance.clearance.NearPointWriter;
@@ -65,10 +66,11 @@ final class RunWriter {
   /**
    * Writes the run folder into the staging folder.
    *
+   * @param gpsRange earliest and latest GPS time of the points read, s (NaN when unknown)
    * @return the report stage's outcome
    */
   ReportStage.Outcome write(RuleProfile profile, ReportOptions report, RunRecord.Builder record,
-      PrintWriter console) throws IOException {
+      double[] gpsRange, PrintWriter console) throws IOException {
     LineLayout layout = ctx.layout.lines().get(line);
     if (outcomes.size() != layout.spans().size()) {
       throw new IllegalStateException("line " + layout.spec().lineId() + ": "
@@ -87,7 +89,8 @@ final class RunWriter {
     Files.writeString(staging.resolve(ConductorTable.FILE_NAME), conductors.toString(),
         StandardCharsets.UTF_8);
     writeNearPoints();
-    RunModel model = merge(models);
+    RunModel model = merge(models).withFacts(RunModels.facts(List.of(layout.spec()), record,
+        ctx.survey, gpsRange[0], gpsRange[1]));
     RunModelJson.write(model, staging.resolve(RunModel.FILE_NAME));
     deleteParts();
     ReportStage.Outcome outcome = ReportStage.write(staging,

@@ -11,8 +11,9 @@ import org.clearance.wire.SpanWires;
  * @param wires its fitted conductors (not assessed, with the reason, when the task failed)
  * @param points points of its work area
  * @param classCounts points per ASPRS class in its work area
+ * @param gpsRange earliest and latest GPS time of its points, s (NaN when none has one)
  * @param seconds time of the task, s
  * @param failure what failed, or null
  */
 record SpanFit(int key, GroundModel ground, SpanWires wires, long points, long[] classCounts,
-    double seconds, String failure) {}
+    double[] gpsRange, double seconds, String failure) {}

@@ -106,9 +106,12 @@ final class SpanStages {
     SpanLayout layout = ctx.lineLayouts.get(ref.line());
     long[] classes = new long[256];
     long[] points = new long[1];
+    double[] gps = {Double.NaN, Double.NaN};
     try {
       for (PointBlock b : blocks) {
         points[0] += b.size();
+        gps[0] = minimum(gps[0], b.gpsMin());
+        gps[1] = maximum(gps[1], b.gpsMax());
       }
       GroundModelBuilder builder = new GroundModelBuilder(ctx.options.ground());
       source(blocks).stream(() -> chunk -> {
@@ -120,9 +123,10 @@ final class SpanStages {
       GroundModel ground = builder.build();
       SpanWires wires = new WireFinder(ctx.options.wires()).findSpan(source(blocks), layout,
           ref.span().id(), ground::heightAboveGround);
-      return new SpanFit(key, ground, wires, points[0], classes, seconds(start), null);
+      return new SpanFit(key, ground, wires, points[0], classes, gps, seconds(start),
+          null);
     } catch (RuntimeException e) {
-      return new SpanFit(key, null, failed(ref, e), points[0], classes, seconds(start),
+      return new SpanFit(key, null, failed(ref, e), points[0], classes, gps, seconds(start),
           describe(e));
     }
   }
@@ -217,7 +221,7 @@ final class SpanStages {
           Map.of(id, models.getOrDefault(id, List.of())), measured, near, start);
     } catch (IOException | RuntimeException e) {
       SpanFit failed = new SpanFit(fit.key(), null, failed(ref, e), fit.points(),
-          fit.classCounts(), fit.seconds(), describe(e));
+          fit.classCounts(), fit.gpsRange(), fit.seconds(), describe(e));
       try {
         return outcome(ctx, failed, conditions, vegetation, emptyGround(options),
             failed.wires(), Map.of(), new Measurement(List.of(), List.of()), null, start);
@@ -267,6 +271,16 @@ final class SpanStages {
   /** The ground model of no points (a failed span has none). */
   private static GroundModel emptyGround(CheckOptions options) {
     return new GroundModelBuilder(options.ground()).build();
+  }
+
+  /** The smaller of two times, NaN only when both are. */
+  static double minimum(double a, double b) {
+    return Double.isNaN(a) ? b : Double.isNaN(b) ? a : Math.min(a, b);
+  }
+
+  /** The larger of two times, NaN only when both are. */
+  static double maximum(double a, double b) {
+    return Double.isNaN(a) ? b : Double.isNaN(b) ? a : Math.max(a, b);
   }
 
   private static double seconds(long start) {

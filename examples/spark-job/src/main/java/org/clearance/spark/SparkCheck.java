@@ -71,6 +71,10 @@ public final class SparkCheck {
       long surveyPoints, long workPoints, int partitions, double largestPartitionShare,
       int failedSpans, double seconds) {}
 
+  /** What a span's first task measured, for the driver: points, classes, GPS time range. */
+  private record Tally(long points, long[] classCounts, double[] gpsRange)
+      implements java.io.Serializable {}
+
   private SparkCheck() {}
 
   /**
@@ -107,15 +111,18 @@ public final class SparkCheck {
             SpanStages.fit(spec, p._1(), p._2()))), true)
         .persist(StorageLevel.MEMORY_ONLY());
 
-    List<Tuple2<Long, long[]>> measured = fits.values()
-        .map(f -> new Tuple2<>(f.points(), f.classCounts())).collect();
+    List<Tally> measured = fits.values()
+        .map(f -> new Tally(f.points(), f.classCounts(), f.gpsRange())).collect();
     long workPoints = 0;
     long[] classes = new long[256];
-    for (Tuple2<Long, long[]> m : measured) {
-      workPoints += m._1();
+    double[] gps = {Double.NaN, Double.NaN};
+    for (Tally m : measured) {
+      workPoints += m.points();
       for (int c = 0; c < 256; c++) {
-        classes[c] += m._2()[c];
+        classes[c] += m.classCounts()[c];
       }
+      gps[0] = SpanStages.minimum(gps[0], m.gpsRange()[0]);
+      gps[1] = SpanStages.maximum(gps[1], m.gpsRange()[1]);
     }
     long[] load = partitioner.loads(plan.estimatedPoints);
     long estimated = 0;
@@ -177,7 +184,7 @@ public final class SparkCheck {
       for (int l = 0; l < writers.size(); l++) {
         RunRecord.Builder record = record(ctx, profile, l, request, partitioner);
         say(console, "line %s:", lineIds.get(l));
-        writers.get(l).write(profile, report, record, console);
+        writers.get(l).write(profile, report, record, gps, console);
         RunWriter.publish(stagings.get(l), target(request.out(), ctx.layout.lines().get(l)));
       }
     } finally {
