@@ -2,7 +2,6 @@ package org.clearance;
 
 import java.io.IOException;
 import java.io.PrintWriter;
-import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.LinkedHashMap;
@@ -54,8 +53,8 @@ import org.clearance.wire.WireResult;
  * vegetation point near the line, then evaluate the rule profile and write the reports.
  *
  * <p>Every output goes first into a staging folder beside the run folder; only when every stage
- * has succeeded are the files moved into the run folder, so a failed check never leaves a
- * half-written run behind.
+ * has succeeded is that folder published in its place ({@link RunFolder}), so a failed or killed
+ * check never leaves a half-written run behind.
  */
 public final class ClearanceCheck {
 
@@ -101,13 +100,10 @@ public final class ClearanceCheck {
    */
   public ReportStage.Outcome run(CheckInputs inputs, String toolVersion) throws IOException {
     RunRecord.Builder record = RunRecord.builder("check", toolVersion);
-    Path staging = RunFolder.staging(inputs.outDir());
-    try {
-      ReportStage.Outcome outcome = runInto(staging, inputs, toolVersion, record);
-      RunFolder.publish(staging, inputs.outDir());
+    try (RunFolder folder = RunFolder.replace(inputs.outDir(), "--out")) {
+      ReportStage.Outcome outcome = runInto(folder.staging(), inputs, toolVersion, record);
+      folder.publish();
       return outcome;
-    } finally {
-      RunFolder.deleteQuietly(staging);
     }
   }
 
@@ -310,10 +306,5 @@ public final class ClearanceCheck {
   private void say(String format, Object... args) {
     console.println(String.format(Locale.ROOT, format, args));
     console.flush();
-  }
-
-  /** Files present in a finished run folder. */
-  static boolean isRunFolder(Path dir) {
-    return Files.isRegularFile(dir.resolve(RunRecord.FILE_NAME));
   }
 }

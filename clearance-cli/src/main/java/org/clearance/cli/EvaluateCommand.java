@@ -6,8 +6,9 @@ import java.nio.file.Path;
 import java.util.List;
 import java.util.concurrent.Callable;
 import org.clearance.InputException;
+import org.clearance.RunFolder;
 import org.clearance.clearance.NearPointFile;
-import org.clearance.io.AtomicFiles;
+import org.clearance.clearance.NearPointReader;
 import org.clearance.report.ReportOptions;
 import org.clearance.report.ReportStage;
 import org.clearance.rules.RuleProfile;
@@ -52,7 +53,8 @@ public final class EvaluateCommand implements Callable<Integer> {
   String rules;
 
   @Option(names = "--out", paramLabel = "NEW_DIR",
-      description = "Write into this new (or empty) folder instead of in place.")
+      description = "Write into this folder (new, empty, or an earlier run folder to replace) "
+          + "instead of in place.")
   Path out;
 
   @Option(names = "--units", paramLabel = "m|ft", converter = OutputUnitConverter.class,
@@ -63,75 +65,90 @@ public final class EvaluateCommand implements Callable<Integer> {
 
   @Override
   public Integer call() throws IOException {
-    Path model = runDir.resolve(RunModel.FILE_NAME);
-    Path near = runDir.resolve(NearPointFile.FILE_NAME);
     if (!Files.isDirectory(runDir)) {
       throw new InputException(runDir, null, null, "not a folder");
     }
-    for (Path p : List.of(model, near)) {
-      if (!Files.isRegularFile(p)) {
-        throw new InputException(p, null, null, "missing: " + runDir
-            + " is not the run folder of a finished check");
+    boolean inPlace = out == null || sameFolder(out, runDir);
+    try (RunFolder source = RunFolder.open(runDir, "RUN_DIR")) {
+      Path dir = source.target();
+      for (String name : List.of(RunModel.FILE_NAME, NearPointFile.FILE_NAME)) {
+        Path p = dir.resolve(name);
+        if (!Files.isRegularFile(p)) {
+          throw new InputException(runDir.resolve(name), null, null, "missing: " + runDir
+              + " is not the run folder of a finished check");
+        }
       }
-    }
-    RuleProfile profile = RuleProfiles.byNameOrPath(rules);
-    RunRecord.Builder record = RunRecord.builder("evaluate", ClearanceCommand.version());
-    record.parameter("run_dir", runDir.toString()).parameter("rules", rules)
-        .parameter("units", units.symbol()).profile(profile);
-    for (String name : MEASURED) {
-      Path p = runDir.resolve(name);
-      if (Files.isRegularFile(p)) {
-        record.input(name, p);
-      }
-    }
-    Path oldRecord = runDir.resolve(RunRecord.FILE_NAME);
-    if (Files.isRegularFile(oldRecord)) {
-      record.input(RunRecord.FILE_NAME, oldRecord);
-      record.source(RunRecordJson.read(oldRecord));
-    }
-    Path profileFile = Path.of(rules);
-    if (!RuleProfiles.names().contains(rules) && Files.isRegularFile(profileFile)) {
-      record.input("rules", profileFile);
-    }
-    RunModel runModel = RunModelJson.read(model);
-    Path target = runDir;
-    if (out != null && !sameFolder(out, runDir)) {
-      target = prepare(out);
-      record.parameter("out", out.toString());
+      RuleProfile profile = RuleProfiles.byNameOrPath(rules);
+      RunRecord.Builder record = RunRecord.builder("evaluate", ClearanceCommand.version());
+      record.parameter("run_dir", runDir.toString()).parameter("rules", rules)
+          .parameter("units", units.symbol()).profile(profile);
       for (String name : MEASURED) {
-        Path p = runDir.resolve(name);
+        Path p = dir.resolve(name);
         if (Files.isRegularFile(p)) {
-          AtomicFiles.write(target.resolve(name), o -> Files.copy(p, o));
-          record.output(name);
+          record.input(name, p);
+        }
+      }
+      Path oldRecord = dir.resolve(RunRecord.FILE_NAME);
+      if (Files.isRegularFile(oldRecord)) {
+        record.input(RunRecord.FILE_NAME, oldRecord);
+        record.source(RunRecordJson.read(oldRecord));
+      }
+      Path profileFile = Path.of(rules);
+      if (!RuleProfiles.names().contains(rules) && Files.isRegularFile(profileFile)) {
+        record.input("rules", profileFile);
+      }
+      RunModel runModel = RunModelJson.read(dir.resolve(RunModel.FILE_NAME));
+      NearPointReader.verify(dir.resolve(NearPointFile.FILE_NAME));
+      if (inPlace) {
+        evaluateInto(source.beginReplacing("RUN_DIR"), dir, runModel, profile, record, true);
+        source.publish();
+      } else {
+        record.parameter("out", out.toString());
+        try (RunFolder target = RunFolder.replace(out, "--out")) {
+          evaluateInto(target.staging(), dir, runModel, profile, record, false);
+          target.publish();
         }
       }
     }
-    ReportStage.Outcome outcome = ReportStage.run(target, runModel, profile,
+    return ClearanceCommand.EXIT_OK;
+  }
+
+  /**
+   * Writes the whole evaluated run into a staging folder: the measured files of the source
+   * (linked when in place, where the source folder is replaced; copied otherwise), the evaluated
+   * outputs and run.json.
+   */
+  private void evaluateInto(Path staging, Path source, RunModel runModel, RuleProfile profile,
+      RunRecord.Builder record, boolean link) throws IOException {
+    for (String name : MEASURED) {
+      Path p = source.resolve(name);
+      if (Files.isRegularFile(p)) {
+        carry(p, staging.resolve(name), link);
+        record.output(name);
+      }
+    }
+    ReportStage.Outcome outcome = ReportStage.run(staging, runModel, profile,
         ReportOptions.defaults().withUnit(units), spec.commandLine().getOut());
     outcome.written().forEach(record::output);
     record.timing("evaluate", outcome.seconds()).output(RunRecord.FILE_NAME);
-    RunRecordJson.write(target, record.build());
-    return ClearanceCommand.EXIT_OK;
+    RunRecordJson.write(staging, record.build());
+  }
+
+  /** A hard link where allowed (the source is about to be replaced), else a copy. */
+  private static void carry(Path from, Path to, boolean link) throws IOException {
+    if (link) {
+      try {
+        Files.createLink(to, from);
+        return;
+      } catch (IOException | UnsupportedOperationException e) {
+        // another file system or no hard links: a copy does the same
+      }
+    }
+    Files.copy(from, to);
   }
 
   private static boolean sameFolder(Path a, Path b) throws IOException {
     return Files.exists(a) && Files.isSameFile(a, b);
-  }
-
-  /** Creates the output folder, which must not hold files already. */
-  private static Path prepare(Path dir) throws IOException {
-    if (Files.exists(dir)) {
-      if (!Files.isDirectory(dir)) {
-        throw new InputException("--out", null, null, dir + " exists and is not a folder");
-      }
-      try (var entries = Files.list(dir)) {
-        if (entries.findAny().isPresent()) {
-          throw new InputException("--out", null, null, dir + " is not empty; give a new "
-              + "folder, or leave --out out to evaluate in place");
-        }
-      }
-    }
-    return Files.createDirectories(dir);
   }
 
   /** Reads {@code m} or {@code ft}: the report units. */

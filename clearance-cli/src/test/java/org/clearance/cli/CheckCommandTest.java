@@ -67,7 +67,8 @@ class CheckCommandTest {
     assertTrue(header.contains("min_clearance_ft") && header.contains("area_ft2"), header);
     assertTrue(r.out().contains("screening aid"), "the console carries the caution");
     try (Stream<Path> s = Files.list(dir)) {
-      assertEquals(List.of(out), s.toList(), "no staging folder left behind");
+      assertEquals(List.of(".run.lock", "run"), s.map(p -> p.getFileName().toString())
+          .sorted().toList(), "no staging folder left behind");
     }
   }
 
@@ -108,6 +109,50 @@ class CheckCommandTest {
     Files.writeString(out.resolve("mine.txt"), "keep me");
     assertOneLineInputError(check(demo.structures(), demo.lineSpec(), out), "--out");
     assertEquals("keep me", Files.readString(out.resolve("mine.txt")));
+  }
+
+  /**
+   * Regression: {@code check --out EXISTING_RUN_FOLDER} deleted every file in the folder,
+   * including the inputs it had just read and files that were not the tool's.
+   */
+  @Test
+  void aRunFolderIsReplacedWholeButNeverOneHoldingOtherFiles() throws IOException {
+    Path out = dir.resolve("run");
+    assertEquals(ClearanceCommand.EXIT_OK, check(demo.structures(), demo.lineSpec(), out).exit());
+    String firstRecord = Files.readString(out.resolve("run.json"));
+    CliRun again = check(demo.structures(), demo.lineSpec(), out, "--rules", "example-utility");
+    assertEquals(ClearanceCommand.EXIT_OK, again.exit(), again.err());
+    assertFalse(firstRecord.equals(Files.readString(out.resolve("run.json"))), "replaced");
+    // an input inside the run folder, and a note of the user's
+    Path structures = Files.copy(demo.structures(), out.resolve("structures.csv"));
+    Files.writeString(out.resolve("notes.txt"), "crew notes");
+    assertOneLineInputError(check(structures, demo.lineSpec(), out), "--out", "notes.txt",
+        "structures.csv", "not replaced");
+    assertEquals("crew notes", Files.readString(out.resolve("notes.txt")));
+    assertTrue(Files.isRegularFile(structures), "the input is kept");
+    assertTrue(Files.isRegularFile(out.resolve("model.json")), "the previous run is kept");
+  }
+
+  /**
+   * Regression: structure ids starting with {@code =}, {@code +}, {@code -} or {@code @} were
+   * written as bare cells, which a spreadsheet runs as formulas (issue 10, item 10).
+   */
+  @Test
+  void idsThatLookLikeFormulasAreWrittenAsText() throws IOException {
+    String text = Files.readString(demo.structures(), StandardCharsets.UTF_8);
+    Path structures = dir.resolve("s-formula.csv");
+    Files.writeString(structures, text.replaceAll("(?m)^(T\\d+),", "=$1,"));
+    Path out = dir.resolve("run");
+    CliRun r = check(structures, demo.lineSpec(), out);
+    assertEquals(ClearanceCommand.EXIT_OK, r.exit(), r.err());
+    for (String f : List.of("spans.csv", "conductors.csv")) {
+      List<String> lines = Files.readAllLines(out.resolve(f));
+      assertTrue(lines.size() > 1, f);
+      for (String line : lines.subList(1, lines.size())) {
+        assertTrue(line.contains(",'=T"), f + ": " + line);
+        assertFalse(line.startsWith("=") || line.contains(",="), f + ": " + line);
+      }
+    }
   }
 
   @Test

@@ -52,7 +52,8 @@ class EvaluateCommandTest {
     Files.writeString(run.resolve("conductors.csv"), "span_id,conductor\nKV-10-11,B1\n");
     // the check's own record, as the check command writes it
     RunRecordJson.write(run, RunRecord.builder("check", "test").parameter("keep_radius_m",
-        "15").output("model.json").build());
+        "15").output("conductors.csv").output("near-points.bin").output("model.json")
+        .output("run.json").build());
   }
 
   private Path profile(String name, double radialM) throws IOException {
@@ -163,7 +164,8 @@ class EvaluateCommandTest {
     CliRun notEmpty = run("evaluate", run.toString(), "--rules", "ca-prc4293", "--out",
         full.toString());
     assertEquals(2, notEmpty.exit());
-    assertTrue(notEmpty.err().contains("not empty"), notEmpty.err());
+    assertTrue(notEmpty.err().contains("not a Clearance run folder"), notEmpty.err());
+    assertEquals("x", Files.readString(full.resolve("x.txt")), "a foreign file is kept");
     assertEquals(2, run("evaluate", run.toString(), "--rules", "ca-prc4293", "--units", "usft")
         .exit());
     Files.delete(run.resolve("near-points.bin"));

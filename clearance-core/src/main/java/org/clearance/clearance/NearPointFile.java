@@ -1,5 +1,8 @@
 package org.clearance.clearance;
 
+import java.nio.ByteBuffer;
+import java.nio.ByteOrder;
+import java.util.Arrays;
 import java.util.List;
 import java.util.Objects;
 
@@ -8,14 +11,18 @@ import java.util.Objects;
  * vegetation point near a conductor with its distances, so that rule profiles can be re-evaluated
  * without reading the survey again.
  *
- * <p>Little-endian binary. Header: the 8 ASCII bytes {@code CLRNEAR1}; int32 number of
+ * <p>Little-endian binary. Header: the 8 ASCII bytes {@code CLRNEAR2} (format 2); int32 number of
  * conditions, then per condition its name and report group; int32 number of spans, then each span
  * id; int32 number of conductor names, then each name (every string is an int16 byte length and
  * UTF-8 bytes). Records follow to the end of the file, each: int32 span index; float64 x, y, z
  * (metres, survey CRS scaled to metres); int16 ASPRS class; float32 height above ground (m, NaN
  * when unknown); then per condition, in header order: float32 distance, horizontal, vertical (m),
- * int16 conductor index, float32 station (m). Float32 keeps distances to well under a millimetre
- * at the ranges stored (below a few hundred metres).
+ * int16 conductor index (-1: none), float32 station (m). Float32 keeps distances to well under a
+ * millimetre at the ranges stored (below a few hundred metres). Records are sorted by span index,
+ * then x, y and z, then their remaining bytes, so the same survey gives the same file whatever
+ * the order the reading threads met the points in. Trailer: the 8 ASCII bytes {@code CLRNEND2},
+ * int64 number of records, and the CRC-32C (Castagnoli; RFC 3720 appendix B.4) of every byte
+ * before the trailer, so a truncated or damaged file is recognised before it is used.
  *
  * @param conditions condition names, the surveyed state first
  * @param groups report group of each condition ({@code survey}, {@code hot}, {@code blowout},
@@ -29,7 +36,13 @@ public record NearPointFile(
   /** File name inside a run folder. */
   public static final String FILE_NAME = "near-points.bin";
   /** Magic bytes and format version. */
-  static final byte[] MAGIC = {'C', 'L', 'R', 'N', 'E', 'A', 'R', '1'};
+  static final byte[] MAGIC = {'C', 'L', 'R', 'N', 'E', 'A', 'R', '2'};
+  /** Magic bytes of the trailer. */
+  static final byte[] END = {'C', 'L', 'R', 'N', 'E', 'N', 'D', '2'};
+  /** Bytes of the trailer: magic, int64 count, int32 CRC-32C. */
+  static final int TRAILER_BYTES = 8 + 8 + 4;
+  /** Byte offsets of the span index and of x, y, z in a record. */
+  private static final int[] KEY_DOUBLES = {4, 12, 20};
   /** Bytes of a record before the per-condition part. */
   static final int FIXED_BYTES = 4 + 3 * 8 + 2 + 4;
   /** Bytes per condition in a record. */
@@ -55,5 +68,21 @@ public record NearPointFile(
   /** Bytes of one record. */
   public int recordBytes() {
     return FIXED_BYTES + CONDITION_BYTES * conditions.size();
+  }
+
+  /**
+   * The order of records in the file: span index, then x, y, z, then the remaining bytes
+   * (unsigned), so that only byte-identical records compare equal.
+   */
+  static int compareRecords(byte[] a, int ai, byte[] b, int bi, int recordBytes) {
+    ByteBuffer ba = ByteBuffer.wrap(a).order(ByteOrder.LITTLE_ENDIAN);
+    ByteBuffer bb = ByteBuffer.wrap(b).order(ByteOrder.LITTLE_ENDIAN);
+    int c = Integer.compare(ba.getInt(ai), bb.getInt(bi));
+    for (int k = 0; c == 0 && k < KEY_DOUBLES.length; k++) {
+      c = Double.compare(ba.getDouble(ai + KEY_DOUBLES[k]), bb.getDouble(bi + KEY_DOUBLES[k]));
+    }
+    int rest = KEY_DOUBLES[KEY_DOUBLES.length - 1] + 8;
+    return c != 0 ? c : Arrays.compareUnsigned(a, ai + rest, ai + recordBytes, b, bi + rest,
+        bi + recordBytes);
   }
 }

@@ -4,7 +4,6 @@ import java.io.BufferedInputStream;
 import java.io.DataInputStream;
 import java.io.EOFException;
 import java.io.IOException;
-import java.io.InputStream;
 import java.nio.ByteBuffer;
 import java.nio.ByteOrder;
 import java.nio.charset.StandardCharsets;
@@ -13,40 +12,77 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
+import java.util.Locale;
 import java.util.function.Consumer;
+import java.util.zip.CRC32C;
+import java.util.zip.CheckedInputStream;
 import org.clearance.InputException;
 
-/** Reads {@link NearPointFile near-points.bin} back, streaming, one record at a time. */
+/**
+ * Reads {@link NearPointFile near-points.bin} back, streaming, one record at a time. A file of
+ * another format version, a truncated file, a checksum that does not match or an index outside
+ * the header is an {@link InputException} naming the file (and the record), never another
+ * exception.
+ */
 public final class NearPointReader {
+
+  /** Stream buffer. */
+  private static final int BUFFER_BYTES = 1 << 20;
+  /** What a damaged file's message ends with. */
+  private static final String RERUN = "; the run folder is damaged: run the check again";
 
   private NearPointReader() {}
 
-  /** Reads only the header. */
+  /** Reads only the header (format version and lists), without checking the records. */
   public static NearPointFile header(Path file) throws IOException {
-    try (DataInputStream in = open(file)) {
-      return readHeader(file, in);
+    long size = Files.size(file);
+    try (DataInputStream in = new DataInputStream(new BufferedInputStream(
+        Files.newInputStream(file), BUFFER_BYTES))) {
+      return readHeader(file, in, size).layout;
     }
   }
 
-  /** Calls {@code sink} for every record in file order; returns the header. */
+  /**
+   * Reads the whole file once and checks its size, record count, indices and checksum.
+   *
+   * @return the header
+   * @throws InputException naming the file when it is damaged or of another format
+   */
+  public static NearPointFile verify(Path file) throws IOException {
+    return forEach(file, p -> { });
+  }
+
+  /**
+   * Calls {@code sink} for every record in file order; returns the header. The checksum is
+   * checked at the end: a damaged file throws after some records were passed on, so a caller
+   * discards what it built (as the run folder's staging does).
+   */
   public static NearPointFile forEach(Path file, Consumer<PointClearance> sink) throws IOException {
-    try (DataInputStream in = open(file)) {
-      NearPointFile layout = readHeader(file, in);
+    long size = Files.size(file);
+    CRC32C crc = new CRC32C();
+    try (DataInputStream in = new DataInputStream(new CheckedInputStream(
+        new BufferedInputStream(Files.newInputStream(file), BUFFER_BYTES), crc))) {
+      Header h = readHeader(file, in, size);
+      NearPointFile layout = h.layout;
       int n = layout.conditions().size();
-      byte[] rec = new byte[layout.recordBytes()];
+      int rb = layout.recordBytes();
+      long data = size - h.bytes - NearPointFile.TRAILER_BYTES;
+      if (data < 0 || data % rb != 0) {
+        throw new InputException(file, null, null, "holds " + size + " bytes, not a whole "
+            + "number of " + rb + "-byte records after its header plus its trailer" + RERUN);
+      }
+      long records = data / rb;
+      byte[] rec = new byte[rb];
       ByteBuffer buf = ByteBuffer.wrap(rec).order(ByteOrder.LITTLE_ENDIAN);
-      long index = 0;
-      while (true) {
-        int got = in.readNBytes(rec, 0, rec.length);
-        if (got == 0) {
-          return layout;
-        }
-        if (got < rec.length) {
-          throw new InputException(file, "record " + index, null,
-              "truncated record: the run folder is damaged; run the check again");
-        }
+      for (long index = 0; index < records; index++) {
+        in.readFully(rec);
         buf.clear();
+        String where = "record " + index;
         int span = buf.getInt();
+        if (span < 0 || span >= layout.spanIds().size()) {
+          throw new InputException(file, where, "span index", "span index " + span
+              + " outside the header's " + layout.spanIds().size() + RERUN);
+        }
         double x = buf.getDouble();
         double y = buf.getDouble();
         double z = buf.getDouble();
@@ -55,62 +91,95 @@ public final class NearPointReader {
         List<ConditionDistance> ds = new ArrayList<>(n);
         for (int c = 0; c < n; c++) {
           double d = buf.getFloat();
-          double h = buf.getFloat();
+          double hz = buf.getFloat();
           double v = buf.getFloat();
           int conductor = buf.getShort();
           double st = buf.getFloat();
-          ds.add(new ConditionDistance(layout.conditions().get(c), layout.groups().get(c), d, h, v,
-              conductor < 0 ? "" : layout.conductors().get(conductor), st));
-        }
-        if (span < 0 || span >= layout.spanIds().size()) {
-          throw new InputException(file, "record " + index, "span index",
-              "span index " + span + " outside the header's " + layout.spanIds().size());
+          if (conductor < -1 || conductor >= layout.conductors().size()) {
+            throw new InputException(file, where, "conductor index", "conductor index "
+                + conductor + " outside the header's " + layout.conductors().size() + RERUN);
+          }
+          ds.add(new ConditionDistance(layout.conditions().get(c), layout.groups().get(c), d, hz,
+              v, conductor < 0 ? "" : layout.conductors().get(conductor), st));
         }
         sink.accept(new PointClearance(layout.spanIds().get(span), x, y, z, cls, hag, ds));
-        index++;
       }
+      long expected = crc.getValue();
+      byte[] trailer = new byte[NearPointFile.TRAILER_BYTES];
+      in.readFully(trailer);
+      ByteBuffer t = ByteBuffer.wrap(trailer).order(ByteOrder.LITTLE_ENDIAN);
+      byte[] end = new byte[NearPointFile.END.length];
+      t.get(end);
+      long count = t.getLong();
+      long stored = Integer.toUnsignedLong(t.getInt());
+      if (!Arrays.equals(end, NearPointFile.END) || count != records) {
+        throw new InputException(file, "trailer", null, "missing or damaged end marker "
+            + "(the file was cut or extended)" + RERUN);
+      }
+      if (stored != expected) {
+        throw new InputException(file, "trailer", "checksum", String.format(Locale.ROOT,
+            "CRC-32C of the content is %08x, the file says %08x", expected, stored) + RERUN);
+      }
+      return layout;
+    } catch (EOFException e) {
+      throw new InputException(file, null, null, "ends early" + RERUN);
     }
   }
 
-  private static DataInputStream open(Path file) throws IOException {
-    InputStream raw = Files.newInputStream(file);
-    return new DataInputStream(new BufferedInputStream(raw, 1 << 20));
-  }
+  /** A header and its length in bytes. */
+  private record Header(NearPointFile layout, long bytes) {}
 
-  private static NearPointFile readHeader(Path file, DataInputStream in) throws IOException {
+  private static Header readHeader(Path file, DataInputStream in, long size) throws IOException {
     try {
       byte[] magic = in.readNBytes(NearPointFile.MAGIC.length);
       if (!Arrays.equals(magic, NearPointFile.MAGIC)) {
-        throw new InputException(file, "header", "magic",
-            "not a near-points file of this Clearance version");
+        boolean older = magic.length == 8 && new String(magic, 0, 7, StandardCharsets.US_ASCII)
+            .equals("CLRNEAR");
+        throw new InputException(file, "header", "format", older
+            ? "near-points format " + (char) magic[7] + ", this version reads format "
+                + (char) NearPointFile.MAGIC[7] + ": run the check again with this version"
+            : "not a near-points file (no CLRNEAR2 marker)" + RERUN);
       }
-      List<String> conditions = readStrings(in);
+      long[] bytes = {magic.length};
+      List<String> conditions = readStrings(file, in, size, bytes);
       List<String> groups = new ArrayList<>();
       for (int i = 0; i < conditions.size(); i++) {
-        groups.add(readString(in));
+        groups.add(readString(file, in, bytes));
       }
-      List<String> spans = readStrings(in);
-      List<String> conductors = readStrings(in);
-      return new NearPointFile(conditions, groups, spans, conductors);
+      List<String> spans = readStrings(file, in, size, bytes);
+      List<String> conductors = readStrings(file, in, size, bytes);
+      try {
+        return new Header(new NearPointFile(conditions, groups, spans, conductors), bytes[0]);
+      } catch (IllegalArgumentException e) {
+        throw new InputException(file, "header", null, e.getMessage() + RERUN);
+      }
     } catch (EOFException e) {
-      throw new InputException(file, "header", null, "file ends inside its header");
+      throw new InputException(file, "header", null, "file ends inside its header" + RERUN);
     }
   }
 
-  private static List<String> readStrings(DataInputStream in) throws IOException {
+  private static List<String> readStrings(Path file, DataInputStream in, long size,
+      long[] bytes) throws IOException {
     int n = Integer.reverseBytes(in.readInt());
-    if (n < 0 || n > 10_000_000) {
-      throw new IOException("implausible list length " + n);
+    bytes[0] += 4;
+    // every string takes at least its 2-byte length
+    if (n < 0 || n > (size - bytes[0]) / 2) {
+      throw new InputException(file, "header", "list length", "list of " + n
+          + " names cannot fit in the file's " + size + " bytes" + RERUN);
     }
     List<String> out = new ArrayList<>(n);
     for (int i = 0; i < n; i++) {
-      out.add(readString(in));
+      out.add(readString(file, in, bytes));
     }
     return out;
   }
 
-  private static String readString(DataInputStream in) throws IOException {
+  private static String readString(Path file, DataInputStream in, long[] bytes)
+      throws IOException {
     int len = Short.reverseBytes(in.readShort()) & 0xFFFF;
-    return new String(in.readNBytes(len), StandardCharsets.UTF_8);
+    byte[] b = new byte[len];
+    in.readFully(b);
+    bytes[0] += 2 + len;
+    return new String(b, StandardCharsets.UTF_8);
   }
 }

@@ -1,6 +1,7 @@
 package org.clearance.clearance;
 
 import java.io.BufferedOutputStream;
+import java.io.ByteArrayOutputStream;
 import java.io.Closeable;
 import java.io.IOException;
 import java.io.OutputStream;
@@ -9,16 +10,19 @@ import java.nio.ByteOrder;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.nio.file.StandardCopyOption;
 import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.zip.CRC32C;
+import java.util.zip.CheckedOutputStream;
 import org.clearance.io.AtomicFiles;
+import org.clearance.io.RecordSort;
 
 /**
  * Writes {@link NearPointFile near-points.bin}. Thread-safe: workers may write concurrently (each
- * call appends whole records). Writes to a temporary file and moves it into place on
- * {@link #close()}; {@link #abort()} deletes it.
+ * call appends whole records) to a temporary file of unsorted records; {@link #close()} sorts
+ * them ({@link RecordSort}), adds the header and the checksum trailer, and moves the finished
+ * file into place; {@link #abort()} deletes what was written.
  */
 public final class NearPointWriter implements Closeable {
 
@@ -27,52 +31,54 @@ public final class NearPointWriter implements Closeable {
 
   private final NearPointFile layout;
   private final Path target;
-  private final Path temp;
+  private final Path unsorted;
   private final OutputStream out;
   private final Map<String, Integer> spanIndex = new HashMap<>();
   private final Map<String, Integer> conductorIndex = new HashMap<>();
   private long count;
 
-  /** Opens the writer and writes the header. */
+  /** Opens the writer. */
   public NearPointWriter(Path target, NearPointFile layout) throws IOException {
     this.layout = layout;
     this.target = target;
-    this.temp = AtomicFiles.tempFileBeside(target);
-    this.out = new BufferedOutputStream(Files.newOutputStream(temp), BUFFER_BYTES);
+    this.unsorted = AtomicFiles.tempFileBeside(target);
+    this.out = new BufferedOutputStream(Files.newOutputStream(unsorted), BUFFER_BYTES);
     for (int i = 0; i < layout.spanIds().size(); i++) {
       spanIndex.put(layout.spanIds().get(i), i);
     }
     for (int i = 0; i < layout.conductors().size(); i++) {
       conductorIndex.put(layout.conductors().get(i), i);
     }
-    writeHeader();
   }
 
-  private void writeHeader() throws IOException {
-    out.write(NearPointFile.MAGIC);
-    writeStrings(layout.conditions());
+  private byte[] header() {
+    ByteArrayOutputStream b = new ByteArrayOutputStream();
+    b.writeBytes(NearPointFile.MAGIC);
+    writeStrings(b, layout.conditions());
     for (String g : layout.groups()) {
-      writeString(g);
+      writeString(b, g);
     }
-    writeStrings(layout.spanIds());
-    writeStrings(layout.conductors());
+    writeStrings(b, layout.spanIds());
+    writeStrings(b, layout.conductors());
+    return b.toByteArray();
   }
 
-  private void writeStrings(List<String> list) throws IOException {
-    out.write(ByteBuffer.allocate(4).order(ByteOrder.LITTLE_ENDIAN).putInt(list.size()).array());
+  private static void writeStrings(ByteArrayOutputStream b, List<String> list) {
+    b.writeBytes(ByteBuffer.allocate(4).order(ByteOrder.LITTLE_ENDIAN).putInt(list.size())
+        .array());
     for (String s : list) {
-      writeString(s);
+      writeString(b, s);
     }
   }
 
-  private void writeString(String s) throws IOException {
-    byte[] b = s.getBytes(StandardCharsets.UTF_8);
-    if (b.length > Short.MAX_VALUE) {
+  private static void writeString(ByteArrayOutputStream b, String s) {
+    byte[] bytes = s.getBytes(StandardCharsets.UTF_8);
+    if (bytes.length > Short.MAX_VALUE) {
       throw new IllegalArgumentException("string too long: " + s.length());
     }
-    out.write(ByteBuffer.allocate(2).order(ByteOrder.LITTLE_ENDIAN).putShort((short) b.length)
-        .array());
-    out.write(b);
+    b.writeBytes(ByteBuffer.allocate(2).order(ByteOrder.LITTLE_ENDIAN)
+        .putShort((short) bytes.length).array());
+    b.writeBytes(bytes);
   }
 
   /** Appends the points; their conditions must be in the layout's order. */
@@ -117,11 +123,30 @@ public final class NearPointWriter implements Closeable {
     return count;
   }
 
-  /** Finishes the file and moves it into place. */
+  /** Sorts the records, writes the finished file and moves it into place. */
   @Override
   public synchronized void close() throws IOException {
-    out.close();
-    Files.move(temp, target, StandardCopyOption.REPLACE_EXISTING, StandardCopyOption.ATOMIC_MOVE);
+    try {
+      out.close();
+      int rb = layout.recordBytes();
+      AtomicFiles.write(target, raw -> {
+        CRC32C crc = new CRC32C();
+        OutputStream o = new CheckedOutputStream(new BufferedOutputStream(raw, BUFFER_BYTES),
+            crc);
+        o.write(header());
+        long n = RecordSort.sort(unsorted, rb,
+            (a, ai, b, bi) -> NearPointFile.compareRecords(a, ai, b, bi, rb), o,
+            RecordSort.RUN_BYTES);
+        o.flush();
+        ByteBuffer trailer = ByteBuffer.allocate(NearPointFile.TRAILER_BYTES)
+            .order(ByteOrder.LITTLE_ENDIAN).put(NearPointFile.END).putLong(n)
+            .putInt((int) crc.getValue());
+        o.write(trailer.array());
+        o.flush();
+      });
+    } finally {
+      Files.deleteIfExists(unsorted);
+    }
   }
 
   /** Discards the partial file. */
@@ -132,7 +157,7 @@ public final class NearPointWriter implements Closeable {
       // the file is deleted next; nothing to save
     }
     try {
-      Files.deleteIfExists(temp);
+      Files.deleteIfExists(unsorted);
     } catch (IOException ignored) {
       // a leftover .part file is harmless and named as such
     }

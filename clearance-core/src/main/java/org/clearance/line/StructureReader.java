@@ -11,7 +11,6 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 import org.clearance.InputException;
-import org.clearance.io.Json;
 import org.clearance.survey.LinearUnit;
 import org.clearance.survey.SurveyUnits;
 
@@ -73,7 +72,7 @@ public final class StructureReader {
     boolean json = lower.endsWith(".geojson") || lower.endsWith(".json")
         || text.stripLeading().startsWith("{");
     List<RawRecord> records = json
-        ? GeoJsonStructures.records(Json.parse(text, name), name)
+        ? GeoJsonStructures.records(text, name)
         : csvRecords(text, name);
     return build(records, name, units);
   }

@@ -9,13 +9,15 @@ import org.clearance.assess.RunAssessment;
 import org.clearance.assess.SpanResult;
 import org.clearance.clearance.ConditionMinimum;
 import org.clearance.io.AtomicFiles;
+import org.clearance.io.CsvCells;
 import org.clearance.run.SpanRecord;
 import org.clearance.survey.SurveyUnits;
 
 /**
  * Writes {@code worklist.csv} (one line per site) and {@code spans.csv} (one line per span) of a
- * run folder: UTF-8, comma-separated, a header line, fields quoted as RFC 4180 asks when they
- * hold a comma, quote or line break. Every length column names its unit ({@code _m} or
+ * run folder: UTF-8, comma-separated, a header line, text fields quoted as RFC 4180 asks when
+ * they hold a comma, quote or line break and neutralised against formula injection
+ * ({@link CsvCells}). Every length column names its unit ({@code _m} or
  * {@code _ft}); x, y and z are in the survey CRS's own units. An empty field is a value not
  * computed; {@code years_to_violation} is {@code never} when growth never brings the site in.
  */
@@ -62,14 +64,14 @@ public final class CsvOutputs {
     StringBuilder b = new StringBuilder();
     row(b, worklistHeader(options));
     for (CutSite s : run.sites()) {
-      row(b, List.of(s.siteId(), s.spanId(), Integer.toString(s.priority()), s.zone(),
-          s.condition(), u.lengthText(s.minClearanceM()), u.lengthText(s.requiredM()),
+      row(b, List.of(t(s.siteId()), t(s.spanId()), Integer.toString(s.priority()), t(s.zone()),
+          t(s.condition()), u.lengthText(s.minClearanceM()), u.lengthText(s.requiredM()),
           u.lengthText(s.deficitM()),
           OutputUnit.fixed(su.horizontal().fromMetres(s.x()), LENGTH_DECIMALS),
           OutputUnit.fixed(su.horizontal().fromMetres(s.y()), LENGTH_DECIMALS),
           OutputUnit.fixed(su.vertical().fromMetres(s.z()), LENGTH_DECIMALS),
           OutputUnit.fixed(s.lon(), DEGREE_DECIMALS), OutputUnit.fixed(s.lat(), DEGREE_DECIMALS),
-          u.lengthText(s.chainageM()), s.side().word(), u.lengthText(s.offsetM()),
+          u.lengthText(s.chainageM()), t(s.side().word()), u.lengthText(s.offsetM()),
           u.lengthText(s.vegHeightM()), u.lengthText(s.cutToHeightM()),
           s.points().isPresent() ? Integer.toString(s.points().getAsInt()) : "",
           u.areaText(s.areaM2()), years(s.yearsToViolation())));
@@ -86,19 +88,19 @@ public final class CsvOutputs {
     for (SpanResult r : run.spans()) {
       SpanRecord s = r.span();
       List<String> f = new ArrayList<>();
-      f.add(s.id());
-      f.add(s.context().lineId());
-      f.add(s.from().id());
-      f.add(s.to().id());
+      f.add(t(s.id()));
+      f.add(t(s.context().lineId()));
+      f.add(t(s.from().id()));
+      f.add(t(s.to().id()));
       f.add(u.lengthText(s.context().lengthM()));
       f.add(r.status().name());
-      f.add(r.reason());
+      f.add(t(r.reason()));
       f.add(Integer.toString(r.conductorsFitted()));
       for (String group : List.of("survey", "hot", "blowout", "ice")) {
         f.add(u.lengthText(r.minimumOfGroup(group)));
       }
-      f.add(r.governingMinimum().map(ConditionMinimum::condition).orElse(""));
-      f.add(ruled ? r.worst().map(CutSite::zone).orElse("") : "");
+      f.add(t(r.governingMinimum().map(ConditionMinimum::condition).orElse("")));
+      f.add(t(ruled ? r.worst().map(CutSite::zone).orElse("") : ""));
       f.add(r.sitesCounted() ? Integer.toString(r.sites().size()) : "");
       f.add(r.rank().isPresent() ? Integer.toString(r.rank().getAsInt()) : "");
       f.add(r.worst().map(w -> Integer.toString(w.priority())).orElse(""));
@@ -126,22 +128,13 @@ public final class CsvOutputs {
     return OutputUnit.fixed(y, YEAR_DECIMALS);
   }
 
-  private static void row(StringBuilder b, List<String> fields) {
-    for (int i = 0; i < fields.size(); i++) {
-      if (i > 0) {
-        b.append(',');
-      }
-      b.append(quote(fields.get(i)));
-    }
-    b.append('\n');
+  /** One line of cells already written as CSV (text through {@link #t}, numbers as they are). */
+  private static void row(StringBuilder b, List<String> cells) {
+    b.append(String.join(",", cells)).append('\n');
   }
 
-  /** A field quoted when it holds a comma, quote or line break (RFC 4180 section 2). */
-  static String quote(String field) {
-    if (field.indexOf(',') < 0 && field.indexOf('"') < 0 && field.indexOf('\n') < 0
-        && field.indexOf('\r') < 0) {
-      return field;
-    }
-    return '"' + field.replace("\"", "\"\"") + '"';
+  /** A text cell: quoted as RFC 4180 asks, neutralised against formula injection. */
+  private static String t(String text) {
+    return CsvCells.text(text);
   }
 }

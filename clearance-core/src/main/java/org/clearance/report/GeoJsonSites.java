@@ -1,12 +1,15 @@
 package org.clearance.report;
 
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.node.ArrayNode;
+import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import org.clearance.assess.CutSite;
 import org.clearance.assess.RunAssessment;
 import org.clearance.io.AtomicFiles;
-import org.clearance.io.JsonWriter;
+import org.clearance.io.JsonFiles;
 
 /**
  * Writes {@code sites.geojson}: one Point feature per site in WGS84 longitude and latitude, as
@@ -31,43 +34,44 @@ public final class GeoJsonSites {
     OutputUnit u = new OutputUnit(options.outputUnit());
     var h = run.model().units().horizontal();
     var v = run.model().units().vertical();
-    JsonWriter w = new JsonWriter().beginObject().member("type", "FeatureCollection");
-    w.name("features").beginArray();
+    ObjectNode doc = JsonFiles.object().put("type", "FeatureCollection");
+    ArrayNode features = doc.putArray("features");
     for (CutSite s : run.sites()) {
-      w.beginObject().member("type", "Feature").member("id", s.siteId());
-      w.name("geometry");
+      ObjectNode f = features.addObject().put("type", "Feature").put("id", s.siteId());
       if (Double.isFinite(s.lon()) && Double.isFinite(s.lat())) {
-        w.beginObject().member("type", "Point").name("coordinates").beginArray()
-            .value(round(s.lon(), DEGREE_SCALE)).value(round(s.lat(), DEGREE_SCALE))
-            .endArray().endObject();
+        f.putObject("geometry").put("type", "Point").putArray("coordinates")
+            .add(round(s.lon(), DEGREE_SCALE)).add(round(s.lat(), DEGREE_SCALE));
       } else {
-        w.value((String) null);
+        f.putNull("geometry");
       }
-      w.name("properties").beginObject().member("site_id", s.siteId())
-          .member("span_id", s.spanId()).member("priority", s.priority())
-          .member("zone", s.zone()).member("condition", s.condition())
-          .member(u.column("min_clearance"), round(u.length(s.minClearanceM())))
-          .member(u.column("required"), round(u.length(s.requiredM())))
-          .member(u.column("deficit"), round(u.length(s.deficitM())))
-          .member("x", round(h.fromMetres(s.x()))).member("y", round(h.fromMetres(s.y())))
-          .member("z", round(v.fromMetres(s.z())))
-          .member(u.column("chainage"), round(u.length(s.chainageM())))
-          .member("side", s.side().word())
-          .member(u.column("offset"), round(u.length(s.offsetM())))
-          .member(u.column("veg_height"), round(u.length(s.vegHeightM())))
-          .member(u.column("cut_to_height"), round(u.length(s.cutToHeightM())));
-      w.name("n_points");
+      ObjectNode p = f.putObject("properties").put("site_id", s.siteId())
+          .put("span_id", s.spanId()).put("priority", s.priority())
+          .put("zone", s.zone()).put("condition", s.condition());
+      p.set(u.column("min_clearance"), length(u.length(s.minClearanceM())));
+      p.set(u.column("required"), length(u.length(s.requiredM())));
+      p.set(u.column("deficit"), length(u.length(s.deficitM())));
+      p.set("x", length(h.fromMetres(s.x())));
+      p.set("y", length(h.fromMetres(s.y())));
+      p.set("z", length(v.fromMetres(s.z())));
+      p.set(u.column("chainage"), length(u.length(s.chainageM())));
+      p.put("side", s.side().word());
+      p.set(u.column("offset"), length(u.length(s.offsetM())));
+      p.set(u.column("veg_height"), length(u.length(s.vegHeightM())));
+      p.set(u.column("cut_to_height"), length(u.length(s.cutToHeightM())));
       if (s.points().isPresent()) {
-        w.value(s.points().getAsInt());
+        p.put("n_points", s.points().getAsInt());
       } else {
-        w.value((String) null);
+        p.putNull("n_points");
       }
-      w.member(u.areaColumn(), round(u.area(s.areaM2()), 100))
-          .member("years_to_violation", round(s.yearsToViolation(), 100))
-          .endObject().endObject();
+      p.set(u.areaColumn(), JsonFiles.number(round(u.area(s.areaM2()), 100)));
+      p.set("years_to_violation", JsonFiles.number(round(s.yearsToViolation(), 100)));
     }
-    w.endArray();
-    return w.endObject().toString() + "\n";
+    return JsonFiles.write(doc) + "\n";
+  }
+
+  /** A length to millimetres, or null when not computed. */
+  private static JsonNode length(double v) {
+    return JsonFiles.number(round(v, 1000));
   }
 
   /**
@@ -83,11 +87,6 @@ public final class GeoJsonSites {
     }
     AtomicFiles.writeString(target, text(run, options));
     return true;
-  }
-
-  /** Millimetres: lengths to 3 decimals. */
-  private static double round(double v) {
-    return round(v, 1000);
   }
 
   /** Rounded to 1 / scale; NaN and infinities unchanged (written as null). */

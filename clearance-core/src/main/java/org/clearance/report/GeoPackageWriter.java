@@ -34,6 +34,11 @@ public final class GeoPackageWriter {
   public static final int APPLICATION_ID = 0x47504B47;
   /** {@code PRAGMA user_version} of GeoPackage 1.3.0 (requirement 2). */
   public static final int USER_VERSION = 10300;
+  /**
+   * {@code gpkg_contents.last_change} of every layer: a fixed time, so that the same inputs give
+   * the same bytes (issue 10, item 11); when the run happened is in run.json.
+   */
+  static final String LAST_CHANGE = "1970-01-01T00:00:00.000Z";
   /** srs_id used for a survey CRS known only by its WKT (any id above the EPSG range). */
   static final int CUSTOM_SRS_ID = 100000;
 
@@ -160,8 +165,8 @@ public final class GeoPackageWriter {
       st.execute(ddl.append(')').toString());
     }
     try (PreparedStatement ps = c.prepareStatement("INSERT INTO gpkg_contents (table_name, "
-        + "data_type, identifier, description, min_x, min_y, max_x, max_y, srs_id) "
-        + "VALUES (?, 'features', ?, ?, ?, ?, ?, ?, ?)")) {
+        + "data_type, identifier, description, min_x, min_y, max_x, max_y, srs_id, last_change) "
+        + "VALUES (?, 'features', ?, ?, ?, ?, ?, ?, ?, '" + LAST_CHANGE + "')")) {
       ps.setString(1, layer.table());
       ps.setString(2, layer.table());
       ps.setString(3, layer.description());

@@ -1,15 +1,15 @@
 package org.clearance.run;
 
+import com.fasterxml.jackson.databind.node.ArrayNode;
+import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.time.LocalDate;
 import java.time.format.DateTimeParseException;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 import java.util.Optional;
-import org.clearance.InputException;
-import org.clearance.io.Json;
-import org.clearance.io.JsonFields;
-import org.clearance.io.JsonWriter;
+import org.clearance.io.JsonAt;
+import org.clearance.io.JsonFiles;
 import org.clearance.line.LineCondition;
 
 /** The {@code facts} member of {@code model.json} ({@link RunFacts}); NaN is written as null. */
@@ -20,102 +20,92 @@ final class RunFactsJson {
 
   private RunFactsJson() {}
 
-  static void write(JsonWriter w, RunFacts f) {
-    w.name(KEY).beginObject();
-    w.name("lines").beginArray();
+  static ObjectNode node(RunFacts f) {
+    ObjectNode o = JsonFiles.object();
+    ArrayNode lines = o.putArray("lines");
     for (LineFacts l : f.lines()) {
-      w.beginObject().member("line_id", l.lineId()).member("name", l.name())
-          .member("nominal_voltage_kv", l.nominalVoltageKv())
-          .member("survey_conductor_temperature_c", l.surveyConductorTemperatureC())
-          .member("row_half_width_m", l.rowHalfWidthM());
-      w.name("positions").beginArray();
+      ObjectNode n = lines.addObject().put("line_id", l.lineId()).put("name", l.name());
+      n.set("nominal_voltage_kv", JsonFiles.number(l.nominalVoltageKv()));
+      n.set("survey_conductor_temperature_c",
+          JsonFiles.number(l.surveyConductorTemperatureC()));
+      n.set("row_half_width_m", JsonFiles.number(l.rowHalfWidthM()));
+      ArrayNode positions = n.putArray("positions");
       for (LineFacts.Position p : l.positions()) {
-        w.beginObject().member("position", p.position()).member("role", p.role())
-            .member("circuit", p.circuit()).member("conductor", p.conductor())
-            .member("bundle", p.bundle()).endObject();
+        positions.addObject().put("position", p.position()).put("role", p.role())
+            .put("circuit", p.circuit()).put("conductor", p.conductor())
+            .put("bundle", p.bundle());
       }
-      w.endArray().name("conditions").beginArray();
+      ArrayNode conditions = n.putArray("conditions");
       for (LineCondition c : l.conditions()) {
-        w.beginObject().member("name", c.name())
-            .member("kind", c.kind().name().toLowerCase(Locale.ROOT))
-            .member("temperature_c", c.temperatureC())
-            .member("creep_allowance_c", c.creepAllowanceC())
-            .member("ice_thickness_m", c.iceThicknessM())
-            .member("ice_density_kg_m3", c.iceDensityKgM3())
-            .member("wind_pressure_pa", c.windPressurePa())
-            .member("swing_angle_rad", c.swingAngleRad())
-            .member("extra_sag_m", c.extraSagM()).endObject();
+        ObjectNode cn = conditions.addObject().put("name", c.name())
+            .put("kind", c.kind().name().toLowerCase(Locale.ROOT));
+        cn.set("temperature_c", JsonFiles.number(c.temperatureC()));
+        cn.set("creep_allowance_c", JsonFiles.number(c.creepAllowanceC()));
+        cn.set("ice_thickness_m", JsonFiles.number(c.iceThicknessM()));
+        cn.set("ice_density_kg_m3", JsonFiles.number(c.iceDensityKgM3()));
+        cn.set("wind_pressure_pa", JsonFiles.number(c.windPressurePa()));
+        cn.set("swing_angle_rad", JsonFiles.number(c.swingAngleRad()));
+        cn.set("extra_sag_m", JsonFiles.number(c.extraSagM()));
       }
-      w.endArray().endObject();
     }
-    w.endArray().name("inputs").beginArray();
+    ArrayNode inputs = o.putArray("inputs");
     for (RunRecord.InputFile i : f.inputs()) {
-      w.beginObject().member("role", i.role()).member("path", i.path())
-          .member("bytes", i.bytes()).member("sha256", i.sha256()).endObject();
+      inputs.addObject().put("role", i.role()).put("path", i.path()).put("bytes", i.bytes())
+          .put("sha256", i.sha256());
     }
-    w.endArray();
-    day(w, "first_survey_day", f.firstSurveyDay());
-    day(w, "last_survey_day", f.lastSurveyDay());
-    w.member("acquisition_note", f.acquisitionNote());
-    day(w, "run_day", f.runDay());
-    w.endObject();
+    o.set("first_survey_day", JsonFiles.text(f.firstSurveyDay().map(LocalDate::toString)
+        .orElse(null)));
+    o.set("last_survey_day", JsonFiles.text(f.lastSurveyDay().map(LocalDate::toString)
+        .orElse(null)));
+    o.put("acquisition_note", f.acquisitionNote());
+    o.set("run_day", JsonFiles.text(f.runDay().map(LocalDate::toString).orElse(null)));
+    return o;
   }
 
-  private static void day(JsonWriter w, String name, Optional<LocalDate> d) {
-    w.name(name);
-    w.value(d.map(LocalDate::toString).orElse(null));
-  }
-
-  static RunFacts read(JsonFields r, Json.Obj o) {
+  static RunFacts read(JsonAt o) {
     List<LineFacts> lines = new ArrayList<>();
-    for (Json.Value v : r.arr(o, "lines")) {
-      Json.Obj l = r.obj(v, "a line");
+    for (JsonAt l : o.objects("lines")) {
       List<LineFacts.Position> positions = new ArrayList<>();
-      for (Json.Value pv : r.arr(l, "positions")) {
-        Json.Obj p = r.obj(pv, "a position");
-        positions.add(new LineFacts.Position(r.str(p, "position"), r.str(p, "role"),
-            (int) r.num(p, "circuit"), r.str(p, "conductor"), (int) r.num(p, "bundle")));
+      for (JsonAt p : l.objects("positions")) {
+        positions.add(new LineFacts.Position(p.str("position"), p.str("role"),
+            (int) p.integer("circuit", Integer.MIN_VALUE, Integer.MAX_VALUE), p.str("conductor"),
+            (int) p.integer("bundle", Integer.MIN_VALUE, Integer.MAX_VALUE)));
       }
       List<LineCondition> conditions = new ArrayList<>();
-      for (Json.Value cv : r.arr(l, "conditions")) {
-        Json.Obj c = r.obj(cv, "a condition");
-        String kind = r.str(c, "kind");
+      for (JsonAt c : l.objects("conditions")) {
+        String kind = c.str("kind");
         LineCondition.Kind k;
         try {
           k = LineCondition.Kind.valueOf(kind.toUpperCase(Locale.ROOT));
         } catch (IllegalArgumentException e) {
-          throw new InputException(r.file(), "line " + c.line(), "kind",
-              "not a condition kind: " + kind);
+          throw c.error("kind", "not a condition kind: " + kind);
         }
-        conditions.add(new LineCondition(r.str(c, "name"), k, r.num(c, "temperature_c"),
-            r.num(c, "creep_allowance_c"), r.num(c, "ice_thickness_m"),
-            r.num(c, "ice_density_kg_m3"), r.num(c, "wind_pressure_pa"),
-            r.num(c, "swing_angle_rad"), r.num(c, "extra_sag_m")));
+        conditions.add(new LineCondition(c.str("name"), k, c.num("temperature_c"),
+            c.num("creep_allowance_c"), c.num("ice_thickness_m"), c.num("ice_density_kg_m3"),
+            c.num("wind_pressure_pa"), c.num("swing_angle_rad"), c.num("extra_sag_m")));
       }
-      lines.add(new LineFacts(r.str(l, "line_id"), r.str(l, "name"),
-          r.num(l, "nominal_voltage_kv"), r.num(l, "survey_conductor_temperature_c"),
-          r.num(l, "row_half_width_m"), positions, conditions));
+      lines.add(new LineFacts(l.str("line_id"), l.str("name"), l.num("nominal_voltage_kv"),
+          l.num("survey_conductor_temperature_c"), l.num("row_half_width_m"), positions,
+          conditions));
     }
     List<RunRecord.InputFile> inputs = new ArrayList<>();
-    for (Json.Value v : r.arr(o, "inputs")) {
-      Json.Obj i = r.obj(v, "an input");
-      inputs.add(new RunRecord.InputFile(r.str(i, "role"), r.str(i, "path"),
-          (long) r.num(i, "bytes"), r.str(i, "sha256")));
+    for (JsonAt i : o.objects("inputs")) {
+      inputs.add(new RunRecord.InputFile(i.str("role"), i.str("path"),
+          i.integer("bytes", 0, Long.MAX_VALUE), i.str("sha256")));
     }
-    return new RunFacts(lines, inputs, day(r, o, "first_survey_day"),
-        day(r, o, "last_survey_day"), r.str(o, "acquisition_note"), day(r, o, "run_day"));
+    return new RunFacts(lines, inputs, day(o, "first_survey_day"), day(o, "last_survey_day"),
+        o.str("acquisition_note"), day(o, "run_day"));
   }
 
-  private static Optional<LocalDate> day(JsonFields r, Json.Obj o, String key) {
-    Json.Value v = r.get(o, key);
-    if (v instanceof Json.Null) {
+  private static Optional<LocalDate> day(JsonAt o, String key) {
+    if (o.get(key).isNull()) {
       return Optional.empty();
     }
-    String s = r.text(v, key);
+    String s = o.str(key);
     try {
       return Optional.of(LocalDate.parse(s));
     } catch (DateTimeParseException e) {
-      throw new InputException(r.file(), "line " + v.line(), key, "not an ISO-8601 day: " + s);
+      throw o.error(key, "not an ISO-8601 day: " + s);
     }
   }
 }

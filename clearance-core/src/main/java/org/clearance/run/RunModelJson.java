@@ -1,10 +1,18 @@
 package org.clearance.run;
 
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.node.ArrayNode;
+import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.io.IOException;
+import java.nio.charset.CharacterCodingException;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.security.MessageDigest;
+import java.security.NoSuchAlgorithmException;
 import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.HexFormat;
 import java.util.List;
 import java.util.Optional;
 import java.util.OptionalInt;
@@ -13,117 +21,141 @@ import org.clearance.clearance.ConditionMinimum;
 import org.clearance.clearance.ConditionSet;
 import org.clearance.clearance.SpanContext;
 import org.clearance.clearance.SpanStatus;
-import org.clearance.io.Json;
-import org.clearance.io.JsonFields;
 import org.clearance.io.AtomicFiles;
-import org.clearance.io.JsonWriter;
+import org.clearance.io.JsonAt;
+import org.clearance.io.JsonFiles;
 import org.clearance.survey.LinearUnit;
 import org.clearance.survey.SurveyUnits;
 
 /**
  * Writes and reads {@link RunModel} as JSON ({@code model.json}). Lengths in metres; NaN is
  * written as null. The format is this project's own and is versioned by {@link #FORMAT}.
+ *
+ * <p>The file is one object: {@code {"format":"clearance-run-model/2","content_sha256":"HEX",
+ * "model":{...}}} followed by a line break, where HEX is the SHA-256 (FIPS 180-4) of the exact
+ * bytes of the {@code model} value. Reading checks the format and the checksum before anything
+ * else, so a damaged or edited file is refused with a message naming it, never half-used.
  */
 public final class RunModelJson {
 
   /** Format name and version written into the file. */
-  public static final String FORMAT = "clearance-run-model/1";
+  public static final String FORMAT = "clearance-run-model/2";
+  /** Hex digits of a SHA-256. */
+  private static final int SHA256_HEX = 64;
+  /** What a damaged file's message ends with. */
+  private static final String RERUN = "; the run folder is damaged: run the check again";
 
   private RunModelJson() {}
 
-  /** The model as JSON text. */
+  /** The model as JSON text, with its format and checksum. */
   public static String toJson(RunModel m) {
-    JsonWriter w = new JsonWriter().beginObject();
-    w.member("format", FORMAT).member("tool_version", m.toolVersion());
-    w.name("units").beginObject()
-        .member("horizontal", m.units().horizontal().name())
-        .member("vertical", m.units().vertical().name())
-        .member("crs_name", m.units().crsName())
-        .name("epsg");
-    if (m.units().epsg().isPresent()) {
-      w.value(m.units().epsg().getAsInt());
-    } else {
-      w.value((String) null);
-    }
-    w.member("wkt", m.units().wkt()).member("source", m.units().source()).endObject();
-    w.name("conditions").beginArray();
-    for (int k = 0; k < m.conditions().size(); k++) {
-      w.beginObject().member("name", m.conditions().names().get(k))
-          .member("group", m.conditions().groups().get(k)).endObject();
-    }
-    w.endArray();
-    w.member("keep_radius_m", m.keepRadiusM()).member("vegetation", m.vegetation())
-        .member("ground_source", m.groundSource());
-    w.name("spans").beginArray();
-    for (SpanRecord s : m.spans()) {
-      writeSpan(w, s);
-    }
-    w.endArray();
-    w.name("trees").beginArray();
-    for (TreeRecord t : m.trees()) {
-      w.beginObject().member("id", t.id()).member("span_id", t.spanId()).member("x", t.x())
-          .member("y", t.y()).member("top_z", t.topZ()).member("base_z", t.baseZ())
-          .member("height_m", t.heightM()).member("crown_radius_m", t.crownRadiusM())
-          .name("base_distances_m").beginArray();
-      for (double d : t.baseDistances()) {
-        w.value(d);
-      }
-      w.endArray().member("nearest_conductor", t.nearestConductor()).endObject();
-    }
-    w.endArray();
-    RunFactsJson.write(w, m.facts());
-    return w.endObject().toString();
+    String body = JsonFiles.write(model(m));
+    return prefix(sha256(body.getBytes(StandardCharsets.UTF_8))) + body + "}\n";
   }
 
-  private static void writeSpan(JsonWriter w, SpanRecord s) {
+  private static String prefix(String sha256) {
+    return "{\"format\":\"" + FORMAT + "\",\"content_sha256\":\"" + sha256 + "\",\"model\":";
+  }
+
+  private static ObjectNode model(RunModel m) {
+    ObjectNode o = JsonFiles.object();
+    o.put("tool_version", m.toolVersion());
+    ObjectNode u = o.putObject("units");
+    u.put("horizontal", m.units().horizontal().name())
+        .put("vertical", m.units().vertical().name())
+        .put("crs_name", m.units().crsName());
+    if (m.units().epsg().isPresent()) {
+      u.put("epsg", m.units().epsg().getAsInt());
+    } else {
+      u.putNull("epsg");
+    }
+    u.put("wkt", m.units().wkt()).put("source", m.units().source());
+    ArrayNode conditions = o.putArray("conditions");
+    for (int k = 0; k < m.conditions().size(); k++) {
+      conditions.addObject().put("name", m.conditions().names().get(k))
+          .put("group", m.conditions().groups().get(k));
+    }
+    o.set("keep_radius_m", JsonFiles.number(m.keepRadiusM()));
+    o.put("vegetation", m.vegetation()).put("ground_source", m.groundSource());
+    ArrayNode spans = o.putArray("spans");
+    for (SpanRecord s : m.spans()) {
+      spans.add(span(s));
+    }
+    ArrayNode trees = o.putArray("trees");
+    for (TreeRecord t : m.trees()) {
+      ObjectNode n = trees.addObject().put("id", t.id()).put("span_id", t.spanId());
+      n.set("x", JsonFiles.number(t.x()));
+      n.set("y", JsonFiles.number(t.y()));
+      n.set("top_z", JsonFiles.number(t.topZ()));
+      n.set("base_z", JsonFiles.number(t.baseZ()));
+      n.set("height_m", JsonFiles.number(t.heightM()));
+      n.set("crown_radius_m", JsonFiles.number(t.crownRadiusM()));
+      ArrayNode ds = n.putArray("base_distances_m");
+      t.baseDistances().forEach(d -> ds.add(JsonFiles.number(d)));
+      n.put("nearest_conductor", t.nearestConductor());
+    }
+    o.set(RunFactsJson.KEY, RunFactsJson.node(m.facts()));
+    return o;
+  }
+
+  private static ObjectNode span(SpanRecord s) {
     SpanContext c = s.context();
-    w.beginObject().member("id", c.spanId()).member("line_id", c.lineId())
-        .member("line_name", s.lineName()).member("nominal_voltage_kv", c.nominalVoltageKv())
-        .member("altitude_m", c.altitudeM()).member("length_m", c.lengthM());
-    writeStructure(w, "from", s.from());
-    writeStructure(w, "to", s.to());
-    w.member("status", s.status().name()).member("reason", s.reason());
-    w.name("conductors").beginArray();
+    ObjectNode o = JsonFiles.object();
+    o.put("id", c.spanId()).put("line_id", c.lineId()).put("line_name", s.lineName());
+    o.set("nominal_voltage_kv", JsonFiles.number(c.nominalVoltageKv()));
+    o.set("altitude_m", JsonFiles.number(c.altitudeM()));
+    o.set("length_m", JsonFiles.number(c.lengthM()));
+    o.set("from", structure(s.from()));
+    o.set("to", structure(s.to()));
+    o.put("status", s.status().name()).put("reason", s.reason());
+    ArrayNode conductors = o.putArray("conductors");
     for (ConductorRecord k : s.conductors()) {
-      w.beginObject().member("name", k.name()).member("role", k.role())
-          .member("status", k.status()).member("reason", k.reason())
-          .member("points", k.points()).member("coverage_pct", k.coveragePct())
-          .member("rms_m", k.rmsM()).member("max_gap_m", k.maxGapM());
-      w.name("states").beginArray();
+      ObjectNode n = conductors.addObject().put("name", k.name()).put("role", k.role())
+          .put("status", k.status()).put("reason", k.reason()).put("points", k.points());
+      n.set("coverage_pct", JsonFiles.number(k.coveragePct()));
+      n.set("rms_m", JsonFiles.number(k.rmsM()));
+      n.set("max_gap_m", JsonFiles.number(k.maxGapM()));
+      ArrayNode states = n.putArray("states");
       for (int i = 0; i < k.states().size(); i++) {
         Optional<CurveRecord> st = k.states().get(i);
         if (st.isEmpty()) {
-          w.beginObject().member("failure", k.failures().get(i).orElse("")).endObject();
+          states.addObject().put("failure", k.failures().get(i).orElse(""));
           continue;
         }
         CurveRecord r = st.get();
-        w.beginObject().member("ax", r.ax()).member("ay", r.ay()).member("az", r.az())
-            .member("bx", r.bx()).member("by", r.by()).member("bz", r.bz())
-            .member("c", r.c()).member("swing_min_rad", r.swingMin())
-            .member("swing_max_rad", r.swingMax()).endObject();
+        ObjectNode cn = states.addObject();
+        double[] v = {r.ax(), r.ay(), r.az(), r.bx(), r.by(), r.bz(), r.c(), r.swingMin(),
+            r.swingMax()};
+        String[] names = {"ax", "ay", "az", "bx", "by", "bz", "c", "swing_min_rad",
+            "swing_max_rad"};
+        for (int j = 0; j < v.length; j++) {
+          cn.set(names[j], JsonFiles.number(v[j]));
+        }
       }
-      w.endArray().endObject();
     }
-    w.endArray();
-    w.name("minima").beginArray();
+    ArrayNode minima = o.putArray("minima");
     for (ConditionMinimum mm : s.minima()) {
-      w.beginObject().member("condition", mm.condition()).member("group", mm.group())
-          .member("distance_m", mm.distance()).member("horizontal_m", mm.horizontal())
-          .member("vertical_m", mm.vertical()).member("conductor", mm.conductor())
-          .member("x", mm.x()).member("y", mm.y()).member("z", mm.z()).endObject();
+      ObjectNode n = minima.addObject().put("condition", mm.condition()).put("group", mm.group());
+      n.set("distance_m", JsonFiles.number(mm.distance()));
+      n.set("horizontal_m", JsonFiles.number(mm.horizontal()));
+      n.set("vertical_m", JsonFiles.number(mm.vertical()));
+      n.put("conductor", mm.conductor());
+      n.set("x", JsonFiles.number(mm.x()));
+      n.set("y", JsonFiles.number(mm.y()));
+      n.set("z", JsonFiles.number(mm.z()));
     }
-    w.endArray();
-    w.member("points_measured", s.pointsMeasured()).member("points_kept", s.pointsKept());
-    w.name("notes").beginArray();
-    for (String n : s.notes()) {
-      w.value(n);
-    }
-    w.endArray().endObject();
+    o.put("points_measured", s.pointsMeasured()).put("points_kept", s.pointsKept());
+    ArrayNode notes = o.putArray("notes");
+    s.notes().forEach(notes::add);
+    return o;
   }
 
-  private static void writeStructure(JsonWriter w, String name, StructureRecord r) {
-    w.name(name).beginObject().member("id", r.id()).member("x", r.x()).member("y", r.y())
-        .member("ground_z", r.groundZ()).member("type", r.type()).endObject();
+  private static ObjectNode structure(StructureRecord r) {
+    ObjectNode o = JsonFiles.object().put("id", r.id());
+    o.set("x", JsonFiles.number(r.x()));
+    o.set("y", JsonFiles.number(r.y()));
+    o.set("ground_z", JsonFiles.number(r.groundZ()));
+    return o.put("type", r.type());
   }
 
   /** Writes the model to a file (temporary file, then moved into place). */
@@ -134,99 +166,129 @@ public final class RunModelJson {
   /**
    * Reads a model back.
    *
-   * @throws InputException naming the file and key when it is not a run model of this format
+   * @throws InputException naming the file (and the key) when it is not a run model of this
+   *     format, does not match its checksum, or lacks a value
    */
   public static RunModel read(Path file) throws IOException {
     String name = file.toString();
-    Json.Value root = Json.parse(Files.readString(file, StandardCharsets.UTF_8), name);
-    JsonFields r = new JsonFields(name);
-    Json.Obj o = r.obj(root, "the document");
-    String format = r.str(o, "format");
+    byte[] bytes = Files.readAllBytes(file);
+    String text;
+    try {
+      text = StandardCharsets.UTF_8.newDecoder().decode(java.nio.ByteBuffer.wrap(bytes))
+          .toString();
+    } catch (CharacterCodingException e) {
+      throw new InputException(name, null, null, "not UTF-8 text" + RERUN);
+    }
+    JsonAt root = JsonAt.root(name, JsonFiles.parse(text, name));
+    String format = root.str("format");
     if (!FORMAT.equals(format)) {
-      throw new InputException(name, "line " + root.line(), "format",
-          "not a run model of this version (" + format + "); expected " + FORMAT);
+      throw root.error("format", format.startsWith("clearance-run-model/")
+          ? "run model " + format + ", this version reads " + FORMAT
+              + ": run the check again with this version"
+          : "not a Clearance run model (" + format + ")" + RERUN);
     }
-    Json.Obj u = r.obj(r.get(o, "units"), "units");
-    Json.Value epsg = r.get(u, "epsg");
-    SurveyUnits units = new SurveyUnits(
-        LinearUnit.valueOf(r.str(u, "horizontal")), LinearUnit.valueOf(r.str(u, "vertical")),
-        r.str(u, "crs_name"),
-        epsg instanceof Json.Num n ? OptionalInt.of((int) n.value()) : OptionalInt.empty(),
-        r.str(u, "wkt"), r.str(u, "source"));
-    List<String> names = new ArrayList<>();
-    List<String> groups = new ArrayList<>();
-    for (Json.Value v : r.arr(o, "conditions")) {
-      Json.Obj c = r.obj(v, "a condition");
-      names.add(r.str(c, "name"));
-      groups.add(r.str(c, "group"));
+    String stated = root.str("content_sha256");
+    byte[] prefix = prefix(stated).getBytes(StandardCharsets.UTF_8);
+    int end = bytes.length - (text.endsWith("}\n") ? 2 : 1);
+    if (stated.length() != SHA256_HEX || bytes.length < prefix.length + 1
+        || !Arrays.equals(prefix, Arrays.copyOf(bytes, prefix.length))
+        || !stated.equals(sha256(Arrays.copyOfRange(bytes, prefix.length, end)))) {
+      throw root.error("content_sha256", "the content does not match its SHA-256: the file "
+          + "was changed or damaged" + RERUN);
     }
-    List<SpanRecord> spans = new ArrayList<>();
-    for (Json.Value v : r.arr(o, "spans")) {
-      spans.add(readSpan(r, r.obj(v, "a span")));
-    }
-    List<TreeRecord> trees = new ArrayList<>();
-    for (Json.Value v : r.arr(o, "trees")) {
-      Json.Obj t = r.obj(v, "a tree");
-      List<Double> ds = new ArrayList<>();
-      for (Json.Value d : r.arr(t, "base_distances_m")) {
-        ds.add(r.number(d, null));
-      }
-      trees.add(new TreeRecord(r.str(t, "id"), r.str(t, "span_id"), r.num(t, "x"),
-          r.num(t, "y"), r.num(t, "top_z"), r.num(t, "base_z"), r.num(t, "height_m"),
-          r.num(t, "crown_radius_m"), ds, r.str(t, "nearest_conductor")));
-    }
-    return new RunModel(r.str(o, "tool_version"), units, new ConditionSet(names, groups),
-        r.num(o, "keep_radius_m"), r.str(o, "vegetation"), r.str(o, "ground_source"), spans,
-        trees, o.members().containsKey(RunFactsJson.KEY)
-            ? RunFactsJson.read(r, r.obj(o.members().get(RunFactsJson.KEY), RunFactsJson.KEY))
-            : RunFacts.none());
+    return model(root.obj("model"));
   }
 
-  private static SpanRecord readSpan(JsonFields r, Json.Obj s) {
-    SpanContext context = new SpanContext(r.str(s, "id"), r.str(s, "line_id"),
-        r.num(s, "nominal_voltage_kv"), r.num(s, "altitude_m"), r.num(s, "length_m"));
+  private static RunModel model(JsonAt o) {
+    JsonAt u = o.obj("units");
+    JsonNode epsg = u.get("epsg");
+    OptionalInt code = OptionalInt.empty();
+    if (!epsg.isNull()) {
+      code = OptionalInt.of((int) u.integer("epsg", 0, Integer.MAX_VALUE));
+    }
+    SurveyUnits units = new SurveyUnits(u.constant("horizontal", LinearUnit.class),
+        u.constant("vertical", LinearUnit.class), u.str("crs_name"), code, u.str("wkt"),
+        u.str("source"));
+    List<String> names = new ArrayList<>();
+    List<String> groups = new ArrayList<>();
+    for (JsonAt c : o.objects("conditions")) {
+      names.add(c.str("name"));
+      groups.add(c.str("group"));
+    }
+    if (names.isEmpty()) {
+      throw o.error("conditions", "empty: at least the surveyed state" + RERUN);
+    }
+    List<SpanRecord> spans = new ArrayList<>();
+    for (JsonAt s : o.objects("spans")) {
+      spans.add(span(s, names.size()));
+    }
+    List<TreeRecord> trees = new ArrayList<>();
+    for (JsonAt t : o.objects("trees")) {
+      trees.add(new TreeRecord(t.str("id"), t.str("span_id"), t.num("x"), t.num("y"),
+          t.num("top_z"), t.num("base_z"), t.num("height_m"), t.num("crown_radius_m"),
+          t.numbers("base_distances_m"), t.str("nearest_conductor")));
+    }
+    try {
+      return new RunModel(o.str("tool_version"), units, new ConditionSet(names, groups),
+          o.num("keep_radius_m"), o.str("vegetation"), o.str("ground_source"), spans, trees,
+          RunFactsJson.read(o.obj(RunFactsJson.KEY)));
+    } catch (IllegalArgumentException e) {
+      throw o.error(null, e.getMessage() + RERUN);
+    }
+  }
+
+  private static SpanRecord span(JsonAt s, int conditions) {
+    SpanContext context = new SpanContext(s.str("id"), s.str("line_id"),
+        s.num("nominal_voltage_kv"), s.num("altitude_m"), s.num("length_m"));
     List<ConductorRecord> conductors = new ArrayList<>();
-    for (Json.Value v : r.arr(s, "conductors")) {
-      Json.Obj k = r.obj(v, "a conductor");
+    for (JsonAt k : s.objects("conductors")) {
       List<Optional<CurveRecord>> states = new ArrayList<>();
       List<Optional<String>> failures = new ArrayList<>();
-      for (Json.Value sv : r.arr(k, "states")) {
-        Json.Obj st = r.obj(sv, "a conductor state");
-        if (st.members().containsKey("failure")) {
+      for (JsonAt st : k.objects("states")) {
+        if (st.has("failure")) {
           states.add(Optional.empty());
-          failures.add(Optional.of(r.str(st, "failure")));
+          failures.add(Optional.of(st.str("failure")));
         } else {
-          states.add(Optional.of(new CurveRecord(r.num(st, "ax"), r.num(st, "ay"),
-              r.num(st, "az"), r.num(st, "bx"), r.num(st, "by"), r.num(st, "bz"),
-              r.num(st, "c"), r.num(st, "swing_min_rad"), r.num(st, "swing_max_rad"))));
+          states.add(Optional.of(new CurveRecord(st.num("ax"), st.num("ay"), st.num("az"),
+              st.num("bx"), st.num("by"), st.num("bz"), st.num("c"), st.num("swing_min_rad"),
+              st.num("swing_max_rad"))));
           failures.add(Optional.empty());
         }
       }
-      conductors.add(new ConductorRecord(r.str(k, "name"), r.str(k, "role"),
-          r.str(k, "status"), r.str(k, "reason"), (int) r.num(k, "points"),
-          r.num(k, "coverage_pct"), r.num(k, "rms_m"), r.num(k, "max_gap_m"), states,
-          failures));
+      if (states.size() != conditions) {
+        throw k.error("states", states.size() + " states for " + conditions + " conditions"
+            + RERUN);
+      }
+      conductors.add(new ConductorRecord(k.str("name"), k.str("role"), k.str("status"),
+          k.str("reason"), (int) k.integer("points", 0, Integer.MAX_VALUE),
+          k.num("coverage_pct"), k.num("rms_m"), k.num("max_gap_m"), states, failures));
     }
     List<ConditionMinimum> minima = new ArrayList<>();
-    for (Json.Value v : r.arr(s, "minima")) {
-      Json.Obj m = r.obj(v, "a minimum");
-      minima.add(new ConditionMinimum(r.str(m, "condition"), r.str(m, "group"),
-          r.num(m, "distance_m"), r.num(m, "horizontal_m"), r.num(m, "vertical_m"),
-          r.str(m, "conductor"), r.num(m, "x"), r.num(m, "y"), r.num(m, "z")));
+    for (JsonAt m : s.objects("minima")) {
+      minima.add(new ConditionMinimum(m.str("condition"), m.str("group"), m.num("distance_m"),
+          m.num("horizontal_m"), m.num("vertical_m"), m.str("conductor"), m.num("x"),
+          m.num("y"), m.num("z")));
     }
-    List<String> notes = new ArrayList<>();
-    for (Json.Value v : r.arr(s, "notes")) {
-      notes.add(r.text(v, "a note"));
+    try {
+      return new SpanRecord(context, s.str("line_name"), structure(s.obj("from")),
+          structure(s.obj("to")), s.constant("status", SpanStatus.class), s.str("reason"),
+          conductors, minima, s.integer("points_measured", 0, Long.MAX_VALUE),
+          s.integer("points_kept", 0, Long.MAX_VALUE), s.strings("notes"));
+    } catch (IllegalArgumentException e) {
+      throw s.error(null, e.getMessage() + RERUN);
     }
-    return new SpanRecord(context, r.str(s, "line_name"), readStructure(r, s, "from"),
-        readStructure(r, s, "to"), SpanStatus.valueOf(r.str(s, "status")), r.str(s, "reason"),
-        conductors, minima, (long) r.num(s, "points_measured"), (long) r.num(s, "points_kept"),
-        notes);
   }
 
-  private static StructureRecord readStructure(JsonFields r, Json.Obj s, String key) {
-    Json.Obj o = r.obj(r.get(s, key), key);
-    return new StructureRecord(r.str(o, "id"), r.num(o, "x"), r.num(o, "y"),
-        r.num(o, "ground_z"), r.str(o, "type"));
+  private static StructureRecord structure(JsonAt o) {
+    return new StructureRecord(o.str("id"), o.num("x"), o.num("y"), o.num("ground_z"),
+        o.str("type"));
+  }
+
+  private static String sha256(byte[] bytes) {
+    try {
+      return HexFormat.of().formatHex(MessageDigest.getInstance("SHA-256").digest(bytes));
+    } catch (NoSuchAlgorithmException e) {
+      throw new IllegalStateException("every Java platform has SHA-256", e);
+    }
   }
 }

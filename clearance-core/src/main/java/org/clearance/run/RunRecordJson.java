@@ -1,19 +1,20 @@
 package org.clearance.run;
 
+import com.fasterxml.jackson.databind.node.ArrayNode;
+import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.io.IOException;
+import java.nio.charset.CharacterCodingException;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
-import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
 import org.clearance.InputException;
 import org.clearance.io.AtomicFiles;
-import org.clearance.io.Json;
-import org.clearance.io.JsonFields;
-import org.clearance.io.JsonWriter;
+import org.clearance.io.JsonAt;
+import org.clearance.io.JsonFiles;
 
 /**
  * Writes and reads {@link RunRecord} as {@code run.json}: this project's own format, versioned
@@ -28,44 +29,33 @@ public final class RunRecordJson {
 
   /** The record as JSON text. */
   public static String toJson(RunRecord r) {
-    JsonWriter w = new JsonWriter();
-    write(w, r);
-    return w.toString() + "\n";
+    return JsonFiles.write(node(r)) + "\n";
   }
 
-  private static void write(JsonWriter w, RunRecord r) {
-    w.beginObject().member("format", FORMAT).member("command", r.command())
-        .member("tool_version", r.toolVersion()).member("started", r.started().toString())
-        .member("finished", r.finished().toString());
-    w.name("inputs").beginArray();
+  private static ObjectNode node(RunRecord r) {
+    ObjectNode o = JsonFiles.object().put("format", FORMAT).put("command", r.command())
+        .put("tool_version", r.toolVersion()).put("started", r.started().toString())
+        .put("finished", r.finished().toString());
+    ArrayNode inputs = o.putArray("inputs");
     for (RunRecord.InputFile f : r.inputs()) {
-      w.beginObject().member("role", f.role()).member("path", f.path())
-          .member("bytes", f.bytes()).member("sha256", f.sha256()).endObject();
+      inputs.addObject().put("role", f.role()).put("path", f.path()).put("bytes", f.bytes())
+          .put("sha256", f.sha256());
     }
-    w.endArray();
-    w.name("profile");
     if (r.profile().isPresent()) {
       RunRecord.ProfileRef p = r.profile().get();
-      w.beginObject().member("name", p.name()).member("title", p.title())
-          .member("location", p.location()).member("content_sha256", p.contentHash())
-          .endObject();
+      o.putObject("profile").put("name", p.name()).put("title", p.title())
+          .put("location", p.location()).put("content_sha256", p.contentHash());
     } else {
-      w.value((String) null);
+      o.putNull("profile");
     }
-    w.name("parameters").beginObject();
-    r.parameters().forEach(w::member);
-    w.endObject();
-    w.name("timings_s").beginObject();
-    r.timingsS().forEach((k, v) -> w.member(k, v.doubleValue()));
-    w.endObject();
-    w.name("outputs").beginArray();
-    r.outputs().forEach(w::value);
-    w.endArray();
-    if (r.source().isPresent()) {
-      w.name("source");
-      write(w, r.source().get());
-    }
-    w.endObject();
+    ObjectNode params = o.putObject("parameters");
+    r.parameters().forEach(params::put);
+    ObjectNode timings = o.putObject("timings_s");
+    r.timingsS().forEach((k, v) -> timings.set(k, JsonFiles.number(v)));
+    ArrayNode outputs = o.putArray("outputs");
+    r.outputs().forEach(outputs::add);
+    r.source().ifPresent(src -> o.set("source", node(src)));
+    return o;
   }
 
   /** Writes {@code run.json} into a run folder (temporary file, then moved into place). */
@@ -80,45 +70,39 @@ public final class RunRecordJson {
    */
   public static RunRecord read(Path file) throws IOException {
     String name = file.toString();
-    Json.Value root = Json.parse(Files.readString(file, StandardCharsets.UTF_8), name);
-    return read(new JsonFields(name), root);
+    String text;
+    try {
+      text = StandardCharsets.UTF_8.newDecoder()
+          .decode(java.nio.ByteBuffer.wrap(Files.readAllBytes(file))).toString();
+    } catch (CharacterCodingException e) {
+      throw new InputException(name, null, null, "not UTF-8 text");
+    }
+    return read(JsonAt.root(name, JsonFiles.parse(text, name)));
   }
 
-  private static RunRecord read(JsonFields f, Json.Value v) {
-    Json.Obj o = f.obj(v, "a run record");
-    String format = f.str(o, "format");
+  private static RunRecord read(JsonAt o) {
+    String format = o.str("format");
     if (!FORMAT.equals(format)) {
-      throw new InputException(f.file(), "line " + o.line(), "format",
-          "not a run record of this version (" + format + "); expected " + FORMAT);
+      throw o.error("format", "not a run record of this version (" + format + "); expected "
+          + FORMAT);
     }
     List<RunRecord.InputFile> inputs = new ArrayList<>();
-    for (Json.Value i : f.arr(o, "inputs")) {
-      Json.Obj io = f.obj(i, "an input");
-      inputs.add(new RunRecord.InputFile(f.str(io, "role"), f.str(io, "path"),
-          (long) f.num(io, "bytes"), f.str(io, "sha256")));
+    for (JsonAt i : o.objects("inputs")) {
+      inputs.add(new RunRecord.InputFile(i.str("role"), i.str("path"),
+          i.integer("bytes", 0, Long.MAX_VALUE), i.str("sha256")));
     }
     Optional<RunRecord.ProfileRef> profile = Optional.empty();
-    if (!(f.get(o, "profile") instanceof Json.Null)) {
-      Json.Obj p = f.obj(f.get(o, "profile"), "profile");
-      profile = Optional.of(new RunRecord.ProfileRef(f.str(p, "name"), f.str(p, "title"),
-          f.str(p, "location"), f.str(p, "content_sha256")));
+    if (!o.get("profile").isNull()) {
+      JsonAt p = o.obj("profile");
+      profile = Optional.of(new RunRecord.ProfileRef(p.str("name"), p.str("title"),
+          p.str("location"), p.str("content_sha256")));
     }
-    Map<String, String> params = new LinkedHashMap<>();
-    for (var e : f.obj(f.get(o, "parameters"), "parameters").members().entrySet()) {
-      params.put(e.getKey(), f.text(e.getValue(), e.getKey()));
-    }
-    Map<String, Double> timings = new LinkedHashMap<>();
-    for (var e : f.obj(f.get(o, "timings_s"), "timings_s").members().entrySet()) {
-      timings.put(e.getKey(), f.number(e.getValue(), e.getKey()));
-    }
-    List<String> outputs = new ArrayList<>();
-    for (Json.Value out : f.arr(o, "outputs")) {
-      outputs.add(f.text(out, "outputs"));
-    }
-    Optional<RunRecord> source = o.members().containsKey("source")
-        ? Optional.of(read(f, o.members().get("source"))) : Optional.empty();
-    return new RunRecord(f.str(o, "command"), f.str(o, "tool_version"),
-        f.time(o, "started"), f.time(o, "finished"), inputs, profile, params, timings, outputs,
-        source);
+    Map<String, String> params = o.stringMap("parameters");
+    Map<String, Double> timings = o.numberMap("timings_s");
+    List<String> outputs = o.strings("outputs");
+    Optional<RunRecord> source = o.has("source") ? Optional.of(read(o.obj("source")))
+        : Optional.empty();
+    return new RunRecord(o.str("command"), o.str("tool_version"), o.time("started"),
+        o.time("finished"), inputs, profile, params, timings, outputs, source);
   }
 }

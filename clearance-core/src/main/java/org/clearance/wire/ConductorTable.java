@@ -6,13 +6,15 @@ import java.nio.file.Path;
 import java.util.List;
 import java.util.Locale;
 import org.clearance.io.AtomicFiles;
+import org.clearance.io.CsvCells;
 import org.clearance.survey.SurveyUnits;
 
 /**
  * The conductors file: one row per conductor per span (docs/wire-finder.md). Distances are in
  * metres; coordinates are in the survey CRS's own units (metres divided by the survey's linear
  * unit). A value not computed is an empty field. Numbers use {@link Locale#ROOT}; a text field
- * holding a comma, quote or line break is quoted (RFC 4180).
+ * holding a comma, quote or line break is quoted (RFC 4180), one that a spreadsheet would run as a
+ * formula is neutralised ({@link CsvCells}).
  */
 public final class ConductorTable {
 
@@ -89,12 +91,8 @@ public final class ConductorTable {
     return s.startsWith("-") && s.matches("-0\\.?0*") ? s.substring(1) : s;
   }
 
-  /** A text field, quoted when it holds a comma, quote or line break. */
+  /** A text field: quoted when it must be, neutralised against formula injection. */
   static String text(String s) {
-    if (s.indexOf(',') < 0 && s.indexOf('"') < 0 && s.indexOf('\n') < 0
-        && s.indexOf('\r') < 0) {
-      return s;
-    }
-    return '"' + s.replace("\"", "\"\"") + '"';
+    return CsvCells.text(s);
   }
 }

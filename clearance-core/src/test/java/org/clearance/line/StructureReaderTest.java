@@ -186,18 +186,19 @@ class StructureReaderTest {
     InputErrors.check(f, line, field, problem, () -> StructureReader.read(f, METRES));
   }
 
+  /** Messages about a feature name the line where the feature starts, and the property. */
   static Stream<Arguments> geoJsonErrors() {
     String head = "{\"type\": \"FeatureCollection\", \"features\": [\n";
     String pt = "{\"type\": \"Feature\", \"geometry\": {\"type\": \"Point\", \"coordinates\": "
         + "[0, 0]},\n \"properties\": ";
     return Stream.of(
         Arguments.of("unknown property", head + pt + "{\"structure_id\": \"A\",\n \"hgt\": 3}}]}",
-            4, "hgt", "unknown column"),
-        Arguments.of("x as a property", head + pt + "{\"structure_id\": \"A\", \"x\": 3}}]}", 3,
+            2, "hgt", "unknown column"),
+        Arguments.of("x as a property", head + pt + "{\"structure_id\": \"A\", \"x\": 3}}]}", 2,
             "x", "Point geometry"),
         Arguments.of("missing structure_id", head + pt + "{\"type\": \"dead_end\"}}]}", 2,
             "structure_id", "required"),
-        Arguments.of("boolean property", head + pt + "{\"structure_id\": true}}]}", 3,
+        Arguments.of("boolean property", head + pt + "{\"structure_id\": true}}]}", 2,
             "structure_id", "string or a number"),
         Arguments.of("not a point", head + "{\"type\": \"Feature\", \"geometry\": {\"type\": "
             + "\"LineString\", \"coordinates\": [[0, 0]]}, \"properties\": {}}]}", 2, "geometry",

@@ -4,14 +4,14 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import com.fasterxml.jackson.databind.JsonNode;
 import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.util.List;
 import java.util.Map;
 import java.util.OptionalInt;
 import org.clearance.assess.LonLat;
-import org.clearance.io.Json;
+import org.clearance.io.JsonFiles;
 import org.clearance.rules.RuleProfiles;
 import org.clearance.run.RunFixture;
 import org.clearance.survey.LinearUnit;
@@ -66,24 +66,22 @@ class LonLatTest {
         RuleProfiles.builtin("example-utility"), ReportOptions.defaults(), null);
     assertTrue(o.written().contains("sites.geojson"));
     assertTrue(o.notes().isEmpty());
-    Json.Obj root = (Json.Obj) Json.parse(Files.readString(dir.resolve("sites.geojson")), "t");
-    assertEquals("FeatureCollection", ((Json.Str) root.members().get("type")).value());
-    List<Json.Value> features = ((Json.Arr) root.members().get("features")).items();
+    JsonNode root = JsonFiles.parse(Files.readString(dir.resolve("sites.geojson")), "t");
+    assertEquals("FeatureCollection", root.get("type").textValue());
+    JsonNode features = root.get("features");
     assertEquals(3, features.size());
-    Map<String, Json.Value> first = ((Json.Obj) features.get(0)).members();
-    Map<String, Json.Value> geometry = ((Json.Obj) first.get("geometry")).members();
-    List<Json.Value> xy = ((Json.Arr) geometry.get("coordinates")).items();
+    JsonNode first = features.get(0);
+    JsonNode xy = first.get("geometry").get("coordinates");
     // the first site is at (500100, 4100000): GDAL's value above, written to 1e-7 degree
-    assertEquals(-122.998875421175, ((Json.Num) xy.get(0)).value(), 0.6e-7);
-    assertEquals(37.0462224705789, ((Json.Num) xy.get(1)).value(), 0.6e-7);
-    Map<String, Json.Value> props = ((Json.Obj) first.get("properties")).members();
-    assertEquals("prc4293", ((Json.Str) props.get("zone")).value());
-    assertEquals(500100, ((Json.Num) props.get("x")).value(), 1e-9);
-    assertEquals(0.0, ((Json.Num) props.get("years_to_violation")).value(), 0.0);
-    Map<String, Json.Value> tree = ((Json.Obj) ((Json.Obj) features.get(2)).members()
-        .get("properties")).members();
-    assertTrue(tree.get("n_points") instanceof Json.Null);
-    assertTrue(tree.get("years_to_violation") instanceof Json.Null);
+    assertEquals(-122.998875421175, xy.get(0).doubleValue(), 0.6e-7);
+    assertEquals(37.0462224705789, xy.get(1).doubleValue(), 0.6e-7);
+    JsonNode props = first.get("properties");
+    assertEquals("prc4293", props.get("zone").textValue());
+    assertEquals(500100, props.get("x").doubleValue(), 1e-9);
+    assertEquals(0.0, props.get("years_to_violation").doubleValue(), 0.0);
+    JsonNode tree = features.get(2).get("properties");
+    assertTrue(tree.get("n_points").isNull());
+    assertTrue(tree.get("years_to_violation").isNull());
     // the work list carries the same longitude and latitude
     Map<String, String> row = CsvText.rows(Files.readString(dir.resolve("worklist.csv")))
         .get(0);

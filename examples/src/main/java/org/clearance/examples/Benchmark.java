@@ -13,7 +13,6 @@ import java.util.concurrent.atomic.AtomicLong;
 import org.clearance.CheckInputs;
 import org.clearance.CheckOptions;
 import org.clearance.ClearanceCheck;
-import org.clearance.RunFolder;
 import org.clearance.survey.Survey;
 import org.clearance.survey.UnitsChoice;
 
@@ -104,7 +103,6 @@ public final class Benchmark {
 
       heap.reset();
       Path run = o.dir().resolve("run");
-      RunFolder.deleteQuietly(run);
       CheckInputs inputs = new CheckInputs(List.of(files.survey()), UnitsChoice.fromFile(),
           files.structures(), List.of(files.lineSpec()), Optional.empty(),
           Optional.ofNullable(o.rules()), run);

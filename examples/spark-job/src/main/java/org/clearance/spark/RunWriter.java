@@ -2,7 +2,6 @@ package org.clearance.spark;
 
 import java.io.IOException;
 import java.io.PrintWriter;
-import java.net.URI;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -219,17 +218,11 @@ final class RunWriter {
   }
 
   /**
-   * Publishes a finished staging folder: on the local file system (no scheme, or
-   * {@code file:}) it is moved into place as the command line does; on any other Hadoop file
-   * system it is copied to a temporary name beside the target and renamed.
+   * Publishes a finished staging folder to a Hadoop file system: copied to a temporary name
+   * beside the target, the previous run there removed, the copy renamed into place. (A local
+   * target is published by the core's {@link RunFolder}, as the command line does.)
    */
-  static void publish(Path staging, String target) throws IOException {
-    URI uri = URI.create(target);
-    if (uri.getScheme() == null || "file".equals(uri.getScheme())) {
-      RunFolder.publish(staging, uri.getScheme() == null ? Path.of(target) : Path.of(uri));
-      RunFolder.deleteQuietly(staging);
-      return;
-    }
+  static void publishToHadoop(Path staging, String target) throws IOException {
     org.apache.hadoop.conf.Configuration conf = new org.apache.hadoop.conf.Configuration();
     org.apache.hadoop.fs.Path dst = new org.apache.hadoop.fs.Path(target);
     org.apache.hadoop.fs.FileSystem fs = dst.getFileSystem(conf);
@@ -242,6 +235,17 @@ final class RunWriter {
     if (!fs.rename(tmp, dst)) {
       throw new IOException("cannot rename " + tmp + " to " + target);
     }
-    RunFolder.deleteQuietly(staging);
+  }
+
+  /** Deletes a local folder and what is in it; errors are ignored. */
+  static void deleteQuietly(Path dir) {
+    if (dir == null || !Files.exists(dir)) {
+      return;
+    }
+    try (var files = Files.walk(dir)) {
+      files.sorted(java.util.Comparator.reverseOrder()).forEach(p -> p.toFile().delete());
+    } catch (IOException | java.io.UncheckedIOException e) {
+      // a temporary folder left behind is harmless
+    }
   }
 }

@@ -162,10 +162,15 @@ public final class SparkCheck {
     List<String> lineIds = new ArrayList<>();
     List<RunWriter> writers = new ArrayList<>();
     List<Path> stagings = new ArrayList<>();
+    List<RunFolder> folders = new ArrayList<>();
     try {
       for (int l = 0; l < ctx.layout.lines().size(); l++) {
         String target = target(request.out(), ctx.layout.lines().get(l));
-        Path staging = staging(target);
+        Optional<Path> local = localPath(target);
+        RunFolder folder = local.isPresent() ? RunFolder.replace(local.get(), "--out") : null;
+        folders.add(folder);
+        Path staging = folder != null ? folder.staging()
+            : Files.createTempDirectory("clearance-run-");
         stagings.add(staging);
         writers.add(new RunWriter(ctx, l, staging));
         lineIds.add(ctx.layout.lines().get(l).spec().lineId());
@@ -185,10 +190,21 @@ public final class SparkCheck {
         RunRecord.Builder record = record(ctx, profile, l, request, partitioner);
         say(console, "line %s:", lineIds.get(l));
         writers.get(l).write(profile, report, record, gps, console);
-        RunWriter.publish(stagings.get(l), target(request.out(), ctx.layout.lines().get(l)));
+        if (folders.get(l) != null) {
+          folders.get(l).publish();
+        } else {
+          RunWriter.publishToHadoop(stagings.get(l), target(request.out(),
+              ctx.layout.lines().get(l)));
+        }
       }
     } finally {
-      stagings.forEach(RunFolder::deleteQuietly);
+      for (int l = 0; l < stagings.size(); l++) {
+        if (folders.get(l) != null) {
+          folders.get(l).close();
+        } else {
+          RunWriter.deleteQuietly(stagings.get(l));
+        }
+      }
     }
     double seconds = (System.nanoTime() - t0) / 1e9;
     say(console, "done: %,d survey points, %,d work-area points in %.1f s", ctx.survey
@@ -239,12 +255,13 @@ public final class SparkCheck {
     return out.endsWith("/") ? out + name : out + "/" + name;
   }
 
-  private static Path staging(String target) throws IOException {
+  /** The local path of a target without a scheme or with {@code file:}; else empty. */
+  private static Optional<Path> localPath(String target) {
     java.net.URI uri = java.net.URI.create(target);
-    if (uri.getScheme() == null || "file".equals(uri.getScheme())) {
-      return RunFolder.staging(uri.getScheme() == null ? Path.of(target) : Path.of(uri));
+    if (uri.getScheme() == null) {
+      return Optional.of(Path.of(target));
     }
-    return Files.createTempDirectory("clearance-run-");
+    return "file".equals(uri.getScheme()) ? Optional.of(Path.of(uri)) : Optional.empty();
   }
 
   private static RunRecord.Builder record(JobContext ctx, RuleProfile profile, int line,
