@@ -85,7 +85,7 @@ class RunFolderTest {
     Path out = run(dir.resolve("run"), "old");
     run(dir.resolve(".run.ready-7"), "new");
     try (RunFolder f = RunFolder.open(out, "RUN_DIR")) {
-      assertEquals("old", Files.readString(out.resolve("model.json")));
+      assertEquals("old", Files.readString(f.target().resolve("model.json")));
     }
     assertEquals(List.of(".run.lock", "run"), names());
   }

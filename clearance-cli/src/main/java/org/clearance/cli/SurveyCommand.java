@@ -1,5 +1,13 @@
 package org.clearance.cli;
 
+import com.fasterxml.jackson.core.JsonProcessingException;
+import com.fasterxml.jackson.core.StreamWriteFeature;
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.ObjectWriter;
+import com.fasterxml.jackson.databind.node.ArrayNode;
+import com.fasterxml.jackson.databind.node.DecimalNode;
+import com.fasterxml.jackson.databind.node.NullNode;
+import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.io.PrintWriter;
 import java.math.BigDecimal;
 import java.nio.file.Path;
@@ -7,6 +15,7 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Optional;
 import java.util.concurrent.Callable;
+import org.clearance.io.JsonFiles;
 import org.clearance.survey.Bounds;
 import org.clearance.survey.LinearUnit;
 import org.clearance.survey.SurveySummary;
@@ -167,100 +176,85 @@ public final class SurveyCommand implements Callable<Integer> {
 
   // ---------------------------------------------------------------- JSON
 
-  /** The summary as one JSON object (RFC 8259), built by hand. */
+  /** Writes numbers in plain decimal notation, indented, one member per line. */
+  private static final ObjectWriter JSON = JsonFiles.MAPPER.writer()
+      .with(StreamWriteFeature.WRITE_BIGDECIMAL_AS_PLAIN).withDefaultPrettyPrinter();
+
+  /** The summary as one JSON object (RFC 8259), written through Jackson. */
   static String json(SurveySummary s) {
-    StringBuilder b = new StringBuilder("{\n");
-    b.append("  \"files\": [");
-    for (int i = 0; i < s.files().size(); i++) {
-      SurveySummary.FileSummary f = s.files().get(i);
-      b.append(i == 0 ? "\n" : ",\n").append("    {\"path\": ").append(str(f.path().toString()))
-          .append(", \"las_version\": ").append(str(f.version()))
-          .append(", \"point_format\": ").append(f.pointFormat())
-          .append(", \"record_length\": ").append(f.recordLength())
-          .append(", \"point_count\": ").append(f.pointCount())
-          .append(", \"crs_records\": ").append(str(f.crsRecords())).append('}');
+    ObjectNode o = JsonFiles.object();
+    ArrayNode files = o.putArray("files");
+    for (SurveySummary.FileSummary f : s.files()) {
+      files.addObject().put("path", f.path().toString()).put("las_version", f.version())
+          .put("point_format", f.pointFormat()).put("record_length", f.recordLength())
+          .put("point_count", f.pointCount()).put("crs_records", f.crsRecords());
     }
-    b.append("\n  ],\n");
-    field(b, "point_count", Long.toString(s.pointCount()));
-    StringBuilder counts = new StringBuilder("{");
-    StringBuilder names = new StringBuilder("{");
-    for (int i = 0; i < s.classCounts().size(); i++) {
-      SurveySummary.ClassCount c = s.classCounts().get(i);
-      String sep = i == 0 ? "" : ", ";
-      counts.append(sep).append(str(Integer.toString(c.code()))).append(": ").append(c.count());
-      names.append(sep).append(str(Integer.toString(c.code()))).append(": ")
-          .append(str(c.name()));
+    o.put("point_count", s.pointCount());
+    ObjectNode counts = o.putObject("class_counts");
+    ObjectNode names = o.putObject("class_names");
+    for (SurveySummary.ClassCount c : s.classCounts()) {
+      counts.put(Integer.toString(c.code()), c.count());
+      names.put(Integer.toString(c.code()), c.name());
     }
-    field(b, "class_counts", counts.append('}').toString());
-    field(b, "class_names", names.append('}').toString());
     Bounds e = s.extent();
-    field(b, "min", e.isEmpty() ? "null" : xyz(e.minX(), e.minY(), e.minZ()));
-    field(b, "max", e.isEmpty() ? "null" : xyz(e.maxX(), e.maxY(), e.maxZ()));
-    field(b, "horizontal_unit", s.horizontal().map(u -> str(u.symbol())).orElse("null"));
-    field(b, "vertical_unit", s.vertical().map(u -> str(u.symbol())).orElse("null"));
-    field(b, "horizontal_unit_source", str(s.horizontalSource()));
-    field(b, "vertical_unit_source", str(s.verticalSource()));
-    field(b, "crs_name", s.crsName().isEmpty() ? "null" : str(s.crsName()));
-    field(b, "epsg", s.epsg().isPresent() ? Integer.toString(s.epsg().getAsInt()) : "null");
-    field(b, "gps_time", Double.isNaN(s.gpsTimeMin()) ? "null"
-        : "{\"min\": " + num(s.gpsTimeMin()) + ", \"max\": " + num(s.gpsTimeMax())
-            + ", \"adjusted_standard\": " + s.acquisitionDays().isPresent()
-            + s.acquisitionDays().map(d -> ", \"first_day_utc\": \"" + d[0]
-                + "\", \"last_day_utc\": \"" + d[1] + "\"").orElse("") + "}");
-    field(b, "withheld_count", Long.toString(s.withheldCount()));
-    b.append("  \"density\": {\"cell_size_m\": ").append(num(s.cellSize()))
-        .append(", \"occupied_cells\": ").append(s.occupiedCells().isPresent()
-            ? Long.toString(s.occupiedCells().getAsLong()) : "null")
-        .append(", \"occupied_area_m2\": ").append(num(s.occupiedArea()))
-        .append(", \"points_per_m2\": ").append(num(s.density())).append("}\n}\n");
-    return b.toString();
+    o.set("min", e.isEmpty() ? NullNode.getInstance() : xyz(e.minX(), e.minY(), e.minZ()));
+    o.set("max", e.isEmpty() ? NullNode.getInstance() : xyz(e.maxX(), e.maxY(), e.maxZ()));
+    o.set("horizontal_unit", JsonFiles.text(s.horizontal().map(LinearUnit::symbol)
+        .orElse(null)));
+    o.set("vertical_unit", JsonFiles.text(s.vertical().map(LinearUnit::symbol).orElse(null)));
+    o.put("horizontal_unit_source", s.horizontalSource());
+    o.put("vertical_unit_source", s.verticalSource());
+    o.set("crs_name", JsonFiles.text(s.crsName().isEmpty() ? null : s.crsName()));
+    if (s.epsg().isPresent()) {
+      o.put("epsg", s.epsg().getAsInt());
+    } else {
+      o.putNull("epsg");
+    }
+    if (Double.isNaN(s.gpsTimeMin())) {
+      o.putNull("gps_time");
+    } else {
+      ObjectNode g = o.putObject("gps_time");
+      g.set("min", num(s.gpsTimeMin()));
+      g.set("max", num(s.gpsTimeMax()));
+      g.put("adjusted_standard", s.acquisitionDays().isPresent());
+      s.acquisitionDays().ifPresent(d -> g.put("first_day_utc", d[0].toString())
+          .put("last_day_utc", d[1].toString()));
+    }
+    o.put("withheld_count", s.withheldCount());
+    ObjectNode d = o.putObject("density");
+    d.set("cell_size_m", num(s.cellSize()));
+    if (s.occupiedCells().isPresent()) {
+      d.put("occupied_cells", s.occupiedCells().getAsLong());
+    } else {
+      d.putNull("occupied_cells");
+    }
+    d.set("occupied_area_m2", num(s.occupiedArea()));
+    d.set("points_per_m2", num(s.density()));
+    return text(o);
   }
 
-  private static void field(StringBuilder b, String name, String value) {
-    b.append("  ").append(str(name)).append(": ").append(value).append(",\n");
-  }
-
-  private static String xyz(double x, double y, double z) {
-    return "{\"x\": " + num(x) + ", \"y\": " + num(y) + ", \"z\": " + num(z) + "}";
+  private static ObjectNode xyz(double x, double y, double z) {
+    ObjectNode o = JsonFiles.object();
+    o.set("x", num(x));
+    o.set("y", num(y));
+    o.set("z", num(z));
+    return o;
   }
 
   /** A number in plain decimal notation (shortest exact form), or null when not finite. */
-  static String num(double v) {
+  static JsonNode num(double v) {
     if (!Double.isFinite(v)) {
-      return "null";
+      return NullNode.getInstance();
     }
-    return BigDecimal.valueOf(v).stripTrailingZeros().toPlainString();
+    return DecimalNode.valueOf(BigDecimal.valueOf(v).stripTrailingZeros());
   }
 
-  /** A JSON string literal. */
-  static String str(String s) {
-    StringBuilder b = new StringBuilder("\"");
-    for (int i = 0; i < s.length(); i++) {
-      char c = s.charAt(i);
-      switch (c) {
-        case '"':
-          b.append("\\\"");
-          break;
-        case '\\':
-          b.append("\\\\");
-          break;
-        case '\n':
-          b.append("\\n");
-          break;
-        case '\r':
-          b.append("\\r");
-          break;
-        case '\t':
-          b.append("\\t");
-          break;
-        default:
-          if (c < 0x20) {
-            b.append(String.format(Locale.ROOT, "\\u%04x", (int) c));
-          } else {
-            b.append(c);
-          }
-      }
+  /** The JSON text of a node, with a final line break. */
+  static String text(JsonNode n) {
+    try {
+      return JSON.writeValueAsString(n) + "\n";
+    } catch (JsonProcessingException e) {
+      throw new IllegalStateException("a tree of plain nodes always serialises", e);
     }
-    return b.append('"').toString();
   }
 }

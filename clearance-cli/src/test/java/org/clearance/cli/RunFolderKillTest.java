@@ -71,7 +71,8 @@ class RunFolderKillTest {
   /** Starts {@code clearance args} in a child JVM with the test's class path. */
   private Process child(List<String> args) throws IOException {
     List<String> cmd = new ArrayList<>(List.of(Path.of(System.getProperty("java.home"), "bin",
-        "java").toString(), "-Xmx512m", "-XX:TieredStopAtLevel=1", "-cp", System.getProperty("java.class.path"),
+        "java").toString(), "-Xmx512m", "-XX:TieredStopAtLevel=1", "-cp",
+        System.getProperty("java.class.path"),
         ClearanceCommand.class.getName()));
     cmd.addAll(args);
     return new ProcessBuilder(cmd).redirectErrorStream(true)

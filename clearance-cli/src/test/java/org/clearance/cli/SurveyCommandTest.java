@@ -13,6 +13,7 @@ import java.util.List;
 import java.util.Map;
 import java.util.StringJoiner;
 import java.util.stream.Stream;
+import org.clearance.io.JsonFiles;
 import org.clearance.survey.LasWriter;
 import org.clearance.survey.LasWriterOptions;
 import org.clearance.survey.PointChunk;
@@ -35,13 +36,19 @@ class SurveyCommandTest {
     return CliRun.of(args);
   }
 
+  /** Standard output read back through Jackson: objects as maps, null as null. */
   private static Map<String, Object> json(CliRun r) {
     assertEquals(0, r.exit(), r.err());
-    return MiniJson.object(MiniJson.parse(r.out()));
+    return object(JsonFiles.MAPPER.convertValue(JsonFiles.parse(r.out(), "stdout"), Map.class));
+  }
+
+  @SuppressWarnings("unchecked")
+  private static Map<String, Object> object(Object v) {
+    return (Map<String, Object>) v;
   }
 
   private static double num(Map<String, Object> m, String key) {
-    return (Double) m.get(key);
+    return ((Number) m.get(key)).doubleValue();
   }
 
   // Source: shared/data/README.md, tables "Reference values (independent reader)" and
@@ -69,25 +76,25 @@ class SurveyCommandTest {
       double maxY, double maxZ, String horizontal, String vertical) {
     Map<String, Object> j = json(run("survey", "--json",
         SurveyTestFiles.open(name).toString()));
-    Map<String, Object> file = MiniJson.object(((List<?>) j.get("files")).get(0));
+    Map<String, Object> file = object(((List<?>) j.get("files")).get(0));
     assertEquals(version, file.get("las_version"));
     assertEquals(format, num(file, "point_format"), 0);
     assertEquals(record, num(file, "record_length"), 0);
     assertEquals(points, num(j, "point_count"), 0);
     StringJoiner histogram = new StringJoiner(" ");
-    MiniJson.object(j.get("class_counts"))
-        .forEach((k, v) -> histogram.add(k + ":" + Math.round((Double) v)));
+    object(j.get("class_counts"))
+        .forEach((k, v) -> histogram.add(k + ":" + ((Number) v).longValue()));
     assertEquals(classes, histogram.toString());
-    Map<String, Object> min = MiniJson.object(j.get("min"));
-    Map<String, Object> max = MiniJson.object(j.get("max"));
+    Map<String, Object> min = object(j.get("min"));
+    Map<String, Object> max = object(j.get("max"));
     assertEquals(minX, num(min, "x"), EXTENT_TOL);
     assertEquals(minY, num(min, "y"), EXTENT_TOL);
     assertEquals(minZ, num(min, "z"), EXTENT_TOL);
     assertEquals(maxX, num(max, "x"), EXTENT_TOL);
     assertEquals(maxY, num(max, "y"), EXTENT_TOL);
     assertEquals(maxZ, num(max, "z"), EXTENT_TOL);
-    assertEquals(horizontal.equals("-") ? MiniJson.NULL : horizontal, j.get("horizontal_unit"));
-    assertEquals(vertical.equals("-") ? MiniJson.NULL : vertical, j.get("vertical_unit"));
+    assertEquals(horizontal.equals("-") ? null : horizontal, j.get("horizontal_unit"));
+    assertEquals(vertical.equals("-") ? null : vertical, j.get("vertical_unit"));
   }
 
   @Test
@@ -96,7 +103,7 @@ class SurveyCommandTest {
         SurveyTestFiles.open("corridor_12AN2_20_thinned.las").toString()));
     assertEquals("m", j.get("horizontal_unit"));
     assertEquals("m", j.get("vertical_unit"));
-    Map<String, Object> d = MiniJson.object(j.get("density"));
+    Map<String, Object> d = object(j.get("density"));
     // [computed] with numpy from the file's bytes: distinct (floor(x / 5), floor(y / 5)) over
     // all 153464 points = 1422 cells; density = 153464 / (1422 x 25 m2) = 4.3169 points/m2.
     assertEquals(1422, num(d, "occupied_cells"), 0);
@@ -131,8 +138,8 @@ class SurveyCommandTest {
         b.toString()));
     assertEquals(2, ((List<?>) j.get("files")).size());
     assertEquals(20, num(j, "point_count"), 0);
-    assertEquals(0, num(MiniJson.object(j.get("min")), "x"), 1e-9);
-    assertEquals(109, num(MiniJson.object(j.get("max")), "x"), 1e-9);
+    assertEquals(0, num(object(j.get("min")), "x"), 1e-9);
+    assertEquals(109, num(object(j.get("max")), "x"), 1e-9);
   }
 
   /** Ten points x = base + i, y = 0, z = 1, class 2, no CRS. */
@@ -238,10 +245,10 @@ class SurveyCommandTest {
   }
 
   @Test
-  void jsonStringsAreEscaped() {
-    assertEquals("\"a\\\"b\\\\c\\n\\u0001\"", SurveyCommand.str("a\"b\\c\n\u0001"));
-    assertEquals("0.1", SurveyCommand.num(0.1));
-    assertEquals("12345678901", SurveyCommand.num(12345678901.0));
-    assertEquals("null", SurveyCommand.num(Double.NaN));
+  void jsonNumbersArePlainDecimals() {
+    assertEquals("0.1", SurveyCommand.text(SurveyCommand.num(0.1)).strip());
+    assertEquals("12345678901", SurveyCommand.text(SurveyCommand.num(12345678901.0)).strip());
+    assertEquals("35550", SurveyCommand.text(SurveyCommand.num(1422 * 25.0)).strip());
+    assertEquals("null", SurveyCommand.text(SurveyCommand.num(Double.NaN)).strip());
   }
 }

@@ -91,6 +91,16 @@ final class StructureRefiner {
   }
 
   /**
+   * Whether a line hangs its conductors closer than {@link CloseSpacing#ACTIVE_BELOW_M}: a pole
+   * line (distribution). Its structures are refined from class-15 towers only: a wood pole gives
+   * too few returns to stand out as a column of unclassified points, and a tree beside the line
+   * stands just like one.
+   */
+  static boolean isPoleLine(LineSpec spec) {
+    return CloseSpacing.of(spec, WireFinderOptions.Growth.defaults()) != null;
+  }
+
+  /**
    * Refines the layout with the towers found. Within each line, structures and towers are paired
    * nearest first (each at most once; lines may share towers, as two circuits on one tower do);
    * a structure farther than the tolerance from its tower moves to it, and unpaired towers inside
@@ -104,12 +114,14 @@ final class StructureRefiner {
     for (LineLayout line : layout.lines()) {
       specs.add(line.spec());
       List<Structure> given = line.structures();
-      boolean[] used = new boolean[towers.size()];
-      int[] towerOf = pair(given, towers, used);
+      List<Tower> usable = isPoleLine(line.spec())
+          ? towers.stream().filter(Tower::labelled).toList() : towers;
+      boolean[] used = new boolean[usable.size()];
+      int[] towerOf = pair(given, usable, used);
       List<Structure> refined = new ArrayList<>();
       for (int k = 0; k < given.size(); k++) {
         Structure s = given.get(k);
-        Tower tw = towerOf[k] < 0 ? null : towers.get(towerOf[k]);
+        Tower tw = towerOf[k] < 0 ? null : usable.get(towerOf[k]);
         if (tw == null || Math.hypot(tw.x() - s.x(), tw.y() - s.y()) <= options.toleranceM()) {
           refined.add(s);
           continue;
@@ -120,7 +132,7 @@ final class StructureRefiner {
             StructureChange.Kind.MOVED, s.x(), s.y(), tw.x(), tw.y(), tw.points(),
             tw.evidence()));
       }
-      structures.addAll(added(line, refined, towers, used, changes));
+      structures.addAll(added(line, refined, usable, used, changes));
     }
     if (changes.isEmpty()) {
       return new Refined(layout, List.of());
