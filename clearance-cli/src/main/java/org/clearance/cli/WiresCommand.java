@@ -6,6 +6,7 @@ import java.nio.file.Path;
 import java.util.Locale;
 import java.util.concurrent.Callable;
 import org.clearance.InputException;
+import org.clearance.clearance.SpanStatus;
 import org.clearance.ground.GroundModel;
 import org.clearance.ground.GroundModelBuilder;
 import org.clearance.ground.GroundOptions;
@@ -113,10 +114,9 @@ public final class WiresCommand implements Callable<Integer> {
     for (SpanWires sw : result.spans()) {
       long fitted = sw.conductors().stream().filter(FittedConductor::isFitted).count();
       rows += sw.conductors().size();
-      // the words of check's span status: nothing fitted is NOT ASSESSED, a phase missing is
-      // INCOMPLETE (check says the same of that span)
-      String word = fitted == 0 ? "NOT ASSESSED" : sw.reason().isPresent() ? "INCOMPLETE"
-          : "all phases fitted";
+      // the status words of every output, from the one place that judges a span's wires
+      // (check starts from the same status and may only make it worse)
+      String word = SpanStatus.ofWires(sw).word();
       b.append(String.format(Locale.ROOT, "span %s: %s, %d of %d conductors fitted, %s%n",
           sw.span().id(), word, fitted,
           sw.conductors().size(), sw.labelled() ? "wires labelled in the survey"

@@ -56,7 +56,7 @@ class WiresCommandTest {
       assertEquals(18, row.split(",", -1).length - (row.contains("\"") ? countCommasInQuotes(row)
           : 0), row);
     }
-    assertTrue(r.out().contains("span OV380/OV-12-OV-13: all phases fitted, 14 of 14 "
+    assertTrue(r.out().contains("span OV380/OV-12-OV-13: ASSESSED, 14 of 14 "
         + "conductors fitted,"
         + " wires labelled in the survey"), r.out());
     assertTrue(r.out().contains("span OV380/OV-11-OV-12: NOT ASSESSED"), r.out());

@@ -119,7 +119,7 @@ public final class CsvOutputs {
       f.add(t(s.from().id()));
       f.add(t(s.to().id()));
       f.add(u.lengthText(s.context().lengthM()));
-      f.add(r.status().name());
+      f.add(r.status().word());
       f.add(t(r.reason()));
       f.add(Integer.toString(r.conductorsFitted()));
       for (String group : List.of("survey", "hot", "blowout", "ice")) {
