@@ -6,6 +6,7 @@ import java.nio.file.Path;
 import java.util.List;
 import java.util.concurrent.Callable;
 import org.clearance.InputException;
+import org.clearance.OutFolder;
 import org.clearance.RunFolder;
 import org.clearance.clearance.NearPointFile;
 import org.clearance.clearance.NearPointReader;
@@ -67,6 +68,9 @@ public final class EvaluateCommand implements Callable<Integer> {
   public Integer call() throws IOException {
     if (!Files.isDirectory(runDir)) {
       throw new InputException(runDir, null, null, "not a folder");
+    }
+    if (out != null) {
+      OutFolder.check(out, "--out");
     }
     boolean inPlace = out == null || sameFolder(out, runDir);
     try (RunFolder source = RunFolder.open(runDir, "RUN_DIR")) {

@@ -6,6 +6,7 @@ import java.nio.file.Path;
 import java.util.Locale;
 import java.util.concurrent.Callable;
 import org.clearance.InputException;
+import org.clearance.OutFolder;
 import org.clearance.clearance.SpanStatus;
 import org.clearance.ground.GroundModel;
 import org.clearance.ground.GroundModelBuilder;
@@ -69,9 +70,7 @@ public final class WiresCommand implements Callable<Integer> {
       throw new CommandLine.ParameterException(spec.commandLine(),
           "--threads must be 1 to 256: " + n);
     }
-    if (Files.exists(out) && !Files.isDirectory(out)) {
-      throw new InputException(out, null, "--out", "exists and is not a folder");
-    }
+    OutFolder.check(out, "--out");
     Survey s = Survey.open(inputs.survey, units.choice());
     SpanLayout layout = SpanLayout.build(StructureReader.read(inputs.structures, s.units()),
         inputs.specs());

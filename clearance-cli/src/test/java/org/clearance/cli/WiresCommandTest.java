@@ -136,6 +136,6 @@ class WiresCommandTest {
         FIXTURE.resolve("line.yaml").toString(), "--out", file.toString(), "--survey-units",
         "m");
     assertEquals(ClearanceCommand.EXIT_INPUT, r.exit());
-    assertTrue(r.err().contains("exists and is not a folder"), r.err());
+    assertTrue(r.err().contains(file + ", field '--out': is a file, not a folder"), r.err());
   }
 }
