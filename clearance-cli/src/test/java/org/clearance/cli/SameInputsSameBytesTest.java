@@ -141,6 +141,22 @@ class SameInputsSameBytesTest {
   }
 
   @Test
+  void evaluateCarriesTheUncertaintiesOver() throws IOException {
+    // regression: evaluate did not carry uncertainty.csv into the new folder, so every profile
+    // with a confidence level failed ("the run folder has no uncertainty.csv") on a fresh check
+    Path out = tmp.resolve("evaluated-95");
+    CliRun r = CliRun.of("evaluate", runOne.toString(), "--rules", "example-utility-95",
+        "--out", out.toString());
+    assertEquals(0, r.exit(), r.err());
+    assertArrayEquals(Files.readAllBytes(runOne.resolve("uncertainty.csv")),
+        Files.readAllBytes(out.resolve("uncertainty.csv")));
+    List<String> sites = Files.readAllLines(out.resolve("sites.csv"));
+    int verdict = List.of(sites.get(0).split(",")).indexOf("verdict");
+    assertTrue(sites.stream().skip(1).anyMatch(l -> l.split(",", -1)[verdict]
+        .contains("violation")), "verdicts at 95 %");
+  }
+
+  @Test
   void oneStatusWordPerSpanInEveryOutput() throws Exception {
     Map<String, String> csv = new LinkedHashMap<>();
     List<String> spans = Files.readAllLines(runOne.resolve("spans.csv"));

@@ -119,7 +119,7 @@ final class HtmlSections {
           .append("</td><td class=\"num\">")
           .append(s.points().isPresent() ? Integer.toString(s.points().getAsInt()) : "tree")
           .append("</td><td class=\"num\">").append(Html.years(s.yearsToViolation()))
-          .append("</td><td>").append(verdict(s, u)).append("</td></tr>");
+          .append("</td><td class=\"verdict\">").append(verdict(s, u)).append("</td></tr>");
     }
     b.append("</tbody></table>");
   }
