@@ -109,6 +109,23 @@ class OutFolderAndConsoleTest {
     assertRefused(r, out, "symbolic link");
   }
 
+  @Test
+  void aFileOfTheWrongKindSaysWhatWasExpected() {
+    // issue 11: a line specification given as the structures (or conductor) table was reported
+    // as "a quote inside an unquoted field"
+    CliRun r = CliRun.of("check", "--survey", demo.survey().toString(), "--structures",
+        demo.lineSpec().toString(), "--line", demo.lineSpec().toString(), "--out",
+        dir.resolve("run").toString());
+    assertEquals(ClearanceCommand.EXIT_INPUT, r.exit(), r.err());
+    assertTrue(r.err().contains(demo.lineSpec() + ", line ") && r.err().contains(
+        "expected the structures table (CSV with a header line, or GeoJSON), but this looks "
+            + "like a YAML file"), r.err());
+    List<String> conductors = inputs("check", demo.survey().toString(), dir.resolve("run"));
+    conductors.addAll(List.of("--conductors", demo.lineSpec().toString()));
+    r = CliRun.of(conductors.toArray(new String[0]));
+    assertTrue(r.err().contains("expected a conductor table (CSV with a header line)"), r.err());
+  }
+
   /** Every error path below prints one or two lines of words, never a Java object's text. */
   @Test
   void errorPathsNeverPrintJavaObjects() throws IOException {

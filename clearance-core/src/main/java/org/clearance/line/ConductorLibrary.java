@@ -206,6 +206,8 @@ public final class ConductorLibrary {
   private static Map<String, ConductorType> parseFile(Path file) {
     String text = TextFiles.read(file, TextFiles.MAX_TABLE_BYTES,
         "a conductor table (CSV text)");
+    TextFiles.refuseYamlForTable(file.toString(), text, "a conductor table (CSV with a header "
+        + "line)");
     try {
       return parse(new BufferedReader(new StringReader(text)), file.toString());
     } catch (IOException e) {
