@@ -217,6 +217,12 @@ public final class HtmlReport {
           b.append(Html.f(" (%s stretched &times;%.1f against chainage)",
               e.getKey().equals("Plan") ? "offsets" : "heights", k));
         }
+        if (e.getKey().equals("Profile") && r.sites().stream()
+            .anyMatch(site -> site.kind() == CutSite.Kind.FALL_IN)) {
+          b.append("; a fall-in tree is a faint dashed stem at its place along the span: it "
+              + "stands at its offset from the centre line (table above, plan view), which a "
+              + "profile cannot show, so a stem drawn across the wires is not under them");
+        }
         b.append("</figcaption></figure>");
       }
       HtmlSections.legend(b, r, run, SvgSpanViews.governingIndex(r, run.model()));
