@@ -91,7 +91,10 @@ public final class CigreHeatBalance implements SteadyHeatBalance {
 
   /**
    * @param diameter conductor outside diameter D, m (&gt; 0)
-   * @param outerStrandDiameter diameter d of the outer layer's strands, m (0 &lt; d &lt; D)
+   * @param outerStrandDiameter diameter d of the outer layer's strands, m (0 &lt; d &lt; D), or NaN
+   *     when not known: then Table 4's row for R_s &gt; 0.05 (most stranded conductors of two or
+   *     more layers; it cools the most above Re = 2650, so the survey temperature errs low, which
+   *     overstates the sag increase to a hot condition)
    * @param thermal resistance and surface data
    * @param at weather, load, site and sun
    */
@@ -100,7 +103,8 @@ public final class CigreHeatBalance implements SteadyHeatBalance {
     if (!(Double.isFinite(diameter) && diameter > 0)) {
       throw new IllegalArgumentException("diameter must be positive: " + diameter);
     }
-    if (!(outerStrandDiameter > 0 && outerStrandDiameter < diameter)) {
+    if (!Double.isNaN(outerStrandDiameter)
+        && !(outerStrandDiameter > 0 && outerStrandDiameter < diameter)) {
       throw new IllegalArgumentException("outer strand diameter must be in (0, D): "
           + outerStrandDiameter);
     }
@@ -125,7 +129,7 @@ public final class CigreHeatBalance implements SteadyHeatBalance {
     return thermal.resistance(conductorC);
   }
 
-  /** Roughness R_s = d / (2 (D - d)) (CIGRE TB 601 section 3.5). */
+  /** Roughness R_s = d / (2 (D - d)) (CIGRE TB 601 section 3.5); NaN when d is not known. */
   public double roughness() {
     return roughness;
   }
@@ -192,7 +196,7 @@ public final class CigreHeatBalance implements SteadyHeatBalance {
     if (reynolds < 2650) {
       b = 0.641;
       n = 0.471;
-    } else if (roughness <= ROUGH_LIMIT) {
+    } else if (roughness <= ROUGH_LIMIT) { // false for NaN: the rough row
       b = 0.178;
       n = 0.633;
     } else {
