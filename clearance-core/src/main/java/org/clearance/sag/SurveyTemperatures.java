@@ -112,12 +112,13 @@ public final class SurveyTemperatures {
     if (known.isEmpty()) {
       return firstMissing;
     }
-    return combine(known, lengths, section.spans().size());
+    return combine(known, lengths, section.spans().size(),
+        spec.surveyTemperature().heat().orElseThrow().model().title());
   }
 
   /** The length-weighted mean of span temperatures and of their sigmas (class comment). */
   static TemperatureEstimate combine(List<TemperatureEstimate> spans, List<Double> lengths,
-      int spansInSection) {
+      int spansInSection, String model) {
     double total = 0;
     double t = 0;
     double sigma = 0;
@@ -135,9 +136,9 @@ public final class SurveyTemperatures {
         top = k;
       }
     }
-    String detail = String.format(Locale.ROOT, "length-weighted mean of %d of %d spans' heat"
-        + " balances (%.1f to %.1f degC); %s", spans.size(), spansInSection, low, high,
-        spans.get(top).detail());
+    String detail = String.format(Locale.ROOT, "length-weighted mean of %d of %d spans' %s heat"
+        + " balances at their own flight times (%.1f to %.1f degC)", spans.size(), spansInSection,
+        model, low, high);
     return new TemperatureEstimate(t / total, sigma / total, Source.COMPUTED,
         spans.get(top).dominant(), detail);
   }

@@ -180,7 +180,7 @@ class SurveyTemperaturesTest {
     assertEquals((300 * first.temperatureC() + 100 * second.temperatureC()) / 400,
         whole.temperatureC(), 1e-9);
     assertEquals((300 * first.sigmaC() + 100 * second.sigmaC()) / 400, whole.sigmaC(), 1e-9);
-    assertTrue(whole.detail().startsWith("length-weighted mean of 2 of 2 spans"),
+    assertTrue(whole.detail().startsWith("length-weighted mean of 2 of 2 spans' IEEE 738"),
         whole.detail());
     // A span without a GPS time is left out of the mean; none at all leaves the section unknown.
     SurveyTemperatures half = new SurveyTemperatures(new SurveyTemperatures.Clock(true),
