@@ -237,8 +237,8 @@ public final class SurveyTemperatures {
     }
     String detail = String.format(Locale.ROOT, "%s heat balance at %s: %.0f A,"
         + " air %.1f degC, wind %.1f m/s at %.0f deg to the conductor, sun %.1f deg high",
-        in.model().title(), when, current, in.airTemperatureC(), in.windSpeed(), Math.toDegrees(windAngle),
-        Math.toDegrees(sun.altitudeRad()));
+        in.model().title(), when, current, in.airTemperatureC(), in.windSpeed(),
+        Math.toDegrees(windAngle), Math.toDegrees(sun.altitudeRad()));
     return new TemperatureEstimate(t0, Math.sqrt(var), Source.COMPUTED, names.get(top), detail);
   }
 
