@@ -64,7 +64,7 @@ public final class CsvOutputs {
         u.column("min_clearance_ice"), "governing_condition", "worst_zone", "n_sites", "rank",
         "worst_priority", u.column("worst_deficit"), "nominal_voltage_kv", "points_checked",
         "points_not_assessed", "n_possible_violation_sites", "points_set_aside_wire",
-        "points_set_aside_structure", "points_set_aside_airborne");
+        "points_set_aside_structure", "points_set_aside_airborne", "points_set_aside_object");
   }
 
   /** The work list's text: one line per tree or vegetation patch. */
@@ -139,6 +139,7 @@ public final class CsvOutputs {
       f.add(Long.toString(s.setAside().wire()));
       f.add(Long.toString(s.setAside().structure()));
       f.add(Long.toString(s.setAside().airborne()));
+      f.add(Long.toString(s.setAside().object()));
       row(b, f);
     }
     return b.toString();

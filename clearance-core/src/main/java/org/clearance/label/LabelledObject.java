@@ -1,0 +1,27 @@
+package org.clearance.label;
+
+/**
+ * One clustered object of unclassified points and the evidence the labelling weighed.
+ *
+ * @param kind what it is taken to be
+ * @param points its points
+ * @param x easting of its highest point, m
+ * @param y northing of its highest point, m
+ * @param heightM its highest point above ground, m
+ * @param planarity mean planarity of its points with a neighbourhood (0-1)
+ * @param scattering mean scattering (0-1)
+ * @param planarShare share of its points whose largest feature is planarity (0-1)
+ * @param upperSpreadM plan area of the 0.5 m cells holding its points in the upper half of its
+ *     height, divided by its height, m (m^2 per m)
+ * @param multiReturnShare share of its points from pulses of two or more returns (0-1), NaN
+ *     when the survey's echoes tell nothing
+ */
+public record LabelledObject(ObjectKind kind, int points, double x, double y, double heightM,
+    double planarity, double scattering, double planarShare, double upperSpreadM,
+    double multiReturnShare) {
+
+  /** Mean planarity less mean scattering: high for lattices, masts and sheets, low for crowns. */
+  public double contrast() {
+    return planarity - scattering;
+  }
+}
