@@ -43,11 +43,12 @@ class TileLabellingTest {
 
   private static final Path LINE_DIR = Paths.get("src/test/resources/corridor-12AN2");
 
-  @Test
-  void cranesSetAsideAndVegetationKept() {
+  @org.junit.jupiter.params.ParameterizedTest
+  @org.junit.jupiter.params.provider.ValueSource(ints = {2, 0})
+  void cranesSetAsideAndVegetationKept(int keep) {
     Survey survey = Survey.open(List.of(SurveyTestFiles.open("corridor_12AN2_20_thinned.las")),
         UnitsChoice.of(LinearUnit.METRE));
-    PointSource groundOnly = consumers -> survey.read(relabel(consumers.get()));
+    PointSource groundOnly = consumers -> survey.read(relabel(consumers.get(), keep));
     GroundModelBuilder gb = new GroundModelBuilder(GroundOptions.defaults());
     groundOnly.stream(() -> gb);
     GroundModel ground = gb.build();
@@ -60,7 +61,7 @@ class TileLabellingTest {
     SetAside setAside = wires.setAside();
     ObjectLabels labels = ObjectLabeller.label(groundOnly,
         layout.spans().stream().map(Span::frame).toList(), 70, ground, setAside);
-    System.out.println("tile labelling: " + labels.describe());
+    System.out.println("tile labelling, kept class " + keep + ": " + labels.describe());
     for (LabelledObject o : labels.objects()) {
       if (o.points() >= 100 || o.kind() != ObjectKind.VEGETATION) {
         System.out.println(String.format(Locale.ROOT, "  %s %d pts at (%.1f, %.1f) h %.1f m"
@@ -91,18 +92,18 @@ class TileLabellingTest {
     assertEquals(0, byClass.get(5)[1], "vendor vegetation set aside");
   }
 
-  /** A consumer that sees every class but ground as 1. */
-  private static Consumer<PointChunk> relabel(Consumer<PointChunk> next) {
+  /** A consumer that sees every class but {@code keep} as 1 (0: every class). */
+  private static Consumer<PointChunk> relabel(Consumer<PointChunk> next, int keep) {
     return chunk -> {
       short[] c = chunk.classification();
-      short[] keep = c.clone();
+      short[] saved = c.clone();
       for (int i = 0; i < chunk.size(); i++) {
-        if (c[i] != 2) {
+        if (c[i] != keep) {
           c[i] = 1;
         }
       }
       next.accept(chunk);
-      System.arraycopy(keep, 0, c, 0, chunk.size());
+      System.arraycopy(saved, 0, c, 0, chunk.size());
     };
   }
 }
