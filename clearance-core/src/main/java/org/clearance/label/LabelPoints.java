@@ -30,8 +30,8 @@ final class LabelPoints implements Consumer<PointChunk> {
   double[] y = new double[1024];
   double[] z = new double[1024];
   float[] hag = new float[1024];
-  /** Number of returns of the point's pulse (0 when the file does not say). */
-  byte[] returns = new byte[1024];
+  /** Return number of the point within its pulse (0 when the file does not say). */
+  byte[] returnNumber = new byte[1024];
 
   LabelPoints(List<SpanFrame> frames, double regionM, GroundModel ground, SetAside setAside) {
     this.frames = frames;
@@ -59,7 +59,7 @@ final class LabelPoints implements Consumer<PointChunk> {
           || setAside.reason(SetAside.key(px, py, pz)) != SetAside.Reason.NONE) {
         continue;
       }
-      add(px, py, pz, h, chunk.numberOfReturns()[i]);
+      add(px, py, pz, h, chunk.returnNumber()[i]);
     }
   }
 
@@ -80,20 +80,20 @@ final class LabelPoints implements Consumer<PointChunk> {
       y = Arrays.copyOf(y, cap);
       z = Arrays.copyOf(z, cap);
       hag = Arrays.copyOf(hag, cap);
-      returns = Arrays.copyOf(returns, cap);
+      returnNumber = Arrays.copyOf(returnNumber, cap);
     }
     x[size] = px;
     y[size] = py;
     z[size] = pz;
     hag[size] = (float) h;
-    returns[size] = n;
+    returnNumber[size] = n;
     size++;
   }
 
   /** Adds another collector's points. */
   void absorb(LabelPoints o) {
     for (int i = 0; i < o.size; i++) {
-      add(o.x[i], o.y[i], o.z[i], o.hag[i], o.returns[i]);
+      add(o.x[i], o.y[i], o.z[i], o.hag[i], o.returnNumber[i]);
     }
   }
 }

@@ -13,8 +13,8 @@ package org.clearance.label;
  * @param planarShare share of its points whose largest feature is planarity (0-1)
  * @param upperSpreadM plan area of the 0.5 m cells holding its points in the upper half of its
  *     height, divided by its height, m (m^2 per m)
- * @param multiReturnShare share of its points from pulses of two or more returns (0-1), NaN
- *     when the survey's echoes tell nothing
+ * @param multiReturnShare share of its points that are later returns of their pulse (return
+ *     number 2 or more; 0-1), NaN when the survey's echoes tell nothing
  */
 public record LabelledObject(ObjectKind kind, int points, double x, double y, double heightM,
     double planarity, double scattering, double planarShare, double upperSpreadM,

@@ -23,14 +23,15 @@ import org.clearance.wire.SetAside;
  *   <li>Objects: single-linkage clusters of the points at {@link #LINK_M}.</li>
  *   <li>Per object: mean planarity and scattering, share of planar points, the plan spread of its
  *       upper half per metre of height (a crown spreads, a mast does not) and, where the survey
- *       records echoes, its share of multi-return points (vegetation gives many, solid objects
- *       few).</li>
+ *       records echoes, its share of later returns (return number 2 or more): a pulse goes on
+ *       through a crown and returns again inside it, while a roof or solid body returns once and
+ *       a lattice member or a wire returns first and then from the ground below.</li>
  *   <li>An object is man-made only on strong evidence: {@link ObjectKind#MAST} when at least
  *       {@link #MAST_MIN_HEIGHT_M} tall with contrast (planarity - scattering) of at least
  *       {@link #MAST_MIN_CONTRAST} and upper spread at most {@link #MAST_MAX_SPREAD_M};
  *       {@link ObjectKind#PLANAR} when at least {@link #PLANAR_MIN_SHARE} of its points are
  *       planar. Where echoes are recorded, an object with {@link #ECHO_VEGETATION_SHARE} or more
- *       multi-return points stays vegetation whatever its shape. Everything else stays
+ *       later returns stays vegetation whatever its shape. Everything else stays
  *       vegetation.</li>
  *   <li>Fragments too small to judge attach to a man-made object nearby
  *       ({@link #attachFragments}).</li>
@@ -63,12 +64,12 @@ public final class ObjectLabeller {
   /** Least share of planar points of a planar object (open tile: tree stands at most 0.28,
    * cranes 0.28-0.41; a roof or wall sampled densely is nearly all planar). */
   static final double PLANAR_MIN_SHARE = 0.5;
-  /** Share of multi-return points at which an object stays vegetation when echoes are recorded
-   * (common practice, no source: a crown returns several echoes from many pulses, a roof or a
-   * solid mast one). */
-  static final double ECHO_VEGETATION_SHARE = 0.2;
-  /** Share of multi-return points among all points looked at above which the survey's echoes
-   * are read (a file with return numbers all 0 or all 1 tells nothing). */
+  /** Share of later returns at which an object stays vegetation when echoes are recorded
+   * (common practice, no source: inside a crown a pulse returns again, on a roof or a steel
+   * member it returns first; see docs/labelling.md for the measured shares). */
+  static final double ECHO_VEGETATION_SHARE = 0.1;
+  /** Share of later returns among all points looked at above which the survey's echoes are
+   * read (a file with return numbers all 0 or all 1 tells nothing). */
   static final double ECHO_INFORMATIVE_SHARE = 0.05;
   /** Reach of a fragment's attachment to a man-made object, m (open tile: the cut-off top of a
    * crane's jib lies 2.5 and 4.1 m from the rest of the crane, measured). */
@@ -125,13 +126,13 @@ public final class ObjectLabeller {
       y[k] = p.y[i];
       z[k] = p.z[i];
       h[k] = p.hag[i];
-      r[k] = p.returns[i];
+      r[k] = p.returnNumber[i];
     }
     p.x = x;
     p.y = y;
     p.z = z;
     p.hag = h;
-    p.returns = r;
+    p.returnNumber = r;
   }
 
   static ObjectLabels label(LabelPoints p, SetAside setAside) {
@@ -177,7 +178,7 @@ public final class ObjectLabeller {
     long multi = 0;
     for (int i = 0; i < n; i++) {
       parent[i] = root(parent, i);
-      multi += p.returns[i] >= 2 ? 1 : 0;
+      multi += p.returnNumber[i] >= 2 ? 1 : 0;
     }
     boolean echoes = multi >= ECHO_INFORMATIVE_SHARE * n;
     ObjectKind[] kindOf = new ObjectKind[n];
@@ -209,7 +210,7 @@ public final class ObjectLabeller {
     for (int i = 0; i < n; i++) {
       int r = root[i];
       count[r]++;
-      multi[r] += p.returns[i] >= 2 ? 1 : 0;
+      multi[r] += p.returnNumber[i] >= 2 ? 1 : 0;
       if (top[r] < 0 || p.hag[i] > p.hag[top[r]]) {
         top[r] = i;
       }
