@@ -27,10 +27,14 @@ import org.clearance.wire.SetAside;
  *       through a crown and returns again inside it, while a roof or solid body returns once and
  *       a lattice member or a wire returns first and then from the ground below.</li>
  *   <li>An object is man-made only on strong evidence: {@link ObjectKind#MAST} when at least
- *       {@link #MAST_MIN_HEIGHT_M} tall with contrast (planarity - scattering) of at least
- *       {@link #MAST_MIN_CONTRAST} and upper spread at most {@link #MAST_MAX_SPREAD_M};
- *       {@link ObjectKind#PLANAR} when at least {@link #PLANAR_MIN_SHARE} of its points are
- *       planar. Where echoes are recorded, an object with {@link #ECHO_VEGETATION_SHARE} or more
+ *       {@link #MAST_MIN_HEIGHT_M} tall with upper spread at most {@link #MAST_MAX_SPREAD_M},
+ *       and either standing (mean scattering at most {@link #MAST_MAX_SCATTERING}, at least
+ *       {@link #MAST_MIN_BASE_SHARE} of its points in the lowest quarter of its height: a crane
+ *       on its carrier, a mast) or a lattice (mean linearity at least
+ *       {@link #LATTICE_MIN_LINEARITY}, scattering at most {@link #LATTICE_MAX_SCATTERING}, at
+ *       least {@link #LATTICE_MIN_BASE_SHARE} of its points in the lowest quarter: a tower
+ *       crane); {@link ObjectKind#PLANAR} when at least {@link #PLANAR_MIN_SHARE} of its
+ *       points are planar and its mean scattering is at most {@link #PLANAR_MAX_SCATTERING}. Where echoes are recorded, an object with {@link #ECHO_VEGETATION_SHARE} or more
  *       later returns stays vegetation whatever its shape. Everything else stays
  *       vegetation.</li>
  *   <li>Fragments too small to judge attach to a man-made object nearby
@@ -55,12 +59,33 @@ public final class ObjectLabeller {
   /** Least height of a mast-like object, m: lower objects are never near a conductor's zone
    * and are left to the planar test. */
   static final double MAST_MIN_HEIGHT_M = 4.0;
-  /** Least contrast of a mast-like object (measured on the open tile: its labelled tree stands
-   * at most 0.146, its cranes 0.19-0.24; docs/labelling.md). */
-  static final double MAST_MIN_CONTRAST = 0.17;
+  /** Most mean scattering of a mast-like object (open tile: cranes 0.11-0.17, tree stands 12 m
+   * and taller 0.18-0.32; docs/labelling.md). */
+  static final double MAST_MAX_SCATTERING = 0.2;
   /** Most upper spread of a mast-like object, m^2 per m of height (open tile: cranes 0.76-1.16,
    * tree stands 12 m and taller 2.5-10.7). */
   static final double MAST_MAX_SPREAD_M = 2.0;
+  /** Least share of a mast-like object's points in the lowest quarter of its height (open tile:
+   * cranes 0.49-0.53, tree stands at most 0.30; generated conifer crowns, seen from above, start
+   * high; docs/labelling.md). */
+  static final double MAST_MIN_BASE_SHARE = 0.4;
+  /** Least mean linearity of a lattice (a tower crane, a lattice mast: steel members sampled
+   * along their length; open tile: tree stands at most 0.52, the tile tower's pieces
+   * 0.55-0.66; the demo's tower crane 0.72, some of its conifer crowns 0.66-0.68). */
+  static final double LATTICE_MIN_LINEARITY = 0.65;
+  /** Most mean scattering of a lattice (open tile: tower pieces 0.06-0.07, the demo's tower
+   * crane 0.065; tree stands 0.18 and more). */
+  static final double LATTICE_MAX_SCATTERING = 0.1;
+  /** Least share of a lattice's points in the lowest quarter of its height: its mast runs down
+   * to the ground (the demo's tower crane 0.19 under its jib); a crown seen from above has none
+   * there (generated conifer crowns 0.0, which reach linearity 0.66-0.68). */
+  static final double LATTICE_MIN_BASE_SHARE = 0.1;
+  /** Most mean scattering of a planar object: a sampled plane scatters only by its noise (3 cm
+   * over a 1 m disc gives about 0.004; the demo's shed 0.003), a crown at least 0.04 (the
+   * demo's) to 0.18 (the open tile's). */
+  static final double PLANAR_MAX_SCATTERING = 0.03;
+  /** The lowest quarter of an object's height, for {@link #MAST_MIN_BASE_SHARE}. */
+  static final double BASE_QUARTER = 0.25;
   /** Least share of planar points of a planar object (open tile: tree stands at most 0.28,
    * cranes 0.28-0.41; a roof or wall sampled densely is nearly all planar). */
   static final double PLANAR_MIN_SHARE = 0.5;
@@ -203,6 +228,7 @@ public final class ObjectLabeller {
     int[] withShape = new int[n];
     int[] planarDominant = new int[n];
     int[] multi = new int[n];
+    double[] sumLinearity = new double[n];
     double[] sumPlanarity = new double[n];
     double[] sumScattering = new double[n];
     int[] top = new int[n];
@@ -217,16 +243,25 @@ public final class ObjectLabeller {
       LocalShape f = shape[i];
       if (f != null) {
         withShape[r]++;
+        sumLinearity[r] += f.linearity();
         sumPlanarity[r] += f.planarity();
         sumScattering[r] += f.scattering();
         planarDominant[r] += f.dominant() == 1 ? 1 : 0;
       }
     }
     int[] upperCells = new int[n];
+    int[] base = new int[n];
     LongHashSet cells = new LongHashSet();
     for (int i = 0; i < n; i++) {
       int r = root[i];
-      if (count[r] < MIN_OBJECT_POINTS || p.hag[i] < 0.5 * p.hag[top[r]]) {
+      if (count[r] < MIN_OBJECT_POINTS) {
+        continue;
+      }
+      double h = p.hag[top[r]];
+      if (p.hag[i] < LabelPoints.MIN_HAG_M + BASE_QUARTER * (h - LabelPoints.MIN_HAG_M)) {
+        base[r]++;
+      }
+      if (p.hag[i] < 0.5 * h) {
         continue;
       }
       long cx = (long) Math.floor(p.x[i] / SPREAD_CELL_M);
@@ -242,15 +277,18 @@ public final class ObjectLabeller {
         continue;
       }
       double height = p.hag[top[r]];
+      double linearity = sumLinearity[r] / withShape[r];
       double planarity = sumPlanarity[r] / withShape[r];
       double scattering = sumScattering[r] / withShape[r];
       double planarShare = (double) planarDominant[r] / withShape[r];
       double spread = upperCells[r] * SPREAD_CELL_M * SPREAD_CELL_M / height;
+      double baseShare = (double) base[r] / count[r];
       double multiShare = echoes ? (double) multi[r] / count[r] : Double.NaN;
-      ObjectKind kind = decide(height, planarity - scattering, planarShare, spread, multiShare);
+      ObjectKind kind = decide(height, linearity, scattering, planarShare, spread, baseShare,
+          multiShare);
       kindOf[r] = kind;
-      out.add(new LabelledObject(kind, count[r], p.x[top[r]], p.y[top[r]], height, planarity,
-          scattering, planarShare, spread, multiShare));
+      out.add(new LabelledObject(kind, count[r], p.x[top[r]], p.y[top[r]], height, linearity,
+          planarity, scattering, planarShare, spread, baseShare, multiShare));
     }
     return out;
   }
@@ -296,16 +334,19 @@ public final class ObjectLabeller {
   }
 
   /** The decision of step 5 (class comment). */
-  static ObjectKind decide(double heightM, double contrast, double planarShare, double spreadM,
-      double multiReturnShare) {
+  static ObjectKind decide(double heightM, double linearity, double scattering,
+      double planarShare, double spreadM, double baseShare, double multiReturnShare) {
     if (multiReturnShare >= ECHO_VEGETATION_SHARE) {
       return ObjectKind.VEGETATION;
     }
-    if (heightM >= MAST_MIN_HEIGHT_M && contrast >= MAST_MIN_CONTRAST
-        && spreadM <= MAST_MAX_SPREAD_M) {
+    boolean tall = heightM >= MAST_MIN_HEIGHT_M && spreadM <= MAST_MAX_SPREAD_M;
+    boolean standing = scattering <= MAST_MAX_SCATTERING && baseShare >= MAST_MIN_BASE_SHARE;
+    boolean lattice = linearity >= LATTICE_MIN_LINEARITY && scattering <= LATTICE_MAX_SCATTERING
+        && baseShare >= LATTICE_MIN_BASE_SHARE;
+    if (tall && (standing || lattice)) {
       return ObjectKind.MAST;
     }
-    if (planarShare >= PLANAR_MIN_SHARE) {
+    if (planarShare >= PLANAR_MIN_SHARE && scattering <= PLANAR_MAX_SCATTERING) {
       return ObjectKind.PLANAR;
     }
     return ObjectKind.VEGETATION;

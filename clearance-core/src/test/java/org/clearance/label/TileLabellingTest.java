@@ -65,8 +65,9 @@ class TileLabellingTest {
     for (LabelledObject o : labels.objects()) {
       if (o.points() >= 100 || o.kind() != ObjectKind.VEGETATION) {
         System.out.println(String.format(Locale.ROOT, "  %s %d pts at (%.1f, %.1f) h %.1f m"
-            + " contrast %.3f planar share %.2f spread %.2f", o.kind(), o.points(), o.x(), o.y(),
-            o.heightM(), o.contrast(), o.planarShare(), o.upperSpreadM()));
+            + " L %.3f P %.3f S %.3f contrast %.3f planar share %.2f spread %.2f base %.2f",
+            o.kind(), o.points(), o.x(), o.y(), o.heightM(), o.linearity(), o.planarity(),
+            o.scattering(), o.contrast(), o.planarShare(), o.upperSpreadM(), o.baseShare()));
       }
     }
     // Confusion: per vendor class, points looked at and points set aside as man-made.
