@@ -20,7 +20,7 @@ import org.junit.jupiter.api.Test;
 class PackageOrderTest {
 
   private static final List<String> ORDER = List.of(
-      "io", "survey", "line", "ground", "wire", "sag", "clearance", "rules", "run", "assess",
+      "io", "survey", "line", "ground", "wire", "label", "sag", "clearance", "rules", "run", "assess",
       "report");
   private static final Pattern IMPORT =
       Pattern.compile("^import (?:static )?org\\.clearance\\.(?:([a-z]+)\\.)?([A-Z]\\w*)", Pattern.MULTILINE);
