@@ -73,7 +73,7 @@ final class LabelPoints implements Consumer<PointChunk> {
     return false;
   }
 
-  private void add(double px, double py, double pz, double h, byte n) {
+  void add(double px, double py, double pz, double h, byte n) {
     if (size == x.length) {
       int cap = size * 2;
       x = Arrays.copyOf(x, cap);

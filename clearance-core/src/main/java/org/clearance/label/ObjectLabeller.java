@@ -59,8 +59,8 @@ public final class ObjectLabeller {
   /** Least height of a mast-like object, m: lower objects are never near a conductor's zone
    * and are left to the planar test. */
   static final double MAST_MIN_HEIGHT_M = 4.0;
-  /** Most mean scattering of a mast-like object (open tile: cranes 0.11-0.17, tree stands 12 m
-   * and taller 0.18-0.32; docs/labelling.md). */
+  /** Most mean scattering of a standing mast-like object (open tile: cranes and class-26
+   * objects 0.11-0.19, tree stands 12 m and taller 0.18-0.32; docs/labelling.md). */
   static final double MAST_MAX_SCATTERING = 0.2;
   /** Most upper spread of a mast-like object, m^2 per m of height (open tile: cranes 0.76-1.16,
    * tree stands 12 m and taller 2.5-10.7). */

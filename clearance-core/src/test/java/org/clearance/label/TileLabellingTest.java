@@ -91,6 +91,9 @@ class TileLabellingTest {
         100.0 * t[1] / t[0])));
     assertTrue(labels.pointsSetAside() > 0, labels.describe());
     assertEquals(0, byClass.get(5)[1], "vendor vegetation set aside");
+    // The four free-standing cranes (380-1 201 points each, docs/labelling.md) are found.
+    assertTrue(byClass.get(26)[1] >= 3_500, "crane points set aside: " + byClass.get(26)[1]);
+    assertTrue(byClass.get(1)[1] <= 10, "vendor class 1 set aside: " + byClass.get(1)[1]);
   }
 
   /** A consumer that sees every class but {@code keep} as 1 (0: every class). */
