@@ -21,7 +21,8 @@ import org.clearance.wire.SetAside;
  *   <li>Per point, the dimensionality features of the points within {@link #RADIUS_M}
  *       ({@link LocalShape}).</li>
  *   <li>Objects: single-linkage clusters of the points at {@link #LINK_M}.</li>
- *   <li>Per object: mean planarity and scattering, share of planar points, the plan spread of its
+ *   <li>Per object: mean linearity, planarity and scattering, share of planar points, share of
+ *       points in the lowest quarter of its height (a mast stands on the ground), the plan spread of its
  *       upper half per metre of height (a crown spreads, a mast does not) and, where the survey
  *       records echoes, its share of later returns (return number 2 or more): a pulse goes on
  *       through a crown and returns again inside it, while a roof or solid body returns once and
@@ -34,9 +35,9 @@ import org.clearance.wire.SetAside;
  *       {@link #LATTICE_MIN_LINEARITY}, scattering at most {@link #LATTICE_MAX_SCATTERING}, at
  *       least {@link #LATTICE_MIN_BASE_SHARE} of its points in the lowest quarter: a tower
  *       crane); {@link ObjectKind#PLANAR} when at least {@link #PLANAR_MIN_SHARE} of its
- *       points are planar and its mean scattering is at most {@link #PLANAR_MAX_SCATTERING}. Where echoes are recorded, an object with {@link #ECHO_VEGETATION_SHARE} or more
- *       later returns stays vegetation whatever its shape. Everything else stays
- *       vegetation.</li>
+ *       points are planar and its mean scattering is at most {@link #PLANAR_MAX_SCATTERING}.
+ *       Where echoes are recorded, an object with {@link #ECHO_VEGETATION_SHARE} or more later
+ *       returns stays vegetation whatever its shape. Everything else stays vegetation.</li>
  *   <li>Fragments too small to judge attach to a man-made object nearby
  *       ({@link #attachFragments}).</li>
  * </ol>
