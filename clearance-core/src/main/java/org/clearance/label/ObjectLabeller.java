@@ -22,11 +22,12 @@ import org.clearance.wire.SetAside;
  *       ({@link LocalShape}).</li>
  *   <li>Objects: single-linkage clusters of the points at {@link #LINK_M}.</li>
  *   <li>Per object: mean linearity, planarity and scattering, share of planar points, share of
- *       points in the lowest quarter of its height (a mast stands on the ground), the plan spread of its
- *       upper half per metre of height (a crown spreads, a mast does not) and, where the survey
- *       records echoes, its share of later returns (return number 2 or more): a pulse goes on
- *       through a crown and returns again inside it, while a roof or solid body returns once and
- *       a lattice member or a wire returns first and then from the ground below.</li>
+ *       points in the lowest quarter of its height (a mast stands on the ground), the plan
+ *       spread of its upper half per metre of height (a crown spreads, a mast does not) and,
+ *       where the survey records echoes, its share of later returns (return number 2 or more):
+ *       a pulse goes on through a crown and returns again inside it, while a roof or solid body
+ *       returns once and a lattice member or a wire returns first and then from the ground
+ *       below.</li>
  *   <li>An object is man-made only on strong evidence: {@link ObjectKind#MAST} when at least
  *       {@link #MAST_MIN_HEIGHT_M} tall with upper spread at most {@link #MAST_MAX_SPREAD_M},
  *       and either standing (mean scattering at most {@link #MAST_MAX_SCATTERING}, at least
