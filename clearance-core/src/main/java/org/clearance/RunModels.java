@@ -225,12 +225,14 @@ final class RunModels {
       }
     }
     if (clearance != null && clearance.excludedAsConductor() + clearance.excludedAsStructure()
-        + clearance.excludedAsAirborne() > 0) {
+        + clearance.excludedAsAirborne() + clearance.excludedAsObject() > 0) {
       notes.add(String.format(Locale.ROOT, "unclassified points set aside: %d on a wire (on a "
           + "fitted curve within its fit tolerance, or on a long linear piece), %d within %.1f m "
-          + "of a structure, %d isolated airborne (birds, noise)",
+          + "of a structure, %d isolated airborne (birds, noise), %d of man-made objects "
+          + "(mast-like or planar, docs/labelling.md)",
           clearance.excludedAsConductor(), clearance.excludedAsStructure(),
-          engine.structureExclusion(), clearance.excludedAsAirborne()));
+          engine.structureExclusion(), clearance.excludedAsAirborne(),
+          clearance.excludedAsObject()));
     }
     return new SpanRecord(model.context(), lineName, structure(span.from()), structure(span.to()),
         status, reason, conductors, clearance == null ? List.of() : clearance.minima(),
@@ -238,7 +240,8 @@ final class RunModels {
         clearance == null ? 0 : clearance.pointsKept(), notes, clearance == null
             ? SpanRecord.SetAsideCounts.NONE : new SpanRecord.SetAsideCounts(
                 clearance.excludedAsConductor(), clearance.excludedAsStructure(),
-                clearance.excludedAsAirborne()), temperatureRecord(temperature));
+                clearance.excludedAsAirborne(), clearance.excludedAsObject()),
+        temperatureRecord(temperature));
   }
 
   /** The span's and its section's survey temperature as the run model stores them. */
