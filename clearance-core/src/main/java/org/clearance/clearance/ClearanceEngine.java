@@ -10,6 +10,7 @@ import org.clearance.ground.CanopyBuilder;
 import org.clearance.ground.GroundModel;
 import org.clearance.ground.Tree;
 import org.clearance.ground.TreeOptions;
+import org.clearance.line.ConductorPosition.Role;
 import org.clearance.survey.PointChunk;
 import org.clearance.wire.SetAside;
 
@@ -141,15 +142,18 @@ public final class ClearanceEngine {
   public NearPointFile nearPointLayout() {
     List<String> ids = new ArrayList<>();
     List<String> names = new ArrayList<>();
+    java.util.EnumSet<Role> roles = java.util.EnumSet.of(Role.PHASE);
     for (PreparedSpan p : spans) {
       ids.add(p.model.span().id());
+      roles.addAll(java.util.Arrays.asList(p.roles));
       for (String n : p.names) {
         if (!names.contains(n)) {
           names.add(n);
         }
       }
     }
-    return new NearPointFile(conditions.names(), conditions.groups(), ids, names);
+    return new NearPointFile(conditions.names(), conditions.groups(), ids, names,
+        List.copyOf(roles));
   }
 
   /**

@@ -125,7 +125,7 @@ public final class SpanRules {
     for (ResolvedZone z : zones) {
       boolean matched = false;
       ZoneViolation zoneWorst = null;
-      for (ConditionDistance d : point.distances()) {
+      for (ConditionDistance d : point.distancesFor(z.zone().roles())) {
         if (!usable(z, d) || !z.zone().conditions().selects(d)) {
           continue; // a distance not computed checks nothing
         }
@@ -207,7 +207,7 @@ public final class SpanRules {
     }
     GrowthRates.Rate rate = profile.growth().get().forClass(point.classification());
     double best = Double.POSITIVE_INFINITY;
-    for (ConditionDistance d : point.distances()) {
+    for (ConditionDistance d : point.distancesFor(reference.zone().roles())) {
       if (!usable(reference, d) || !reference.zone().conditions().selects(d)) {
         continue;
       }

@@ -9,12 +9,16 @@ import java.io.StringWriter;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.Arrays;
+import java.util.HashMap;
 import java.util.List;
 import java.util.Locale;
+import java.util.Map;
 import java.util.Optional;
 import org.clearance.CheckInputs;
 import org.clearance.CheckOptions;
 import org.clearance.ClearanceCheck;
+import org.clearance.clearance.NearPointFile;
+import org.clearance.clearance.NearPointReader;
 import org.clearance.clearance.SpanStatus;
 import org.clearance.line.SpanFrame;
 import org.clearance.run.ConductorRecord;
@@ -34,7 +38,9 @@ import org.junit.jupiter.params.provider.CsvSource;
  * from vegetation within 5 cm of the exact truth (the generator's catenaries of the conductors
  * the check fitted, measured by {@link CurveDistance} to the vegetation points) in assessed
  * spans, never above it in incomplete ones; and no span assessed where a primary conductor was
- * not fitted. Unclassified surveys are left out: their vegetation is inferred (a superset of the
+ * not fitted. The span minima count the energised conductors only; the neutral is measured too
+ * (near-points.bin keeps each point's distance to it, for zones that name it), and its minimum
+ * is checked against the truth the same way. Unclassified surveys are left out: their vegetation is inferred (a superset of the
  * truth's), as ClearanceAccuracyTest explains.
  */
 class FeederClearanceTest {
@@ -73,7 +79,20 @@ class FeederClearanceTest {
     RunModel model = RunModelJson.read(runDir.resolve(RunModel.FILE_NAME));
     FeederScene scene = FeederScene.create(options);
     assertEquals(scene.spans().size(), model.spans().size(), text.toString());
-    double[] truth = truthMinima(scene, model);
+    double[] truth = truthMinima(scene, model, "phase");
+    double[] neutralTruth = truthMinima(scene, model, "neutral");
+    double[] neutralGot = new double[scene.spans().size()];
+    Arrays.fill(neutralGot, Double.POSITIVE_INFINITY);
+    Map<String, Integer> spanIndex = new HashMap<>();
+    for (int i = 0; i < model.spans().size(); i++) {
+      spanIndex.put(model.spans().get(i).id(), i);
+    }
+    NearPointReader.forEach(runDir.resolve(NearPointFile.FILE_NAME), p -> {
+      if (!p.neutral().isEmpty() && !Double.isNaN(p.neutral().get(0).distance())) {
+        int i = spanIndex.get(p.spanId());
+        neutralGot[i] = Math.min(neutralGot[i], p.neutral().get(0).distance());
+      }
+    });
     List<String> report = new ArrayList<>();
     int compared = 0;
     for (int i = 0; i < scene.spans().size(); i++) {
@@ -88,6 +107,12 @@ class FeederClearanceTest {
           + ":" + c.reason()).toList());
       if (span.status() == SpanStatus.NOT_ASSESSED || !(truth[i] < COMPARED_WITHIN_M)) {
         continue;
+      }
+      // issue 15: the neutral is measured too (for zones that name it), from near-points.bin
+      if (neutralTruth[i] < COMPARED_WITHIN_M && span.status() == SpanStatus.ASSESSED) {
+        assertEquals(neutralTruth[i], neutralGot[i], TOL_M, span.id() + " neutral");
+        report.add(String.format(Locale.ROOT, "%s neutral: truth %.3f m, check %.3f m",
+            ts.id(), neutralTruth[i], neutralGot[i]));
       }
       double got = span.minima().get(0).distance();
       report.add(String.format(Locale.ROOT, "%s %s: truth %.3f m, check %.3f m", ts.id(),
@@ -107,8 +132,11 @@ class FeederClearanceTest {
     assertTrue(compared >= 3, "spans compared: " + compared);
   }
 
-  /** Per span: least distance from a vegetation point to the truth of its fitted conductors. */
-  static double[] truthMinima(FeederScene scene, RunModel model) {
+  /**
+   * Per span: least distance from a vegetation point to the truth of its fitted conductors of
+   * one role ({@code phase}: the energised ones the span minima count, issue 15).
+   */
+  static double[] truthMinima(FeederScene scene, RunModel model, String role) {
     int n = scene.spans().size();
     double[] min = new double[n];
     Arrays.fill(min, Double.POSITIVE_INFINITY);
@@ -118,7 +146,7 @@ class FeederClearanceTest {
       FeederScene.Span ts = scene.spans().get(i);
       List<ConductorCurve> list = new ArrayList<>();
       for (ConductorRecord c : model.spans().get(i).conductors()) {
-        if (c.fitted()) {
+        if (c.fitted() && c.role().equals(role)) {
           ts.wires().stream().filter(w -> w.position().equals(c.name()))
               .forEach(w -> list.add(w.curve()));
         }
