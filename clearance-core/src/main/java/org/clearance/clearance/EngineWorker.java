@@ -326,7 +326,9 @@ final class EngineWorker implements Consumer<PointChunk> {
   }
 
   private boolean nearStructure(PreparedSpan p, double x, double y) {
-    double r2 = options.structureExclusion() * options.structureExclusion();
+    double r = Double.isNaN(p.model.structureExclusionM()) ? options.structureExclusion()
+        : Math.min(options.structureExclusion(), p.model.structureExclusionM());
+    double r2 = r * r;
     double ax = p.model.span().from().x() - x;
     double ay = p.model.span().from().y() - y;
     double bx = p.model.span().to().x() - x;
