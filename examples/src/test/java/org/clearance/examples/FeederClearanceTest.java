@@ -20,6 +20,7 @@ import org.clearance.ClearanceCheck;
 import org.clearance.clearance.NearPointFile;
 import org.clearance.clearance.NearPointReader;
 import org.clearance.clearance.SpanStatus;
+import org.clearance.line.PoleEquipment;
 import org.clearance.line.SpanFrame;
 import org.clearance.run.ConductorRecord;
 import org.clearance.run.RunModel;
@@ -113,6 +114,19 @@ class FeederClearanceTest {
     RunModel model = RunModelJson.read(runDir.resolve(RunModel.FILE_NAME));
     FeederScene scene = FeederScene.create(options);
     assertEquals(scene.spans().size(), model.spans().size(), text.toString());
+    // issue 15: the structures file's equipment column reaches the run model, in the fixed
+    // order of the kinds
+    int withEquipment = 0;
+    for (int i = 0; i < model.spans().size(); i++) {
+      FeederPole pole = scene.poles().get(scene.spans().get(i).from());
+      String written = FeederFiles.equipment(pole);
+      String expected = written.isEmpty() ? "" : Arrays.stream(written.split(";"))
+          .map(PoleEquipment::ofFileName).sorted().map(PoleEquipment::fileName)
+          .collect(java.util.stream.Collectors.joining(";"));
+      assertEquals(expected, model.spans().get(i).from().equipment(), model.spans().get(i).id());
+      withEquipment += expected.isEmpty() ? 0 : 1;
+    }
+    assertTrue(withEquipment >= 2, "structures with equipment: " + withEquipment);
     double[] truth = truthMinima(scene, model, "phase");
     double[] neutralTruth = truthMinima(scene, model, "neutral");
     double[] neutralGot = new double[scene.spans().size()];
