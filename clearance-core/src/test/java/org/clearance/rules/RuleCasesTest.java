@@ -89,6 +89,9 @@ class RuleCasesTest {
     Map<String, Object> e = map(p.get("expect"));
     String verdict = str(e, "verdict").toUpperCase(Locale.ROOT);
     assertEquals(verdict, f.verdict().name(), name + ": " + f);
+    if (e.containsKey("gaps")) {
+      assertEquals(((Number) e.get("gaps")).intValue(), f.gaps().size(), name + ": " + f.gaps());
+    }
     if (e.containsKey("reason")) {
       String reason = f.notAssessedReason().orElseThrow();
       assertTrue(reason.contains(str(e, "reason")), name + ": " + reason);
