@@ -2,6 +2,7 @@ package org.clearance;
 
 import java.time.LocalDate;
 import java.util.ArrayList;
+import java.util.Comparator;
 import java.util.HashMap;
 import java.util.List;
 import java.util.Locale;
@@ -20,6 +21,7 @@ import org.clearance.clearance.VegetationSelector;
 import org.clearance.ground.GroundModel;
 import org.clearance.line.LineSpec;
 import org.clearance.line.Span;
+import org.clearance.line.SpanFrame;
 import org.clearance.line.Structure;
 import org.clearance.line.SurveyTemperatureSpec;
 import org.clearance.run.ConductorRecord;
@@ -31,6 +33,7 @@ import org.clearance.run.RunRecord;
 import org.clearance.run.SpanRecord;
 import org.clearance.run.StructureRecord;
 import org.clearance.run.TreeRecord;
+import org.clearance.sag.SpanTemperature;
 import org.clearance.sag.TemperatureEstimate;
 import org.clearance.survey.GpsTime;
 import org.clearance.survey.Survey;
@@ -47,7 +50,7 @@ final class RunModels {
 
   /**
    * The header facts of a check: the lines as specified, the input files hashed so far, the
-   * survey's acquisition days when every file stores adjusted standard GPS time, and the run day.
+   * survey's acquisition days when every file stores adjusted standard GPS time.
    *
    * @param gpsMin earliest GPS time of the survey, s, or NaN
    * @param gpsMax latest GPS time, s, or NaN
@@ -67,14 +70,24 @@ final class RunModels {
     } else {
       note = "not known: the files store GPS week seconds, which do not name the week";
     }
-    return new RunFacts(lines, record.inputs(), first, last, note,
-        Optional.of(RunFacts.runDay(record.started())));
+    List<RunRecord.InputFile> inputs = record.inputs().stream().map(i -> new RunRecord.InputFile(
+        i.role(), fileName(i.path()), i.bytes(), i.sha256())).toList();
+    return new RunFacts(lines, inputs, first, last, note);
+  }
+
+  /**
+   * A file's name without its folders: {@code model.json} and the report name an input by its
+   * name and SHA-256, never by a folder of the machine it ran on (run.json keeps the path given).
+   */
+  static String fileName(String path) {
+    int cut = Math.max(path.lastIndexOf('/'), path.lastIndexOf('\\'));
+    return path.substring(cut + 1);
   }
 
   static RunModel of(String toolVersion, SurveyUnits units, ConditionSet conditions,
       CheckOptions options, VegetationSelector vegetation, GroundModel ground, WireResult wires,
       List<SpanModel> spanModels, Measurement measured,
-      Map<String, TemperatureEstimate> temperatures) {
+      Map<String, SpanTemperature> temperatures) {
     Map<String, SpanClearance> clearances = new HashMap<>();
     measured.spans().forEach(c -> clearances.put(c.spanId(), c));
     Map<String, SpanModel> models = new HashMap<>();
@@ -92,7 +105,7 @@ final class RunModels {
     }
     List<TreeRecord> trees = new ArrayList<>();
     int n = 0;
-    for (TreeClearance t : measured.trees()) {
+    for (TreeClearance t : treesAlongTheLine(measured.trees(), wires)) {
       n++;
       trees.add(new TreeRecord(String.format(Locale.ROOT, "TREE%05d", n), t.spanId(),
           t.tree().x(), t.tree().y(), t.tree().topZ(), t.tree().baseZ(), t.tree().height(),
@@ -102,9 +115,43 @@ final class RunModels {
         vegetation.describe(), ground.source().describe(), spans, trees);
   }
 
+  /**
+   * The trees in the order of their place along the line: by span (the run's order), then
+   * station along it, offset across it, then position and height. The tree ids are numbered in
+   * this order, so they depend on where the trees stand only, never on the order in which
+   * threads or tiles found them.
+   */
+  static List<TreeClearance> treesAlongTheLine(List<TreeClearance> trees, WireResult wires) {
+    Map<String, Integer> spanOrder = new HashMap<>();
+    Map<String, SpanFrame> frames = new HashMap<>();
+    for (SpanWires sw : wires.spans()) {
+      spanOrder.putIfAbsent(sw.span().id(), spanOrder.size());
+      frames.putIfAbsent(sw.span().id(), sw.span().frame());
+    }
+    Comparator<TreeClearance> order = Comparator
+        .comparingInt((TreeClearance t) -> spanOrder.getOrDefault(t.spanId(), Integer.MAX_VALUE))
+        .thenComparing(TreeClearance::spanId)
+        .thenComparingDouble(t -> along(frames.get(t.spanId()), t, true))
+        .thenComparingDouble(t -> along(frames.get(t.spanId()), t, false))
+        .thenComparingDouble(t -> t.tree().x())
+        .thenComparingDouble(t -> t.tree().y())
+        .thenComparingDouble(t -> t.tree().topZ())
+        .thenComparingDouble(t -> t.tree().height());
+    List<TreeClearance> sorted = new ArrayList<>(trees);
+    sorted.sort(order);
+    return sorted;
+  }
+
+  private static double along(SpanFrame f, TreeClearance t, boolean station) {
+    if (f == null) {
+      return 0;
+    }
+    return station ? f.station(t.tree().x(), t.tree().y()) : f.offset(t.tree().x(), t.tree().y());
+  }
+
   private static SpanRecord span(SpanWires sw, SpanModel model, SpanClearance clearance,
       List<StructureChange> changes, ConditionSet conditions, ClearanceEngine.Options engine,
-      String lineName, double coverage, TemperatureEstimate temperature) {
+      String lineName, double coverage, SpanTemperature temperature) {
     Span span = sw.span();
     Map<String, ConductorModel> byName = new HashMap<>();
     if (model != null) {
@@ -149,13 +196,11 @@ final class RunModels {
           u.classes().stream().map(String::valueOf).collect(
               java.util.stream.Collectors.joining(", ")), engine.keepRadius(), u.nearestM()));
     }
-    boolean anyFitted = !sw.fitted().isEmpty();
-    SpanStatus status;
+    SpanStatus status = SpanStatus.ofWires(sw);
     String reason;
-    if (!anyFitted) {
-      status = SpanStatus.NOT_ASSESSED;
+    if (status == SpanStatus.NOT_ASSESSED) {
       reason = sw.reason().orElse("no conductor fitted");
-    } else if (sw.reason().isPresent() || !problems.isEmpty()) {
+    } else if (status == SpanStatus.INCOMPLETE || !problems.isEmpty()) {
       status = SpanStatus.INCOMPLETE;
       List<String> parts = new ArrayList<>();
       sw.reason().ifPresent(parts::add);
@@ -168,7 +213,8 @@ final class RunModels {
       reason = "";
     }
     List<String> notes = new ArrayList<>();
-    if (temperature != null && temperature.source() != SurveyTemperatureSpec.Source.NONE) {
+    if (temperature != null
+        && temperature.section().source() != SurveyTemperatureSpec.Source.NONE) {
       notes.add(temperatureNote(temperature));
     }
     for (StructureChange ch : changes) {
@@ -192,11 +238,22 @@ final class RunModels {
         clearance == null ? 0 : clearance.pointsKept(), notes, clearance == null
             ? SpanRecord.SetAsideCounts.NONE : new SpanRecord.SetAsideCounts(
                 clearance.excludedAsConductor(), clearance.excludedAsStructure(),
-                clearance.excludedAsAirborne()));
+                clearance.excludedAsAirborne()), temperatureRecord(temperature));
+  }
+
+  /** The span's and its section's survey temperature as the run model stores them. */
+  static SpanRecord.SurveyTemperature temperatureRecord(SpanTemperature t) {
+    if (t == null) {
+      return SpanRecord.SurveyTemperature.NONE;
+    }
+    return new SpanRecord.SurveyTemperature(t.span().temperatureC(), t.span().sigmaC(),
+        t.span().source().name().toLowerCase(Locale.ROOT), t.section().temperatureC(),
+        t.section().sigmaC());
   }
 
   /** The survey temperature a span's change of state used, for the report. */
-  static String temperatureNote(TemperatureEstimate t) {
+  static String temperatureNote(SpanTemperature st) {
+    TemperatureEstimate t = st.section();
     if (!t.isKnown()) {
       return "survey conductor temperature unknown: " + t.detail();
     }
@@ -204,9 +261,14 @@ final class RunModels {
       return String.format(Locale.ROOT, "survey conductor temperature %.1f degC, standard "
           + "uncertainty %.1f degC (%s)", t.temperatureC(), t.sigmaC(), t.detail());
     }
-    return String.format(Locale.ROOT, "survey conductor temperature %.1f degC, standard "
-        + "uncertainty %.1f degC (computed by the %s; %s dominates the uncertainty)",
-        t.temperatureC(), t.sigmaC(), t.detail(), t.dominant());
+    TemperatureEstimate own = st.span();
+    String ofSpan = own.isKnown() ? String.format(Locale.ROOT, "this span %.1f degC, standard "
+        + "uncertainty %.1f degC, computed by the %s; ", own.temperatureC(), own.sigmaC(),
+        own.detail()) : "this span's own not computed (" + own.detail() + "); ";
+    return String.format(Locale.ROOT, "survey conductor temperature: %sthe tension section's "
+        + "%.1f degC, standard uncertainty %.1f degC, used for the change of state (%s; %s "
+        + "dominates the uncertainty)", ofSpan, t.temperatureC(), t.sigmaC(), t.detail(),
+        t.dominant());
   }
 
   private static StructureRecord structure(Structure s) {
