@@ -276,6 +276,6 @@ final class RunModels {
 
   private static StructureRecord structure(Structure s) {
     return new StructureRecord(s.id(), s.x(), s.y(), s.groundZ(),
-        s.type().name().toLowerCase(Locale.ROOT));
+        s.type().name().toLowerCase(Locale.ROOT), s.equipmentText());
   }
 }
