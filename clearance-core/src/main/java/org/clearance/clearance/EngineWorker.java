@@ -25,10 +25,16 @@ final class EngineWorker implements Consumer<PointChunk> {
    * tree top and is most of the points.
    */
   static final double CANOPY_MIN_HEIGHT_M = 1.0;
-  /** Reach of a structure's arm hardware along the line from its centre, m: a 3 m strain
-   * insulator and its jumper at a dead-end, an arm on the bisector of a 35 degree turn
-   * (demo corridor geometry; common practice, no source). */
+  /** Least reach of a structure's arm hardware along the line from its centre, m: an arm with
+   * its insulators where no conductor end was fitted (common practice, no source). Where the
+   * fitted conductors end farther out (a 3 m strain insulator at a dead-end whose arm lies on
+   * the bisector of the line's turn: 3 m + 8 m x tan(15.6 deg) = 5.2 m along at a 31 degree
+   * turn), the hardware reaches out to the farthest conductor end, plus {@link #ARM_END_MARGIN_M}. */
   static final double ARM_ALONG_M = 5.0;
+  /** Reach of the hardware along the line beyond the farthest fitted conductor end, m: the
+   * fitted attachments lie within 0.3 m of the true ones in plan (docs/wire-finder.md), and the
+   * clamp and jumper points scatter a few centimetres about them. */
+  static final double ARM_END_MARGIN_M = 0.5;
   /** Reach of an arm beyond its outermost conductor end, m: arm tip and clamp, and on the open
    * corridor tile's angle tower arms 3.5 m beyond the conductors' nominal offsets (measured). */
   static final double ARM_MARGIN_M = 4.0;
@@ -345,7 +351,9 @@ final class EngineWorker implements Consumer<PointChunk> {
 
   /**
    * Whether a point lies where a structure's cross arms, insulators and jumpers are: within
-   * {@link #ARM_ALONG_M} along the line of a structure, across out to {@link #ARM_MARGIN_M}
+   * {@link #ARM_ALONG_M} along the line of a structure, or out to the farthest fitted conductor
+   * end there and {@link #ARM_END_MARGIN_M} beyond (a strain insulator and the jumper end where
+   * the conductor begins), across out to {@link #ARM_MARGIN_M}
    * beyond the outermost conductor end there on either side (a conductor not fitted, say with
    * a gap in its points, still has its arm and insulator), and no lower than {@link #ARM_BELOW_M} below the
    * lowest conductor end there (the arms reach past the structure disc on wide towers).
@@ -357,7 +365,8 @@ final class EngineWorker implements Consumer<PointChunk> {
       }
       double along = end == 0 ? s : s - p.model.span().lengthM();
       double half = Math.max(Math.abs(p.armELo[end]), Math.abs(p.armEHi[end])) + ARM_MARGIN_M;
-      if (Math.abs(along) <= ARM_ALONG_M && Math.abs(e) <= half
+      double reach = Math.max(ARM_ALONG_M, p.armAlong[end] + ARM_END_MARGIN_M);
+      if (Math.abs(along) <= reach && Math.abs(e) <= half
           && z >= p.armZLo[end] - ARM_BELOW_M) {
         return true;
       }

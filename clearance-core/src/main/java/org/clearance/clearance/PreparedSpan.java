@@ -45,9 +45,11 @@ final class PreparedSpan {
   final Role[] roles;
   /**
    * Cross-arm boxes at the span's two structures, in the span frame: per end (0 at the first
-   * structure, 1 at the second) the least and largest offset and the lowest elevation of the
-   * surveyed conductors' ends there (m); NaN where no conductor ends there.
+   * structure, 1 at the second) the least and largest offset, the lowest elevation and the
+   * largest distance along the line from the structure of the surveyed conductors' ends there
+   * (m); NaN where no conductor ends there.
    */
+  final double[] armAlong = {Double.NaN, Double.NaN};
   final double[] armELo = {Double.NaN, Double.NaN};
   final double[] armEHi = {Double.NaN, Double.NaN};
   final double[] armZLo = {Double.NaN, Double.NaN};
@@ -119,6 +121,9 @@ final class PreparedSpan {
             double y = curve.y(s);
             int end = frame.station(x, y) < model.span().lengthM() / 2 ? 0 : 1;
             double e = frame.offset(x, y);
+            double along = Math.abs(end == 0 ? frame.station(x, y)
+                : frame.station(x, y) - model.span().lengthM());
+            armAlong[end] = Double.isNaN(armAlong[end]) ? along : Math.max(armAlong[end], along);
             armELo[end] = Double.isNaN(armELo[end]) ? e : Math.min(armELo[end], e);
             armEHi[end] = Double.isNaN(armEHi[end]) ? e : Math.max(armEHi[end], e);
             armZLo[end] = Double.isNaN(armZLo[end]) ? curve.z(s)

@@ -188,6 +188,32 @@ class ClearanceEngineTest {
   }
 
   @Test
+  void deadEndHardwareOutToTheFittedConductorEndIsTheStructure() {
+    // Regression, issue 9 (demo seed 29, ground-only and unlabelled): at a dead-end on a 31
+    // degree turn the outer phase's strain insulator and jumper end 5.2 m along the line from
+    // the structure centre (3 m insulator + 8 m x tan(15.6 deg) along the bisector arm), past
+    // the fixed 5 m cross-arm reach, so an insulator point and a jumper point became priority-1
+    // zone sites. The hardware now reaches out to the fitted conductor end (+0.5 m).
+    ConditionSet set = new ConditionSet(List.of("survey"), List.of("survey"));
+    double end = 5.2;
+    double offset = 8.0;
+    SpanFrame plan = SpanFrame.between(end, offset, L - end, offset);
+    ConductorCurve a = new ConductorCurve(plan, Catenary.through(0, Z_ATTACH, plan.length(),
+        Z_ATTACH, C));
+    ClearanceEngine engine = new ClearanceEngine(List.of(span(set, List.of(hangingOnly("A", a,
+        1)))), set, (x, y, z) -> z, VegetationSelector.forSurvey(new long[256], null),
+        ClearanceEngine.Options.defaults(1));
+    double[][] pts = {
+      {5.15, offset, Z_ATTACH - 0.02, 1}, // the insulator's clamp end, 9.5 m from the centre
+      {L - 5.1, offset + 0.1, Z_ATTACH - 0.05, 1}, // the jumper end at the far dead-end
+      {7.0, offset + 1.5, Z_ATTACH - 1.0, 1}, // a branch 1.8 m beyond the conductor end
+    };
+    SpanClearance r = engine.measure(points(pts), null).spans().get(0);
+    assertEquals(2, r.excludedAsStructure());
+    assertEquals(1, r.pointsMeasured());
+  }
+
+  @Test
   void vegetationInAClassNotReadIsCountedNearTheConductors() {
     // Regression, issue 10 item 3: 123 494 vegetation points delivered in class 20 (ignored
     // ground) gave "assessed and clear". Points of classes not read that may be vegetation

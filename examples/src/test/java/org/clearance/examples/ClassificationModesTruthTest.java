@@ -57,7 +57,10 @@ class ClassificationModesTruthTest {
   @CsvSource({"11, FULL, 0, false", "11, GROUND_ONLY, 0, false", "11, UNCLASSIFIED, 0, false",
       "23, FULL, 0, false", "23, GROUND_ONLY, 0, false", "23, UNCLASSIFIED, 0, false",
       "37, FULL, 3, false", "37, GROUND_ONLY, 3, false", "11, FULL, 0, true",
-      "11, GROUND_ONLY, 0, true", "11, UNCLASSIFIED, 0, true"})
+      "11, GROUND_ONLY, 0, true", "11, UNCLASSIFIED, 0, true",
+      // Seed 29: a dead-end on a 31 degree turn whose strain insulator and jumper end 5.2 m
+      // along the line from the tower (once zone sites on them in the unlabelled modes).
+      "29, FULL, 0, false", "29, GROUND_ONLY, 0, false", "29, UNCLASSIFIED, 0, false"})
   void findingsMatchTheTruthInEveryClassificationMode(long seed, ClassificationMode mode,
       double swingDeg, boolean manMade) throws IOException {
     DemoRuns.Run run = DemoRuns.of(DemoRuns.small(seed, mode).withSurveySwing(swingDeg)
