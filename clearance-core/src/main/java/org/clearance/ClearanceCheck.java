@@ -220,8 +220,11 @@ public final class ClearanceCheck {
     return outcome;
   }
 
-  /** Per span, the fitted conductors as the line conditions need them. */
-  static Map<String, List<SurveyedConductor>> surveyed(WireResult wires) {
+  /**
+   * Per span, the fitted conductors as the line conditions need them. Public for runs that fit
+   * the spans elsewhere (the Spark job), so both hand the conditions the same input.
+   */
+  public static Map<String, List<SurveyedConductor>> surveyed(WireResult wires) {
     Map<String, List<SurveyedConductor>> out = new LinkedHashMap<>();
     for (SpanWires sw : wires.spans()) {
       List<SurveyedConductor> list = new ArrayList<>();
@@ -237,12 +240,24 @@ public final class ClearanceCheck {
 
   /** The survey temperatures: given, or computed at each section's flight time. */
   private static SurveyTemperatures surveyTemperatures(Survey survey, FlightTimes flight) {
-    boolean adjusted = survey.files().stream().allMatch(f -> f.header().adjustedGpsTime());
-    LonLat.Lookup geo = LonLat.forUnits(survey.units());
     Map<String, Double> times = new LinkedHashMap<>();
     flight.result().forEach((id, t) -> times.put(id, t.meanGps()));
+    return surveyTemperatures(survey, times);
+  }
+
+  /**
+   * The survey temperatures from the spans' flight times: the survey's clock (adjusted GPS time
+   * when every file says so) and CRS. Public for runs that date the spans elsewhere (the Spark
+   * job), so both hand the conditions the same input.
+   *
+   * @param spanGpsTimes per span id, its mean GPS time of flight, s (NaN when unknown)
+   */
+  public static SurveyTemperatures surveyTemperatures(Survey survey,
+      Map<String, Double> spanGpsTimes) {
+    boolean adjusted = survey.files().stream().allMatch(f -> f.header().adjustedGpsTime());
+    LonLat.Lookup geo = LonLat.forUnits(survey.units());
     return new SurveyTemperatures(new SurveyTemperatures.Clock(adjusted), geo.transform(),
-        geo.note(), times);
+        geo.note(), spanGpsTimes);
   }
 
   private void sayTemperatures(List<LineSpec> specs, Map<String, TemperatureEstimate> bySpan) {
@@ -259,7 +274,11 @@ public final class ClearanceCheck {
     }
   }
 
-  private static List<SpanModel> spanModels(SpanLayout layout,
+  /**
+   * The spans of the layout, in layout order, with their conductors in every condition (an empty
+   * list for a span without models) and the context the rules need.
+   */
+  public static List<SpanModel> spanModels(SpanLayout layout,
       Map<String, List<ConductorModel>> models) {
     List<SpanModel> out = new ArrayList<>();
     for (LineLayout line : layout.lines()) {

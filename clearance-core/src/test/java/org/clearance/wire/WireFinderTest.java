@@ -52,6 +52,27 @@ class WireFinderTest {
     }
   }
 
+  /** The span-level entry point gives, span by span, exactly what the whole-layout pass gives:
+   * the same code runs per span, only the candidate collection is limited to one corridor. */
+  @ParameterizedTest
+  @EnumSource(SyntheticCorridor.Mode.class)
+  void oneSpanAtATimeEqualsTheWholeLayout(SyntheticCorridor.Mode mode) {
+    SyntheticCorridor c = SyntheticCorridor.standard(mode, 7);
+    WireFinder finder = new WireFinder(Fixtures.options(false));
+    WireResult whole = finder.find(c, Fixtures.layout(c), c);
+    for (SpanWires expected : whole.spans()) {
+      SpanWires one = finder.findSpan(c, Fixtures.layout(c), expected.span().id(), c);
+      assertEquals(expected.status(), one.status());
+      assertEquals(expected.reason(), one.reason());
+      assertEquals(expected.conductors().size(), one.conductors().size());
+      for (FittedConductor f : expected.conductors()) {
+        FittedConductor g = one.conductor(f.name()).orElseThrow();
+        assertEquals(f.curve(), g.curve(), f.name());
+        assertEquals(f.quality(), g.quality(), f.name());
+      }
+    }
+  }
+
   @ParameterizedTest
   @EnumSource(SyntheticCorridor.Mode.class)
   void missingPositionIsNotAssessedAndBlocksTheSpan(SyntheticCorridor.Mode mode) {

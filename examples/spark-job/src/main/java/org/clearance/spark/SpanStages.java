@@ -1,0 +1,311 @@
+package org.clearance.spark;
+
+import java.io.IOException;
+import java.io.UncheckedIOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.Comparator;
+import java.util.HashSet;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.Optional;
+import java.util.Set;
+import java.util.function.Consumer;
+import org.clearance.CheckOptions;
+import org.clearance.ClearanceCheck;
+import org.clearance.RunModels;
+import org.clearance.clearance.ClearanceEngine;
+import org.clearance.clearance.ConditionModels;
+import org.clearance.clearance.ConditionSet;
+import org.clearance.clearance.ConductorModel;
+import org.clearance.clearance.Measurement;
+import org.clearance.clearance.NearPointFile;
+import org.clearance.clearance.NearPointWriter;
+import org.clearance.clearance.SpanModel;
+import org.clearance.clearance.SurveyedConductor;
+import org.clearance.clearance.VegetationSelector;
+import org.clearance.ground.GroundModel;
+import org.clearance.ground.GroundModelBuilder;
+import org.clearance.line.SpanLayout;
+import org.clearance.run.RunModel;
+import org.clearance.run.RunModelJson;
+import org.clearance.sag.ConditionSolver;
+import org.clearance.survey.PointChunk;
+import org.clearance.wire.ConductorTable;
+import org.clearance.wire.PointSource;
+import org.clearance.wire.SpanWires;
+import org.clearance.wire.WireFinder;
+import org.clearance.wire.WireResult;
+import org.clearance.wire.WireStatus;
+
+/**
+ * The work of one span, in the order of the command line's stages and with the same core
+ * classes: read its points from the tile pieces; ground and wires ({@link #fit}); then, with the
+ * fitted conductors of its whole tension section, conditions and distances ({@link #measure}).
+ * A failure in a span is caught here and becomes that span's NOT ASSESSED record with the
+ * reason, as the command line reports a span it could not assess; it never stops the others.
+ */
+final class SpanStages {
+  /** Points per chunk handed to the stages (as the command line's reader). */
+  static final int CHUNK_POINTS = 65_536;
+
+  private SpanStages() {}
+
+  /** Reads a piece and hands each point to the work areas that hold it: (span, points). */
+  static List<scala.Tuple2<Integer, PointBlock>> read(JobSpec spec, WorkPlan.Piece piece) {
+    JobContext ctx = JobContext.of(spec);
+    List<WorkPlan.WorkBox> boxes = piece.boxes();
+    PointBlock[] out = new PointBlock[boxes.size()];
+    for (int b = 0; b < out.length; b++) {
+      out[b] = new PointBlock();
+    }
+    ctx.survey.readRecords(piece.tile(), piece.first(), piece.count(), chunk -> {
+      double[] x = chunk.x();
+      double[] y = chunk.y();
+      for (int i = 0; i < chunk.size(); i++) {
+        for (int b = 0; b < out.length; b++) {
+          if (boxes.get(b).contains(x[i], y[i])) {
+            out[b].add(chunk, i);
+          }
+        }
+      }
+    });
+    List<scala.Tuple2<Integer, PointBlock>> result = new ArrayList<>();
+    for (int b = 0; b < out.length; b++) {
+      if (out[b].size() > 0) {
+        result.add(new scala.Tuple2<>(boxes.get(b).span(), out[b]));
+      }
+    }
+    return result;
+  }
+
+  /** The points of a span as a point source of the core. */
+  static PointSource source(Iterable<PointBlock> blocks) {
+    return consumers -> feed(blocks, consumers.get());
+  }
+
+  private static void feed(Iterable<PointBlock> blocks, Consumer<PointChunk> sink) {
+    PointChunk chunk = new PointChunk(CHUNK_POINTS);
+    long record = 0;
+    for (PointBlock b : blocks) {
+      record = b.feed(chunk, record, sink);
+    }
+  }
+
+  /**
+   * Ground model and wires of one span from the points of its work area.
+   *
+   * @param key the span's key in the job
+   */
+  static SpanFit fit(JobSpec spec, int key, Iterable<PointBlock> blocks) {
+    long start = System.nanoTime();
+    JobContext ctx = JobContext.of(spec);
+    JobContext.SpanRef ref = ctx.spans.get(key);
+    SpanLayout layout = ctx.lineLayouts.get(ref.line());
+    long[] classes = new long[256];
+    long[] points = new long[1];
+    double[] gps = {Double.NaN, Double.NaN};
+    try {
+      for (PointBlock b : blocks) {
+        points[0] += b.size();
+        gps[0] = minimum(gps[0], b.gpsMin());
+        gps[1] = maximum(gps[1], b.gpsMax());
+      }
+      GroundModelBuilder builder = new GroundModelBuilder(ctx.options.ground());
+      source(blocks).stream(() -> chunk -> {
+        builder.accept(chunk);
+        for (int i = 0; i < chunk.size(); i++) {
+          classes[chunk.classification()[i] & 0xFF]++;
+        }
+      });
+      GroundModel ground = builder.build();
+      SpanWires wires = new WireFinder(ctx.options.wires()).findSpan(source(blocks), layout,
+          ref.span().id(), ground::heightAboveGround);
+      return new SpanFit(key, ground, wires, points[0], classes, gps, seconds(start),
+          null);
+    } catch (RuntimeException e) {
+      return new SpanFit(key, null, failed(ref, e), points[0], classes, gps, seconds(start),
+          describe(e));
+    }
+  }
+
+  /** The span's fitted conductors for its section's tasks. */
+  static SectionFit sectionFit(SpanFit fit, JobContext ctx) {
+    String id = ctx.spans.get(fit.key()).span().id();
+    Map<String, List<SurveyedConductor>> surveyed = ClearanceCheck.surveyed(new WireResult(
+        ctx.lineLayouts.get(ctx.spans.get(fit.key()).line()), List.of(fit.wires()),
+        List.of()));
+    return SectionFit.of(fit.key(), id, surveyed.getOrDefault(id, List.of()));
+  }
+
+  /**
+   * The spans that need a section's fitted conductors: the section's own spans (ruling span,
+   * change of state) and the spans whose tasks measure a span of the section with their own
+   * (their partners, {@link JobContext#partners}).
+   *
+   * @param section the section's spans, in key order
+   */
+  static List<Integer> receivers(JobContext ctx, List<SectionFit> section) {
+    java.util.TreeSet<Integer> out = new java.util.TreeSet<>();
+    section.forEach(f -> out.addAll(ctx.partners.get(f.span())));
+    return new ArrayList<>(out);
+  }
+
+  /** The key of a span's tension section: line index and section index. */
+  static String sectionKey(JobContext ctx, int key) {
+    JobContext.SpanRef ref = ctx.spans.get(key);
+    return ref.line() + "/" + ref.span().sectionIndex();
+  }
+
+  /**
+   * Conditions and distances of one span: the conductor models from the fitted conductors of
+   * its whole tension section, then every point of its work area measured; the result as a
+   * one-span run model, its conductor table rows and its near points.
+   *
+   * <p>The engine is given the span's partners too (the spans whose work areas meet its own): in
+   * a whole-survey run the canopy in which trees are found is the union of all spans' tree
+   * regions, so a crown near a structure is seen whole, and a tree is assigned to the nearest
+   * span. With its partners the span's task sees the same canopy around the span and keeps only
+   * what belongs to the span itself: its minima, its near points (filtered when the line's file
+   * is written) and the trees nearest to it.
+   *
+   * @param sections the fitted conductors of every span of the span's tension section, and of
+   *     the sections of its partners
+   * @param classCounts points per ASPRS class over the work areas (which classes exist)
+   */
+  static SpanOutcome measure(JobSpec spec, SpanFit fit, Iterable<PointBlock> blocks,
+      Iterable<List<SectionFit>> sections, long[] classCounts) {
+    long start = System.nanoTime();
+    JobContext ctx = JobContext.of(spec);
+    JobContext.SpanRef ref = ctx.spans.get(fit.key());
+    SpanLayout layout = ctx.lineLayouts.get(ref.line());
+    ConditionSet conditions = ctx.conditions.get(ref.line());
+    CheckOptions options = ctx.options;
+    VegetationSelector vegetation = VegetationSelector.forSurvey(classCounts,
+        options.vegetationClasses());
+    Path temp = null;
+    try {
+      temp = Files.createTempDirectory("clearance-span");
+      if (fit.failure() != null) {
+        return outcome(ctx, fit, conditions, vegetation, emptyGround(options), fit.wires(),
+            Map.of(), new Measurement(List.of(), List.of()), null, start);
+      }
+      Map<String, List<SurveyedConductor>> fitted = new LinkedHashMap<>();
+      for (List<SectionFit> section : sections) {
+        for (SectionFit s : section) {
+          List<SurveyedConductor> list = new ArrayList<>();
+          s.conductors().forEach(c -> list.add(c.toSurveyed()));
+          fitted.put(s.spanId(), list);
+        }
+      }
+      Map<String, List<ConductorModel>> models = ConditionModels.build(layout, fitted,
+          conditions, new ConditionSolver(options.conditions()));
+      String id = ref.span().id();
+      List<SpanModel> engineSpans = new ArrayList<>();
+      for (int k : ctx.partners.get(fit.key())) {
+        engineSpans.add(spanModel(layout, models, ctx.spans.get(k).span().id()));
+      }
+      ClearanceEngine engine = new ClearanceEngine(engineSpans, conditions, fit.ground(),
+          vegetation, options.engine(), options.trees());
+      Path near = temp.resolve(NearPointFile.FILE_NAME);
+      Measurement all;
+      try (NearPointWriter out = new NearPointWriter(near, engine.nearPointLayout())) {
+        all = engine.measure((threads, consumers) -> feed(blocks, consumers.get()), out);
+      }
+      Measurement measured = new Measurement(
+          all.spans().stream().filter(c -> c.spanId().equals(id)).toList(),
+          all.trees().stream().filter(t -> t.spanId().equals(id)).toList());
+      return outcome(ctx, fit, conditions, vegetation, fit.ground(), fit.wires(),
+          Map.of(id, models.getOrDefault(id, List.of())), measured, near, start);
+    } catch (IOException | RuntimeException e) {
+      SpanFit failed = new SpanFit(fit.key(), null, failed(ref, e), fit.points(),
+          fit.classCounts(), fit.gpsRange(), fit.seconds(), describe(e));
+      try {
+        return outcome(ctx, failed, conditions, vegetation, emptyGround(options),
+            failed.wires(), Map.of(), new Measurement(List.of(), List.of()), null, start);
+      } catch (IOException again) {
+        throw new UncheckedIOException(again);
+      }
+    } finally {
+      deleteQuietly(temp);
+    }
+  }
+
+  private static SpanOutcome outcome(JobContext ctx, SpanFit fit, ConditionSet conditions,
+      VegetationSelector vegetation, GroundModel ground, SpanWires wires,
+      Map<String, List<ConductorModel>> models, Measurement measured, Path near, long start)
+      throws IOException {
+    JobContext.SpanRef ref = ctx.spans.get(fit.key());
+    SpanLayout layout = ctx.lineLayouts.get(ref.line());
+    WireResult result = new WireResult(layout, List.of(wires), List.of());
+    SpanModel model = spanModel(layout, models, ref.span().id());
+    RunModel part = RunModels.of(ctx.spec.toolVersion(), ctx.survey.units(), conditions,
+        ctx.options, vegetation, ground, result, List.of(model), measured);
+    String csv = ConductorTable.csv(result, ctx.survey.units());
+    String rows = csv.substring(csv.indexOf('\n') + 1);
+    byte[] nearBytes = near == null ? null : Files.readAllBytes(near);
+    return new SpanOutcome(fit.key(), ref.line(), RunModelJson.toJson(part), rows, nearBytes,
+        GroundTally.of(ground.source()), fit.points(), fit.seconds(), seconds(start),
+        fit.failure());
+  }
+
+  private static SpanModel spanModel(SpanLayout layout, Map<String, List<ConductorModel>> models,
+      String spanId) {
+    return ClearanceCheck.spanModels(layout, models).stream()
+        .filter(m -> m.span().id().equals(spanId)).findFirst().orElseThrow();
+  }
+
+  /** A span whose task failed: not assessed, with the reason. */
+  private static SpanWires failed(JobContext.SpanRef ref, Exception e) {
+    return new SpanWires(ref.span(), WireStatus.NOT_ASSESSED,
+        Optional.of("the span's task failed: " + describe(e)), List.of(), 0, false);
+  }
+
+  private static String describe(Exception e) {
+    String m = e.getMessage();
+    return e.getClass().getSimpleName() + (m == null ? "" : ": " + m);
+  }
+
+  /** The ground model of no points (a failed span has none). */
+  private static GroundModel emptyGround(CheckOptions options) {
+    return new GroundModelBuilder(options.ground()).build();
+  }
+
+  /** The smaller of two times, NaN only when both are. */
+  static double minimum(double a, double b) {
+    return Double.isNaN(a) ? b : Double.isNaN(b) ? a : Math.min(a, b);
+  }
+
+  /** The larger of two times, NaN only when both are. */
+  static double maximum(double a, double b) {
+    return Double.isNaN(a) ? b : Double.isNaN(b) ? a : Math.max(a, b);
+  }
+
+  private static double seconds(long start) {
+    return (System.nanoTime() - start) / 1e9;
+  }
+
+  private static void deleteQuietly(Path dir) {
+    if (dir == null) {
+      return;
+    }
+    try (var files = Files.walk(dir)) {
+      files.sorted(Comparator.reverseOrder()).forEach(p -> p.toFile().delete());
+    } catch (IOException | UncheckedIOException e) {
+      // a temporary folder left behind is harmless
+    }
+  }
+
+  /** Classes present in the counts (for messages). */
+  static Set<Integer> present(long[] counts) {
+    Set<Integer> out = new HashSet<>();
+    for (int c = 0; c < counts.length; c++) {
+      if (counts[c] > 0) {
+        out.add(c);
+      }
+    }
+    return out;
+  }
+}
