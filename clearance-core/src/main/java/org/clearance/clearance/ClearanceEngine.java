@@ -8,6 +8,7 @@ import java.util.function.Consumer;
 import java.util.function.Supplier;
 import org.clearance.ground.CanopyBuilder;
 import org.clearance.ground.GroundModel;
+import org.clearance.ground.HeightModel;
 import org.clearance.ground.Tree;
 import org.clearance.ground.TreeOptions;
 import org.clearance.survey.PointChunk;

@@ -6,6 +6,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.function.Consumer;
 import org.clearance.ground.CanopyBuilder;
+import org.clearance.ground.HeightModel;
 import org.clearance.survey.PointChunk;
 import org.clearance.wire.SetAside;
 

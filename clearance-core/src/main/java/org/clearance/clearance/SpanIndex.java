@@ -1,6 +1,7 @@
 package org.clearance.clearance;
 
 import java.util.List;
+import org.clearance.line.PlanCellIndex;
 
 /**
  * The engine's plan grid from cells to the spans whose tree region (which holds the measuring

@@ -1,7 +1,7 @@
 package org.clearance.wire;
 
 import java.util.List;
-import org.clearance.clearance.PlanCellIndex;
+import org.clearance.line.PlanCellIndex;
 
 /**
  * A uniform plan grid from cells to the corridors whose bounding box covers them

@@ -7,7 +7,7 @@ import java.util.List;
 import java.util.Map;
 import java.util.function.Consumer;
 import java.util.function.Supplier;
-import org.clearance.clearance.PlanCellIndex;
+import org.clearance.line.PlanCellIndex;
 import org.clearance.line.Span;
 import org.clearance.line.SpanFrame;
 import org.clearance.survey.PointChunk;

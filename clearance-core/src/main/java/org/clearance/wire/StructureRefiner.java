@@ -7,7 +7,7 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 import org.clearance.InputException;
-import org.clearance.clearance.HeightModel;
+import org.clearance.ground.HeightModel;
 import org.clearance.line.ConductorPosition;
 import org.clearance.line.LineLayout;
 import org.clearance.line.LineSpec;

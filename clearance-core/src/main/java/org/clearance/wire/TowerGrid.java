@@ -5,7 +5,7 @@ import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.function.Consumer;
-import org.clearance.clearance.HeightModel;
+import org.clearance.ground.HeightModel;
 import org.clearance.survey.PointChunk;
 
 /**

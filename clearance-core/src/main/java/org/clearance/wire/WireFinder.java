@@ -8,7 +8,7 @@ import java.util.concurrent.ExecutionException;
 import java.util.concurrent.ExecutorService;
 import java.util.concurrent.Executors;
 import java.util.concurrent.Future;
-import org.clearance.clearance.HeightModel;
+import org.clearance.ground.HeightModel;
 import org.clearance.line.ConductorPosition;
 import org.clearance.line.LineLayout;
 import org.clearance.line.LineSpec;

@@ -3,7 +3,7 @@ package org.clearance.wire;
 import java.util.HashMap;
 import java.util.Map;
 import java.util.function.Consumer;
-import org.clearance.clearance.HeightModel;
+import org.clearance.ground.HeightModel;
 import org.clearance.survey.PointChunk;
 
 /**

@@ -3,7 +3,7 @@ package org.clearance.wire;
 import java.util.List;
 import java.util.Random;
 import java.util.function.Consumer;
-import org.clearance.clearance.HeightModel;
+import org.clearance.ground.HeightModel;
 import org.clearance.line.SpanFrame;
 import org.clearance.survey.PointChunk;
 

@@ -1,4 +1,4 @@
-package org.clearance.clearance;
+package org.clearance.line;
 
 import java.util.ArrayList;
 import java.util.Arrays;

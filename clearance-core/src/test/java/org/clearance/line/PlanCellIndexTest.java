@@ -1,4 +1,4 @@
-package org.clearance.clearance;
+package org.clearance.line;
 
 import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;

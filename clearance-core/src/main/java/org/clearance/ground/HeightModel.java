@@ -1,4 +1,4 @@
-package org.clearance.clearance;
+package org.clearance.ground;
 
 /** Height above the ground model for a point, m, or NaN where there is no ground. */
 @FunctionalInterface
