@@ -44,6 +44,11 @@ final class JobContext {
    * a whole-survey run does ({@link SpanStages#measure}).
    */
   final List<List<Integer>> partners;
+  /**
+   * Per span, the spans whose tasks measure points its own task may set aside: its partners'
+   * partners, in key order.
+   */
+  final List<List<Integer>> measuredNear;
 
   /**
    * A span of the job.
@@ -104,6 +109,15 @@ final class JobContext {
       near.add(List.copyOf(list));
     }
     this.partners = List.copyOf(near);
+    List<List<Integer>> twice = new ArrayList<>();
+    for (int k = 0; k < spans.size(); k++) {
+      java.util.TreeSet<Integer> set = new java.util.TreeSet<>();
+      for (int j : partners.get(k)) {
+        set.addAll(partners.get(j));
+      }
+      twice.add(List.copyOf(set));
+    }
+    this.measuredNear = List.copyOf(twice);
   }
 
   /**

@@ -8,7 +8,7 @@ import org.clearance.survey.PointChunk;
 /**
  * Points of one span's work area read from one tile piece, as they travel between Spark tasks:
  * the attributes the core's stages read (coordinates in metres, ASPRS class, flags, return
- * numbers), in growable arrays. Order is kept but carries no meaning: every stage accepts its
+ * numbers, GPS time: the span's flight time dates its survey temperature), in growable arrays. Order is kept but carries no meaning: every stage accepts its
  * points in any order, as the command line's parallel reader delivers them.
  */
 final class PointBlock implements Serializable {
@@ -27,6 +27,7 @@ final class PointBlock implements Serializable {
   private byte[] flags = new byte[FIRST_CAPACITY];
   private byte[] returnNumber = new byte[FIRST_CAPACITY];
   private byte[] numberOfReturns = new byte[FIRST_CAPACITY];
+  private double[] gpsTime = new double[FIRST_CAPACITY];
 
   /** Number of points held. */
   int size() {
@@ -44,6 +45,7 @@ final class PointBlock implements Serializable {
       flags = Arrays.copyOf(flags, n);
       returnNumber = Arrays.copyOf(returnNumber, n);
       numberOfReturns = Arrays.copyOf(numberOfReturns, n);
+      gpsTime = Arrays.copyOf(gpsTime, n);
     }
     x[size] = c.x()[i];
     y[size] = c.y()[i];
@@ -52,15 +54,16 @@ final class PointBlock implements Serializable {
     flags[size] = c.flags()[i];
     returnNumber[size] = c.returnNumber()[i];
     numberOfReturns[size] = c.numberOfReturns()[i];
-    size++;
     double g = c.gpsTime()[i];
+    gpsTime[size] = g;
+    size++;
     if (!Double.isNaN(g)) {
       gpsMin = Double.isNaN(gpsMin) ? g : Math.min(gpsMin, g);
       gpsMax = Double.isNaN(gpsMax) ? g : Math.max(gpsMax, g);
     }
   }
 
-  /** Earliest GPS time of the points, s, or NaN (the times themselves do not travel). */
+  /** Earliest GPS time of the points, s, or NaN. */
   double gpsMin() {
     return gpsMin;
   }
@@ -86,6 +89,7 @@ final class PointBlock implements Serializable {
         chunk.flags()[i] = flags[from + j];
         chunk.returnNumber()[i] = returnNumber[from + j];
         chunk.numberOfReturns()[i] = numberOfReturns[from + j];
+        chunk.gpsTime()[i] = gpsTime[from + j];
       }
       record += n;
       sink.accept(chunk);

@@ -18,6 +18,7 @@ import org.clearance.clearance.NearPointFile;
 import org.clearance.clearance.NearPointReader;
 import org.clearance.clearance.NearPointWriter;
 import org.clearance.clearance.PointClearance;
+import org.clearance.clearance.UncertaintyFile;
 import org.clearance.ground.GroundSource;
 import org.clearance.line.LineLayout;
 import org.clearance.report.ReportOptions;
@@ -59,7 +60,8 @@ final class RunWriter {
       Files.write(parts.resolve(o.key() + ".bin"), o.nearPoints());
     }
     outcomes.put(o.key(), new SpanOutcome(o.key(), o.line(), o.modelJson(), o.conductorRows(),
-        null, o.ground(), o.points(), o.fitSeconds(), o.measureSeconds(), o.failure()));
+        o.uncertaintyRows(), null, o.ground(), o.points(), o.fitSeconds(), o.measureSeconds(),
+        o.failure()));
   }
 
   /**
@@ -87,6 +89,7 @@ final class RunWriter {
     }
     Files.writeString(staging.resolve(ConductorTable.FILE_NAME), conductors.toString(),
         StandardCharsets.UTF_8);
+    writeUncertainty();
     writeNearPoints();
     RunModel model = merge(models).withFacts(RunModels.facts(List.of(layout.spec()), record,
         ctx.survey, gpsRange[0], gpsRange[1]));
@@ -95,13 +98,45 @@ final class RunWriter {
     ReportStage.Outcome outcome = ReportStage.write(staging,
         ReportStage.assess(staging, model, profile, report), report, console);
     for (String name : List.of(ConductorTable.FILE_NAME, NearPointFile.FILE_NAME,
-        RunModel.FILE_NAME)) {
+        UncertaintyFile.FILE_NAME, RunModel.FILE_NAME)) {
       record.output(name);
     }
     outcome.written().forEach(record::output);
     record.output(RunRecord.FILE_NAME);
     RunRecordJson.write(staging, record.build());
     return outcome;
+  }
+
+  /**
+   * The line's uncertainty.csv: the core's comment and header lines (written for no span), then
+   * the spans' rows in line order.
+   */
+  private void writeUncertainty() throws IOException {
+    Path file = staging.resolve(UncertaintyFile.FILE_NAME);
+    UncertaintyFile.write(file, List.of(), ctx.conditions.get(line),
+        ctx.options.uncertainty());
+    StringBuilder all = new StringBuilder(Files.readString(file, StandardCharsets.UTF_8));
+    for (SpanOutcome o : outcomes.values()) {
+      all.append(o.uncertaintyRows());
+    }
+    Files.writeString(file, all.toString(), StandardCharsets.UTF_8);
+  }
+
+  /** The data rows of an uncertainty.csv: its lines after the comments and the header. */
+  static String uncertaintyRows(String file) {
+    StringBuilder out = new StringBuilder();
+    boolean header = false;
+    for (String line : file.split("\n", -1)) {
+      if (line.startsWith("#") || line.isEmpty()) {
+        continue;
+      }
+      if (!header) {
+        header = true;
+        continue;
+      }
+      out.append(line).append('\n');
+    }
+    return out.toString();
   }
 
   /** One near-points file for the line: spans in line order, conductor names in first use. */

@@ -11,6 +11,7 @@ import java.io.Serializable;
  * @param line index of its line
  * @param modelJson the one-span run model
  * @param conductorRows rows of conductors.csv, without the header
+ * @param uncertaintyRows rows of uncertainty.csv, without the comment and header lines
  * @param nearPoints the span's near-points.bin, or null when none was written
  * @param ground the span's ground model counts
  * @param points points of its work area
@@ -18,6 +19,7 @@ import java.io.Serializable;
  * @param measureSeconds time of conditions and distances, s
  * @param failure what failed, or null
  */
-record SpanOutcome(int key, int line, String modelJson, String conductorRows, byte[] nearPoints,
+record SpanOutcome(int key, int line, String modelJson, String conductorRows,
+    String uncertaintyRows, byte[] nearPoints,
     GroundTally ground, long points, double fitSeconds, double measureSeconds, String failure)
     implements Serializable {}

@@ -25,6 +25,7 @@ import org.clearance.clearance.NearPointFile;
 import org.clearance.clearance.NearPointWriter;
 import org.clearance.clearance.SpanModel;
 import org.clearance.clearance.SurveyedConductor;
+import org.clearance.clearance.UncertaintyFile;
 import org.clearance.clearance.VegetationSelector;
 import org.clearance.ground.GroundModel;
 import org.clearance.ground.GroundModelBuilder;
@@ -32,9 +33,13 @@ import org.clearance.line.SpanLayout;
 import org.clearance.run.RunModel;
 import org.clearance.run.RunModelJson;
 import org.clearance.sag.ConditionSolver;
+import org.clearance.sag.SurveyTemperatures;
+import org.clearance.sag.TemperatureEstimate;
 import org.clearance.survey.PointChunk;
 import org.clearance.wire.ConductorTable;
+import org.clearance.wire.FlightTimes;
 import org.clearance.wire.PointSource;
+import org.clearance.wire.SetAside;
 import org.clearance.wire.SpanWires;
 import org.clearance.wire.WireFinder;
 import org.clearance.wire.WireResult;
@@ -95,7 +100,7 @@ final class SpanStages {
   }
 
   /**
-   * Ground model and wires of one span from the points of its work area.
+   * Ground model, wires and flight time of one span from the points of its work area.
    *
    * @param key the span's key in the job
    */
@@ -121,23 +126,82 @@ final class SpanStages {
         }
       });
       GroundModel ground = builder.build();
-      SpanWires wires = new WireFinder(ctx.options.wires()).findSpan(source(blocks), layout,
+      FlightTimes flight = new FlightTimes(List.of(ref.span()));
+      WireFinder.SpanFind found = new WireFinder(ctx.options.wires()).findSpan(
+          consumers -> source(blocks).stream(flight.consumers(consumers)), layout,
           ref.span().id(), ground::heightAboveGround);
-      return new SpanFit(key, ground, wires, points[0], classes, gps, seconds(start),
-          null);
+      double meanGps = flight.result().get(ref.span().id()).meanGps();
+      return new SpanFit(key, ground, found.wires(), found, meanGps, points[0], classes, gps,
+          seconds(start), null);
     } catch (RuntimeException e) {
-      return new SpanFit(key, null, failed(ref, e), points[0], classes, gps, seconds(start),
-          describe(e));
+      return new SpanFit(key, null, failed(ref, e), null, Double.NaN, points[0], classes, gps,
+          seconds(start), describe(e));
     }
   }
 
-  /** The span's fitted conductors for its section's tasks. */
+  /** The keys of the span's wire points, for the spans near it ({@link #setAside}). */
+  static PointKeys wireKeys(SpanFit fit) {
+    return new PointKeys(fit.key(), fit.found() == null ? new long[0] : fit.found().wireKeys(),
+        new long[0]);
+  }
+
+  /**
+   * The span's points that are not vegetation, once the wire points of the spans near it are
+   * known: the command line's second step of the wire finder, for this span.
+   *
+   * @param wires the wire points of the span's partners (itself included)
+   * @return the span's points set aside (none when its fit failed), or the failure of this
+   *     step (the span is then reported NOT ASSESSED by {@link #measure})
+   */
+  static PointKeys setAside(SpanFit fit, Iterable<PointKeys> wires) {
+    if (fit.found() == null) {
+      return new PointKeys(fit.key(), new long[0], new long[0]);
+    }
+    try {
+      SetAside out = SetAside.none();
+      fit.found().setAside(union(wires, false), out);
+      return new PointKeys(fit.key(), out.wireKeys(), out.airborneKeys());
+    } catch (RuntimeException e) {
+      return new PointKeys(fit.key(), null, null, describe(e));
+    }
+  }
+
+  /** One set of the keys of every message ({@code withAirborne}: the airborne keys too). */
+  static SetAside union(Iterable<PointKeys> messages, boolean withAirborne) {
+    int nw = 0;
+    int na = 0;
+    for (PointKeys m : messages) {
+      if (m.wire() == null) {
+        continue;
+      }
+      nw += m.wire().length;
+      na += withAirborne ? m.airborne().length : 0;
+    }
+    long[] w = new long[nw];
+    long[] a = new long[na];
+    nw = 0;
+    na = 0;
+    for (PointKeys m : messages) {
+      if (m.wire() == null) {
+        continue;
+      }
+      System.arraycopy(m.wire(), 0, w, nw, m.wire().length);
+      nw += m.wire().length;
+      if (withAirborne) {
+        System.arraycopy(m.airborne(), 0, a, na, m.airborne().length);
+        na += m.airborne().length;
+      }
+    }
+    return SetAside.of(w, a);
+  }
+
+  /** The span's fitted conductors and flight time for its section's tasks. */
   static SectionFit sectionFit(SpanFit fit, JobContext ctx) {
     String id = ctx.spans.get(fit.key()).span().id();
     Map<String, List<SurveyedConductor>> surveyed = ClearanceCheck.surveyed(new WireResult(
         ctx.lineLayouts.get(ctx.spans.get(fit.key()).line()), List.of(fit.wires()),
         List.of()));
-    return SectionFit.of(fit.key(), id, surveyed.getOrDefault(id, List.of()));
+    return SectionFit.of(fit.key(), id, fit.meanGps(), surveyed.getOrDefault(id, List.of()));
   }
 
   /**
@@ -160,9 +224,11 @@ final class SpanStages {
   }
 
   /**
-   * Conditions and distances of one span: the conductor models from the fitted conductors of
-   * its whole tension section, then every point of its work area measured; the result as a
-   * one-span run model, its conductor table rows and its near points.
+   * Conditions and distances of one span: the conductor models from the fitted conductors and
+   * flight times of its whole tension section (ruling span, change of state, survey
+   * temperature), then every point of its work area measured, skipping the points that the
+   * spans near it set aside; the result as a one-span run model, its conductor table rows, its
+   * uncertainty rows and its near points.
    *
    * <p>The engine is given the span's partners too (the spans whose work areas meet its own): in
    * a whole-survey run the canopy in which trees are found is the union of all spans' tree
@@ -173,10 +239,13 @@ final class SpanStages {
    *
    * @param sections the fitted conductors of every span of the span's tension section, and of
    *     the sections of its partners
+   * @param asides the points set aside by the spans near it (its own message may tell that
+   *     its step failed: the span is then NOT ASSESSED; a partner's failure leaves that
+   *     partner's points measured as vegetation, the safe side)
    * @param classCounts points per ASPRS class over the work areas (which classes exist)
    */
   static SpanOutcome measure(JobSpec spec, SpanFit fit, Iterable<PointBlock> blocks,
-      Iterable<List<SectionFit>> sections, long[] classCounts) {
+      Iterable<List<SectionFit>> sections, Iterable<PointKeys> asides, long[] classCounts) {
     long start = System.nanoTime();
     JobContext ctx = JobContext.of(spec);
     JobContext.SpanRef ref = ctx.spans.get(fit.key());
@@ -190,19 +259,33 @@ final class SpanStages {
       temp = Files.createTempDirectory("clearance-span");
       if (fit.failure() != null) {
         return outcome(ctx, fit, conditions, vegetation, emptyGround(options), fit.wires(),
-            Map.of(), new Measurement(List.of(), List.of()), null, start);
+            List.of(), null, new Measurement(List.of(), List.of()), null, null, start);
+      }
+      List<PointKeys> setAside = new ArrayList<>();
+      for (PointKeys k : asides) {
+        if (k.wire() == null && k.span() == fit.key()) {
+          throw new IllegalStateException("setting the span's points aside failed: "
+              + k.failure());
+        }
+        setAside.add(k);
       }
       Map<String, List<SurveyedConductor>> fitted = new LinkedHashMap<>();
+      Map<String, Double> times = new LinkedHashMap<>();
       for (List<SectionFit> section : sections) {
         for (SectionFit s : section) {
           List<SurveyedConductor> list = new ArrayList<>();
           s.conductors().forEach(c -> list.add(c.toSurveyed()));
           fitted.put(s.spanId(), list);
+          times.put(s.spanId(), s.meanGps());
         }
       }
+      SurveyTemperatures temperatures = ClearanceCheck.surveyTemperatures(ctx.survey, times);
       Map<String, List<ConductorModel>> models = ConditionModels.build(layout, fitted,
-          conditions, new ConditionSolver(options.conditions()));
+          conditions, new ConditionSolver(options.conditions()), temperatures,
+          options.uncertainty());
       String id = ref.span().id();
+      TemperatureEstimate temperature = ConditionModels.spanTemperatures(layout, temperatures)
+          .get(id);
       List<SpanModel> engineSpans = new ArrayList<>();
       for (int k : ctx.partners.get(fit.key())) {
         engineSpans.add(spanModel(layout, models, ctx.spans.get(k).span().id()));
@@ -212,19 +295,24 @@ final class SpanStages {
       Path near = temp.resolve(NearPointFile.FILE_NAME);
       Measurement all;
       try (NearPointWriter out = new NearPointWriter(near, engine.nearPointLayout())) {
-        all = engine.measure((threads, consumers) -> feed(blocks, consumers.get()), out);
+        all = engine.measure((threads, consumers) -> feed(blocks, consumers.get()), out,
+            union(setAside, true));
       }
       Measurement measured = new Measurement(
           all.spans().stream().filter(c -> c.spanId().equals(id)).toList(),
           all.trees().stream().filter(t -> t.spanId().equals(id)).toList());
+      SpanModel model = spanModel(layout, models, id);
+      Path uncertainty = temp.resolve(UncertaintyFile.FILE_NAME);
+      UncertaintyFile.write(uncertainty, List.of(model), conditions, options.uncertainty());
       return outcome(ctx, fit, conditions, vegetation, fit.ground(), fit.wires(),
-          Map.of(id, models.getOrDefault(id, List.of())), measured, near, start);
+          model.conductors(), temperature, measured, near, uncertainty, start);
     } catch (IOException | RuntimeException e) {
-      SpanFit failed = new SpanFit(fit.key(), null, failed(ref, e), fit.points(),
-          fit.classCounts(), fit.gpsRange(), fit.seconds(), describe(e));
+      SpanFit failed = new SpanFit(fit.key(), null, failed(ref, e), null, fit.meanGps(),
+          fit.points(), fit.classCounts(), fit.gpsRange(), fit.seconds(), describe(e));
       try {
         return outcome(ctx, failed, conditions, vegetation, emptyGround(options),
-            failed.wires(), Map.of(), new Measurement(List.of(), List.of()), null, start);
+            failed.wires(), List.of(), null, new Measurement(List.of(), List.of()), null, null,
+            start);
       } catch (IOException again) {
         throw new UncheckedIOException(again);
       }
@@ -235,20 +323,23 @@ final class SpanStages {
 
   private static SpanOutcome outcome(JobContext ctx, SpanFit fit, ConditionSet conditions,
       VegetationSelector vegetation, GroundModel ground, SpanWires wires,
-      Map<String, List<ConductorModel>> models, Measurement measured, Path near, long start)
-      throws IOException {
+      List<ConductorModel> models, TemperatureEstimate temperature, Measurement measured,
+      Path near, Path uncertainty, long start) throws IOException {
     JobContext.SpanRef ref = ctx.spans.get(fit.key());
     SpanLayout layout = ctx.lineLayouts.get(ref.line());
     WireResult result = new WireResult(layout, List.of(wires), List.of());
-    SpanModel model = spanModel(layout, models, ref.span().id());
+    String id = ref.span().id();
+    SpanModel model = spanModel(layout, Map.of(id, models), id);
     RunModel part = RunModels.of(ctx.spec.toolVersion(), ctx.survey.units(), conditions,
-        ctx.options, vegetation, ground, result, List.of(model), measured);
+        ctx.options, vegetation, ground, result, List.of(model), measured,
+        temperature == null ? Map.of() : Map.of(id, temperature));
     String csv = ConductorTable.csv(result, ctx.survey.units());
     String rows = csv.substring(csv.indexOf('\n') + 1);
     byte[] nearBytes = near == null ? null : Files.readAllBytes(near);
-    return new SpanOutcome(fit.key(), ref.line(), RunModelJson.toJson(part), rows, nearBytes,
-        GroundTally.of(ground.source()), fit.points(), fit.seconds(), seconds(start),
-        fit.failure());
+    return new SpanOutcome(fit.key(), ref.line(), RunModelJson.toJson(part), rows,
+        uncertainty == null ? "" : RunWriter.uncertaintyRows(Files.readString(uncertainty)),
+        nearBytes, GroundTally.of(ground.source()), fit.points(), fit.seconds(),
+        seconds(start), fit.failure());
   }
 
   private static SpanModel spanModel(SpanLayout layout, Map<String, List<ConductorModel>> models,

@@ -32,9 +32,13 @@ import scala.Tuple2;
  *       ({@link SpanPartitioner});
  *   <li>read: each needed piece is read once by byte range and its points are shuffled to the
  *       spans whose work areas hold them;
- *   <li>per span: ground model and wires ({@link SpanStages#fit});
- *   <li>per tension section, through a shuffle: every span receives the fitted conductors of all
- *       spans of its section, which the ruling span and the change of state need;
+ *   <li>per span: ground model, wires and flight time ({@link SpanStages#fit});
+ *   <li>through two shuffles between neighbouring spans: the wire points of the spans near each
+ *       span, then the points each span set aside ({@link SpanStages#setAside}), as the command
+ *       line's wire finder decides them once all spans are fitted;
+ *   <li>per tension section, through a shuffle: every span receives the fitted conductors and
+ *       flight times of all spans of its section, which the ruling span, the change of state and
+ *       the survey temperature need;
  *   <li>per span: conditions and distances ({@link SpanStages#measure});
  *   <li>reduce per line on the driver ({@link RunWriter}): spans ranked, run folder written.
  * </ol>
@@ -150,10 +154,34 @@ public final class SparkCheck {
           return out.iterator();
         })
         .groupByKey(partitioner);
+    // The points set aside, as the command line's wire finder decides them once every span is
+    // fitted: each span's wire points go to its partners (the spans whose corridors may meet
+    // its own), each span sets its own points aside, and these go to every span whose task
+    // measures near it (its partners' partners).
+    JavaPairRDD<Integer, Iterable<PointKeys>> wireKeys = fits
+        .flatMapToPair(p -> {
+          PointKeys keys = SpanStages.wireKeys(p._2());
+          List<Tuple2<Integer, PointKeys>> out = new ArrayList<>();
+          for (int k : JobContext.of(spec).partners.get(p._1())) {
+            out.add(new Tuple2<>(k, keys));
+          }
+          return out.iterator();
+        })
+        .groupByKey(partitioner);
+    JavaPairRDD<Integer, Iterable<PointKeys>> setAside = fits.join(wireKeys)
+        .flatMapToPair(p -> {
+          PointKeys keys = SpanStages.setAside(p._2()._1(), p._2()._2());
+          List<Tuple2<Integer, PointKeys>> out = new ArrayList<>();
+          for (int k : JobContext.of(spec).measuredNear.get(p._1())) {
+            out.add(new Tuple2<>(k, keys));
+          }
+          return out.iterator();
+        })
+        .groupByKey(partitioner);
     long[] classCounts = classes;
-    JavaRDD<SpanOutcome> outcomes = points.join(fits).join(sections)
-        .map(p -> SpanStages.measure(spec, p._2()._1()._2(), p._2()._1()._1(), p._2()._2(),
-            classCounts))
+    JavaRDD<SpanOutcome> outcomes = points.join(fits).join(sections).join(setAside)
+        .map(p -> SpanStages.measure(spec, p._2()._1()._1()._2(), p._2()._1()._1()._1(),
+            p._2()._1()._2(), p._2()._2(), classCounts))
         .persist(StorageLevel.MEMORY_AND_DISK());
     outcomes.count();
     fits.unpersist(false);
