@@ -29,6 +29,21 @@ final class PointBlock implements Serializable {
   private byte[] numberOfReturns = new byte[FIRST_CAPACITY];
   private double[] gpsTime = new double[FIRST_CAPACITY];
 
+  /** Why the points of this block could not be read, or null (a block of a failed piece). */
+  private String failure;
+
+  /** A block that carries no points, only why its piece could not be read. */
+  static PointBlock failed(String why) {
+    PointBlock b = new PointBlock();
+    b.failure = why;
+    return b;
+  }
+
+  /** Why the piece of this block could not be read, or null. */
+  String failure() {
+    return failure;
+  }
+
   /** Number of points held. */
   int size() {
     return size;

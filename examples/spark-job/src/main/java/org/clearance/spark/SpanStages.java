@@ -58,7 +58,10 @@ final class SpanStages {
 
   private SpanStages() {}
 
-  /** Reads a piece and hands each point to the work areas that hold it: (span, points). */
+  /**
+   * Reads a piece and hands each point to the work areas that hold it: (span, points). A piece
+   * that cannot be read gives each of its spans a block that says why.
+   */
   static List<scala.Tuple2<Integer, PointBlock>> read(JobSpec spec, WorkPlan.Piece piece) {
     JobContext ctx = JobContext.of(spec);
     List<WorkPlan.WorkBox> boxes = piece.boxes();
@@ -66,18 +69,30 @@ final class SpanStages {
     for (int b = 0; b < out.length; b++) {
       out[b] = new PointBlock();
     }
-    ctx.survey.readRecords(piece.tile(), piece.first(), piece.count(), chunk -> {
-      double[] x = chunk.x();
-      double[] y = chunk.y();
-      for (int i = 0; i < chunk.size(); i++) {
-        for (int b = 0; b < out.length; b++) {
-          if (boxes.get(b).contains(x[i], y[i])) {
-            out[b].add(chunk, i);
+    List<scala.Tuple2<Integer, PointBlock>> result = new ArrayList<>();
+    try {
+      ctx.survey.readRecords(piece.tile(), piece.first(), piece.count(), chunk -> {
+        double[] x = chunk.x();
+        double[] y = chunk.y();
+        for (int i = 0; i < chunk.size(); i++) {
+          for (int b = 0; b < out.length; b++) {
+            if (boxes.get(b).contains(x[i], y[i])) {
+              out[b].add(chunk, i);
+            }
           }
         }
+      });
+    } catch (RuntimeException e) {
+      // A damaged piece fails the spans it feeds, each reported NOT ASSESSED with the reason;
+      // the other spans go on.
+      String why = String.format(java.util.Locale.ROOT, "records %d-%d of %s could not be "
+          + "read: %s", piece.first(), piece.first() + piece.count() - 1,
+          ctx.spec.tiles().get(piece.tile()), describe(e));
+      for (WorkPlan.WorkBox b : boxes) {
+        result.add(new scala.Tuple2<>(b.span(), PointBlock.failed(why)));
       }
-    });
-    List<scala.Tuple2<Integer, PointBlock>> result = new ArrayList<>();
+      return result;
+    }
     for (int b = 0; b < out.length; b++) {
       if (out[b].size() > 0) {
         result.add(new scala.Tuple2<>(boxes.get(b).span(), out[b]));
@@ -114,6 +129,9 @@ final class SpanStages {
     double[] gps = {Double.NaN, Double.NaN};
     try {
       for (PointBlock b : blocks) {
+        if (b.failure() != null) {
+          throw new UnreadablePiece(b.failure());
+        }
         points[0] += b.size();
         gps[0] = minimum(gps[0], b.gpsMin());
         gps[1] = maximum(gps[1], b.gpsMax());
@@ -354,8 +372,21 @@ final class SpanStages {
         Optional.of("the span's task failed: " + describe(e)), List.of(), 0, false);
   }
 
+  /** A piece of the span's work area could not be read. */
+  private static final class UnreadablePiece extends RuntimeException {
+    private static final long serialVersionUID = 1L;
+
+    UnreadablePiece(String why) {
+      super(why);
+    }
+  }
+
+  /** What failed: the message of an input error or an unreadable piece, else the class too. */
   private static String describe(Exception e) {
     String m = e.getMessage();
+    if (m != null && (e instanceof UnreadablePiece || e instanceof org.clearance.InputException)) {
+      return m;
+    }
     return e.getClass().getSimpleName() + (m == null ? "" : ": " + m);
   }
 

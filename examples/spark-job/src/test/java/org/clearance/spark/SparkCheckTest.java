@@ -17,6 +17,7 @@ import org.apache.spark.api.java.JavaSparkContext;
 import org.clearance.CheckInputs;
 import org.clearance.CheckOptions;
 import org.clearance.ClearanceCheck;
+import org.clearance.examples.ClassificationMode;
 import org.clearance.examples.DemoCorridor;
 import org.clearance.examples.DemoOptions;
 import org.clearance.report.CsvText;
@@ -42,18 +43,30 @@ class SparkCheckTest {
   @TempDir static Path dir;
   private static DemoCorridor.DemoFiles demo;
   private static Path cliRun;
+  /** The demo with only ground, water and noise labelled: wires, towers, birds are class 1, so
+   * the check infers vegetation and sets points aside (wire, structure, airborne). */
+  private static DemoCorridor.DemoFiles groundOnly;
+  private static Path groundOnlyCliRun;
   private static JavaSparkContext sc;
 
   @BeforeAll
   static void demoAndCommandLine() throws IOException {
     demo = DemoCorridor.write(dir.resolve("demo"), DemoOptions.defaults().withSpanCount(4)
         .withPointDensity(2.0));
-    cliRun = dir.resolve("cli");
-    new ClearanceCheck(CheckOptions.defaults(2), new PrintWriter(new StringWriter())).run(
-        new CheckInputs(List.of(demo.survey()), UnitsChoice.fromFile(), demo.structures(),
-            List.of(demo.lineSpec()), Optional.empty(), Optional.of(PROFILE), cliRun), "test");
+    cliRun = commandLine(demo, "cli");
+    groundOnly = DemoCorridor.write(dir.resolve("ground-only"), DemoOptions.defaults()
+        .withSpanCount(4).withPointDensity(2.0).withMode(ClassificationMode.GROUND_ONLY));
+    groundOnlyCliRun = commandLine(groundOnly, "cli-ground-only");
     sc = new JavaSparkContext(new SparkConf().setMaster("local[2]").setAppName("test")
         .set("spark.ui.enabled", "false").set("spark.driver.host", "127.0.0.1"));
+  }
+
+  private static Path commandLine(DemoCorridor.DemoFiles files, String name) throws IOException {
+    Path out = dir.resolve(name);
+    new ClearanceCheck(CheckOptions.defaults(2), new PrintWriter(new StringWriter())).run(
+        new CheckInputs(List.of(files.survey()), UnitsChoice.fromFile(), files.structures(),
+            List.of(files.lineSpec()), Optional.empty(), Optional.of(PROFILE), out), "test");
+    return out;
   }
 
   @AfterAll
@@ -64,12 +77,17 @@ class SparkCheckTest {
   }
 
   private static Path runJob(List<Path> tiles, String name) throws IOException {
+    return runJob(demo, tiles, name, 0);
+  }
+
+  /** Runs the job; {@code failures}: the spans expected to be reported as failed. */
+  private static Path runJob(DemoCorridor.DemoFiles files, List<Path> tiles, String name,
+      int failures) throws IOException {
     Path out = dir.resolve(name);
     StringWriter console = new StringWriter();
-    SparkCheck.Summary s = SparkCheck.run(sc, new SparkCheck.Request(JobSpec.of(tiles,
-        UnitsChoice.fromFile(), demo.structures(), List.of(demo.lineSpec()), Optional.empty(),
-        null, "test"), Optional.of(PROFILE), out.toString(), 0), new PrintWriter(console));
-    assertEquals(0, s.failedSpans(), console.toString());
+    SparkCheck.Summary s = SparkCheck.run(sc, new SparkCheck.Request(spec(files, tiles),
+        Optional.of(PROFILE), out.toString(), 0), new PrintWriter(console));
+    assertEquals(failures, s.failedSpans(), console.toString());
     try (var lines = Files.list(out)) {
       // one run folder per line (the hidden names beside it are the run folder's lock)
       List<Path> folders = lines.filter(p -> !p.getFileName().toString().startsWith("."))
@@ -77,6 +95,11 @@ class SparkCheckTest {
       assertEquals(List.of(out.resolve("FW231")), folders);
       return folders.get(0);
     }
+  }
+
+  private static JobSpec spec(DemoCorridor.DemoFiles files, List<Path> tiles) {
+    return JobSpec.of(tiles, UnitsChoice.fromFile(), files.structures(),
+        List.of(files.lineSpec()), Optional.empty(), null, "test");
   }
 
   @Test
@@ -92,17 +115,32 @@ class SparkCheckTest {
     assertSameRun(cliRun, runJob(tiles, "tiled"));
   }
 
+  /** Points set aside (wires, cross arms, birds of a survey whose wires are not labelled) are
+   * decided across neighbouring spans as the command line decides them: same counts per span. */
+  @Test
+  void unlabelledWiresAreSetAsideAsByTheCommandLine() throws IOException {
+    List<Path> tiles = TileSplitter.split(groundOnly.survey(), dir.resolve("tiles-ground-only"),
+        150.0);
+    Path run = runJob(groundOnly, tiles, "ground-only", 0);
+    assertSameRun(groundOnlyCliRun, run);
+    long wire = 0;
+    for (Map<String, String> row : rows(run, "spans.csv")) {
+      wire += Long.parseLong(row.get("points_set_aside_wire"));
+    }
+    assertTrue(wire > 0, "the unlabelled wires' points are set aside: " + wire);
+  }
+
   /** A span whose task fails (here: its points cannot be read) is reported NOT ASSESSED with
    * the reason, as the command line reports a span it could not assess; it is not dropped. */
   @Test
   void aFailedSpanIsReportedNotAssessedWithTheReason() throws IOException {
-    JobSpec spec = JobSpec.of(List.of(demo.survey()), UnitsChoice.fromFile(), demo.structures(),
-        List.of(demo.lineSpec()), Optional.empty(), null, "test");
+    JobSpec spec = spec(demo, List.of(demo.survey()));
     Iterable<PointBlock> broken = () -> {
       throw new java.io.UncheckedIOException(new IOException("piece 3 of tile 7 is gone"));
     };
     SpanFit fit = SpanStages.fit(spec, 1, broken);
-    SpanOutcome o = SpanStages.measure(spec, fit, broken, List.of(), new long[256]);
+    SpanOutcome o = SpanStages.measure(spec, fit, broken, List.of(), List.of(),
+        new long[256]);
     assertEquals(1, o.key());
     Path json = dir.resolve("failed-span.json");
     Files.writeString(json, o.modelJson());
@@ -110,6 +148,72 @@ class SparkCheckTest {
     assertEquals(org.clearance.clearance.SpanStatus.NOT_ASSESSED, span.status());
     assertTrue(span.reason().contains("piece 3 of tile 7 is gone"), span.reason());
     assertTrue(o.failure().contains("piece 3 of tile 7 is gone"), o.failure());
+  }
+
+  /**
+   * A tile with a damaged point record (a coordinate far outside its header's box, found only
+   * when the points are read on an executor): the spans whose work areas that tile feeds are
+   * reported NOT ASSESSED, naming the tile and its records; the job finishes, and every other
+   * span is the command line's, row for row.
+   */
+  @Test
+  void aDamagedTileFailsOnlyTheSpansItFeeds() throws IOException {
+    List<Path> tiles = TileSplitter.split(demo.survey(), dir.resolve("tiles-damaged"), 150.0);
+    JobContext ctx = JobContext.of(spec(demo, tiles));
+    WorkPlan plan = WorkPlan.of(ctx);
+    int n = ctx.spans.size();
+    int chosen = -1;
+    java.util.Set<String> fed = new java.util.TreeSet<>();
+    for (int t = 0; t < tiles.size() && chosen < 0; t++) {
+      java.util.Set<String> spans = new java.util.TreeSet<>();
+      for (WorkPlan.Piece p : plan.pieces) {
+        if (p.tile() == t) {
+          p.boxes().forEach(b -> spans.add(ctx.spans.get(b.span()).span().id()));
+        }
+      }
+      if (!spans.isEmpty() && spans.size() < n) {
+        chosen = t;
+        fed = spans;
+      }
+    }
+    assertTrue(chosen >= 0, "a tile that feeds some spans but not all");
+    damageRecord(tiles.get(chosen), 10);
+    Path run = runJob(demo, tiles, "damaged", fed.size());
+    List<Map<String, String>> expected = rows(cliRun, "spans.csv");
+    List<Map<String, String>> actual = rows(run, "spans.csv");
+    assertEquals(expected.size(), actual.size(), "no span is dropped");
+    String tileName = tiles.get(chosen).getFileName().toString();
+    for (int i = 0; i < expected.size(); i++) {
+      Map<String, String> a = actual.get(i);
+      if (fed.contains(a.get("span_id"))) {
+        assertEquals("NOT ASSESSED", a.get("status"), a.toString());
+        assertTrue(a.get("reason").contains(tileName) && a.get("reason").contains("record"),
+            a.get("reason"));
+      } else {
+        for (String column : expected.get(i).keySet()) {
+          if (!column.equals("rank")) {
+            assertField(a.get("span_id") + " " + column, expected.get(i).get(column),
+                a.get(column));
+          }
+        }
+      }
+    }
+  }
+
+  /** Writes an X far outside the tile's header box into point record {@code record}. */
+  private static void damageRecord(Path las, int record) throws IOException {
+    try (var ch = java.nio.channels.FileChannel.open(las,
+        java.nio.file.StandardOpenOption.READ, java.nio.file.StandardOpenOption.WRITE)) {
+      java.nio.ByteBuffer head = java.nio.ByteBuffer.allocate(107)
+          .order(java.nio.ByteOrder.LITTLE_ENDIAN);
+      ch.read(head, 0);
+      // LAS 1.2-1.4 header: offset to point data at byte 96 (uint32), record length at 105
+      long offset = Integer.toUnsignedLong(head.getInt(96));
+      int length = Short.toUnsignedInt(head.getShort(105));
+      java.nio.ByteBuffer x = java.nio.ByteBuffer.allocate(4)
+          .order(java.nio.ByteOrder.LITTLE_ENDIAN).putInt(0, Integer.MAX_VALUE);
+      ch.write(x, offset + (long) record * length);
+    }
   }
 
   private static void assertSameRun(Path expected, Path actual) throws IOException {
@@ -126,6 +230,7 @@ class SparkCheckTest {
       }
     }
     List<Map<String, String>> spansA = rows(expected, "spans.csv");
+    // the set-aside counts are columns of spans.csv: compared with the others
     List<Map<String, String>> spansB = rows(actual, "spans.csv");
     assertEquals(4, spansA.size());
     assertEquals(spansA.size(), spansB.size());
@@ -149,6 +254,17 @@ class SparkCheckTest {
     }
     assertEquals(Files.readString(expected.resolve("conductors.csv")),
         Files.readString(actual.resolve("conductors.csv")));
+    List<String> uncertaintyA = Files.readAllLines(expected.resolve("uncertainty.csv"));
+    List<String> uncertaintyB = Files.readAllLines(actual.resolve("uncertainty.csv"));
+    assertEquals(uncertaintyA.size(), uncertaintyB.size());
+    for (int i = 0; i < uncertaintyA.size(); i++) {
+      String[] a = uncertaintyA.get(i).split(",", -1);
+      String[] b = uncertaintyB.get(i).split(",", -1);
+      assertEquals(a.length, b.length, "uncertainty.csv line " + (i + 1));
+      for (int j = 0; j < a.length; j++) {
+        assertField("uncertainty.csv line " + (i + 1), a[j], b[j]);
+      }
+    }
   }
 
   /** Numbers to the millimetre, text exactly. */
