@@ -70,13 +70,27 @@ public final class SparkCheck {
    * @param largestPartitionShare the largest partition's share of the work points
    * @param failedSpans spans whose task failed (reported NOT ASSESSED)
    * @param seconds wall time of the whole run, s
+   * @param skew how the work was spread over spans and partitions
    */
   public record Summary(List<String> lines, int spans, int tiles, int skippedTiles, int pieces,
       long surveyPoints, long workPoints, int partitions, double largestPartitionShare,
-      int failedSpans, double seconds) {}
+      int failedSpans, double seconds, Skew skew) {}
+
+  /**
+   * How the work was spread (the skew the partitioner packs against), per span key and per
+   * partition.
+   *
+   * @param estimatedPoints per span, the plan's estimate of its work-area points
+   * @param spanPoints per span, the work-area points its task read
+   * @param spanSeconds per span, the time of its tasks (ground and wires, then conditions and
+   *     distances), s
+   * @param partitionPoints per partition, the work-area points of its spans
+   */
+  public record Skew(long[] estimatedPoints, long[] spanPoints, double[] spanSeconds,
+      long[] partitionPoints) {}
 
   /** What a span's first task measured, for the driver: points, classes, GPS time range. */
-  private record Tally(long points, long[] classCounts, double[] gpsRange)
+  private record Tally(int key, long points, long[] classCounts, double[] gpsRange)
       implements java.io.Serializable {}
 
   private SparkCheck() {}
@@ -116,12 +130,16 @@ public final class SparkCheck {
         .persist(StorageLevel.MEMORY_ONLY());
 
     List<Tally> measured = fits.values()
-        .map(f -> new Tally(f.points(), f.classCounts(), f.gpsRange())).collect();
+        .map(f -> new Tally(f.key(), f.points(), f.classCounts(), f.gpsRange())).collect();
     long workPoints = 0;
+    long[] spanPoints = new long[ctx.spans.size()];
+    long[] partitionPoints = new long[partitioner.numPartitions()];
     long[] classes = new long[256];
     double[] gps = {Double.NaN, Double.NaN};
     for (Tally m : measured) {
       workPoints += m.points();
+      spanPoints[m.key()] = m.points();
+      partitionPoints[partitioner.getPartition(m.key())] += m.points();
       for (int c = 0; c < 256; c++) {
         classes[c] += m.classCounts()[c];
       }
@@ -187,6 +205,7 @@ public final class SparkCheck {
     fits.unpersist(false);
 
     int failed = 0;
+    double[] spanSeconds = new double[ctx.spans.size()];
     List<String> lineIds = new ArrayList<>();
     List<RunWriter> writers = new ArrayList<>();
     List<Path> stagings = new ArrayList<>();
@@ -206,6 +225,7 @@ public final class SparkCheck {
       Iterator<SpanOutcome> it = outcomes.toLocalIterator();
       while (it.hasNext()) {
         SpanOutcome o = it.next();
+        spanSeconds[o.key()] = o.fitSeconds() + o.measureSeconds();
         if (o.failure() != null) {
           failed++;
           say(console, "  span %s: %s", ctx.spans.get(o.key()).span().id(), o.failure());
@@ -239,7 +259,8 @@ public final class SparkCheck {
         .pointCount(), workPoints, seconds);
     return new Summary(lineIds, ctx.spans.size(), spec.tiles().size(), plan.skippedTiles,
         plan.pieces.size(), ctx.survey.pointCount(), workPoints, partitioner.numPartitions(),
-        share, failed, seconds);
+        share, failed, seconds, new Skew(plan.estimatedPoints.clone(), spanPoints, spanSeconds,
+        partitionPoints));
   }
 
   /**

@@ -103,6 +103,32 @@ public final class SparkBench {
           (double) s.workPoints() / s.surveyPoints(), s.partitions(),
           100 * s.largestPartitionShare(), s.pieces(), first / s.seconds(), firstCores,
           Files.readString(Path.of("/proc/loadavg")).trim());
+      out.println(skew(s.skew()));
     }
+  }
+
+  /** The spread of the work over spans and partitions, one line. */
+  static String skew(SparkCheck.Skew k) {
+    long[] pts = k.spanPoints().clone();
+    java.util.Arrays.sort(pts);
+    double[] sec = k.spanSeconds().clone();
+    java.util.Arrays.sort(sec);
+    double worstEstimate = 0;
+    for (int i = 0; i < pts.length; i++) {
+      if (k.spanPoints()[i] > 0) {
+        worstEstimate = Math.max(worstEstimate,
+            Math.abs((double) k.estimatedPoints()[i] / k.spanPoints()[i] - 1));
+      }
+    }
+    long[] part = k.partitionPoints().clone();
+    java.util.Arrays.sort(part);
+    long total = java.util.Arrays.stream(part).sum();
+    return String.format(Locale.ROOT, "  skew: %d spans, work-area points per span min %,d "
+        + "median %,d max %,d (plan's estimate within %.0f %%); %d partitions, points per "
+        + "partition min %,d max %,d (largest %.1f %% of the work, fair share %.1f %%); span "
+        + "task seconds median %.1f max %.1f", pts.length, pts[0], pts[pts.length / 2],
+        pts[pts.length - 1], 100 * worstEstimate, part.length, part[0], part[part.length - 1],
+        100.0 * part[part.length - 1] / Math.max(1, total), 100.0 / part.length,
+        sec[sec.length / 2], sec[sec.length - 1]);
   }
 }
