@@ -56,9 +56,26 @@ class SparkCheckTest {
     cliRun = commandLine(demo, "cli");
     groundOnly = DemoCorridor.write(dir.resolve("ground-only"), DemoOptions.defaults()
         .withSpanCount(4).withPointDensity(2.0).withMode(ClassificationMode.GROUND_ONLY));
+    heatBalance(groundOnly.lineSpec());
     groundOnlyCliRun = commandLine(groundOnly, "cli-ground-only");
     sc = new JavaSparkContext(new SparkConf().setMaster("local[2]").setAppName("test")
         .set("spark.ui.enabled", "false").set("spark.driver.host", "127.0.0.1"));
+  }
+
+  /**
+   * Gives the line specification a survey temperature computed by the heat balance at each
+   * tension section's flight time (the mean GPS time of its spans' points) instead of the given
+   * one, so that the job's flight times and temperatures are compared with the command line's.
+   * Invented weather and place (the scenario is invented).
+   */
+  private static void heatBalance(Path lineSpec) throws IOException {
+    String yaml = Files.readString(lineSpec);
+    String replaced = yaml.replaceFirst("survey_conductor_temperature_c: [-0-9.]+\n",
+        "survey_heat_balance:\n  current_a: 420\n  air_temperature_c: 24\n"
+            + "  wind_speed_m_s: 2.5\n  wind_from_deg: 250\n  latitude_deg: 46.5\n"
+            + "  longitude_deg: 7.5\n  survey_date: 2026-07-14\n");
+    assertTrue(!replaced.equals(yaml), "the demo's survey temperature line");
+    Files.writeString(lineSpec, replaced);
   }
 
   private static Path commandLine(DemoCorridor.DemoFiles files, String name) throws IOException {
@@ -128,6 +145,10 @@ class SparkCheckTest {
       wire += Long.parseLong(row.get("points_set_aside_wire"));
     }
     assertTrue(wire > 0, "the unlabelled wires' points are set aside: " + wire);
+    // the survey temperature was computed from the flight times, not left unknown
+    String model = Files.readString(run.resolve("model.json"));
+    assertTrue(model.contains("survey conductor temperature ")
+        && !model.contains("survey conductor temperature unknown"), model.substring(0, 400));
   }
 
   /** A span whose task fails (here: its points cannot be read) is reported NOT ASSESSED with
