@@ -27,8 +27,10 @@ import org.clearance.survey.UnitsChoice;
  * <p>{@code SparkBench [--points N] [--dir DIR] [--tile M] [--cores 1,2] [--cli]}
  */
 public final class SparkBench {
-  /** Points of a demo span at one pulse per square metre (the generator's corridor). */
-  private static final double POINTS_PER_SPAN_AND_DENSITY = 83_000;
+  /** Points of a demo span at one pulse per square metre (the generator's corridor: 47.5
+   * million points in 100 spans at 6 per m^2), a little low so the survey is at least the
+   * size asked. */
+  private static final double POINTS_PER_SPAN_AND_DENSITY = 79_000;
   /** Pulses per square metre, as the command line's benchmark. */
   private static final double DENSITY = 6.0;
   private static final String PROFILE = "example-utility";
@@ -59,7 +61,7 @@ public final class SparkBench {
     }
     PrintWriter out = new PrintWriter(System.out, true);
     int spans = (int) Math.max(DemoOptions.MIN_SPANS, Math.min(DemoOptions.MAX_SPANS,
-        Math.round(points / (POINTS_PER_SPAN_AND_DENSITY * DENSITY))));
+        (long) Math.ceil(points / (POINTS_PER_SPAN_AND_DENSITY * DENSITY))));
     long t0 = System.nanoTime();
     DemoCorridor.DemoFiles demo = DemoCorridor.write(dir.resolve("input"),
         DemoOptions.defaults().withSpanCount(spans).withPointDensity(DENSITY));
