@@ -8,7 +8,8 @@ import org.clearance.survey.PointChunk;
 /**
  * Points of one span's work area read from one tile piece, as they travel between Spark tasks:
  * the attributes the core's stages read (coordinates in metres, ASPRS class, flags, return
- * numbers, GPS time: the span's flight time dates its survey temperature), in growable arrays. Order is kept but carries no meaning: every stage accepts its
+ * numbers, GPS time: the span's flight time dates its survey temperature), in growable
+ * arrays. Order is kept but carries no meaning: every stage accepts its
  * points in any order, as the command line's parallel reader delivers them.
  */
 final class PointBlock implements Serializable {
