@@ -5,9 +5,11 @@ import java.io.PrintWriter;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
+import java.util.HashMap;
 import java.util.Iterator;
 import java.util.List;
 import java.util.Locale;
+import java.util.Map;
 import java.util.Optional;
 import org.apache.spark.api.java.JavaPairRDD;
 import org.apache.spark.api.java.JavaRDD;
@@ -186,20 +188,43 @@ public final class SparkCheck {
           return out.iterator();
         })
         .groupByKey(partitioner);
-    JavaPairRDD<Integer, Iterable<PointKeys>> setAside = fits.join(wireKeys)
-        .flatMapToPair(p -> {
-          PointKeys keys = SpanStages.setAside(p._2()._1(), p._2()._2());
+    // A span's fit holds its ground model and wire candidates, which never leave the executor
+    // that made them: stages that need it zip the partitions of the RDDs that share the span
+    // partitioner (partition i of each holds the same spans), so no join, shuffle or spill ever
+    // has to serialize it.
+    JavaPairRDD<Integer, Iterable<PointKeys>> setAside = fits
+        .zipPartitions(wireKeys, (fitsHere, keysHere) -> {
+          Map<Integer, Iterable<PointKeys>> keys = byKey(keysHere);
           List<Tuple2<Integer, PointKeys>> out = new ArrayList<>();
-          for (int k : JobContext.of(spec).measuredNear.get(p._1())) {
-            out.add(new Tuple2<>(k, keys));
+          while (fitsHere.hasNext()) {
+            Tuple2<Integer, SpanFit> f = fitsHere.next();
+            PointKeys mine = SpanStages.setAside(f._2(), keys.getOrDefault(f._1(), List.of()));
+            for (int k : JobContext.of(spec).measuredNear.get(f._1())) {
+              out.add(new Tuple2<>(k, mine));
+            }
           }
           return out.iterator();
         })
+        .mapToPair(t -> t)
         .groupByKey(partitioner);
+    JavaPairRDD<Integer, Tuple2<Iterable<List<SectionFit>>, Iterable<PointKeys>>> messages =
+        sections.join(setAside, partitioner);
     long[] classCounts = classes;
-    JavaRDD<SpanOutcome> outcomes = points.join(fits).join(sections).join(setAside)
-        .map(p -> SpanStages.measure(spec, p._2()._1()._1()._2(), p._2()._1()._1()._1(),
-            p._2()._1()._2(), p._2()._2(), classCounts))
+    JavaRDD<SpanOutcome> outcomes = points
+        .zipPartitions(fits, (pointsHere, fitsHere) -> {
+          Map<Integer, SpanFit> fit = byKey(fitsHere);
+          return map(pointsHere, p -> new SpanWork(p._1(), p._2(), fit.get(p._1())));
+        })
+        .zipPartitions(messages, (workHere, messagesHere) -> {
+          Map<Integer, Tuple2<Iterable<List<SectionFit>>, Iterable<PointKeys>>> m =
+              byKey(messagesHere);
+          return map(workHere, w -> {
+            var got = m.get(w.key());
+            return SpanStages.measure(spec, w.fit(), w.blocks(),
+                got == null ? List.of() : got._1(), got == null ? List.of() : got._2(),
+                classCounts);
+          });
+        })
         .persist(StorageLevel.MEMORY_AND_DISK());
     outcomes.count();
     fits.unpersist(false);
@@ -338,6 +363,16 @@ public final class SparkCheck {
             + units.vertical().symbol() + " (" + units.source() + ")")
         .parameter("output_unit", ReportOptions.defaults().outputUnit().symbol())
         .parameter("survey_hashes", "not computed (distributed run)");
+  }
+
+  /** A span's points and its fit, paired inside one executor (never serialized). */
+  private record SpanWork(int key, Iterable<PointBlock> blocks, SpanFit fit) {}
+
+  /** The pairs of a partition by key (each key once: the RDDs are grouped by span). */
+  private static <V> Map<Integer, V> byKey(Iterator<Tuple2<Integer, V>> it) {
+    Map<Integer, V> out = new HashMap<>();
+    it.forEachRemaining(t -> out.put(t._1(), t._2()));
+    return out;
   }
 
   private static <T, R> Iterator<R> map(Iterator<T> it, java.util.function.Function<T, R> f) {
