@@ -58,8 +58,13 @@ class SparkCheckTest {
         .withSpanCount(4).withPointDensity(2.0).withMode(ClassificationMode.GROUND_ONLY));
     heatBalance(groundOnly.lineSpec());
     groundOnlyCliRun = commandLine(groundOnly, "cli-ground-only");
+    // Every shuffle and grouping spills to disk after each element, as a cluster does under
+    // memory pressure: whatever a stage hands on must survive serialization. (Regression: the
+    // 55-million-point benchmark failed with NotSerializableException when a join spilled a
+    // span's fit, which the small test runs had kept in memory.)
     sc = new JavaSparkContext(new SparkConf().setMaster("local[2]").setAppName("test")
-        .set("spark.ui.enabled", "false").set("spark.driver.host", "127.0.0.1"));
+        .set("spark.ui.enabled", "false").set("spark.driver.host", "127.0.0.1")
+        .set("spark.shuffle.spill.numElementsForceSpillThreshold", "0"));
   }
 
   /**
