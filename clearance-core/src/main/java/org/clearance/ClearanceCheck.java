@@ -42,6 +42,7 @@ import org.clearance.run.RunRecord;
 import org.clearance.run.RunRecordJson;
 import org.clearance.sag.ConditionSolver;
 import org.clearance.sag.SurveyTemperatures;
+import org.clearance.sag.SpanTemperature;
 import org.clearance.sag.TemperatureEstimate;
 import org.clearance.survey.LonLat;
 import org.clearance.survey.PointChunk;
@@ -170,7 +171,7 @@ public final class ClearanceCheck {
     Map<String, List<ConductorModel>> models = ConditionModels.build(wires.layout(), fitted,
         conditions, new ConditionSolver(options.conditions()), temperatures,
         options.uncertainty());
-    Map<String, TemperatureEstimate> spanTemperatures =
+    Map<String, SpanTemperature> spanTemperatures =
         ConditionModels.spanTemperatures(wires.layout(), temperatures);
     sayTemperatures(specs, spanTemperatures);
     say("conditions: %s", ConditionModels.summary(conditions, models));
@@ -238,7 +239,7 @@ public final class ClearanceCheck {
     return out;
   }
 
-  /** The survey temperatures: given, or computed at each section's flight time. */
+  /** The survey temperatures: given, or computed at each span's flight time. */
   private static SurveyTemperatures surveyTemperatures(Survey survey, FlightTimes flight) {
     Map<String, Double> times = new LinkedHashMap<>();
     flight.result().forEach((id, t) -> times.put(id, t.meanGps()));
@@ -260,13 +261,13 @@ public final class ClearanceCheck {
         geo.note(), spanGpsTimes);
   }
 
-  private void sayTemperatures(List<LineSpec> specs, Map<String, TemperatureEstimate> bySpan) {
+  private void sayTemperatures(List<LineSpec> specs, Map<String, SpanTemperature> bySpan) {
     if (specs.stream().noneMatch(s -> s.surveyTemperature().source()
         == SurveyTemperatureSpec.Source.COMPUTED)) {
       return;
     }
     Map<String, TemperatureEstimate> distinct = new LinkedHashMap<>();
-    bySpan.forEach((id, t) -> distinct.putIfAbsent(t.detail(), t));
+    bySpan.forEach((id, t) -> distinct.putIfAbsent(t.section().detail(), t.section()));
     for (TemperatureEstimate t : distinct.values()) {
       say("  survey temperature %s: %s", t.isKnown() ? String.format(Locale.ROOT,
           "%.1f +- %.1f degC (%s dominates)", t.temperatureC(), t.sigmaC(), t.dominant())

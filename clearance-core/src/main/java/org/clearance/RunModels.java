@@ -31,6 +31,7 @@ import org.clearance.run.RunRecord;
 import org.clearance.run.SpanRecord;
 import org.clearance.run.StructureRecord;
 import org.clearance.run.TreeRecord;
+import org.clearance.sag.SpanTemperature;
 import org.clearance.sag.TemperatureEstimate;
 import org.clearance.survey.GpsTime;
 import org.clearance.survey.Survey;
@@ -85,7 +86,7 @@ public final class RunModels {
   public static RunModel of(String toolVersion, SurveyUnits units, ConditionSet conditions,
       CheckOptions options, VegetationSelector vegetation, GroundModel ground, WireResult wires,
       List<SpanModel> spanModels, Measurement measured,
-      Map<String, TemperatureEstimate> temperatures) {
+      Map<String, SpanTemperature> temperatures) {
     Map<String, SpanClearance> clearances = new HashMap<>();
     measured.spans().forEach(c -> clearances.put(c.spanId(), c));
     Map<String, SpanModel> models = new HashMap<>();
@@ -115,7 +116,7 @@ public final class RunModels {
 
   private static SpanRecord span(SpanWires sw, SpanModel model, SpanClearance clearance,
       List<StructureChange> changes, ConditionSet conditions, ClearanceEngine.Options engine,
-      String lineName, double coverage, TemperatureEstimate temperature) {
+      String lineName, double coverage, SpanTemperature temperature) {
     Span span = sw.span();
     Map<String, ConductorModel> byName = new HashMap<>();
     if (model != null) {
@@ -179,7 +180,8 @@ public final class RunModels {
       reason = "";
     }
     List<String> notes = new ArrayList<>();
-    if (temperature != null && temperature.source() != SurveyTemperatureSpec.Source.NONE) {
+    if (temperature != null
+        && temperature.section().source() != SurveyTemperatureSpec.Source.NONE) {
       notes.add(temperatureNote(temperature));
     }
     for (StructureChange ch : changes) {
@@ -203,11 +205,22 @@ public final class RunModels {
         clearance == null ? 0 : clearance.pointsKept(), notes, clearance == null
             ? SpanRecord.SetAsideCounts.NONE : new SpanRecord.SetAsideCounts(
                 clearance.excludedAsConductor(), clearance.excludedAsStructure(),
-                clearance.excludedAsAirborne()));
+                clearance.excludedAsAirborne()), temperatureRecord(temperature));
+  }
+
+  /** The span's and its section's survey temperature as the run model stores them. */
+  static SpanRecord.SurveyTemperature temperatureRecord(SpanTemperature t) {
+    if (t == null) {
+      return SpanRecord.SurveyTemperature.NONE;
+    }
+    return new SpanRecord.SurveyTemperature(t.span().temperatureC(), t.span().sigmaC(),
+        t.span().source().name().toLowerCase(Locale.ROOT), t.section().temperatureC(),
+        t.section().sigmaC());
   }
 
   /** The survey temperature a span's change of state used, for the report. */
-  static String temperatureNote(TemperatureEstimate t) {
+  static String temperatureNote(SpanTemperature st) {
+    TemperatureEstimate t = st.section();
     if (!t.isKnown()) {
       return "survey conductor temperature unknown: " + t.detail();
     }
@@ -215,9 +228,14 @@ public final class RunModels {
       return String.format(Locale.ROOT, "survey conductor temperature %.1f degC, standard "
           + "uncertainty %.1f degC (%s)", t.temperatureC(), t.sigmaC(), t.detail());
     }
-    return String.format(Locale.ROOT, "survey conductor temperature %.1f degC, standard "
-        + "uncertainty %.1f degC (computed by the %s; %s dominates the uncertainty)",
-        t.temperatureC(), t.sigmaC(), t.detail(), t.dominant());
+    TemperatureEstimate own = st.span();
+    String ofSpan = own.isKnown() ? String.format(Locale.ROOT, "this span %.1f degC, standard "
+        + "uncertainty %.1f degC, computed by the %s; ", own.temperatureC(), own.sigmaC(),
+        own.detail()) : "this span's own not computed (" + own.detail() + "); ";
+    return String.format(Locale.ROOT, "survey conductor temperature: %sthe tension section's "
+        + "%.1f degC, standard uncertainty %.1f degC, used for the change of state (%s; %s "
+        + "dominates the uncertainty)", ofSpan, t.temperatureC(), t.sigmaC(), t.detail(),
+        t.dominant());
   }
 
   private static StructureRecord structure(Structure s) {

@@ -21,6 +21,7 @@ import org.clearance.sag.ConditionState;
 import org.clearance.sag.InsulatorSwing;
 import org.clearance.sag.SectionSurvey;
 import org.clearance.sag.SectionTension;
+import org.clearance.sag.SpanTemperature;
 import org.clearance.sag.SurveyTemperatures;
 import org.clearance.sag.SuspensionString;
 import org.clearance.sag.TemperatureEstimate;
@@ -264,19 +265,21 @@ public final class ConditionModels {
 
   /**
    * Per span id, the survey temperature of its first phase position (the one its change of state
-   * uses), for reports.
+   * uses): the span's own and its tension section's, for reports.
    */
-  public static Map<String, TemperatureEstimate> spanTemperatures(SpanLayout layout,
+  public static Map<String, SpanTemperature> spanTemperatures(SpanLayout layout,
       SurveyTemperatures temperatures) {
-    Map<String, TemperatureEstimate> out = new LinkedHashMap<>();
+    Map<String, SpanTemperature> out = new LinkedHashMap<>();
     for (LineLayout line : layout.lines()) {
       LineSpec spec = line.spec();
       ConductorPosition phase = spec.phases().isEmpty() ? null : spec.phases().get(0);
       Map<String, TemperatureEstimate> bySection = new HashMap<>();
       for (Span span : line.spans()) {
         TensionSection section = line.section(span);
-        out.put(span.id(), bySection.computeIfAbsent(section.id(),
-            k -> temperatures.estimate(spec, section, phase)));
+        TemperatureEstimate ofSection = bySection.computeIfAbsent(section.id(),
+            k -> temperatures.estimate(spec, section, phase));
+        out.put(span.id(), new SpanTemperature(temperatures.estimate(spec, span, phase),
+            ofSection));
       }
     }
     return out;

@@ -27,7 +27,8 @@ final class SurveyTemperatureReader {
   static final List<String> HEAT_KEYS = List.of("current_a", "current_file",
       "current_range_percent", "air_temperature_c", "air_temperature_range_c", "wind_speed_m_s",
       "wind_speed_range_m_s", "wind_from_deg", "wind_from_range_deg", "absorptivity_range",
-      "emissivity_range", "survey_date", "latitude_deg", "longitude_deg");
+      "emissivity_range", "survey_date", "latitude_deg", "longitude_deg", "model",
+      "ground_albedo", "clearness_ratio", "outer_strand_diameter_mm");
 
   /** Default current range, % (common practice, no source: a SCADA hourly mean against the
    * current at the moment of the flight). */
@@ -163,7 +164,32 @@ final class SurveyTemperatureReader {
       LineSpecReader.checkRange(m, "latitude_deg", lat, -90, 90);
       LineSpecReader.checkRange(m, "longitude_deg", lon, -180, 180);
     }
+    SurveyTemperatureSpec.HeatModel model = SurveyTemperatureSpec.HeatModel.IEEE_738;
+    if (m.has("model")) {
+      String name = m.text("model");
+      model = switch (name.toLowerCase(Locale.ROOT)) {
+        case "ieee738" -> SurveyTemperatureSpec.HeatModel.IEEE_738;
+        case "cigre601" -> SurveyTemperatureSpec.HeatModel.CIGRE_601;
+        default -> throw m.error("model", "'" + name + "' is not a heat-balance model; use"
+            + " ieee738 (IEEE Std 738-2012) or cigre601 (CIGRE TB 601)");
+      };
+    }
+    double albedo = m.number("ground_albedo", SurveyTemperatureSpec.DEFAULT_ALBEDO);
+    LineSpecReader.checkRange(m, "ground_albedo", albedo, 0, 1);
+    double clearness = m.number("clearness_ratio", SurveyTemperatureSpec.DEFAULT_CLEARNESS);
+    LineSpecReader.checkRange(m, "clearness_ratio", clearness, 0, 1.5);
+    double strand = m.number("outer_strand_diameter_mm", Double.NaN);
+    if (m.has("outer_strand_diameter_mm")) {
+      LineSpecReader.checkRange(m, "outer_strand_diameter_mm", strand, 0.5, 10);
+    }
+    for (String key : List.of("ground_albedo", "clearness_ratio", "outer_strand_diameter_mm")) {
+      if (m.has(key) && model != SurveyTemperatureSpec.HeatModel.CIGRE_601) {
+        throw m.error(key, "only the cigre601 model uses " + key + "; add model: cigre601 or"
+            + " remove it");
+      }
+    }
     return new HeatInputs(current, series, currentRange / 100, air, airRange, wind, windRange,
-        from, fromRange, absorptivity, emissivity, date, lat, lon);
+        from, fromRange, absorptivity, emissivity, date, lat, lon, model, albedo, clearness,
+        strand / 1000);
   }
 }

@@ -64,7 +64,9 @@ public final class CsvOutputs {
         u.column("min_clearance_ice"), "governing_condition", "worst_zone", "n_sites", "rank",
         "worst_priority", u.column("worst_deficit"), "nominal_voltage_kv", "points_checked",
         "points_not_assessed", "n_possible_violation_sites", "points_set_aside_wire",
-        "points_set_aside_structure", "points_set_aside_airborne");
+        "points_set_aside_structure", "points_set_aside_airborne", "survey_temperature_c",
+        "survey_temperature_sigma_c", "survey_temperature_source",
+        "section_survey_temperature_c", "section_survey_temperature_sigma_c");
   }
 
   /** The work list's text: one line per tree or vegetation patch. */
@@ -139,9 +141,20 @@ public final class CsvOutputs {
       f.add(Long.toString(s.setAside().wire()));
       f.add(Long.toString(s.setAside().structure()));
       f.add(Long.toString(s.setAside().airborne()));
+      SpanRecord.SurveyTemperature st = s.temperature();
+      f.add(temperature(st.spanC()));
+      f.add(temperature(st.spanSigmaC()));
+      f.add(t(st.source()));
+      f.add(temperature(st.sectionC()));
+      f.add(temperature(st.sectionSigmaC()));
       row(b, f);
     }
     return b.toString();
+  }
+
+  /** A temperature or its uncertainty, degC to 0.01; empty when not known. */
+  private static String temperature(double c) {
+    return Double.isFinite(c) ? OutputUnit.fixed(c, 2) : "";
   }
 
   /** Writes the three files into a run folder. */

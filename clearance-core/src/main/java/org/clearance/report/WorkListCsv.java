@@ -1,7 +1,12 @@
 package org.clearance.report;
 
 import java.util.ArrayList;
+import java.util.HashMap;
 import java.util.List;
+import java.util.Map;
+import java.util.Optional;
+import org.clearance.assess.CutSite;
+import org.clearance.assess.FindingInterval;
 import org.clearance.assess.RunAssessment;
 import org.clearance.assess.WorkItem;
 import org.clearance.assess.WorkList;
@@ -14,7 +19,9 @@ import org.clearance.survey.SurveyUnits;
  * named in the column ({@code x_m}, {@code x_ft}, {@code x_ftUS}); longitude and latitude in
  * degrees. Text cells are neutralised against formula injection as in the other tables. An
  * empty field is a value not computed or not applicable; {@code years_to_violation}
- * is {@code never} when growth never brings the vegetation in.
+ * is {@code never} when growth never brings the vegetation in. {@code verdict},
+ * {@code clearance_low} and {@code clearance_high} are those of the governing finding in
+ * {@code sites.csv} (the interval at the rule profile's confidence).
  */
 final class WorkListCsv {
 
@@ -37,7 +44,7 @@ final class WorkListCsv {
         u.column("veg_height"), "x_" + h, "y_" + h, "z_" + v, "lon_deg", "lat_deg",
         u.column("station"), u.column("span_chainage"), "nearest_structure", "side",
         u.column("offset"), "right_of_way", "n_points", u.areaColumn(), "years_to_violation",
-        "sites");
+        "sites", "verdict", u.column("clearance_low"), u.column("clearance_high"));
   }
 
   /** The rows, header first. */
@@ -46,8 +53,11 @@ final class WorkListCsv {
     SurveyUnits su = run.model().units();
     List<List<String>> out = new ArrayList<>();
     out.add(header(options, su));
+    Map<String, CutSite> sites = new HashMap<>();
+    run.sites().forEach(s -> sites.put(s.siteId(), s));
     for (WorkItem w : WorkList.of(run, options.linkDistanceM())) {
-      out.add(List.of(t(w.itemId()), t(w.spanId()), t(w.treeId()),
+      Optional<FindingInterval> interval = governing(w, sites);
+      List<String> row = new ArrayList<>(List.of(t(w.itemId()), t(w.spanId()), t(w.treeId()),
           Integer.toString(w.priority()), t(w.zone()), t(w.reasons()), w.work().words(),
           t(w.condition()), t(w.conductor()),
           w.circuit() > 0 ? Integer.toString(w.circuit()) : "", u.lengthText(w.clearanceM()),
@@ -64,8 +74,27 @@ final class WorkListCsv {
           w.points().isPresent() ? Integer.toString(w.points().getAsInt()) : "",
           u.areaText(w.areaM2()), CsvOutputs.years(w.yearsToViolation()),
           t(String.join(" ", w.siteIds()))));
+      row.add(interval.map(i -> i.verdict().words()).orElse(""));
+      row.add(u.lengthText(interval.map(FindingInterval::lowM).orElse(Double.NaN)));
+      row.add(u.lengthText(interval.map(FindingInterval::highM).orElse(Double.NaN)));
+      out.add(row);
     }
     return out;
+  }
+
+  /**
+   * The interval of the item's governing finding: its first grow-in site in site order, the one
+   * its clearance, required and deficit come from (empty for a fall-in-only item or a run
+   * without confidence).
+   */
+  private static Optional<FindingInterval> governing(WorkItem w, Map<String, CutSite> sites) {
+    for (String id : w.siteIds()) {
+      CutSite s = sites.get(id);
+      if (s != null && s.kind() == CutSite.Kind.GROW_IN) {
+        return s.interval();
+      }
+    }
+    return Optional.empty();
   }
 
   /** A text cell neutralised against formula injection, as in the other tables. */

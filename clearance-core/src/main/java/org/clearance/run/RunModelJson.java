@@ -150,6 +150,11 @@ public final class RunModelJson {
         .put("points_set_aside_airborne", s.setAside().airborne());
     ArrayNode notes = o.putArray("notes");
     s.notes().forEach(notes::add);
+    ObjectNode t = o.putObject("survey_temperature").put("source", s.temperature().source());
+    t.set("span_c", JsonFiles.number(s.temperature().spanC()));
+    t.set("span_sigma_c", JsonFiles.number(s.temperature().spanSigmaC()));
+    t.set("section_c", JsonFiles.number(s.temperature().sectionC()));
+    t.set("section_sigma_c", JsonFiles.number(s.temperature().sectionSigmaC()));
     return o;
   }
 
@@ -278,10 +283,21 @@ public final class RunModelJson {
           conductors, minima, s.integer("points_measured", 0, Long.MAX_VALUE),
           s.integer("points_kept", 0, Long.MAX_VALUE), s.strings("notes"),
           new SpanRecord.SetAsideCounts(count(s, "points_set_aside_wire"),
-              count(s, "points_set_aside_structure"), count(s, "points_set_aside_airborne")));
+              count(s, "points_set_aside_structure"), count(s, "points_set_aside_airborne")),
+          temperature(s));
     } catch (IllegalArgumentException e) {
       throw s.error(null, e.getMessage() + RERUN);
     }
+  }
+
+  /** The survey temperature; runs written before it existed lack it: none then. */
+  private static SpanRecord.SurveyTemperature temperature(JsonAt s) {
+    if (!s.has("survey_temperature")) {
+      return SpanRecord.SurveyTemperature.NONE;
+    }
+    JsonAt t = s.obj("survey_temperature");
+    return new SpanRecord.SurveyTemperature(t.num("span_c"), t.num("span_sigma_c"),
+        t.str("source"), t.num("section_c"), t.num("section_sigma_c"));
   }
 
   /** A count that runs written before it existed lack: 0 then. */

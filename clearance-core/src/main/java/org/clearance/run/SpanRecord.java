@@ -21,12 +21,44 @@ import org.clearance.clearance.SpanStatus;
  * @param pointsKept points stored within the keep radius
  * @param notes further remarks for the report (structure refinements, excluded points ...)
  * @param setAside unclassified points in the span's measuring box set aside as not vegetation
+ * @param temperature the survey-time conductor temperature of the span and of its section
  */
 public record SpanRecord(
     SpanContext context, String lineName, StructureRecord from, StructureRecord to,
     SpanStatus status, String reason, List<ConductorRecord> conductors,
     List<ConditionMinimum> minima, long pointsMeasured, long pointsKept, List<String> notes,
-    SetAsideCounts setAside) {
+    SetAsideCounts setAside, SurveyTemperature temperature) {
+
+  /**
+   * The conductor temperature during the survey (docs/clearance.md, "Survey temperature"): the
+   * span's own, from the heat balance at its flight time or as given, and its tension section's,
+   * which the change of state to every condition uses. NaN where not known.
+   *
+   * @param spanC the span's temperature, degC
+   * @param spanSigmaC its standard uncertainty, degC
+   * @param source {@code computed}, {@code measured}, {@code assumed} or {@code none}
+   * @param sectionC the section's temperature used by the change of state, degC
+   * @param sectionSigmaC its standard uncertainty, degC
+   */
+  public record SurveyTemperature(double spanC, double spanSigmaC, String source,
+      double sectionC, double sectionSigmaC) {
+    /** Nothing known (runs written before the field existed; lines without a temperature). */
+    public static final SurveyTemperature NONE = new SurveyTemperature(Double.NaN, Double.NaN,
+        "none", Double.NaN, Double.NaN);
+
+    public SurveyTemperature {
+      Objects.requireNonNull(source, "source");
+    }
+  }
+
+  /** A span without a survey temperature record. */
+  public SpanRecord(SpanContext context, String lineName, StructureRecord from,
+      StructureRecord to, SpanStatus status, String reason, List<ConductorRecord> conductors,
+      List<ConditionMinimum> minima, long pointsMeasured, long pointsKept, List<String> notes,
+      SetAsideCounts setAside) {
+    this(context, lineName, from, to, status, reason, conductors, minima, pointsMeasured,
+        pointsKept, notes, setAside, SurveyTemperature.NONE);
+  }
 
   /**
    * Unclassified points set aside in a span instead of measured, with the reason
@@ -57,6 +89,7 @@ public record SpanRecord(
     minima = List.copyOf(minima);
     notes = List.copyOf(notes);
     Objects.requireNonNull(setAside, "setAside");
+    Objects.requireNonNull(temperature, "temperature");
   }
 
   /** The span id. */

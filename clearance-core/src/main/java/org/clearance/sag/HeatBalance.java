@@ -8,7 +8,7 @@ import org.clearance.line.ConductorThermal;
  * Calculating the Current-Temperature Relationship of Bare Overhead Conductors"), SI form:
  * convective cooling q_c + radiative cooling q_r = solar heating q_s + Joule heating I^2 R(T_c)
  * (equation (1)). Solved here for the conductor temperature T_c at a given current (the survey
- * case), by bisection.
+ * case), by bisection ({@link SteadyHeatBalance}).
  *
  * <ul>
  *   <li>Forced convection, equations (3a) and (3b), the larger of the two, with the wind direction
@@ -24,18 +24,12 @@ import org.clearance.line.ConductorThermal;
  * Radial temperature differences in the conductor, magnetic heating of the steel core and
  * heat capacity (transients) are not modelled: the survey state is taken as steady.
  */
-public final class HeatBalance {
+public final class HeatBalance implements SteadyHeatBalance {
 
   /** Clear-atmosphere total heat flux polynomial, W/m^2 in powers of Hc in degrees, IEEE Std
    * 738-2012 Table 3 (coefficients A to G). */
   private static final double[] CLEAR_ATMOSPHERE = {-42.2391, 63.8044, -1.9220, 3.46921e-2,
       -3.61118e-4, 1.94318e-6, -4.07608e-9};
-  /** Bisection stops when the bracket is this narrow, degC: far below any input's precision. */
-  private static final double TEMPERATURE_TOLERANCE_C = 1e-6;
-  /** Bisection steps at most: halving 600 degC to 1e-6 takes 30. */
-  private static final int MAX_STEPS = 200;
-  /** Highest conductor temperature searched above the air, degC: beyond any conductor's limit. */
-  private static final double MAX_RISE_C = 600;
 
   /**
    * The weather, load and sun at one moment.
@@ -87,12 +81,24 @@ public final class HeatBalance {
     this.at = Objects.requireNonNull(at, "at");
   }
 
-  /** Joule heating I^2 R(T_c), W/m (IEEE Std 738-2012 equations (1), (10)). */
-  public double jouleHeating(double conductorC) {
-    return at.currentA() * at.currentA() * thermal.resistance(conductorC);
+  @Override
+  public double airTemperatureC() {
+    return at.airTemperatureC();
+  }
+
+  @Override
+  public double currentA() {
+    return at.currentA();
+  }
+
+  /** AC resistance, linear through the 25 and 75 degC values (IEEE Std 738-2012 (10)), ohm/m. */
+  @Override
+  public double resistance(double conductorC) {
+    return thermal.resistance(conductorC);
   }
 
   /** Solar heating q_s, W/m (IEEE Std 738-2012 equations (8), (9), (18), (20)); 0 at night. */
+  @Override
   public double solarHeating() {
     double hc = at.sun().altitudeRad();
     if (!(hc > 0)) {
@@ -128,6 +134,7 @@ public final class HeatBalance {
   }
 
   /** Convective cooling q_c, W/m: the largest of (3a), (3b) and natural convection (5a). */
+  @Override
   public double convectiveCooling(double conductorC) {
     double ta = at.airTemperatureC();
     double dt = conductorC - ta;
@@ -150,50 +157,10 @@ public final class HeatBalance {
   }
 
   /** Radiative cooling q_r, W/m (IEEE Std 738-2012 equation (7a)); negative below the air. */
+  @Override
   public double radiativeCooling(double conductorC) {
     double tc = (conductorC + 273) / 100;
     double ta = (at.airTemperatureC() + 273) / 100;
     return 17.8 * diameter * thermal.emissivity() * (tc * tc * tc * tc - ta * ta * ta * ta);
-  }
-
-  /**
-   * The steady conductor temperature T_c at which cooling equals heating, degC.
-   *
-   * @throws IllegalStateException when no temperature up to 600 degC above the air balances (a
-   *     current far above any rating)
-   */
-  public double conductorTemperature() {
-    return conductorTemperature(solarHeating());
-  }
-
-  /**
-   * The steady conductor temperature with a given solar heating (a measured or published q_s),
-   * degC.
-   *
-   * @param solarHeating solar heating q_s, W/m (&gt;= 0)
-   * @throws IllegalStateException as {@link #conductorTemperature()}
-   */
-  public double conductorTemperature(double solarHeating) {
-    double lo = at.airTemperatureC();
-    double hi = lo + MAX_RISE_C;
-    if (imbalance(hi, solarHeating) < 0) {
-      throw new IllegalStateException("no heat balance below " + hi + " degC: current "
-          + at.currentA() + " A is far above the conductor's rating");
-    }
-    for (int i = 0; i < MAX_STEPS && hi - lo > TEMPERATURE_TOLERANCE_C; i++) {
-      double mid = 0.5 * (lo + hi);
-      if (imbalance(mid, solarHeating) < 0) {
-        lo = mid;
-      } else {
-        hi = mid;
-      }
-    }
-    return 0.5 * (lo + hi);
-  }
-
-  /** Cooling minus heating at a conductor temperature, W/m: increasing in T_c. */
-  private double imbalance(double conductorC, double solarHeating) {
-    return convectiveCooling(conductorC) + radiativeCooling(conductorC) - solarHeating
-        - jouleHeating(conductorC);
   }
 }

@@ -17,6 +17,10 @@ import java.time.ZonedDateTime;
 public record SolarPosition(double altitudeRad, double azimuthRad) {
 
   private static final double SECONDS_PER_HOUR = 3600;
+  /** Amplitude of the declination formula of IEEE Std 738-2012 equation (16b), degrees. */
+  public static final double IEEE_738_DECLINATION_DEG = 23.46;
+  /** Amplitude of the declination formula of CIGRE TB 601 (section 3.3.2), degrees. */
+  public static final double CIGRE_601_DECLINATION_DEG = 23.3;
 
   /**
    * The sun at a day of the year and local solar time (IEEE Std 738-2012 clause 4.4.3).
@@ -26,8 +30,21 @@ public record SolarPosition(double altitudeRad, double azimuthRad) {
    * @param latitudeDeg latitude, degrees (north positive), -90 to 90
    */
   public static SolarPosition of(int dayOfYear, double solarHour, double latitudeDeg) {
-    double delta = Math.toRadians(23.46 * Math.sin(Math.toRadians((284.0 + dayOfYear) / 365.0
-        * 360.0)));
+    return of(dayOfYear, solarHour, latitudeDeg, IEEE_738_DECLINATION_DEG);
+  }
+
+  /**
+   * The sun with a declination amplitude of one's choice: 23.46 deg in IEEE Std 738-2012,
+   * 23.3 deg in CIGRE TB 601 (otherwise the same formula, delta = A sin((284 + N) / 365 x 360
+   * deg)); the altitude and azimuth formulas are the same in both.
+   *
+   * @param declinationAmplitudeDeg the amplitude A, degrees
+   * @see #of(int, double, double)
+   */
+  public static SolarPosition of(int dayOfYear, double solarHour, double latitudeDeg,
+      double declinationAmplitudeDeg) {
+    double delta = Math.toRadians(declinationAmplitudeDeg * Math.sin(Math.toRadians(
+        (284.0 + dayOfYear) / 365.0 * 360.0)));
     double omega = Math.toRadians(15.0 * (solarHour - 12.0));
     double lat = Math.toRadians(latitudeDeg);
     double sinHc = Math.cos(lat) * Math.cos(delta) * Math.cos(omega)
@@ -57,6 +74,17 @@ public record SolarPosition(double altitudeRad, double azimuthRad) {
    * @param longitudeDeg longitude, degrees (east positive)
    */
   public static SolarPosition at(Instant instant, double latitudeDeg, double longitudeDeg) {
+    return at(instant, latitudeDeg, longitudeDeg, IEEE_738_DECLINATION_DEG);
+  }
+
+  /**
+   * The sun at an instant with a declination amplitude of one's choice.
+   *
+   * @param declinationAmplitudeDeg see {@link #of(int, double, double, double)}
+   * @see #at(Instant, double, double)
+   */
+  public static SolarPosition at(Instant instant, double latitudeDeg, double longitudeDeg,
+      double declinationAmplitudeDeg) {
     ZonedDateTime utc = instant.atZone(ZoneOffset.UTC);
     int n = utc.getDayOfYear();
     double b = Math.toRadians(360.0 * (n - 81) / 364.0);
@@ -66,6 +94,6 @@ public record SolarPosition(double altitudeRad, double azimuthRad) {
     // A solar hour outside 0-24 belongs to the neighbouring day; the declination changes by less
     // than half a degree a day, so the day number of the UTC date is kept.
     solarHour = ((solarHour % 24) + 24) % 24;
-    return of(n, solarHour, latitudeDeg);
+    return of(n, solarHour, latitudeDeg, declinationAmplitudeDeg);
   }
 }

@@ -1,11 +1,13 @@
 package org.clearance.line;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.nio.file.Path;
 import java.time.Instant;
 import java.time.LocalDate;
+import org.clearance.InputException;
 import org.clearance.line.SurveyTemperatureSpec.HeatInputs;
 import org.clearance.line.SurveyTemperatureSpec.Source;
 import org.junit.jupiter.api.Test;
@@ -100,5 +102,33 @@ class SurveyTemperatureReaderTest {
         + "survey_heat_balance:\n  current_a: 1\n  air_temperature_c: 1\n  wind_speed_m_s: 1\n");
     InputErrors.check(f, 6, "survey_heat_balance", "no heat-balance data",
         () -> LineSpecReader.read(f, ConductorLibrary.read(lib)));
+  }
+
+  @Test
+  void theHeatBalanceModelIsChosenByName() {
+    HeatInputs ieee = read(HEAD + "survey_heat_balance:\n  current_a: 300\n"
+        + "  air_temperature_c: 18\n  wind_speed_m_s: 3\n").surveyTemperature().heat()
+        .orElseThrow();
+    assertEquals(SurveyTemperatureSpec.HeatModel.IEEE_738, ieee.model());
+    HeatInputs cigre = read(HEAD + "survey_heat_balance:\n  model: cigre601\n  current_a: 300\n"
+        + "  air_temperature_c: 18\n  wind_speed_m_s: 3\n  ground_albedo: 0.1\n"
+        + "  clearness_ratio: 0.8\n  outer_strand_diameter_mm: 4.4\n").surveyTemperature()
+        .heat().orElseThrow();
+    assertEquals(SurveyTemperatureSpec.HeatModel.CIGRE_601, cigre.model());
+    assertEquals(0.1, cigre.groundAlbedo(), 0);
+    assertEquals(0.8, cigre.clearnessRatio(), 0);
+    assertEquals(0.0044, cigre.outerStrandDiameterM(), 1e-12);
+  }
+
+  @Test
+  void anUnknownModelOrACigreKeyWithoutItIsAnError() {
+    String base = HEAD + "survey_heat_balance:\n  current_a: 300\n  air_temperature_c: 18\n"
+        + "  wind_speed_m_s: 3\n";
+    String e1 = assertThrows(InputException.class, () -> read(base + "  model: ieee2000\n"))
+        .getMessage();
+    assertTrue(e1.contains("model") && e1.contains("cigre601"), e1);
+    String e2 = assertThrows(InputException.class, () -> read(base + "  ground_albedo: 0.2\n"))
+        .getMessage();
+    assertTrue(e2.contains("ground_albedo") && e2.contains("cigre601"), e2);
   }
 }

@@ -19,11 +19,17 @@ import org.junit.jupiter.api.Test;
  * Annex prints them rounded to 0.1 degC and 0.01 W/m; the tolerances allow that rounding plus the
  * rounding of the Annex's intermediate air properties (0.06 W/m, 0.1 degC).
  *
- * <p>The Annex's sun geometry is not known here exactly (the reproduction gives latitude, date and
- * hour but places both ends of the span at one point, so the line azimuth is not stated; the
- * library itself checks q_s only to 0.5 W/m): the solar part is checked against the reference
- * library's own unit examples of equation (18) and (20) instead, and the Annex's balance with its
- * published q_s.
+ * <p>The Annex's sun geometry is not known here exactly: the reproduction gives latitude, date and
+ * hour but places both ends of the span at one point, so the line azimuth is not stated. With the
+ * standard's equations (16a)-(20) the sun at 43 N, 10 June, 14:00 gives q_s between 11.90 W/m
+ * (line along the sun's azimuth) and 14.00 W/m (line square to the sun) for Drake at alpha = 0.5
+ * (12.43 east-west, 13.53 north-south); 13.74 needs a
+ * line azimuth of about 172 or 309 deg, which the reproduction does not name. The reference
+ * library's own fixture (declination amplitude 23.3 deg, the 2016 date as day 162, coincident
+ * ends read as azimuth 0) computes 13.52 W/m by the same equations and passes only through its
+ * 0.5 W/m tolerance. The solar formulas are therefore checked against that library's unit
+ * examples of equations (18) and (20) and its fixture, and the Annex's balance with its published
+ * q_s.
  */
 class HeatBalanceTest {
 
@@ -57,6 +63,36 @@ class HeatBalanceTest {
         0.61, Math.PI / 2, 0.0, SolarPosition.of(161, 14.0, 43.0), 0));
     assertEquals(13.53, b.solarHeating(), 0.01); // [computed] 0.5 x 995.83 x 0.9663 x 0.02812
     assertEquals(100.7, b.conductorTemperature(), 1.0); // Annex B [published], see above
+  }
+
+  @Test
+  void annexBSolarHeatingAsTheReferenceLibraryComputesIt() {
+    // statnett/linerate tests/acceptance_tests/test_ieee_ampacity_cases.py: the Annex's 13.738 W/m
+    // within 0.5 W/m [published, that library's tolerance]; its fixture's sun [computed here]:
+    // declination 23.3 sin((284 + 162) / 365 x 360 deg), 14:00 at longitude 0, azimuth 0.
+    SolarPosition sun = SolarPosition.of(162, 14.0, 43.0, SolarPosition.CIGRE_601_DECLINATION_DEG);
+    HeatBalance b = new HeatBalance(DIAMETER_B, DRAKE_B, new HeatBalance.Conditions(1000, 40.0,
+        0.61, Math.PI / 2, 0.0, sun, 0));
+    assertEquals(13.52, b.solarHeating(), 0.01); // [computed] 0.5 x 995.65 x 0.9657 x 0.02812
+    assertEquals(13.738, b.solarHeating(), 0.5); // Annex B via linerate [published]
+  }
+
+  @Test
+  void noLineAzimuthGivesMoreThanTheSunSquareOn() {
+    // [computed] q_s = alpha Q_s sin(theta) D is largest for theta = 90 deg:
+    // 0.5 x 995.83 x 0.02812 = 14.00 W/m at 43 N, 10 June, 14:00; smallest along the sun's
+    // azimuth, theta = Hc = 58.17 deg: 14.00 x sin(58.17 deg) = 11.90 W/m.
+    double max = 0;
+    double min = Double.MAX_VALUE;
+    for (int deg = 0; deg < 180; deg++) {
+      double q = new HeatBalance(DIAMETER_B, DRAKE_B, new HeatBalance.Conditions(1000, 40.0,
+          0.61, Math.PI / 2, 0.0, SolarPosition.of(161, 14.0, 43.0), Math.toRadians(deg)))
+          .solarHeating();
+      max = Math.max(max, q);
+      min = Math.min(min, q);
+    }
+    assertEquals(14.00, max, 0.01);
+    assertEquals(11.90, min, 0.01);
   }
 
   @Test

@@ -151,4 +151,65 @@ class SurveyTemperaturesTest {
         .estimate(spec2, section(spec2), A);
     assertTrue(w.detail().contains("2026-06-10T14:00"), w.detail());
   }
+
+  @Test
+  void eachSpanHasItsOwnFlightTimeAndTheSectionTheLengthWeightedMean() {
+    // Two spans of one section, 300 m and 100 m, the first flown at 02:00 UTC (night at
+    // longitude 0), the second at 14:00 (sun): the spans differ by the solar heating; the
+    // section's state
+    // is sum(L_i T_i) / sum(L_i) [computed: the uniform temperature with the same thermal
+    // elongation alpha sum(L_i dT_i)], its sigma the length-weighted mean of the spans'.
+    LineSpec spec = spec(new SurveyTemperatureSpec(Source.COMPUTED, Double.NaN, Double.NaN,
+        Optional.of(annexWeather(90))));
+    Structure a = new Structure("T1", "", 0, StructureType.DEAD_END, 0, 0, 10, Map.of(), "t", 1);
+    Structure b = new Structure("T2", "", 1, StructureType.SUSPENSION, 0, 300, 10, Map.of(), "t",
+        2);
+    Structure c = new Structure("T3", "", 2, StructureType.DEAD_END, 0, 400, 10, Map.of(), "t",
+        3);
+    LineLayout line = SpanLayout.build(List.of(a, b, c), List.of(spec)).lines().get(0);
+    TensionSection section = line.sections().get(0);
+    assertEquals(2, section.spans().size());
+    SurveyTemperatures st = new SurveyTemperatures(new SurveyTemperatures.Clock(true),
+        Optional.empty(), "no CRS", Map.of("T1-T2", GPS_14H - 43_200, "T2-T3", GPS_14H));
+    TemperatureEstimate first = st.estimate(spec, section.spans().get(0), A);
+    TemperatureEstimate second = st.estimate(spec, section.spans().get(1), A);
+    assertTrue(first.detail().contains("2026-06-10T02:00"), first.detail());
+    assertTrue(second.detail().contains("2026-06-10T14:00"), second.detail());
+    assertTrue(second.temperatureC() - first.temperatureC() > 1, first + " " + second);
+    TemperatureEstimate whole = st.estimate(spec, section, A);
+    assertEquals((300 * first.temperatureC() + 100 * second.temperatureC()) / 400,
+        whole.temperatureC(), 1e-9);
+    assertEquals((300 * first.sigmaC() + 100 * second.sigmaC()) / 400, whole.sigmaC(), 1e-9);
+    assertTrue(whole.detail().startsWith("length-weighted mean of 2 of 2 spans' IEEE 738"),
+        whole.detail());
+    // A span without a GPS time is left out of the mean; none at all leaves the section unknown.
+    SurveyTemperatures half = new SurveyTemperatures(new SurveyTemperatures.Clock(true),
+        Optional.empty(), "no CRS", Map.of("T2-T3", GPS_14H));
+    assertEquals(second.temperatureC(), half.estimate(spec, section, A).temperatureC(), 1e-9);
+    assertFalse(at(Double.NaN).estimate(spec, section, A).isKnown());
+  }
+
+  @Test
+  void theCigreModelIsUsedWhenTheSpecificationAsksForIt() {
+    // The same flight with model cigre601: the span's temperature is CIGRE TB 601's balance with
+    // the sun by the brochure's declination (23.3 deg) and the specification's albedo and
+    // clearness [computed by CigreHeatBalance, checked against TB 601 Annex E elsewhere].
+    HeatInputs in = annexWeather(90).withModel(SurveyTemperatureSpec.HeatModel.CIGRE_601, 0.2,
+        1.0, 0.0044);
+    LineSpec spec = spec(new SurveyTemperatureSpec(Source.COMPUTED, Double.NaN, Double.NaN,
+        Optional.of(in)));
+    TemperatureEstimate t = at(GPS_14H).estimate(spec, section(spec), A);
+    SolarPosition sun = SolarPosition.at(Instant.parse("2026-06-10T14:00:00Z"), 43, 0,
+        SolarPosition.CIGRE_601_DECLINATION_DEG);
+    double direct = new CigreHeatBalance(DRAKE.diameter(), 0.0044, DRAKE.thermal().orElseThrow(),
+        new CigreHeatBalance.Conditions(1000, 40, 0.61, Math.PI / 2, 0, 0, sun, 0, 0.2, 1.0))
+        .conductorTemperature();
+    assertEquals(direct, t.temperatureC(), 1e-6);
+    assertTrue(t.detail().startsWith("CIGRE TB 601 heat balance"), t.detail());
+    TemperatureEstimate ieee = at(GPS_14H).estimate(spec(new SurveyTemperatureSpec(
+        Source.COMPUTED, Double.NaN, Double.NaN, Optional.of(annexWeather(90)))), section(spec),
+        A);
+    assertTrue(Math.abs(ieee.temperatureC() - t.temperatureC()) < 5,
+        ieee.temperatureC() + " vs " + t.temperatureC());
+  }
 }
