@@ -33,8 +33,8 @@ import org.clearance.line.SpanLayout;
 import org.clearance.run.RunModel;
 import org.clearance.run.RunModelJson;
 import org.clearance.sag.ConditionSolver;
+import org.clearance.sag.SpanTemperature;
 import org.clearance.sag.SurveyTemperatures;
-import org.clearance.sag.TemperatureEstimate;
 import org.clearance.survey.PointChunk;
 import org.clearance.wire.ConductorTable;
 import org.clearance.wire.FlightTimes;
@@ -302,7 +302,7 @@ final class SpanStages {
           conditions, new ConditionSolver(options.conditions()), temperatures,
           options.uncertainty());
       String id = ref.span().id();
-      TemperatureEstimate temperature = ConditionModels.spanTemperatures(layout, temperatures)
+      SpanTemperature temperature = ConditionModels.spanTemperatures(layout, temperatures)
           .get(id);
       List<SpanModel> engineSpans = new ArrayList<>();
       for (int k : ctx.partners.get(fit.key())) {
@@ -341,7 +341,7 @@ final class SpanStages {
 
   private static SpanOutcome outcome(JobContext ctx, SpanFit fit, ConditionSet conditions,
       VegetationSelector vegetation, GroundModel ground, SpanWires wires,
-      List<ConductorModel> models, TemperatureEstimate temperature, Measurement measured,
+      List<ConductorModel> models, SpanTemperature temperature, Measurement measured,
       Path near, Path uncertainty, long start) throws IOException {
     JobContext.SpanRef ref = ctx.spans.get(fit.key());
     SpanLayout layout = ctx.lineLayouts.get(ref.line());

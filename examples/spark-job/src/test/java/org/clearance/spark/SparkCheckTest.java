@@ -150,10 +150,21 @@ class SparkCheckTest {
       wire += Long.parseLong(row.get("points_set_aside_wire"));
     }
     assertTrue(wire > 0, "the unlabelled wires' points are set aside: " + wire);
-    // the survey temperature was computed from the flight times, not left unknown
-    String model = Files.readString(run.resolve("model.json"));
-    assertTrue(model.contains("survey conductor temperature ")
-        && !model.contains("survey conductor temperature unknown"), model.substring(0, 400));
+    // the survey temperature was computed from the flight times, not left unknown, and is the
+    // command line's for every span and section
+    var expected = org.clearance.run.RunModelJson.read(groundOnlyCliRun.resolve("model.json"));
+    var actual = org.clearance.run.RunModelJson.read(run.resolve("model.json"));
+    for (int i = 0; i < expected.spans().size(); i++) {
+      var a = expected.spans().get(i).temperature();
+      var b = actual.spans().get(i).temperature();
+      assertEquals("computed", a.source());
+      assertTrue(Double.isFinite(a.sectionC()) && Double.isFinite(a.spanC()), a.toString());
+      assertEquals(a.source(), b.source());
+      // degC: the flight times are means of the same points summed in another order
+      assertEquals(a.spanC(), b.spanC(), 1e-6, "span temperature");
+      assertEquals(a.sectionC(), b.sectionC(), 1e-6, "section temperature");
+      assertEquals(a.sectionSigmaC(), b.sectionSigmaC(), 1e-6, "section sigma");
+    }
   }
 
   /** A span whose task fails (here: its points cannot be read) is reported NOT ASSESSED with
