@@ -24,6 +24,8 @@ import org.clearance.clearance.UncertaintyFile;
 import org.clearance.clearance.VegetationSelector;
 import org.clearance.ground.GroundModel;
 import org.clearance.ground.GroundModelBuilder;
+import org.clearance.label.ObjectLabeller;
+import org.clearance.label.ObjectLabels;
 import org.clearance.line.ConductorLibrary;
 import org.clearance.line.LineLayout;
 import org.clearance.line.LineSpec;
@@ -64,6 +66,10 @@ import org.clearance.wire.WireResult;
  * check never leaves a half-written run behind.
  */
 public final class ClearanceCheck {
+
+  /** Margin of the labelling region beyond the tree reach, m: the conductors' own offset from
+   * the span's chord (a double circuit's outer phase, about 15 m; common practice, no source). */
+  static final double LABEL_REGION_MARGIN_M = 20.0;
 
   /** Told when each stage ends; the benchmark uses it to read the heap. */
   @FunctionalInterface
@@ -165,6 +171,18 @@ public final class ClearanceCheck {
     ConductorTable.write(dir.resolve(ConductorTable.FILE_NAME), wires, survey.units());
     stop("wires");
 
+    VegetationSelector vegetation = VegetationSelector.forSurvey(scan.classCounts,
+        options.vegetationClasses());
+    if (vegetation.inferred()) {
+      ObjectLabels objects = ObjectLabeller.label(consumers -> survey.readParallel(
+          options.threads(), progress.wrap("labels", consumers)),
+          wires.layout().spans().stream().map(Span::frame).toList(),
+          options.engine().treeReach() + LABEL_REGION_MARGIN_M, scan.ground, wires.setAside());
+      say("labelling: %s", objects.describe());
+      record.parameter("labelling", objects.describe());
+      stop("labelling");
+    }
+
     ConditionSet conditions = ConditionModels.conditionSet(specs);
     Map<String, List<SurveyedConductor>> fitted = surveyed(wires);
     SurveyTemperatures temperatures = surveyTemperatures(survey, flight);
@@ -177,8 +195,6 @@ public final class ClearanceCheck {
     say("conditions: %s", ConditionModels.summary(conditions, models));
     stop("conditions");
 
-    VegetationSelector vegetation = VegetationSelector.forSurvey(scan.classCounts,
-        options.vegetationClasses());
     List<SpanModel> spanModels = spanModels(wires.layout(), models);
     ClearanceEngine engine = new ClearanceEngine(spanModels, conditions, scan.ground, vegetation,
         options.engine(), options.trees());

@@ -64,9 +64,11 @@ public final class RunFolder implements Closeable {
    *
    * @param dir the run folder
    * @param option option or argument that named it, for messages
-   * @throws InputException when another command is writing it
+   * @throws InputException when another command is writing it, or when it cannot be written
+   *     ({@link OutFolder#check})
    */
   public static RunFolder open(Path dir, String option) throws IOException {
+    OutFolder.check(dir, option);
     Path abs = resolve(dir);
     Path parent = abs.getParent();
     if (parent == null) {

@@ -2,6 +2,7 @@ package org.clearance;
 
 import java.time.LocalDate;
 import java.util.ArrayList;
+import java.util.Comparator;
 import java.util.HashMap;
 import java.util.List;
 import java.util.Locale;
@@ -20,6 +21,7 @@ import org.clearance.clearance.VegetationSelector;
 import org.clearance.ground.GroundModel;
 import org.clearance.line.LineSpec;
 import org.clearance.line.Span;
+import org.clearance.line.SpanFrame;
 import org.clearance.line.Structure;
 import org.clearance.line.SurveyTemperatureSpec;
 import org.clearance.run.ConductorRecord;
@@ -51,7 +53,7 @@ public final class RunModels {
 
   /**
    * The header facts of a check: the lines as specified, the input files hashed so far, the
-   * survey's acquisition days when every file stores adjusted standard GPS time, and the run day.
+   * survey's acquisition days when every file stores adjusted standard GPS time.
    *
    * @param gpsMin earliest GPS time of the survey, s, or NaN
    * @param gpsMax latest GPS time, s, or NaN
@@ -71,8 +73,18 @@ public final class RunModels {
     } else {
       note = "not known: the files store GPS week seconds, which do not name the week";
     }
-    return new RunFacts(lines, record.inputs(), first, last, note,
-        Optional.of(RunFacts.runDay(record.started())));
+    List<RunRecord.InputFile> inputs = record.inputs().stream().map(i -> new RunRecord.InputFile(
+        i.role(), fileName(i.path()), i.bytes(), i.sha256())).toList();
+    return new RunFacts(lines, inputs, first, last, note);
+  }
+
+  /**
+   * A file's name without its folders: {@code model.json} and the report name an input by its
+   * name and SHA-256, never by a folder of the machine it ran on (run.json keeps the path given).
+   */
+  static String fileName(String path) {
+    int cut = Math.max(path.lastIndexOf('/'), path.lastIndexOf('\\'));
+    return path.substring(cut + 1);
   }
 
   /**
@@ -104,7 +116,7 @@ public final class RunModels {
     }
     List<TreeRecord> trees = new ArrayList<>();
     int n = 0;
-    for (TreeClearance t : measured.trees()) {
+    for (TreeClearance t : treesAlongTheLine(measured.trees(), wires)) {
       n++;
       trees.add(new TreeRecord(String.format(Locale.ROOT, "TREE%05d", n), t.spanId(),
           t.tree().x(), t.tree().y(), t.tree().topZ(), t.tree().baseZ(), t.tree().height(),
@@ -112,6 +124,40 @@ public final class RunModels {
     }
     return new RunModel(toolVersion, units, conditions, options.engine().keepRadius(),
         vegetation.describe(), ground.source().describe(), spans, trees);
+  }
+
+  /**
+   * The trees in the order of their place along the line: by span (the run's order), then
+   * station along it, offset across it, then position and height. The tree ids are numbered in
+   * this order, so they depend on where the trees stand only, never on the order in which
+   * threads or tiles found them.
+   */
+  static List<TreeClearance> treesAlongTheLine(List<TreeClearance> trees, WireResult wires) {
+    Map<String, Integer> spanOrder = new HashMap<>();
+    Map<String, SpanFrame> frames = new HashMap<>();
+    for (SpanWires sw : wires.spans()) {
+      spanOrder.putIfAbsent(sw.span().id(), spanOrder.size());
+      frames.putIfAbsent(sw.span().id(), sw.span().frame());
+    }
+    Comparator<TreeClearance> order = Comparator
+        .comparingInt((TreeClearance t) -> spanOrder.getOrDefault(t.spanId(), Integer.MAX_VALUE))
+        .thenComparing(TreeClearance::spanId)
+        .thenComparingDouble(t -> along(frames.get(t.spanId()), t, true))
+        .thenComparingDouble(t -> along(frames.get(t.spanId()), t, false))
+        .thenComparingDouble(t -> t.tree().x())
+        .thenComparingDouble(t -> t.tree().y())
+        .thenComparingDouble(t -> t.tree().topZ())
+        .thenComparingDouble(t -> t.tree().height());
+    List<TreeClearance> sorted = new ArrayList<>(trees);
+    sorted.sort(order);
+    return sorted;
+  }
+
+  private static double along(SpanFrame f, TreeClearance t, boolean station) {
+    if (f == null) {
+      return 0;
+    }
+    return station ? f.station(t.tree().x(), t.tree().y()) : f.offset(t.tree().x(), t.tree().y());
   }
 
   private static SpanRecord span(SpanWires sw, SpanModel model, SpanClearance clearance,
@@ -161,13 +207,11 @@ public final class RunModels {
           u.classes().stream().map(String::valueOf).collect(
               java.util.stream.Collectors.joining(", ")), engine.keepRadius(), u.nearestM()));
     }
-    boolean anyFitted = !sw.fitted().isEmpty();
-    SpanStatus status;
+    SpanStatus status = SpanStatus.ofWires(sw);
     String reason;
-    if (!anyFitted) {
-      status = SpanStatus.NOT_ASSESSED;
+    if (status == SpanStatus.NOT_ASSESSED) {
       reason = sw.reason().orElse("no conductor fitted");
-    } else if (sw.reason().isPresent() || !problems.isEmpty()) {
+    } else if (status == SpanStatus.INCOMPLETE || !problems.isEmpty()) {
       status = SpanStatus.INCOMPLETE;
       List<String> parts = new ArrayList<>();
       sw.reason().ifPresent(parts::add);
@@ -192,12 +236,14 @@ public final class RunModels {
       }
     }
     if (clearance != null && clearance.excludedAsConductor() + clearance.excludedAsStructure()
-        + clearance.excludedAsAirborne() > 0) {
+        + clearance.excludedAsAirborne() + clearance.excludedAsObject() > 0) {
       notes.add(String.format(Locale.ROOT, "unclassified points set aside: %d on a wire (on a "
           + "fitted curve within its fit tolerance, or on a long linear piece), %d within %.1f m "
-          + "of a structure, %d isolated airborne (birds, noise)",
+          + "of a structure, %d isolated airborne (birds, noise), %d of man-made objects "
+          + "(mast-like or planar, docs/labelling.md)",
           clearance.excludedAsConductor(), clearance.excludedAsStructure(),
-          engine.structureExclusion(), clearance.excludedAsAirborne()));
+          engine.structureExclusion(), clearance.excludedAsAirborne(),
+          clearance.excludedAsObject()));
     }
     return new SpanRecord(model.context(), lineName, structure(span.from()), structure(span.to()),
         status, reason, conductors, clearance == null ? List.of() : clearance.minima(),
@@ -205,7 +251,8 @@ public final class RunModels {
         clearance == null ? 0 : clearance.pointsKept(), notes, clearance == null
             ? SpanRecord.SetAsideCounts.NONE : new SpanRecord.SetAsideCounts(
                 clearance.excludedAsConductor(), clearance.excludedAsStructure(),
-                clearance.excludedAsAirborne()), temperatureRecord(temperature));
+                clearance.excludedAsAirborne(), clearance.excludedAsObject()),
+        temperatureRecord(temperature));
   }
 
   /** The span's and its section's survey temperature as the run model stores them. */

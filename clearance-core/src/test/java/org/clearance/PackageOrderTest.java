@@ -20,8 +20,8 @@ import org.junit.jupiter.api.Test;
 class PackageOrderTest {
 
   private static final List<String> ORDER = List.of(
-      "io", "survey", "line", "ground", "wire", "sag", "clearance", "rules", "run", "assess",
-      "report");
+      "io", "survey", "line", "ground", "wire", "label", "sag", "clearance", "rules", "run",
+      "assess", "report");
   private static final Pattern IMPORT =
       Pattern.compile("^import (?:static )?org\\.clearance\\.(?:([a-z]+)\\.)?([A-Z]\\w*)", Pattern.MULTILINE);
 

@@ -50,13 +50,22 @@ class UnlabelledTileTest {
   private static final double SAME_SITE_M = 5.0;
   /** Fall-in tree height tolerance, m (issue 9's target). */
   private static final double HEIGHT_TOL_M = 0.5;
-  /** A fall-in tree top matches a labelled run's tree within this plan distance, m. */
+  /** A fall-in site matches a labelled run's tree within this plan distance of its top, or
+   * within its crown radius when that is larger, m: on a broad crown the highest point above
+   * ground moves between cells when the two runs' ground models differ by a few centimetres
+   * (tile, unlabelled: the same 26 m tree's top 2.5 m away, height 0.29 m apart). */
   private static final double TOP_M = 1.5;
 
   @TempDir
   static Path dir;
 
   private static Map<Long, Integer> classAt;
+  /** Coordinates (x, y, z per point) of the tile's points labelled vegetation (3-5). */
+  private static List<double[]> vegetation;
+  /** A site on a point not labelled vegetation is "at vegetation" when a labelled vegetation
+   * point lies this near, m: the wire finder measures a wire point with a vegetation point
+   * within 0.3 m (PointEvidence.TOUCH_M), as the branch and the wire cannot be told apart. */
+  private static final double AT_VEGETATION_M = 0.3;
 
   private record Site(String span, int priority, String zone, double x, double y, double z,
       double height) {}
@@ -66,12 +75,16 @@ class UnlabelledTileTest {
   @BeforeAll
   static void truth() {
     classAt = new HashMap<>();
+    vegetation = new ArrayList<>();
     Survey s = Survey.open(List.of(SurveyTestFiles.open("corridor_12AN2_20_thinned.las")),
         UnitsChoice.of(LinearUnit.METRE));
     s.readParallel(1, () -> chunk -> {
       for (int i = 0; i < chunk.size(); i++) {
         classAt.put(key(chunk.x()[i], chunk.y()[i], chunk.z()[i]),
             (int) chunk.classification()[i]);
+        if (chunk.classification()[i] >= 3 && chunk.classification()[i] <= 5) {
+          vegetation.add(new double[] {chunk.x()[i], chunk.y()[i], chunk.z()[i]});
+        }
       }
     });
   }
@@ -84,6 +97,9 @@ class UnlabelledTileTest {
       Run r = run(keep == 2 ? "ground-only" : "unlabelled", keep);
       int zoneSites = 0;
       int notVegetation = 0;
+      int notAtVegetation = 0;
+      int manMade = 0;
+      int classOne = 0;
       for (Site s : r.sites()) {
         if (s.zone().equals("fall-in")) {
           continue;
@@ -92,7 +108,13 @@ class UnlabelledTileTest {
         Integer c = classAt.get(key(s.x(), s.y(), s.z()));
         if (c == null || c < 3 || c > 5) {
           notVegetation++;
-          System.out.println("tile " + keep + ": site not on vegetation: " + s + " class " + c);
+          boolean at = vegetation.stream().anyMatch(v -> Math.sqrt(Math.pow(v[0] - s.x(), 2)
+              + Math.pow(v[1] - s.y(), 2) + Math.pow(v[2] - s.z(), 2)) <= AT_VEGETATION_M);
+          manMade += c != null && (c == 15 || c == 26) ? 1 : 0;
+          classOne += c != null && c == 1 && !at ? 1 : 0;
+          notAtVegetation += at ? 0 : 1;
+          System.out.println("tile " + keep + ": site not on vegetation: " + s + " class " + c
+              + (at ? ", labelled vegetation within 0.3 m" : ""));
         }
       }
       int missed = 0;
@@ -127,30 +149,38 @@ class UnlabelledTileTest {
         fallIn++;
         boolean match = false;
         for (TreeRecord t : labelled.model().trees()) {
-          match |= Math.hypot(t.x() - s.x(), t.y() - s.y()) <= TOP_M
+          match |= Math.hypot(t.x() - s.x(), t.y() - s.y())
+              <= Math.max(TOP_M, t.crownRadiusM())
               && Math.abs(t.heightM() - s.height()) <= HEIGHT_TOL_M;
         }
         if (!match) {
           fallInWrong++;
-          System.out.println("tile " + keep + ": fall-in site at no labelled tree: " + s);
+          TreeRecord near = labelled.model().trees().stream().min(java.util.Comparator
+              .comparingDouble(t -> Math.hypot(t.x() - s.x(), t.y() - s.y()))).orElse(null);
+          System.out.println("tile " + keep + ": fall-in site at no labelled tree: " + s
+              + "; nearest labelled tree " + near);
         }
       }
       String f = String.format(Locale.ROOT, "%s: zone sites %d (labelled run %d), not on"
-          + " vegetation %d; spans with labelled zone sites left without one %d; labelled zone"
-          + " sites without a match %d; fall-in sites %d, at no labelled tree of that height %d",
-          keep == 2 ? "ground-only" : "unlabelled", zoneSites,
+          + " vegetation %d (of them with no labelled vegetation within 0.3 m %d: vendor class 1"
+          + " %d, tower or crane 15/26 %d); spans with labelled zone sites left without one %d;"
+          + " labelled zone sites without a match %d; fall-in sites %d, at no labelled tree of"
+          + " that height %d", keep == 2 ? "ground-only" : "unlabelled", zoneSites,
           labelled.sites().stream().filter(s -> !s.zone().equals("fall-in")).count(),
-          notVegetation, spansFalseClear, missed, fallIn, fallInWrong);
+          notVegetation, notAtVegetation, classOne, manMade, spansFalseClear, missed, fallIn,
+          fallInWrong);
       System.out.println("tile " + f);
       figures.append(f).append('\n');
       assertEquals(0, spansFalseClear, f);
       assertEquals(0, missed, f);
-      // Known gap (issue 9 item 3, not built yet): the tile's cranes (class 26, copied in) are
-      // taken as vegetation once their label is gone, so the share of sites on points not
-      // labelled vegetation and the fall-in sites at no tree are reported, not yet held to
-      // MAX_NOT_VEGETATION and 0; only the crane's and the wires' own share may stand there.
-      assertTrue(notVegetation <= zoneSites, f);
-      assertTrue(fallInWrong <= fallIn, f);
+      // Issue 9: no site on a tower or a crane (the labelling step, docs/labelling.md) and every
+      // fall-in site at a labelled tree of that height. Sites on wire points with labelled
+      // vegetation within 0.3 m mark that vegetation (the wire finder measures such points);
+      // sites on vendor class 1 lie in a tree belt the vendor left unclassified (AHN's class 1
+      // holds its vegetation; docs/labelling.md) and are reported, not held to 0.
+      assertEquals(0, manMade, f);
+      assertEquals(0, fallInWrong, f);
+      assertEquals(notAtVegetation, classOne, f);
     }
     assertTrue(labelled.sites().size() >= 3, "labelled sites: " + labelled.sites().size());
   }

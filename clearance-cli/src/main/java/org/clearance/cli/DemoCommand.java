@@ -9,6 +9,7 @@ import java.util.Optional;
 import java.util.concurrent.Callable;
 import org.clearance.CheckInputs;
 import org.clearance.ClearanceCheck;
+import org.clearance.OutFolder;
 import org.clearance.examples.ClassificationMode;
 import org.clearance.examples.DemoCorridor;
 import org.clearance.examples.DemoOptions;
@@ -77,6 +78,7 @@ public final class DemoCommand implements Callable<Integer> {
       options = options.withPointDensity(density);
     }
     options = options.withMode(mode());
+    OutFolder.check(out, "--out");
     Path input = out.resolve("input");
     DemoCorridor.DemoFiles files = DemoCorridor.write(input, options);
     console.printf(Locale.ROOT, "demo corridor written to %s (%,d points)%n",

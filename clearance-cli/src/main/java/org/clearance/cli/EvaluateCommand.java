@@ -6,9 +6,11 @@ import java.nio.file.Path;
 import java.util.List;
 import java.util.concurrent.Callable;
 import org.clearance.InputException;
+import org.clearance.OutFolder;
 import org.clearance.RunFolder;
 import org.clearance.clearance.NearPointFile;
 import org.clearance.clearance.NearPointReader;
+import org.clearance.clearance.UncertaintyFile;
 import org.clearance.report.ReportOptions;
 import org.clearance.report.ReportStage;
 import org.clearance.rules.RuleProfile;
@@ -36,14 +38,14 @@ import picocli.CommandLine;
       "Applies a rule profile to a finished run folder's stored distances and writes its work "
           + "list and reports again, without reading the survey.",
       "Without --out the folder's outputs are replaced; with --out a new folder gets copies of "
-          + "model.json, near-points.bin and conductors.csv and the new outputs."
+          + "model.json, near-points.bin, conductors.csv and uncertainty.csv and the new outputs."
     },
     mixinStandardHelpOptions = true)
 public final class EvaluateCommand implements Callable<Integer> {
 
   /** Files a run folder holds from the check that the evaluation carries over. */
   static final List<String> MEASURED = List.of(RunModel.FILE_NAME, NearPointFile.FILE_NAME,
-      "conductors.csv");
+      "conductors.csv", UncertaintyFile.FILE_NAME);
 
   @Parameters(paramLabel = "RUN_DIR", description = "Run folder of a finished check.")
   Path runDir;
@@ -68,6 +70,9 @@ public final class EvaluateCommand implements Callable<Integer> {
     if (!Files.isDirectory(runDir)) {
       throw new InputException(runDir, null, null, "not a folder");
     }
+    if (out != null) {
+      OutFolder.check(out, "--out");
+    }
     boolean inPlace = out == null || sameFolder(out, runDir);
     try (RunFolder source = RunFolder.open(runDir, "RUN_DIR")) {
       Path dir = source.target();
@@ -79,6 +84,15 @@ public final class EvaluateCommand implements Callable<Integer> {
         }
       }
       RuleProfile profile = RuleProfiles.byNameOrPath(rules);
+      Path uncertainty = dir.resolve(UncertaintyFile.FILE_NAME);
+      if (!Double.isNaN(profile.coverageFactor()) && !Files.isRegularFile(uncertainty)) {
+        // named here, in the source folder, not later in the staging folder
+        throw new InputException(runDir.resolve(UncertaintyFile.FILE_NAME), null, null,
+            "rule profile " + profile.name() + " asks for findings at a "
+                + profile.confidencePercent() + " % confidence level, but the run folder has "
+                + "no " + UncertaintyFile.FILE_NAME + " (made by an older version): run the "
+                + "check again");
+      }
       RunRecord.Builder record = RunRecord.builder("evaluate", ClearanceCommand.version());
       record.parameter("run_dir", runDir.toString()).parameter("rules", rules)
           .parameter("units", units.symbol()).profile(profile);

@@ -6,6 +6,8 @@ import java.nio.file.Path;
 import java.util.Locale;
 import java.util.concurrent.Callable;
 import org.clearance.InputException;
+import org.clearance.OutFolder;
+import org.clearance.clearance.SpanStatus;
 import org.clearance.ground.GroundModel;
 import org.clearance.ground.GroundModelBuilder;
 import org.clearance.ground.GroundOptions;
@@ -68,9 +70,7 @@ public final class WiresCommand implements Callable<Integer> {
       throw new CommandLine.ParameterException(spec.commandLine(),
           "--threads must be 1 to 256: " + n);
     }
-    if (Files.exists(out) && !Files.isDirectory(out)) {
-      throw new InputException(out, null, "--out", "exists and is not a folder");
-    }
+    OutFolder.check(out, "--out");
     Survey s = Survey.open(inputs.survey, units.choice());
     SpanLayout layout = SpanLayout.build(StructureReader.read(inputs.structures, s.units()),
         inputs.specs());
@@ -113,10 +113,9 @@ public final class WiresCommand implements Callable<Integer> {
     for (SpanWires sw : result.spans()) {
       long fitted = sw.conductors().stream().filter(FittedConductor::isFitted).count();
       rows += sw.conductors().size();
-      // the words of check's span status: nothing fitted is NOT ASSESSED, a phase missing is
-      // INCOMPLETE (check says the same of that span)
-      String word = fitted == 0 ? "NOT ASSESSED" : sw.reason().isPresent() ? "INCOMPLETE"
-          : "all phases fitted";
+      // the status words of every output, from the one place that judges a span's wires
+      // (check starts from the same status and may only make it worse)
+      String word = SpanStatus.ofWires(sw).word();
       b.append(String.format(Locale.ROOT, "span %s: %s, %d of %d conductors fitted, %s%n",
           sw.span().id(), word, fitted,
           sw.conductors().size(), sw.labelled() ? "wires labelled in the survey"

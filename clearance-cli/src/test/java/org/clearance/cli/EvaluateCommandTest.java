@@ -98,7 +98,7 @@ class EvaluateCommandTest {
     List<Map<String, String>> spans = CsvText.rows(Files.readString(c.resolve("spans.csv")));
     assertEquals("ASSESSED", spans.get(1).get("status"));
     assertEquals("0", spans.get(1).get("n_sites"));
-    assertEquals("NOT_ASSESSED", spans.get(0).get("status"), "still not assessed");
+    assertEquals("NOT ASSESSED", spans.get(0).get("status"), "still not assessed");
     // the measured files were copied, the source folder left alone
     for (Path dir : List.of(a, b, c)) {
       assertEquals(-1L, Files.mismatch(run.resolve("near-points.bin"),

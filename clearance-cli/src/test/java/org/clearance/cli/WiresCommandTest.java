@@ -21,8 +21,10 @@ class WiresCommandTest {
   private static final String TILE =
       SurveyTestFiles.open("corridor_12AN2_20_thinned.las").toString();
   private static final String HEADER = "span_id,from_structure,to_structure,conductor,n_points,"
-      + "coverage_pct,rms_m,max_gap_m,attach_a_x,attach_a_y,attach_a_z,attach_b_x,attach_b_y,"
-      + "attach_b_z,catenary_c_m,sag_mid_m,status,reason";
+      + "coverage_pct,rms_m,max_gap_m,attach_a_x_m,attach_a_y_m,attach_a_z_m,attach_b_x_m,"
+      + "attach_b_y_m,attach_b_z_m,catenary_c_m,sag_mid_m,status,reason,low_x_m,low_y_m,low_z_m,"
+      + "first_point_x_m,first_point_y_m,first_point_z_m,last_point_x_m,last_point_y_m,"
+      + "last_point_z_m";
 
   @TempDir Path dir;
 
@@ -53,10 +55,10 @@ class WiresCommandTest {
     assertTrue(rows.stream().filter(s -> s.startsWith("OV380/OV-11-OV-12,"))
         .allMatch(s -> s.contains(",not_assessed,")));
     for (String row : rows.subList(1, rows.size())) {
-      assertEquals(18, row.split(",", -1).length - (row.contains("\"") ? countCommasInQuotes(row)
+      assertEquals(27, row.split(",", -1).length - (row.contains("\"") ? countCommasInQuotes(row)
           : 0), row);
     }
-    assertTrue(r.out().contains("span OV380/OV-12-OV-13: all phases fitted, 14 of 14 "
+    assertTrue(r.out().contains("span OV380/OV-12-OV-13: ASSESSED, 14 of 14 "
         + "conductors fitted,"
         + " wires labelled in the survey"), r.out());
     assertTrue(r.out().contains("span OV380/OV-11-OV-12: NOT ASSESSED"), r.out());
@@ -95,11 +97,11 @@ class WiresCommandTest {
     assertEquals(0, r.exit(), r.err());
     List<String> rows = rows();
     assertTrue(rows.contains("OV380/OV-12-OV-13,OV-12,OV-13,X9,0,,,,,,,,,,,,not_assessed,"
-        + "\"no wire found near offset 25.0 m, 20.0 m above the structures' ground\""),
+        + "\"no wire found near offset 25.0 m, 20.0 m above the structures' ground\",,,,,,,,,"),
         String.join("\n", rows));
     assertTrue(rows.stream().filter(s -> s.startsWith("OV380/OV-20-OV-21,")).allMatch(s -> s
         .endsWith("not_assessed,no survey points in the span's corridor (the span lies outside"
-            + " the survey)")), String.join("\n", rows));
+            + " the survey),,,,,,,,,")), String.join("\n", rows));
     // the same word as check gives that span (issue 11): a phase missing is INCOMPLETE
     assertTrue(r.out().contains("span OV380/OV-12-OV-13: INCOMPLETE, 14 of 15 conductors"),
         r.out());
@@ -136,6 +138,6 @@ class WiresCommandTest {
         FIXTURE.resolve("line.yaml").toString(), "--out", file.toString(), "--survey-units",
         "m");
     assertEquals(ClearanceCommand.EXIT_INPUT, r.exit());
-    assertTrue(r.err().contains("exists and is not a folder"), r.err());
+    assertTrue(r.err().contains(file + ", field '--out': is a file, not a folder"), r.err());
   }
 }

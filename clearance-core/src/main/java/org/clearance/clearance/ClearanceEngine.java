@@ -167,7 +167,7 @@ public final class ClearanceEngine {
 
   /**
    * Streams all points of the source and measures them; in a survey whose vegetation is
-   * inferred, the points the wire finder set aside (wire, isolated airborne) are counted, not
+   * inferred, the points set aside (wire, isolated airborne, man-made object) are counted, not
    * measured. Every other unclassified point near a conductor is measured as vegetation.
    *
    * @param setAside the wire finder's points set aside ({@code WireResult.setAside()})
@@ -200,11 +200,13 @@ public final class ClearanceEngine {
       long exConductor = 0;
       long exStructure = 0;
       long exAirborne = 0;
+      long exObject = 0;
       long unread = 0;
       double unreadNearest = Double.POSITIVE_INFINITY;
       java.util.BitSet unreadClasses = new java.util.BitSet(256);
       for (EngineWorker w : workers) {
         exAirborne += w.excludedAirborne[i];
+        exObject += w.excludedObject[i];
         unread += w.unreadCount[i];
         unreadNearest = Math.min(unreadNearest, w.unreadNearest[i]);
         unreadClasses.or(w.unreadClasses[i]);
@@ -227,7 +229,8 @@ public final class ClearanceEngine {
       }
       result.add(new SpanClearance(p.model.span().id(), minima, measured, kept, exConductor,
           exStructure, exAirborne, new SpanClearance.Unread(unread,
-              unread > 0 ? unreadNearest : Double.NaN, unreadClasses.stream().boxed().toList())));
+              unread > 0 ? unreadNearest : Double.NaN, unreadClasses.stream().boxed().toList()),
+          exObject));
     }
     return result;
   }

@@ -52,6 +52,7 @@ final class EngineWorker implements Consumer<PointChunk> {
   final long[] excludedConductor;
   final long[] excludedStructure;
   final long[] excludedAirborne;
+  final long[] excludedObject;
   /** Per span: points of classes not read that may be vegetation within the keep radius, the
    * nearest of them (m) and their classes. */
   final long[] unreadCount;
@@ -83,6 +84,7 @@ final class EngineWorker implements Consumer<PointChunk> {
     excludedConductor = new long[n];
     excludedStructure = new long[n];
     excludedAirborne = new long[n];
+    excludedObject = new long[n];
     unreadCount = new long[n];
     unreadNearest = new double[n];
     java.util.Arrays.fill(unreadNearest, Double.POSITIVE_INFINITY);
@@ -160,7 +162,11 @@ final class EngineWorker implements Consumer<PointChunk> {
         }
         if (reason != SetAside.Reason.NONE) {
           if (p.inBox(s, e, z)) {
-            (reason == SetAside.Reason.WIRE ? excludedConductor : excludedAirborne)[sp]++;
+            (switch (reason) {
+              case WIRE -> excludedConductor;
+              case OBJECT -> excludedObject;
+              default -> excludedAirborne;
+            })[sp]++;
           }
           notVegetation = true;
           continue;

@@ -19,10 +19,13 @@ import java.util.Optional;
  *     as isolated airborne points (birds, high noise)
  * @param unread points of classes the check does not read that may be vegetation
  *     ({@link VegetationSelector#unread}) within the keep radius of a conductor
+ * @param excludedAsObject points of an unclassified survey inside the measuring box set aside
+ *     as parts of man-made objects (the labelling step's evidence, docs/labelling.md)
  */
 public record SpanClearance(
     String spanId, List<ConditionMinimum> minima, long pointsMeasured, long pointsKept,
-    long excludedAsConductor, long excludedAsStructure, long excludedAsAirborne, Unread unread) {
+    long excludedAsConductor, long excludedAsStructure, long excludedAsAirborne, Unread unread,
+    long excludedAsObject) {
 
   /**
    * Points not read as vegetation that may be vegetation, near the conductors.
@@ -40,19 +43,27 @@ public record SpanClearance(
     }
   }
 
+  /** A span's measurement without man-made objects set aside. */
+  public SpanClearance(String spanId, List<ConditionMinimum> minima, long pointsMeasured,
+      long pointsKept, long excludedAsConductor, long excludedAsStructure,
+      long excludedAsAirborne, Unread unread) {
+    this(spanId, minima, pointsMeasured, pointsKept, excludedAsConductor, excludedAsStructure,
+        excludedAsAirborne, unread, 0);
+  }
+
   /** A span's measurement without unread points. */
   public SpanClearance(String spanId, List<ConditionMinimum> minima, long pointsMeasured,
       long pointsKept, long excludedAsConductor, long excludedAsStructure,
       long excludedAsAirborne) {
     this(spanId, minima, pointsMeasured, pointsKept, excludedAsConductor, excludedAsStructure,
-        excludedAsAirborne, Unread.NONE);
+        excludedAsAirborne, Unread.NONE, 0);
   }
 
   /** A span's measurement without airborne points set aside. */
   public SpanClearance(String spanId, List<ConditionMinimum> minima, long pointsMeasured,
       long pointsKept, long excludedAsConductor, long excludedAsStructure) {
     this(spanId, minima, pointsMeasured, pointsKept, excludedAsConductor, excludedAsStructure,
-        0, Unread.NONE);
+        0, Unread.NONE, 0);
   }
 
   public SpanClearance {

@@ -107,4 +107,31 @@ public final class TextFiles {
     String text = out.flip().toString();
     return text.startsWith(BOM) ? text.substring(BOM.length()) : text;
   }
+
+  /**
+   * Refuses a file of the wrong kind before it is parsed as a table: a YAML mapping (a line
+   * specification or a rule profile given where a CSV table is expected) has a first meaningful
+   * line {@code key: value} and no comma, which no table header has.
+   *
+   * @param file the file, for the message
+   * @param text its text
+   * @param expected what was expected, e.g. "the structures table (CSV or GeoJSON)"
+   * @throws InputException naming the file and what it looks like
+   */
+  public static void refuseYamlForTable(String file, String text, String expected) {
+    String[] lines = text.split("\n", 50);
+    for (int n = 0; n < lines.length; n++) {
+      String t = lines[n].strip();
+      if (t.isEmpty() || t.startsWith("#")) {
+        continue;
+      }
+      if (!t.contains(",") && (t.matches("[A-Za-z_][A-Za-z0-9_-]*\\s*:(\\s.*)?")
+          || t.equals("---"))) {
+        throw new InputException(file, "line " + (n + 1), null, "expected " + expected + ", but this "
+            + "looks like a YAML file (a line specification or rule profile?); check which "
+            + "file goes with which option");
+      }
+      return;
+    }
+  }
 }

@@ -433,8 +433,13 @@ public final class YamlMap {
     } else if (n.getTag().equals(Tag.NULL)) {
       return "nothing";
     }
-    return "'" + ((ScalarNode) n).getValue() + "'";
+    String v = ((ScalarNode) n).getValue();
+    return v.length() <= SHOWN_TEXT ? "'" + v + "'"
+        : "the text '" + v.substring(0, SHOWN_TEXT) + "...' (" + v.length() + " characters)";
   }
+
+  /** Longest text of an input quoted whole in a message (a whole wrong file is not echoed). */
+  private static final int SHOWN_TEXT = 60;
 
   /** A number for messages, four significant digits. */
   public static String fmt(double x) {

@@ -39,6 +39,21 @@ public final class ConductorLibrary {
   private static final String TRADE = "values of bare overhead conductors, common practice, no"
       + " source";
   /**
+   * Where the resistance limits come from: 2 500 kcmil aluminium about 0.023 ohm/km, #8 copper
+   * about 2.1 ohm/km and #6 ACSR about 2.2 ohm/km at 25 degC (handbook tables, from memory); the
+   * range leaves a factor of about 4 either side, so that only a unit slip (ohm per metre or per
+   * mile, an exponent typo) is refused.
+   */
+  private static final String RESISTANCE_SOURCE = "2 500 kcmil aluminium about 0.023 to #8 "
+      + "copper about 2.1 ohm/km, from memory, a factor of 4 either side";
+  /**
+   * Solar absorptivity and infrared emissivity of a bare conductor: about 0.23 new to 0.91
+   * weathered (IEEE Std 738-2012, clause on conductor surface, from memory); 0.2 allows a very
+   * bright new surface.
+   */
+  private static final String SURFACE_SOURCE = "bare conductors about 0.23 new to 0.91 "
+      + "weathered, IEEE Std 738-2012, from memory";
+  /**
    * Plausible range of every number column, in the column's unit. Sizes span the smallest
    * distribution wire (about 3 mm, 5 mm^2) to the largest transmission conductors (about 60 mm,
    * 2 500 mm^2). Moduli span aluminium alloys (55-60 GPa) to steel (200 GPa). Expansion spans
@@ -54,7 +69,20 @@ public final class ConductorLibrary {
       Map.entry("thermal_expansion_per_c", new ValueRange(5e-7, 3e-5, "1/degC", TRADE)),
       Map.entry("core_area_mm2", new ValueRange(0.5, 2000, "mm^2", TRADE)),
       Map.entry("core_modulus_gpa", new ValueRange(20, 250, "GPa", TRADE)),
-      Map.entry("core_thermal_expansion_per_c", new ValueRange(1e-7, 3e-5, "1/degC", TRADE)));
+      Map.entry("core_thermal_expansion_per_c", new ValueRange(1e-7, 3e-5, "1/degC", TRADE)),
+      Map.entry("ac_resistance_25c_ohm_per_km", new ValueRange(0.005, 10, "ohm/km",
+          RESISTANCE_SOURCE)),
+      Map.entry("ac_resistance_75c_ohm_per_km", new ValueRange(0.005, 12, "ohm/km",
+          RESISTANCE_SOURCE)),
+      Map.entry("absorptivity", new ValueRange(0.2, 1, "", SURFACE_SOURCE)),
+      Map.entry("emissivity", new ValueRange(0.2, 1, "", SURFACE_SOURCE)));
+  /**
+   * Largest plausible ratio of the resistance at 75 degC to the one at 25 degC: aluminium's
+   * temperature coefficient 0.00403 1/K (IEC 60889, from memory) gives 1 + 50 x 0.004 = 1.20,
+   * copper's 0.00393 gives 1.20; AC effects in steel-cored conductors add a few per cent. 1.35
+   * leaves room for them and refuses a swapped or mistyped column.
+   */
+  static final double MAX_RESISTANCE_RATIO = 1.35;
   /**
    * Plausible mass per volume of a whole conductor, kg/m^3: aluminium alloys are 2 700, copper
    * 8 900 (handbook densities, from memory); a stranded conductor lies between, lay and grease
@@ -178,6 +206,8 @@ public final class ConductorLibrary {
   private static Map<String, ConductorType> parseFile(Path file) {
     String text = TextFiles.read(file, TextFiles.MAX_TABLE_BYTES,
         "a conductor table (CSV text)");
+    TextFiles.refuseYamlForTable(file.toString(), text, "a conductor table (CSV with a header "
+        + "line)");
     try {
       return parse(new BufferedReader(new StringReader(text)), file.toString());
     } catch (IOException e) {
@@ -282,11 +312,12 @@ public final class ConductorLibrary {
       throw new InputException(t.file(), row.where(), THERMAL.get(1),
           "the resistance at 75 degC must not be below the one at 25 degC");
     }
-    for (int k = 2; k < 4; k++) {
-      if (v[k] > 1) {
-        throw new InputException(t.file(), row.where(), THERMAL.get(k),
-            "must be at most 1 (a fraction): " + text(t, row, THERMAL.get(k)));
-      }
+    if (v[1] > v[0] * MAX_RESISTANCE_RATIO) {
+      throw new InputException(t.file(), row.where(), THERMAL.get(1), String.format(Locale.ROOT,
+          "%s ohm/km is %s times the resistance at 25 degC (%s ohm/km); a conductor's "
+          + "resistance rises by about 1.2 times from 25 to 75 degC (at most %s here): check "
+          + "the two columns", ValueRange.format(v[1]), ValueRange.format(v[1] / v[0]),
+          ValueRange.format(v[0]), ValueRange.format(MAX_RESISTANCE_RATIO)));
     }
     String src = text(t, row, "source_thermal");
     return Optional.of(new ConductorThermal(v[0] * 1e-3, v[1] * 1e-3, v[2], v[3],

@@ -87,6 +87,10 @@ public final class StructureReader {
     String lower = name.toLowerCase(Locale.ROOT);
     boolean json = lower.endsWith(".geojson") || lower.endsWith(".json")
         || text.stripLeading().startsWith("{");
+    if (!json) {
+      TextFiles.refuseYamlForTable(name, text, "the structures table (CSV with a header line, "
+          + "or GeoJSON)");
+    }
     List<RawRecord> records = json
         ? GeoJsonStructures.records(text, name)
         : csvRecords(text, name);

@@ -43,8 +43,8 @@ public final class ConsoleSummary {
     long clear = run.spans().stream().filter(SpanResult::clear).count();
     if (ruled) {
       line(b, "%d span%s: %d %s, %d %s, %d %s (%d with sites, %d clear)", run.spans().size(),
-          run.spans().size() == 1 ? "" : "s", na, word(SpanStatus.NOT_ASSESSED), inc,
-          word(SpanStatus.INCOMPLETE), as, word(SpanStatus.ASSESSED), as - clear, clear);
+          run.spans().size() == 1 ? "" : "s", na, SpanStatus.NOT_ASSESSED.word(), inc,
+          SpanStatus.INCOMPLETE.word(), as, SpanStatus.ASSESSED.word(), as - clear, clear);
       Map<String, int[]> perZone = HtmlReport.sitesPerZone(run.sites());
       List<String> parts = new ArrayList<>();
       perZone.forEach((z, c) -> parts.add(z + " " + c[1]));
@@ -64,7 +64,7 @@ public final class ConsoleSummary {
         continue;
       }
       b.append('\n');
-      line(b, "%s (never clear):", word(s));
+      line(b, "%s (never clear):", s.word());
       int w = width(list);
       for (SpanResult r : list) {
         line(b, "  %-" + w + "s  %s", r.id(), ruled ? r.reason() : r.span().reason());
@@ -81,7 +81,7 @@ public final class ConsoleSummary {
       String row = "  %4s  %-" + w + "s  %-12s  %-" + zw + "s  %5s  %s";
       line(b, row, "rank", "span", "status", "most urgent zone", "sites", u.column("deficit"));
       for (SpanResult r : shown) {
-        line(b, row, Integer.toString(r.rank().orElse(0)), r.id(), word(r.status()),
+        line(b, row, Integer.toString(r.rank().orElse(0)), r.id(), r.status().word(),
             r.worst().map(CutSite::zone).orElse("-"),
             r.sitesCounted() ? Integer.toString(r.sites().size()) : "-",
             r.worst().map(x -> u.lengthText(x.deficitM())).orElse("-"));
@@ -95,14 +95,6 @@ public final class ConsoleSummary {
     line(b, "A screening aid: the utility's rules, the local regulator and qualified "
         + "line-clearance personnel govern; workers keep their minimum approach distances.");
     return b.toString();
-  }
-
-  /**
-   * The one word of a status used by every output: {@code NOT ASSESSED}, {@code INCOMPLETE},
-   * {@code ASSESSED} (spans.csv writes the same with an underscore).
-   */
-  public static String word(SpanStatus s) {
-    return s.name().replace('_', ' ');
   }
 
   private static long count(RunAssessment run, SpanStatus s) {

@@ -64,8 +64,8 @@ public final class CsvOutputs {
         u.column("min_clearance_ice"), "governing_condition", "worst_zone", "n_sites", "rank",
         "worst_priority", u.column("worst_deficit"), "nominal_voltage_kv", "points_checked",
         "points_not_assessed", "n_possible_violation_sites", "points_set_aside_wire",
-        "points_set_aside_structure", "points_set_aside_airborne", "survey_temperature_c",
-        "survey_temperature_sigma_c", "survey_temperature_source",
+        "points_set_aside_structure", "points_set_aside_airborne", "points_set_aside_object",
+        "survey_temperature_c", "survey_temperature_sigma_c", "survey_temperature_source",
         "section_survey_temperature_c", "section_survey_temperature_sigma_c");
   }
 
@@ -121,7 +121,7 @@ public final class CsvOutputs {
       f.add(t(s.from().id()));
       f.add(t(s.to().id()));
       f.add(u.lengthText(s.context().lengthM()));
-      f.add(r.status().name());
+      f.add(r.status().word());
       f.add(t(r.reason()));
       f.add(Integer.toString(r.conductorsFitted()));
       for (String group : List.of("survey", "hot", "blowout", "ice")) {
@@ -141,6 +141,7 @@ public final class CsvOutputs {
       f.add(Long.toString(s.setAside().wire()));
       f.add(Long.toString(s.setAside().structure()));
       f.add(Long.toString(s.setAside().airborne()));
+      f.add(Long.toString(s.setAside().object()));
       SpanRecord.SurveyTemperature st = s.temperature();
       f.add(temperature(st.spanC()));
       f.add(temperature(st.spanSigmaC()));

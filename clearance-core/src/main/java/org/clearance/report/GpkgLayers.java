@@ -186,7 +186,7 @@ final class GpkgLayers {
       e.add(xy[2], xy[3]);
       features.add(new Feature(GpkgGeometry.lineString(srs, xy, false), values(s.id(),
           s.context().lineId(), s.from().id(), s.to().id(), u.length(s.context().lengthM()),
-          r.status().name(), r.reason(), (long) r.conductorsFitted(),
+          r.status().word(), r.reason(), (long) r.conductorsFitted(),
           within(u, r.minimumOfGroup("survey"), keep), within(u, r.minimumOfGroup("hot"), keep),
           within(u, r.minimumOfGroup("blowout"), keep), within(u, r.minimumOfGroup("ice"), keep),
           r.governingMinimum().map(ConditionMinimum::condition).orElse(null),

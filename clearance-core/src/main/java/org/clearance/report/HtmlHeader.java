@@ -88,7 +88,7 @@ final class HtmlHeader {
           .append("</td><td class=\"hash\">").append(Html.esc(i.sha256())).append("</td></tr>");
     }
     run.profile().ifPresent(p -> b.append("<tr><td>rule profile</td><td>")
-        .append(Html.esc(p.origins().get(0).location())).append("</td><td class=\"num\">")
+        .append(Html.esc(p.origins().get(0).shownLocation())).append("</td><td class=\"num\">")
         .append("&ndash;</td><td class=\"hash\">").append(Html.esc(p.contentHash()))
         .append(" <small>(of the profile texts)</small></td></tr>"));
     b.append("</tbody></table></section>\n");

@@ -15,6 +15,7 @@ import org.clearance.clearance.SpanStatus;
 import org.clearance.io.AtomicFiles;
 import org.clearance.rules.SpanRules;
 import org.clearance.rules.ZoneEvaluator;
+import org.clearance.run.RunFacts;
 import org.clearance.run.SpanRecord;
 
 /**
@@ -39,8 +40,7 @@ public final class HtmlReport {
   /** The page's text. */
   public static String page(RunAssessment run, ReportOptions options, Instant generated) {
     OutputUnit u = new OutputUnit(options.outputUnit());
-    String day = run.model().facts().runDay().map(Object::toString)
-        .orElse(generated.atZone(java.time.ZoneOffset.UTC).toLocalDate().toString());
+    String day = RunFacts.runDay(generated).toString();
     String title = HtmlHeader.title(run);
     StringBuilder b = new StringBuilder(1 << 16);
     b.append("<!DOCTYPE html>\n<html lang=\"en\"><head><meta charset=\"utf-8\">")
@@ -165,15 +165,14 @@ public final class HtmlReport {
    * assessed span with sites from one without.
    */
   static String statusBadge(SpanResult r) {
-    if (r.status() == SpanStatus.NOT_ASSESSED) {
-      return "<span class=\"badge na\">NOT ASSESSED</span>";
-    }
-    if (r.status() == SpanStatus.INCOMPLETE) {
-      return "<span class=\"badge inc\">INCOMPLETE</span>";
-    }
-    return r.sites().isEmpty() ? "<span class=\"badge clear\">ASSESSED</span>"
-        : "<span class=\"badge found\">ASSESSED</span>";
+    String cls = switch (r.status()) {
+      case NOT_ASSESSED -> "na";
+      case INCOMPLETE -> "inc";
+      default -> r.sites().isEmpty() ? "clear" : "found";
+    };
+    return "<span class=\"badge " + cls + "\">" + r.status().word() + "</span>";
   }
+
 
   static String swatch(CutSite s) {
     return "<i class=\"sw\" style=\"background:" + Palette.site(s) + "\"></i>";
@@ -217,6 +216,12 @@ public final class HtmlReport {
         if (k > 1.05 || k < 0.95) {
           b.append(Html.f(" (%s stretched &times;%.1f against chainage)",
               e.getKey().equals("Plan") ? "offsets" : "heights", k));
+        }
+        if (e.getKey().equals("Profile") && r.sites().stream()
+            .anyMatch(site -> site.kind() == CutSite.Kind.FALL_IN)) {
+          b.append("; a fall-in tree is a faint dashed stem at its place along the span: it "
+              + "stands at its offset from the centre line (table above, plan view), which a "
+              + "profile cannot show, so a stem drawn across the wires is not under them");
         }
         b.append("</figcaption></figure>");
       }

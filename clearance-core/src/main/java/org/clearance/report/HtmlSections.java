@@ -25,10 +25,10 @@ final class HtmlSections {
     long clear = run.spans().stream().filter(SpanResult::clear).count();
     b.append("<section id=\"summary\"><h2>Summary</h2><div class=\"tiles\">");
     tile(b, "spans in the run", run.spans().size(), "");
-    tile(b, "NOT ASSESSED", na, na > 0 ? "na" : "");
-    tile(b, "INCOMPLETE", inc, inc > 0 ? "inc" : "");
-    tile(b, "ASSESSED, with sites", as - clear, as - clear > 0 ? "found" : "");
-    tile(b, "ASSESSED, clear", clear, "clear");
+    tile(b, SpanStatus.NOT_ASSESSED.word(), na, na > 0 ? "na" : "");
+    tile(b, SpanStatus.INCOMPLETE.word(), inc, inc > 0 ? "inc" : "");
+    tile(b, SpanStatus.ASSESSED.word() + ", with sites", as - clear, as - clear > 0 ? "found" : "");
+    tile(b, SpanStatus.ASSESSED.word() + ", clear", clear, "clear");
     b.append("</div>");
     b.append(Html.f("<p class=\"note\">Each span is counted once, by its status: %d + %d + %d "
         + "+ %d = %d. %d cut sites in %d spans (INCOMPLETE spans may have sites too).</p>", na,
@@ -119,7 +119,7 @@ final class HtmlSections {
           .append("</td><td class=\"num\">")
           .append(s.points().isPresent() ? Integer.toString(s.points().getAsInt()) : "tree")
           .append("</td><td class=\"num\">").append(Html.years(s.yearsToViolation()))
-          .append("</td><td>").append(verdict(s, u)).append("</td></tr>");
+          .append("</td><td class=\"verdict\">").append(verdict(s, u)).append("</td></tr>");
     }
     b.append("</tbody></table>");
   }
@@ -175,7 +175,7 @@ final class HtmlSections {
         + "<th>source</th></tr></thead><tbody>");
     for (ProfileOrigin o : p.origins()) {
       b.append("<tr><td>").append(Html.esc(o.name())).append("</td><td>")
-          .append(Html.esc(o.location())).append("</td><td>").append(Html.esc(o.source().strip()))
+          .append(Html.esc(o.shownLocation())).append("</td><td>").append(Html.esc(o.source().strip()))
           .append("</td></tr>");
     }
     b.append("</tbody></table><table class=\"zones\"><thead><tr><th>priority</th><th>zone</th>"

@@ -38,7 +38,8 @@ final class HtmlStyle {
       "table{border-collapse:collapse;width:100%;margin:8px 0;background:#fff;font-size:13px}",
       "th{text-align:left;font-weight:600;border-bottom:2px solid var(--ink);padding:4px 6px}",
       "td{border-bottom:1px solid #ebe7dd;padding:3px 6px;vertical-align:top}",
-      "table.sites td:first-child,table.spans td:nth-child(2){white-space:nowrap}",
+      "table.sites td:first-child,table.sites td:nth-child(2),table.spans td:nth-child(2)"
+          + "{white-space:nowrap}",
       "td.num{text-align:right;font-variant-numeric:tabular-nums;white-space:nowrap}",
       "tr.na td{background:#eceef2}tr.inc td{background:#f6f0df}",
       ".badge{display:inline-block;font-size:11px;font-weight:700;letter-spacing:.05em;"
@@ -71,8 +72,13 @@ final class HtmlStyle {
       "figure,.figblock{break-inside:avoid;page-break-inside:avoid}",
       "h2,h3{break-after:avoid;page-break-after:avoid}",
       "tr{break-inside:avoid}",
+      "td.verdict{min-width:15em}",
+      // printed, a site table of a dozen columns must fit the A4 width: smaller type, tighter
+      // cells, and the verdict allowed to wrap in a wide enough column
       "@media print{body{background:#fff;max-width:none;padding:0;font-size:12px}"
-          + ".attention{background:#fff}section.span{break-before:page}}");
+          + ".attention{background:#fff}section.span{break-before:page}"
+          + "table{font-size:10px}table.sites{font-size:8.5px}"
+          + "table.sites th,table.sites td{padding:2px 3px}td.verdict{min-width:13em}}");
 
   /**
    * Rules for printed pages: A4 with margins, and in the page margins the line and run (top) and

@@ -328,11 +328,11 @@ final class SvgSpanViews {
               + "stroke=\"%s\" stroke-width=\"1.5\"/>", Html.px(x), Html.px(y),
               Html.px(r * sx.pixelsPerUnit()), Html.px(r * sy.pixelsPerUnit()), colour));
         } else {
-          // beside the line, not under it: a dashed stem, its offset in the tooltip and the
-          // cross-section below the views draws it where it stands
+          // beside the line, not under it: a faint dashed stem, its offset in the label and
+          // the tooltip; the cross-section below the views draws it where it stands
           b.append(Html.f("<line x1=\"%s\" x2=\"%s\" y1=\"%s\" y2=\"%s\" stroke=\"%s\" "
-              + "stroke-width=\"2\" stroke-dasharray=\"3 3\"><title>%s: tree %s m %s of the "
-              + "centre line</title></line>", Html.px(x), Html.px(x),
+              + "stroke-width=\"2\" stroke-dasharray=\"3 3\" opacity=\"0.6\"><title>%s: tree "
+              + "%s m %s of the centre line</title></line>", Html.px(x), Html.px(x),
               Html.px(sy.at(s.z() - s.vegHeightM())), Html.px(y), colour,
               Html.esc(s.siteId()), OutputUnit.fixed(unit.length(s.offsetM()), 1),
               s.side().word()));

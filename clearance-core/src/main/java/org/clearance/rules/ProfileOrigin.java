@@ -21,4 +21,16 @@ public record ProfileOrigin(
     Objects.requireNonNull(cautions, "cautions");
     Objects.requireNonNull(location, "location");
   }
+
+  /**
+   * The location as a report shows it: {@code builtin:<name>}, or only the file's name (a report
+   * names files, not folders of the machine it ran on; the file's content hash identifies it).
+   */
+  public String shownLocation() {
+    if (location.startsWith("builtin:")) {
+      return location;
+    }
+    int cut = Math.max(location.lastIndexOf('/'), location.lastIndexOf('\\'));
+    return location.substring(cut + 1);
+  }
 }

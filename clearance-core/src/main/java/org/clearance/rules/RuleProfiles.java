@@ -51,7 +51,7 @@ public final class RuleProfiles {
    */
   public static RuleProfile builtin(String name) {
     if (!names().contains(name)) {
-      throw new InputException("--profile", null, null, "no built-in rule profile '" + name
+      throw new InputException("--rules", null, null, "no built-in rule profile '" + name
           + "'; built-in profiles: " + String.join(", ", names()));
     }
     return RuleProfileReader.readBuiltin(name);
@@ -67,7 +67,7 @@ public final class RuleProfiles {
     }
     Path path = Path.of(nameOrPath);
     if (!Files.isRegularFile(path)) {
-      throw new InputException("--profile", null, null, "'" + nameOrPath + "' is neither a "
+      throw new InputException("--rules", null, null, "'" + nameOrPath + "' is neither a "
           + "built-in rule profile (" + String.join(", ", names()) + ") nor a file");
     }
     return RuleProfileReader.read(path);

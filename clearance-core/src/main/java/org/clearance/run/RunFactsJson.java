@@ -58,7 +58,6 @@ final class RunFactsJson {
     o.set("last_survey_day", JsonFiles.text(f.lastSurveyDay().map(LocalDate::toString)
         .orElse(null)));
     o.put("acquisition_note", f.acquisitionNote());
-    o.set("run_day", JsonFiles.text(f.runDay().map(LocalDate::toString).orElse(null)));
     return o;
   }
 
@@ -94,7 +93,7 @@ final class RunFactsJson {
           i.integer("bytes", 0, Long.MAX_VALUE), i.str("sha256")));
     }
     return new RunFacts(lines, inputs, day(o, "first_survey_day"), day(o, "last_survey_day"),
-        o.str("acquisition_note"), day(o, "run_day"));
+        o.str("acquisition_note"));
   }
 
   private static Optional<LocalDate> day(JsonAt o, String key) {

@@ -147,7 +147,8 @@ public final class RunModelJson {
     o.put("points_measured", s.pointsMeasured()).put("points_kept", s.pointsKept());
     o.put("points_set_aside_wire", s.setAside().wire())
         .put("points_set_aside_structure", s.setAside().structure())
-        .put("points_set_aside_airborne", s.setAside().airborne());
+        .put("points_set_aside_airborne", s.setAside().airborne())
+        .put("points_set_aside_object", s.setAside().object());
     ArrayNode notes = o.putArray("notes");
     s.notes().forEach(notes::add);
     ObjectNode t = o.putObject("survey_temperature").put("source", s.temperature().source());
@@ -283,7 +284,8 @@ public final class RunModelJson {
           conductors, minima, s.integer("points_measured", 0, Long.MAX_VALUE),
           s.integer("points_kept", 0, Long.MAX_VALUE), s.strings("notes"),
           new SpanRecord.SetAsideCounts(count(s, "points_set_aside_wire"),
-              count(s, "points_set_aside_structure"), count(s, "points_set_aside_airborne")),
+              count(s, "points_set_aside_structure"), count(s, "points_set_aside_airborne"),
+              count(s, "points_set_aside_object")),
           temperature(s));
     } catch (IllegalArgumentException e) {
       throw s.error(null, e.getMessage() + RERUN);

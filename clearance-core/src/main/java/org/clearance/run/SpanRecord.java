@@ -62,15 +62,21 @@ public record SpanRecord(
 
   /**
    * Unclassified points set aside in a span instead of measured, with the reason
-   * (docs/wire-finder.md, "Points set aside").
+   * (docs/wire-finder.md, "Points set aside"; docs/labelling.md).
    *
    * @param wire on a wire
    * @param structure on a structure (within the structure radius or on its cross arms)
    * @param airborne isolated airborne points (birds, high noise)
+   * @param object parts of man-made objects (buildings, cranes, masts, fences, vehicles)
    */
-  public record SetAsideCounts(long wire, long structure, long airborne) {
+  public record SetAsideCounts(long wire, long structure, long airborne, long object) {
     /** Nothing set aside. */
-    public static final SetAsideCounts NONE = new SetAsideCounts(0, 0, 0);
+    public static final SetAsideCounts NONE = new SetAsideCounts(0, 0, 0, 0);
+
+    /** Counts without man-made objects. */
+    public SetAsideCounts(long wire, long structure, long airborne) {
+      this(wire, structure, airborne, 0);
+    }
   }
 
   /** A span without points set aside. */

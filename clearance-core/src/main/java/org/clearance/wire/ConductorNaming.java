@@ -26,9 +26,16 @@ final class ConductorNaming {
   private int addedForPosition;
   private int extraCount;
 
-  ConductorNaming(WireFinderOptions.Quality quality, Span span) {
+  private final SpanPoints points;
+
+  ConductorNaming(WireFinderOptions.Quality quality, Span span, SpanPoints points) {
     this.quality = quality;
     this.span = span;
+    this.points = points;
+  }
+
+  private Optional<WireExtent> extent(int[] members) {
+    return Optional.ofNullable(WireExtent.of(points, members, span.frame()));
   }
 
   /** Adds the parts of a wire matched to a specification position. */
@@ -75,7 +82,7 @@ final class ConductorNaming {
         Optional.empty(), new WireQuality(r.members().length, Double.NaN, Double.NaN, Double.NaN,
             Double.NaN), Double.NaN, WireStatus.NOT_ASSESSED,
         Optional.of("no conductor curve: " + why),
-        Optional.empty()));
+        Optional.empty(), extent(r.members())));
   }
 
   /** The span's result. */
@@ -107,7 +114,8 @@ final class ConductorNaming {
       cov = Optional.empty();
     }
     return new FittedConductor(name, role, position, curve, cov, r.quality(), r.swingRad(),
-        why.isEmpty() ? WireStatus.FITTED : WireStatus.NOT_ASSESSED, why, part.bundle());
+        why.isEmpty() ? WireStatus.FITTED : WireStatus.NOT_ASSESSED, why, part.bundle(),
+        extent(r.members()));
   }
 
   /** Why a fit is below the quality thresholds, or empty when it passes. */

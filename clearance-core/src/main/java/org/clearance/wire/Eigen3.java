@@ -2,9 +2,9 @@ package org.clearance.wire;
 
 /**
  * Eigenvalues and the principal eigenvector of a symmetric 3 x 3 matrix by cyclic Jacobi
- * rotations (Golub and Van Loan, Matrix Computations, 4th ed., section 8.5) (package-private).
+ * rotations (Golub and Van Loan, Matrix Computations, 4th ed., section 8.5) 
  */
-final class Eigen3 {
+public final class Eigen3 {
 
   /** Sweeps at most; a 3 x 3 matrix converges to double precision in 4-6. */
   static final int MAX_SWEEPS = 30;
@@ -12,7 +12,7 @@ final class Eigen3 {
   static final double DIAGONAL_ENOUGH = 1e-24;
 
   /** Eigenvalues l1 &gt;= l2 &gt;= l3 and the unit eigenvector (v1x, v1y, v1z) of l1. */
-  record Result(double l1, double l2, double l3, double v1x, double v1y, double v1z) {}
+  public record Result(double l1, double l2, double l3, double v1x, double v1y, double v1z) {}
 
   private Eigen3() {}
 
@@ -21,7 +21,7 @@ final class Eigen3 {
    *
    * @return eigenvalues sorted from largest and the principal direction
    */
-  static Result symmetric(double a, double b, double c, double d, double e, double f) {
+  public static Result symmetric(double a, double b, double c, double d, double e, double f) {
     double[][] m = {{a, b, c}, {b, d, e}, {c, e, f}};
     double[][] v = {{1, 0, 0}, {0, 1, 0}, {0, 0, 1}};
     for (int sweep = 0; sweep < MAX_SWEEPS; sweep++) {

@@ -30,6 +30,8 @@ import org.clearance.line.ConductorPosition;
  * @param status fitted or not assessed
  * @param reason why not assessed; empty when fitted
  * @param bundle bundle membership; empty for a single conductor
+ * @param points where its own survey points lie (first, last and lowest point); empty for a
+ *     position no wire was found for
  */
 public record FittedConductor(
     String name,
@@ -41,7 +43,8 @@ public record FittedConductor(
     double surveySwingRad,
     WireStatus status,
     Optional<String> reason,
-    Optional<BundleInfo> bundle) {
+    Optional<BundleInfo> bundle,
+    Optional<WireExtent> points) {
 
   public FittedConductor {
     Objects.requireNonNull(name, "name");
@@ -53,6 +56,7 @@ public record FittedConductor(
     Objects.requireNonNull(status, "status");
     Objects.requireNonNull(reason, "reason");
     Objects.requireNonNull(bundle, "bundle");
+    Objects.requireNonNull(points, "points");
     if ((status == WireStatus.FITTED) != reason.isEmpty()) {
       throw new IllegalArgumentException("a reason is given exactly when not assessed: " + name);
     }
@@ -66,7 +70,7 @@ public record FittedConductor(
     return new FittedConductor(p.position(), p.role(), Optional.of(p.position()),
         Optional.empty(), Optional.empty(), WireQuality.none(), Double.NaN,
         WireStatus.NOT_ASSESSED,
-        Optional.of(reason), Optional.empty());
+        Optional.of(reason), Optional.empty(), Optional.empty());
   }
 
   /** True when fitted within every quality threshold. */

@@ -5,7 +5,8 @@ import org.clearance.survey.LongHashSet;
 /**
  * Survey points of classes 0 and 1 that the wire finder's evidence shows are not vegetation, so
  * that the clearance engine may set them aside: points on a wire, and isolated airborne points
- * (birds, high noise). Every other unclassified point near a conductor stays vegetation.
+ * (birds, high noise), and points of man-made objects the labelling step found. Every other
+ * unclassified point near a conductor stays vegetation.
  *
  * <p>Points are known by a key made from their exact coordinates as read ({@link #key}); the
  * engine reads the same survey and so finds the same keys. The evidence and its thresholds are
@@ -23,11 +24,15 @@ public final class SetAside {
     WIRE,
     /** An isolated airborne point: a few points with nothing else within the isolation
      * distance, high above anything below them (a bird, high noise). */
-    AIRBORNE
+    AIRBORNE,
+    /** A point of a man-made object (building, crane, mast, fence, vehicle) shown by the
+     * labelling step's evidence ({@code org.clearance.label.ObjectLabeller}). */
+    OBJECT
   }
 
   private final LongHashSet wire = new LongHashSet();
   private final LongHashSet airborne = new LongHashSet();
+  private final LongHashSet object = new LongHashSet();
 
   /** An empty set: nothing is set aside. */
   public static SetAside none() {
@@ -64,12 +69,21 @@ public final class SetAside {
     airborne.add(key);
   }
 
+  /** Adds a point of a man-made object: called by the labelling step before the engine reads
+   * the set. */
+  public synchronized void addObject(long key) {
+    object.add(key);
+  }
+
   /** Why the point with this key is set aside, {@link Reason#NONE} when it is not. */
   public Reason reason(long key) {
     if (wire.contains(key)) {
       return Reason.WIRE;
     }
-    return airborne.contains(key) ? Reason.AIRBORNE : Reason.NONE;
+    if (airborne.contains(key)) {
+      return Reason.AIRBORNE;
+    }
+    return object.contains(key) ? Reason.OBJECT : Reason.NONE;
   }
 
   /** The keys of the points set aside as wire, in no particular order (to send elsewhere). */
@@ -85,6 +99,11 @@ public final class SetAside {
   /** Points set aside as wire. */
   public long wireCount() {
     return wire.size();
+  }
+
+  /** Points set aside as parts of man-made objects. */
+  public long objectCount() {
+    return object.size();
   }
 
   /** Points set aside as isolated airborne points. */

@@ -109,7 +109,7 @@ final class SpanWireFinder {
     }
     int[] slotOf = PositionMatcher.match(summaries, slots, groundA, groundB);
     List<ConductorFit.Result> finals = new ArrayList<>(failed);
-    ConductorNaming naming = new ConductorNaming(options.quality(), span);
+    ConductorNaming naming = new ConductorNaming(options.quality(), span, p);
     for (int j = 0; j < positions.size(); j++) {
       ConductorPosition pos = positions.get(j);
       for (int i = 0; i < fits.size(); i++) {

@@ -150,6 +150,9 @@ class ConductorLibraryTest {
     assertEquals(138.8e3, type("Drake").ratedStrength(), 0.0); // built-in library unchanged
   }
 
+  private static final String THERMAL = HEADER + ",ac_resistance_25c_ohm_per_km,"
+      + "ac_resistance_75c_ohm_per_km,absorptivity,emissivity";
+
   static Stream<Arguments> errors() {
     String row = ",28.1,468,1.6,140,70,19e-6";
     return Stream.of(
@@ -188,7 +191,20 @@ class ConductorLibraryTest {
         Arguments.of("duplicate code", HEADER + "\nX" + row + "\n# c\nx" + row + "\n", 4, "code",
             "twice"),
         Arguments.of("blank code", HEADER + "\n" + row + "\n", 2, "code", "no conductor code"),
-        Arguments.of("wrong field count", HEADER + "\nX,1,2\n", 2, "mass_kg_per_m", "3 fields"));
+        Arguments.of("wrong field count", HEADER + "\nX,1,2\n", 2, "mass_kg_per_m", "3 fields"),
+        // issue 10 item 5 for the heat-balance columns: a unit slip (ohm per metre, from a data
+        // sheet's 7.27e-5 ohm/m for Drake) or a swapped column must not pass
+        Arguments.of("resistance in ohm/m", THERMAL + "\nX" + row + ",7.27e-5,8.68e-5,0.5,0.5\n",
+            2, "ac_resistance_25c_ohm_per_km", "7.27e-05 ohm/km is outside the plausible range"
+                + " 0.005 to 10 ohm/km"),
+        Arguments.of("hot resistance tenfold", THERMAL + "\nX" + row + ",0.0727,0.727,0.5,0.5\n",
+            2, "ac_resistance_75c_ohm_per_km", "is 10 times the resistance at 25 degC"),
+        Arguments.of("absorptivity near 0", THERMAL + "\nX" + row + ",0.0727,0.0868,0.05,0.5\n",
+            2, "absorptivity", "0.05 is outside the plausible range 0.2 to 1"),
+        Arguments.of("emissivity in per cent", THERMAL + "\nX" + row
+            + ",0.0727,0.0868,0.5,50\n", 2, "emissivity", "50 is outside the plausible range"),
+        Arguments.of("diameter in m", HEADER + "\nX,0.0281,468,1.6,140,70,19e-6\n", 2,
+            "diameter_mm", "0.0281 mm is outside the plausible range 2 to 80 mm"));
   }
 
   @ParameterizedTest(name = "{0}")

@@ -90,6 +90,21 @@ class SurveyTemperatureReaderTest {
         + "  current_a: 1\n  air_temperature_c: 1\n  wind_speed_m_s: 99\n");
     InputErrors.check(wind, 8, "wind_speed_m_s", "between 0 and 40",
         () -> LineSpecReader.read(wind, LIB));
+    // weather and current outside their plausible ranges (issue 10 item 5): a Fahrenheit air
+    // temperature, a current in milliamperes, an absorptivity range in per cent
+    Path hot = InputErrors.write(dir, "hot.yaml", HEAD + "survey_heat_balance:\n"
+        + "  current_a: 1\n  air_temperature_c: 95\n  wind_speed_m_s: 1\n");
+    InputErrors.check(hot, 7, "air_temperature_c", "between -50 and 60",
+        () -> LineSpecReader.read(hot, LIB));
+    Path amps = InputErrors.write(dir, "amps.yaml", HEAD + "survey_heat_balance:\n"
+        + "  current_a: 850000\n  air_temperature_c: 20\n  wind_speed_m_s: 1\n");
+    InputErrors.check(amps, 6, "current_a", "between 0 and 20000",
+        () -> LineSpecReader.read(amps, LIB));
+    Path surface = InputErrors.write(dir, "surface.yaml", HEAD + "survey_heat_balance:\n"
+        + "  current_a: 1\n  air_temperature_c: 20\n  wind_speed_m_s: 1\n"
+        + "  absorptivity_range: 20\n");
+    InputErrors.check(surface, 9, "absorptivity_range", "between 0 and 1",
+        () -> LineSpecReader.read(surface, LIB));
   }
 
   @Test

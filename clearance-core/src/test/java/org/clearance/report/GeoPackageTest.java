@@ -158,7 +158,7 @@ class GeoPackageTest {
       List<Map<String, Object>> spans = query(c, "SELECT span_id, status, rank FROM spans "
           + "ORDER BY rank");
       assertEquals("KV-11-12", spans.get(0).get("span_id"));
-      assertEquals("NOT_ASSESSED", spans.get(0).get("status"));
+      assertEquals("NOT ASSESSED", spans.get(0).get("status"));
     }
   }
 

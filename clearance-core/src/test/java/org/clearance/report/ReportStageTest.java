@@ -227,7 +227,7 @@ class ReportStageTest {
     assertEquals(List.of("KV-11-12", "KV-10-11", "KV-12-13"),
         spans.stream().map(r -> r.get("span_id")).toList());
     Map<String, String> na = spans.get(0);
-    assertEquals("NOT_ASSESSED", na.get("status"));
+    assertEquals("NOT ASSESSED", na.get("status"));
     assertEquals("no conductor points found in the span", na.get("reason"));
     assertEquals("1", na.get("rank"));
     assertEquals("", na.get("min_clearance_survey_m"));
@@ -308,7 +308,7 @@ class ReportStageTest {
     List<String> statuses = new ArrayList<>();
     spans.forEach(r -> statuses.add(r.get("status") + "/" + r.get("rank") + "/"
         + r.get("n_sites")));
-    assertEquals(List.of("NOT_ASSESSED//", "NOT_ASSESSED//", "NOT_ASSESSED//"), statuses);
+    assertEquals(List.of("NOT ASSESSED//", "NOT ASSESSED//", "NOT ASSESSED//"), statuses);
     assertTrue(spans.get(0).get("reason").contains("no rule profile"));
     assertTrue(o.assessment().spans().stream().noneMatch(SpanResult::clear));
   }

@@ -167,7 +167,7 @@ class BuiltinProfilesTest {
   @Test
   void unknownBuiltinNamesTheOption() {
     InputException e = assertThrows(InputException.class, () -> RuleProfiles.builtin("nope"));
-    assertEquals("--profile", e.file());
+    assertEquals("--rules", e.file());
     assertTrue(e.problem().contains("us-fac003-mvcd"));
   }
 }

@@ -313,6 +313,6 @@ class ProfileValidationTest {
   void profileOptionNamesTheOption() {
     InputException e = assertThrows(InputException.class,
         () -> RuleProfiles.byNameOrPath("no-such-file.yaml"));
-    assertEquals("--profile", e.file());
+    assertEquals("--rules", e.file());
   }
 }

@@ -124,8 +124,7 @@ public final class RunFixture {
             new LineCondition("gale", LineCondition.Kind.SWING, Double.NaN, 0, 0, 913,
                 Double.NaN, SWING, Double.NaN)));
     return new RunFacts(List.of(line), List.of(), Optional.of(java.time.LocalDate.of(2026, 5, 4)),
-        Optional.of(java.time.LocalDate.of(2026, 5, 5)), "fixture",
-        Optional.of(java.time.LocalDate.of(2026, 6, 1)));
+        Optional.of(java.time.LocalDate.of(2026, 5, 5)), "fixture");
   }
 
   /** Writes model.json and near-points.bin into a folder. */

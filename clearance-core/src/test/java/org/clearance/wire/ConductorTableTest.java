@@ -29,11 +29,17 @@ class ConductorTableTest {
     ConductorCurve curve = new ConductorCurve(plan, Catenary.through(0, 130, 500, 140, 2000));
     FittedConductor a = new FittedConductor("A", ConductorPosition.Role.PHASE, Optional.of("A"),
         Optional.of(curve), Optional.empty(), new WireQuality(812, 97.46, 0.0412, 6.25, 0.004),
-        0, WireStatus.FITTED, Optional.empty(), Optional.empty());
+        0, WireStatus.FITTED, Optional.empty(), Optional.empty(), Optional.empty());
+    // an extra wire whose points were too few for a curve: located by its points alone
+    FittedConductor x = new FittedConductor("extra1", ConductorPosition.Role.PHASE,
+        Optional.empty(), Optional.empty(), Optional.empty(), new WireQuality(9, Double.NaN,
+            Double.NaN, Double.NaN, Double.NaN), Double.NaN, WireStatus.NOT_ASSESSED,
+        Optional.of("no conductor curve: too few points"), Optional.empty(),
+        Optional.of(new WireExtent(1010, 2010, 131, 1040, 2050, 133, 1030, 2040, 128.5)));
     FittedConductor b = FittedConductor.missing(layout.lines().get(0).spec().position("B")
         .orElseThrow(), "no wire found near offset 0.0 m, \"B\" missing");
     SpanWires sw = new SpanWires(span, WireStatus.NOT_ASSESSED, Optional.of("B missing"),
-        List.of(a, b), 2000, true);
+        List.of(a, b, x), 2000, true);
     return new WireResult(layout, List.of(sw), List.of());
   }
 
@@ -42,8 +48,10 @@ class ConductorTableTest {
     String[] lines = ConductorTable.csv(result(), SurveyUnits.metres("test")).split("\n");
     // the brief's column list, verbatim
     assertEquals("span_id,from_structure,to_structure,conductor,n_points,coverage_pct,rms_m,"
-        + "max_gap_m,attach_a_x,attach_a_y,attach_a_z,attach_b_x,attach_b_y,attach_b_z,"
-        + "catenary_c_m,sag_mid_m,status,reason", lines[0]);
+        + "max_gap_m,attach_a_x_m,attach_a_y_m,attach_a_z_m,attach_b_x_m,attach_b_y_m,"
+        + "attach_b_z_m,catenary_c_m,sag_mid_m,status,reason,low_x_m,low_y_m,low_z_m,"
+        + "first_point_x_m,first_point_y_m,first_point_z_m,last_point_x_m,last_point_y_m,"
+        + "last_point_z_m", lines[0]);
     // sag of the curve computed by hand from methods.md 2.5: z0 + c (cosh(t) - 1) at the
     // mid-point below the chord (135 m): Catenary.midSpanSag gives 15.644 for c = 2000
     // over 500 m with 10 m rise, checked against the parabolic w S^2 / 8 H = 500^2 / 16000
@@ -56,7 +64,18 @@ class ConductorTableTest {
     assertEquals("fitted", a[16]);
     assertEquals("", a[17]);
     assertEquals("S1-S2,S1,S2,B,0,,,,,,,,,,,,not_assessed,"
-        + "\"no wire found near offset 0.0 m, \"\"B\"\" missing\"", lines[2]);
+        + "\"no wire found near offset 0.0 m, \"\"B\"\" missing\",,,,,,,,,", lines[2]);
+    // the curve's lowest point: c = 2000 through (0, 130) and (500, 140) has its vertex where
+    // 2 c sinh(250 / c) sinh((250 - s0) / c) = 10 m, s0 = 250 - c asinh(10 / (2 c sinh(250 /
+    // c))) = 210.107 m (computed from the catenary z = z0 + c (cosh((s - s0) / c) - 1)), inside
+    // the span, so the low point lies on the plan line 210.107 m from A of 500 m
+    assertEquals(1000 + 300 * 210.107 / 500, Double.parseDouble(a[18]), 0.002);
+    assertEquals(2000 + 400 * 210.107 / 500, Double.parseDouble(a[19]), 0.002);
+    assertTrue(Double.parseDouble(a[20]) < 130, "below both attachments");
+    // a wire without a curve is located by its own points (issue 11: extraN can be found)
+    assertEquals("S1-S2,S1,S2,extra1,9,,,,,,,,,,,,not_assessed,no conductor curve: too few "
+        + "points,1030.000,2040.000,128.500,1010.000,2010.000,131.000,1040.000,2050.000,133.000",
+        lines[3]);
   }
 
   @Test

@@ -19,6 +19,8 @@ import org.clearance.InputException;
  * @param structureEdit a deliberate error in the written structures file (none by default)
  * @param surveySwingDeg largest swing of the wires by the wind of the survey day, degrees,
  *     0 to {@value #MAX_SURVEY_SWING_DEG} (default 0: still air; {@link SurveyWind})
+ * @param manMade whether the man-made fixtures of the labelling tests stand beside the line (a
+ *     tower crane over it, a fence, a shed; {@link ManMadeFixtures}); default false
  */
 public record DemoOptions(
     long seed,
@@ -27,7 +29,8 @@ public record DemoOptions(
     ClassificationMode mode,
     double corridorHalfWidth,
     StructureEdit structureEdit,
-    double surveySwingDeg) {
+    double surveySwingDeg,
+    boolean manMade) {
 
   /** Largest survey-day swing offered, degrees: surveys are flown in light wind. */
   public static final double MAX_SURVEY_SWING_DEG = 10;
@@ -35,7 +38,7 @@ public record DemoOptions(
   /** Options in still air. */
   public DemoOptions(long seed, int spanCount, double pointDensity, ClassificationMode mode,
       double corridorHalfWidth, StructureEdit structureEdit) {
-    this(seed, spanCount, pointDensity, mode, corridorHalfWidth, structureEdit, 0);
+    this(seed, spanCount, pointDensity, mode, corridorHalfWidth, structureEdit, 0, false);
   }
 
   /** Default seed. */
@@ -88,37 +91,43 @@ public record DemoOptions(
 
   public DemoOptions withSeed(long newSeed) {
     return new DemoOptions(newSeed, spanCount, pointDensity, mode, corridorHalfWidth,
-        structureEdit, surveySwingDeg);
+        structureEdit, surveySwingDeg, manMade);
   }
 
   public DemoOptions withSpanCount(int spans) {
     return new DemoOptions(seed, spans, pointDensity, mode, corridorHalfWidth, structureEdit,
-        surveySwingDeg);
+        surveySwingDeg, manMade);
   }
 
   public DemoOptions withPointDensity(double density) {
     return new DemoOptions(seed, spanCount, density, mode, corridorHalfWidth, structureEdit,
-        surveySwingDeg);
+        surveySwingDeg, manMade);
   }
 
   public DemoOptions withMode(ClassificationMode newMode) {
     return new DemoOptions(seed, spanCount, pointDensity, newMode, corridorHalfWidth,
-        structureEdit, surveySwingDeg);
+        structureEdit, surveySwingDeg, manMade);
   }
 
   public DemoOptions withCorridorHalfWidth(double halfWidth) {
     return new DemoOptions(seed, spanCount, pointDensity, mode, halfWidth, structureEdit,
-        surveySwingDeg);
+        surveySwingDeg, manMade);
   }
 
   public DemoOptions withStructureEdit(StructureEdit edit) {
     return new DemoOptions(seed, spanCount, pointDensity, mode, corridorHalfWidth, edit,
-        surveySwingDeg);
+        surveySwingDeg, manMade);
+  }
+
+  /** The same options with the labelling tests' man-made fixtures beside the line, or without. */
+  public DemoOptions withManMade(boolean fixtures) {
+    return new DemoOptions(seed, spanCount, pointDensity, mode, corridorHalfWidth, structureEdit,
+        surveySwingDeg, fixtures);
   }
 
   /** The same options with the wires swung by the survey day's wind, up to this many degrees. */
   public DemoOptions withSurveySwing(double degrees) {
     return new DemoOptions(seed, spanCount, pointDensity, mode, corridorHalfWidth, structureEdit,
-        degrees);
+        degrees, manMade);
   }
 }

@@ -63,6 +63,8 @@ public final class DemoScene {
   private final List<DemoPosition> positions;
   private final LineBuilder.Layout layout;
   private final List<DemoBuilding> buildings;
+  /** The labelling tests' man-made fixtures, or null. */
+  private final ManMadeFixtures fixtures;
   private final List<DemoTree> trees;
   private final List<DemoBird> birds;
   private final List<FlightStrip> strips;
@@ -87,7 +89,15 @@ public final class DemoScene {
         options.pointDensity() / DemoOptions.DEFAULT_DENSITY).build(LINE_ID);
     SceneryPlanner scenery = new SceneryPlanner(root.split(), corridor, terrain, layout,
         route.road, r);
-    buildings = List.copyOf(scenery.buildings());
+    if (options.manMade()) {
+      List<DemoBuilding> all = new ArrayList<>(scenery.buildings());
+      fixtures = new ManMadeFixtures(layout.spans(), terrain, all.size());
+      all.add(fixtures.shed());
+      buildings = List.copyOf(all);
+    } else {
+      fixtures = null;
+      buildings = List.copyOf(scenery.buildings());
+    }
     birds = List.copyOf(scenery.birds());
     strips = scenery.strips();
     trees = List.copyOf(new TreePlanner(root.split(), corridor, terrain, stands, layout,
@@ -152,6 +162,9 @@ public final class DemoScene {
       SplittableRandom rng = new SplittableRandom(spanSeeds[i]);
       surfaces.generate(i, rng, out);
       objects.generate(i, rng, out);
+      if (fixtures != null) {
+        fixtures.generate(i, rng, out, strips.get(0), corridor, terrain);
+      }
     }
     out.flush();
   }

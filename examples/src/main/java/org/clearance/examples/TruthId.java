@@ -32,7 +32,9 @@ public final class TruthId {
     JUMPER,
     BIRD,
     NOISE_LOW,
-    NOISE_HIGH
+    NOISE_HIGH,
+    /** The labelling tests' crane and fence ({@link ManMadeFixtures}). */
+    MAN_MADE
   }
 
   /** Packs a kind and an index (0 to 2^24 - 1). */

@@ -30,7 +30,9 @@ import org.junit.jupiter.params.provider.CsvSource;
  * conductors and the kind of every point), per run: no span reported assessed without a zone
  * site while true vegetation is inside a zone; every tree inside a zone has a site in its span
  * at least as urgent; at most 2 % of the zone sites stand on something that is not vegetation;
- * fall-in sites stand at real trees whose height the check gives within 0.5 m.
+ * fall-in sites stand at real trees whose height the check gives within 0.5 m. With the man-made
+ * fixtures (a crane over the line, a fence, a shed: {@code ManMadeFixtures}) no site, zone or
+ * fall-in, stands on them in any mode.
  */
 class ClassificationModesTruthTest {
 
@@ -51,14 +53,17 @@ class ClassificationModesTruthTest {
   private record Site(String span, int priority, String zone, String condition, double x,
       double y, double z, double vegHeight) {}
 
-  @ParameterizedTest(name = "seed {0}, {1}, wind swing up to {2} deg")
-  @CsvSource({"11, FULL, 0", "11, GROUND_ONLY, 0", "11, UNCLASSIFIED, 0", "23, FULL, 0",
-      "23, GROUND_ONLY, 0", "23, UNCLASSIFIED, 0", "37, FULL, 3", "37, GROUND_ONLY, 3"})
+  @ParameterizedTest(name = "seed {0}, {1}, wind swing up to {2} deg, man-made fixtures {3}")
+  @CsvSource({"11, FULL, 0, false", "11, GROUND_ONLY, 0, false", "11, UNCLASSIFIED, 0, false",
+      "23, FULL, 0, false", "23, GROUND_ONLY, 0, false", "23, UNCLASSIFIED, 0, false",
+      "37, FULL, 3, false", "37, GROUND_ONLY, 3, false", "11, FULL, 0, true",
+      "11, GROUND_ONLY, 0, true", "11, UNCLASSIFIED, 0, true"})
   void findingsMatchTheTruthInEveryClassificationMode(long seed, ClassificationMode mode,
-      double swingDeg) throws IOException {
-    DemoRuns.Run run = DemoRuns.of(DemoRuns.small(seed, mode).withSurveySwing(swingDeg),
-        PROFILE);
+      double swingDeg, boolean manMade) throws IOException {
+    DemoRuns.Run run = DemoRuns.of(DemoRuns.small(seed, mode).withSurveySwing(swingDeg)
+        .withManMade(manMade), PROFILE);
     TruthDistances truth = new TruthDistances(run, false);
+    run.console().lines().filter(l -> l.contains("labelling")).forEach(System.out::println);
     ZoneEvaluator evaluator = new ZoneEvaluator(RuleProfiles.builtin(PROFILE));
     List<SpanRecord> spans = run.model().spans();
     List<SpanRules> rules = new ArrayList<>();
@@ -149,6 +154,16 @@ class ClassificationModesTruthTest {
         System.out.println("site not on vegetation: " + s + " truth " + kind);
       }
     }
+    // 3b. Sites of any kind on the man-made fixtures or on buildings.
+    int onManMade = 0;
+    for (Site s : sites) {
+      Integer id = kindAt.get(key(s.x(), s.y(), s.z()));
+      TruthId.Kind kind = id == null ? null : TruthId.kind(id);
+      if (kind == TruthId.Kind.MAN_MADE || kind == TruthId.Kind.BUILDING) {
+        onManMade++;
+        System.out.println("site on a man-made object: " + s + " truth " + kind);
+      }
+    }
     // 4. Fall-in sites at real trees with their height.
     int fallIn = 0;
     int fallInWrong = 0;
@@ -183,15 +198,17 @@ class ClassificationModesTruthTest {
         + " minimum error %.3f m; spans %d, spans with vegetation"
         + " in a zone %d, reported without a zone site %d; trees in a zone %d, without a site"
         + " %d; zone sites %d, not on vegetation %d; fall-in sites %d, not at a tree of that"
-        + " height %d", seed, mode, swingDeg, worstSurvey, spans.size(),
-        spansWithZoneVegetation.size(), falseClear, zoneTrees.size(), missed, zoneSites,
-        notVegetation, fallIn, fallInWrong);
+        + " height %d; sites on man-made objects %d (man-made points %d)", seed, mode,
+        swingDeg, worstSurvey, spans.size(), spansWithZoneVegetation.size(), falseClear,
+        zoneTrees.size(), missed, zoneSites, notVegetation, fallIn, fallInWrong, onManMade,
+        kindAt.values().stream().filter(i -> TruthId.kind(i) == TruthId.Kind.MAN_MADE).count());
     System.out.println(figures);
     assertTrue(worstSurvey <= SURVEY_TOL_M, figures);
     assertEquals(0, falseClear, figures);
     assertEquals(0, missed, figures);
     assertTrue(notVegetation <= MAX_NOT_VEGETATION_SHARE * zoneSites, figures);
     assertEquals(0, fallInWrong, figures);
+    assertEquals(0, onManMade, figures);
     assertTrue(zoneTrees.size() >= 3, figures);
   }
 

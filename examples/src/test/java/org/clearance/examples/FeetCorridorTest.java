@@ -33,7 +33,8 @@ import org.junit.jupiter.params.provider.EnumSource;
  * feet (1200/3937 m, NIST; check-values.md section 1) give the findings of the metre files, in
  * every classification mode that infers vegetation: the same sites in the same zones, their
  * clearances within {@link #CLEARANCE_TOL_M} and their positions within {@link #POSITION_TOL_M},
- * and the same span minima (or the same bound beyond the keep radius). With
+ * and the same span minima (or the same bound beyond the keep radius). The corridor carries the
+ * labelling fixtures (a tower crane over the line, a fence, a shed: ManMadeFixtures). With
  * {@link ClassificationModesTruthTest} on the metre files this carries its figures to feet.
  */
 class FeetCorridorTest {
@@ -57,7 +58,7 @@ class FeetCorridorTest {
   @ParameterizedTest
   @EnumSource(value = ClassificationMode.class, names = {"GROUND_ONLY", "UNCLASSIFIED"})
   void feetGiveTheFindingsOfMetres(ClassificationMode mode) throws IOException {
-    DemoRuns.Run metres = DemoRuns.of(DemoRuns.small(11L, mode), PROFILE);
+    DemoRuns.Run metres = DemoRuns.of(DemoRuns.small(11L, mode).withManMade(true), PROFILE);
     Path las = dir.resolve("survey-ftus.las");
     Survey survey = Survey.open(List.of(metres.input().resolve(DemoCorridor.SURVEY)),
         UnitsChoice.fromFile());

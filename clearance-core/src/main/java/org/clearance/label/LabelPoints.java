@@ -1,0 +1,99 @@
+package org.clearance.label;
+
+import java.util.Arrays;
+import java.util.List;
+import java.util.function.Consumer;
+import org.clearance.ground.GroundModel;
+import org.clearance.line.SpanFrame;
+import org.clearance.survey.PointChunk;
+import org.clearance.wire.SetAside;
+
+/**
+ * The points the labelling looks at, gathered in one pass (one collector per reading thread,
+ * merged after): unclassified points (class 0 or 1, not withheld) at least {@link #MIN_HAG_M}
+ * above ground, within the region of a span, not set aside by the wire finder. About 40 bytes a
+ * point; only the line's region is held, never the whole survey.
+ */
+final class LabelPoints implements Consumer<PointChunk> {
+
+  /** Lowest point looked at, m above ground: the canopy's lowest return (half the 2 m least tree
+   * height, Popescu and Wynne 2004), so every point that can make a tree is labelled. */
+  static final double MIN_HAG_M = 1.0;
+
+  private final List<SpanFrame> frames;
+  private final double regionM;
+  private final GroundModel ground;
+  private final SetAside setAside;
+
+  int size;
+  double[] x = new double[1024];
+  double[] y = new double[1024];
+  double[] z = new double[1024];
+  float[] hag = new float[1024];
+  /** Return number of the point within its pulse (0 when the file does not say). */
+  byte[] returnNumber = new byte[1024];
+
+  LabelPoints(List<SpanFrame> frames, double regionM, GroundModel ground, SetAside setAside) {
+    this.frames = frames;
+    this.regionM = regionM;
+    this.ground = ground;
+    this.setAside = setAside;
+  }
+
+  @Override
+  public void accept(PointChunk chunk) {
+    short[] cls = chunk.classification();
+    byte[] flags = chunk.flags();
+    for (int i = 0; i < chunk.size(); i++) {
+      if (cls[i] > 1 || (flags[i] & PointChunk.FLAG_WITHHELD) != 0) {
+        continue;
+      }
+      double px = chunk.x()[i];
+      double py = chunk.y()[i];
+      double pz = chunk.z()[i];
+      if (!inRegion(px, py)) {
+        continue;
+      }
+      double h = ground.heightAboveGround(px, py, pz);
+      if (!(h >= MIN_HAG_M)
+          || setAside.reason(SetAside.key(px, py, pz)) != SetAside.Reason.NONE) {
+        continue;
+      }
+      add(px, py, pz, h, chunk.returnNumber()[i]);
+    }
+  }
+
+  private boolean inRegion(double px, double py) {
+    for (SpanFrame f : frames) {
+      double s = f.station(px, py);
+      if (s >= -regionM && s <= f.length() + regionM && Math.abs(f.offset(px, py)) <= regionM) {
+        return true;
+      }
+    }
+    return false;
+  }
+
+  void add(double px, double py, double pz, double h, byte n) {
+    if (size == x.length) {
+      int cap = size * 2;
+      x = Arrays.copyOf(x, cap);
+      y = Arrays.copyOf(y, cap);
+      z = Arrays.copyOf(z, cap);
+      hag = Arrays.copyOf(hag, cap);
+      returnNumber = Arrays.copyOf(returnNumber, cap);
+    }
+    x[size] = px;
+    y[size] = py;
+    z[size] = pz;
+    hag[size] = (float) h;
+    returnNumber[size] = n;
+    size++;
+  }
+
+  /** Adds another collector's points. */
+  void absorb(LabelPoints o) {
+    for (int i = 0; i < o.size; i++) {
+      add(o.x[i], o.y[i], o.z[i], o.hag[i], o.returnNumber[i]);
+    }
+  }
+}

@@ -1,0 +1,11 @@
+package org.clearance.label;
+
+/** What a clustered object of unclassified points is taken to be. */
+public enum ObjectKind {
+  /** Not shown to be man-made: its points stay vegetation. */
+  VEGETATION,
+  /** A thin tall structure with little spread at the top: a crane, mast, pole or lattice. */
+  MAST,
+  /** An object of planes: a roof, a wall, a fence, a vehicle. */
+  PLANAR
+}

@@ -1,0 +1,377 @@
+package org.clearance.label;
+
+import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.Collections;
+import java.util.Comparator;
+import java.util.List;
+import org.clearance.ground.GroundModel;
+import org.clearance.line.SpanFrame;
+import org.clearance.survey.LongHashSet;
+import org.clearance.wire.PointSource;
+import org.clearance.wire.SetAside;
+
+/**
+ * Separates man-made objects from vegetation among the unclassified points near the line
+ * (docs/labelling.md has every feature and threshold with its source).
+ *
+ * <ol>
+ *   <li>The points: unclassified, at least 1 m above ground, within the region of a span, not
+ *       already set aside as wire or airborne ({@link LabelPoints}).</li>
+ *   <li>Per point, the dimensionality features of the points within {@link #RADIUS_M}
+ *       ({@link LocalShape}).</li>
+ *   <li>Objects: single-linkage clusters of the points at {@link #LINK_M}.</li>
+ *   <li>Per object: mean linearity, planarity and scattering, share of planar points, share of
+ *       points in the lowest quarter of its height (a mast stands on the ground), the plan
+ *       spread of its upper half per metre of height (a crown spreads, a mast does not) and,
+ *       where the survey records echoes, its share of later returns (return number 2 or more):
+ *       a pulse goes on through a crown and returns again inside it, while a roof or solid body
+ *       returns once and a lattice member or a wire returns first and then from the ground
+ *       below.</li>
+ *   <li>An object is man-made only on strong evidence: {@link ObjectKind#MAST} when at least
+ *       {@link #MAST_MIN_HEIGHT_M} tall with upper spread at most {@link #MAST_MAX_SPREAD_M},
+ *       and either standing (mean scattering at most {@link #MAST_MAX_SCATTERING}, at least
+ *       {@link #MAST_MIN_BASE_SHARE} of its points in the lowest quarter of its height: a crane
+ *       on its carrier, a mast) or a lattice (mean linearity at least
+ *       {@link #LATTICE_MIN_LINEARITY}, scattering at most {@link #LATTICE_MAX_SCATTERING}, at
+ *       least {@link #LATTICE_MIN_BASE_SHARE} of its points in the lowest quarter: a tower
+ *       crane); {@link ObjectKind#PLANAR} when at least {@link #PLANAR_MIN_SHARE} of its
+ *       points are planar and its mean scattering is at most {@link #PLANAR_MAX_SCATTERING}.
+ *       Where echoes are recorded, an object with {@link #ECHO_VEGETATION_SHARE} or more later
+ *       returns stays vegetation whatever its shape. Everything else stays vegetation.</li>
+ *   <li>Fragments too small to judge attach to a man-made object nearby
+ *       ({@link #attachFragments}).</li>
+ * </ol>
+ * The points of man-made objects go into the {@link SetAside} with the reason OBJECT; the engine
+ * counts them per span instead of measuring them and keeps them out of the canopy.
+ */
+public final class ObjectLabeller {
+
+  /** Neighbourhood radius of the features, m: holds 10-40 points at the 10-20 points per m^2 of
+   * line surveys (common practice, no source; the tile's median is 19 at 1 m, measured). */
+  static final double RADIUS_M = 1.0;
+  /** Fewest neighbours for a covariance worth reading (a plane needs 3; margin for noise). */
+  static final int MIN_NEIGHBOURS = 6;
+  /** Link distance of an object's points, m (as {@link #RADIUS_M}: a crown sampled at 1 point
+   * per m^2 or more is one object). */
+  static final double LINK_M = 1.0;
+  /** Fewest points of an object the labelling may call man-made: the features of fewer are
+   * too noisy (on the open tile a 38-point piece of a crown reached contrast 0.33). */
+  static final int MIN_OBJECT_POINTS = 100;
+  /** Least height of a mast-like object, m: lower objects are never near a conductor's zone
+   * and are left to the planar test. */
+  static final double MAST_MIN_HEIGHT_M = 4.0;
+  /** Most mean scattering of a standing mast-like object (open tile: cranes and class-26
+   * objects 0.11-0.19, tree stands 12 m and taller 0.18-0.32; docs/labelling.md). */
+  static final double MAST_MAX_SCATTERING = 0.2;
+  /** Most upper spread of a mast-like object, m^2 per m of height (open tile: cranes 0.76-1.16,
+   * tree stands 12 m and taller 2.5-10.7). */
+  static final double MAST_MAX_SPREAD_M = 2.0;
+  /** Least share of a mast-like object's points in the lowest quarter of its height (open tile:
+   * cranes 0.49-0.53, tree stands at most 0.30; generated conifer crowns, seen from above, start
+   * high; docs/labelling.md). */
+  static final double MAST_MIN_BASE_SHARE = 0.4;
+  /** Least mean linearity of a lattice (a tower crane, a lattice mast: steel members sampled
+   * along their length; open tile: tree stands at most 0.52, the tile tower's pieces
+   * 0.55-0.66; the demo's tower crane 0.72, some of its conifer crowns 0.66-0.68). */
+  static final double LATTICE_MIN_LINEARITY = 0.65;
+  /** Most mean scattering of a lattice (open tile: tower pieces 0.06-0.07, the demo's tower
+   * crane 0.065; tree stands 0.18 and more). */
+  static final double LATTICE_MAX_SCATTERING = 0.1;
+  /** Least share of a lattice's points in the lowest quarter of its height: its mast runs down
+   * to the ground (the demo's tower crane 0.19 under its jib); a crown seen from above has none
+   * there (generated conifer crowns 0.0, which reach linearity 0.66-0.68). */
+  static final double LATTICE_MIN_BASE_SHARE = 0.1;
+  /** Most mean scattering of a planar object: a sampled plane scatters only by its noise (3 cm
+   * over a 1 m disc gives about 0.004; the demo's shed 0.003), a crown at least 0.04 (the
+   * demo's) to 0.18 (the open tile's). */
+  static final double PLANAR_MAX_SCATTERING = 0.03;
+  /** The lowest quarter of an object's height, for {@link #MAST_MIN_BASE_SHARE}. */
+  static final double BASE_QUARTER = 0.25;
+  /** Least share of planar points of a planar object (open tile: tree stands at most 0.28,
+   * cranes 0.28-0.41; a roof or wall sampled densely is nearly all planar). */
+  static final double PLANAR_MIN_SHARE = 0.5;
+  /** Share of later returns at which an object stays vegetation when echoes are recorded
+   * (common practice, no source: inside a crown a pulse returns again, on a roof or a steel
+   * member it returns first; see docs/labelling.md for the measured shares). */
+  static final double ECHO_VEGETATION_SHARE = 0.1;
+  /** Share of later returns among all points looked at above which the survey's echoes are
+   * read (a file with return numbers all 0 or all 1 tells nothing). */
+  static final double ECHO_INFORMATIVE_SHARE = 0.05;
+  /** Reach of a fragment's attachment to a man-made object, m (open tile: the cut-off top of a
+   * crane's jib lies 2.5 and 4.1 m from the rest of the crane, measured). */
+  static final double ATTACH_M = 5.0;
+  /** Least height above ground of a fragment's lowest point for it to attach, m: a plant grows
+   * from the ground, and every point from 1 m up is looked at (common practice, no source). */
+  static final double FLOAT_M = 3.0;
+  /** Plan cell of the upper spread, m. */
+  static final double SPREAD_CELL_M = 0.5;
+
+  private ObjectLabeller() {}
+
+  /**
+   * Labels the unclassified points near the spans and adds the man-made ones to
+   * {@code setAside}.
+   *
+   * @param source the survey
+   * @param frames the spans' plan frames
+   * @param regionM points within this plan distance of a span's chord are looked at, m
+   * @param ground the ground model
+   * @param setAside the wire finder's points set aside; receives the man-made points
+   * @return the objects and counts
+   */
+  public static ObjectLabels label(PointSource source, List<SpanFrame> frames, double regionM,
+      GroundModel ground, SetAside setAside) {
+    List<LabelPoints> parts = Collections.synchronizedList(new ArrayList<>());
+    source.stream(() -> {
+      LabelPoints p = new LabelPoints(frames, regionM, ground, setAside);
+      parts.add(p);
+      return p;
+    });
+    LabelPoints all = new LabelPoints(frames, regionM, ground, setAside);
+    parts.forEach(all::absorb);
+    sort(all);
+    return label(all, setAside);
+  }
+
+  /** Sorts the points by coordinates, so the result does not depend on the reading order. */
+  private static void sort(LabelPoints p) {
+    Integer[] idx = new Integer[p.size];
+    for (int i = 0; i < p.size; i++) {
+      idx[i] = i;
+    }
+    Arrays.sort(idx, Comparator.<Integer>comparingDouble(i -> p.x[i])
+        .thenComparingDouble(i -> p.y[i]).thenComparingDouble(i -> p.z[i]));
+    double[] x = new double[p.size];
+    double[] y = new double[p.size];
+    double[] z = new double[p.size];
+    float[] h = new float[p.size];
+    byte[] r = new byte[p.size];
+    for (int k = 0; k < p.size; k++) {
+      int i = idx[k];
+      x[k] = p.x[i];
+      y[k] = p.y[i];
+      z[k] = p.z[i];
+      h[k] = p.hag[i];
+      r[k] = p.returnNumber[i];
+    }
+    p.x = x;
+    p.y = y;
+    p.z = z;
+    p.hag = h;
+    p.returnNumber = r;
+  }
+
+  static ObjectLabels label(LabelPoints p, SetAside setAside) {
+    int n = p.size;
+    if (n == 0) {
+      return new ObjectLabels(List.of(), 0, 0, false);
+    }
+    CellIndex index = new CellIndex(p.x, p.y, p.z, n, Math.max(RADIUS_M, LINK_M));
+    LocalShape[] shape = new LocalShape[n];
+    int[] parent = new int[n];
+    for (int i = 0; i < n; i++) {
+      parent[i] = i;
+    }
+    double[] s = new double[10];
+    for (int i = 0; i < n; i++) {
+      Arrays.fill(s, 0);
+      final int me = i;
+      index.within(i, Math.max(RADIUS_M, LINK_M), j -> {
+        double dx = p.x[j] - p.x[me];
+        double dy = p.y[j] - p.y[me];
+        double dz = p.z[j] - p.z[me];
+        if (dx * dx + dy * dy + dz * dz <= RADIUS_M * RADIUS_M) {
+          s[0]++;
+          s[1] += dx;
+          s[2] += dy;
+          s[3] += dz;
+          s[4] += dx * dx;
+          s[5] += dx * dy;
+          s[6] += dx * dz;
+          s[7] += dy * dy;
+          s[8] += dy * dz;
+          s[9] += dz * dz;
+        }
+        if (j != me && dx * dx + dy * dy + dz * dz <= LINK_M * LINK_M) {
+          union(parent, me, j);
+        }
+      });
+      if (s[0] >= MIN_NEIGHBOURS) {
+        shape[i] = LocalShape.of((int) s[0], s[1], s[2], s[3], s[4], s[5], s[6], s[7], s[8],
+            s[9]);
+      }
+    }
+    long multi = 0;
+    for (int i = 0; i < n; i++) {
+      parent[i] = root(parent, i);
+      multi += p.returnNumber[i] >= 2 ? 1 : 0;
+    }
+    boolean echoes = multi >= ECHO_INFORMATIVE_SHARE * n;
+    ObjectKind[] kindOf = new ObjectKind[n];
+    List<LabelledObject> objects = objects(p, parent, shape, echoes, kindOf);
+    attachFragments(p, parent, kindOf);
+    long setAsideCount = 0;
+    for (int i = 0; i < n; i++) {
+      ObjectKind k = kindOf[parent[i]];
+      if (k != null && k != ObjectKind.VEGETATION) {
+        setAside.addObject(SetAside.key(p.x[i], p.y[i], p.z[i]));
+        setAsideCount++;
+      }
+    }
+    return new ObjectLabels(objects, n, setAsideCount, echoes);
+  }
+
+  /** The objects' evidence and kinds; {@code kindOf} receives the kind at each object's root. */
+  private static List<LabelledObject> objects(LabelPoints p, int[] root, LocalShape[] shape,
+      boolean echoes, ObjectKind[] kindOf) {
+    int n = p.size;
+    int[] count = new int[n];
+    int[] withShape = new int[n];
+    int[] planarDominant = new int[n];
+    int[] multi = new int[n];
+    double[] sumLinearity = new double[n];
+    double[] sumPlanarity = new double[n];
+    double[] sumScattering = new double[n];
+    int[] top = new int[n];
+    Arrays.fill(top, -1);
+    for (int i = 0; i < n; i++) {
+      int r = root[i];
+      count[r]++;
+      multi[r] += p.returnNumber[i] >= 2 ? 1 : 0;
+      if (top[r] < 0 || p.hag[i] > p.hag[top[r]]) {
+        top[r] = i;
+      }
+      LocalShape f = shape[i];
+      if (f != null) {
+        withShape[r]++;
+        sumLinearity[r] += f.linearity();
+        sumPlanarity[r] += f.planarity();
+        sumScattering[r] += f.scattering();
+        planarDominant[r] += f.dominant() == 1 ? 1 : 0;
+      }
+    }
+    int[] upperCells = new int[n];
+    int[] base = new int[n];
+    LongHashSet cells = new LongHashSet();
+    for (int i = 0; i < n; i++) {
+      int r = root[i];
+      if (count[r] < MIN_OBJECT_POINTS) {
+        continue;
+      }
+      double h = p.hag[top[r]];
+      if (p.hag[i] < LabelPoints.MIN_HAG_M + BASE_QUARTER * (h - LabelPoints.MIN_HAG_M)) {
+        base[r]++;
+      }
+      if (p.hag[i] < 0.5 * h) {
+        continue;
+      }
+      long cx = (long) Math.floor(p.x[i] / SPREAD_CELL_M);
+      long cy = (long) Math.floor(p.y[i] / SPREAD_CELL_M);
+      long key = ((long) r * 0x9E3779B97F4A7C15L) ^ (cx * 0xC2B2AE3D27D4EB4FL) ^ (cy * 31L);
+      if (cells.add(key)) {
+        upperCells[r]++;
+      }
+    }
+    List<LabelledObject> out = new ArrayList<>();
+    for (int r = 0; r < n; r++) {
+      if (root[r] != r || count[r] < MIN_OBJECT_POINTS || withShape[r] == 0) {
+        continue;
+      }
+      double height = p.hag[top[r]];
+      double linearity = sumLinearity[r] / withShape[r];
+      double planarity = sumPlanarity[r] / withShape[r];
+      double scattering = sumScattering[r] / withShape[r];
+      double planarShare = (double) planarDominant[r] / withShape[r];
+      double spread = upperCells[r] * SPREAD_CELL_M * SPREAD_CELL_M / height;
+      double baseShare = (double) base[r] / count[r];
+      double multiShare = echoes ? (double) multi[r] / count[r] : Double.NaN;
+      ObjectKind kind = decide(height, linearity, scattering, planarShare, spread, baseShare,
+          multiShare);
+      kindOf[r] = kind;
+      out.add(new LabelledObject(kind, count[r], p.x[top[r]], p.y[top[r]], height, linearity,
+          planarity, scattering, planarShare, spread, baseShare, multiShare));
+    }
+    return out;
+  }
+
+  /**
+   * Step 6: a fragment (an object of fewer than {@link #MIN_OBJECT_POINTS} points, too few to
+   * judge by itself) takes the kind of a man-made object with a point within {@link #ATTACH_M}
+   * of it when no point of a vegetation object lies that near and its lowest point floats at
+   * least {@link #FLOAT_M} above ground (nothing that grows there): the top of a crane's jib cut
+   * off from the rest where its middle lies on a wire and was set aside as wire.
+   */
+  private static void attachFragments(LabelPoints p, int[] root, ObjectKind[] kindOf) {
+    int n = p.size;
+    int[] count = new int[n];
+    float[] lowest = new float[n];
+    Arrays.fill(lowest, Float.POSITIVE_INFINITY);
+    for (int i = 0; i < n; i++) {
+      count[root[i]]++;
+      lowest[root[i]] = Math.min(lowest[root[i]], p.hag[i]);
+    }
+    CellIndex wide = new CellIndex(p.x, p.y, p.z, n, ATTACH_M);
+    ObjectKind[] verdict = new ObjectKind[n];
+    boolean[] blocked = new boolean[n];
+    for (int i = 0; i < n; i++) {
+      int r = root[i];
+      if (count[r] >= MIN_OBJECT_POINTS || lowest[r] < FLOAT_M || blocked[r]) {
+        continue;
+      }
+      wide.within(i, ATTACH_M, j -> {
+        ObjectKind k = kindOf[root[j]];
+        if (k == ObjectKind.VEGETATION) {
+          blocked[r] = true;
+        } else if (k != null && verdict[r] == null) {
+          verdict[r] = k;
+        }
+      });
+    }
+    for (int r = 0; r < n; r++) {
+      if (verdict[r] != null && !blocked[r] && root[r] == r) {
+        kindOf[r] = verdict[r];
+      }
+    }
+  }
+
+  /** The decision of step 5 (class comment). */
+  static ObjectKind decide(double heightM, double linearity, double scattering,
+      double planarShare, double spreadM, double baseShare, double multiReturnShare) {
+    if (multiReturnShare >= ECHO_VEGETATION_SHARE) {
+      return ObjectKind.VEGETATION;
+    }
+    boolean tall = heightM >= MAST_MIN_HEIGHT_M && spreadM <= MAST_MAX_SPREAD_M;
+    boolean standing = scattering <= MAST_MAX_SCATTERING && baseShare >= MAST_MIN_BASE_SHARE;
+    boolean lattice = linearity >= LATTICE_MIN_LINEARITY && scattering <= LATTICE_MAX_SCATTERING
+        && baseShare >= LATTICE_MIN_BASE_SHARE;
+    if (tall && (standing || lattice)) {
+      return ObjectKind.MAST;
+    }
+    if (planarShare >= PLANAR_MIN_SHARE && scattering <= PLANAR_MAX_SCATTERING) {
+      return ObjectKind.PLANAR;
+    }
+    return ObjectKind.VEGETATION;
+  }
+
+  private static void union(int[] parent, int a, int b) {
+    int ra = root(parent, a);
+    int rb = root(parent, b);
+    if (ra != rb) {
+      parent[Math.max(ra, rb)] = Math.min(ra, rb);
+    }
+  }
+
+  private static int root(int[] parent, int i) {
+    int r = i;
+    while (parent[r] != r) {
+      r = parent[r];
+    }
+    while (parent[i] != r) {
+      int next = parent[i];
+      parent[i] = r;
+      i = next;
+    }
+    return r;
+  }
+}
