@@ -69,7 +69,7 @@ public final class ClearanceCheck {
 
   /** Margin of the labelling region beyond the tree reach, m: the conductors' own offset from
    * the span's chord (a double circuit's outer phase, about 15 m; common practice, no source). */
-  static final double LABEL_REGION_MARGIN_M = 20.0;
+  public static final double LABEL_REGION_MARGIN_M = 20.0;
 
   /** Told when each stage ends; the benchmark uses it to read the heap. */
   @FunctionalInterface

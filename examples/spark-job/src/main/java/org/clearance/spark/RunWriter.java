@@ -182,7 +182,7 @@ final class RunWriter {
    * The line's run model from its spans' models. A tree measured from two spans' work areas (it
    * stands in both tree regions) is kept once, with the span whose conductor is nearest to its
    * base (ties to the earlier span), as the whole-survey engine assigns it; trees are then
-   * ranked by that distance and numbered, as there.
+   * numbered in their order along the line, as there.
    */
   private RunModel merge(List<RunModel> parts) {
     List<SpanRecord> spans = new ArrayList<>();
@@ -203,7 +203,23 @@ final class RunWriter {
     }
     List<TreeRecord> ranked = new ArrayList<>();
     order.forEach(k -> ranked.add(trees.get(k)));
-    ranked.sort((a, b) -> Double.compare(a.baseDistances().get(0), b.baseDistances().get(0)));
+    // numbered in their order along the line, as the command line numbers them
+    // (RunModels.treesAlongTheLine): span, station, offset, then position and height
+    Map<String, Integer> spanOrder = new HashMap<>();
+    Map<String, org.clearance.line.SpanFrame> frames = new HashMap<>();
+    for (var span : ctx.layout.lines().get(line).spans()) {
+      spanOrder.putIfAbsent(span.id(), spanOrder.size());
+      frames.putIfAbsent(span.id(), span.frame());
+    }
+    ranked.sort(java.util.Comparator
+        .comparingInt((TreeRecord t) -> spanOrder.getOrDefault(t.spanId(), Integer.MAX_VALUE))
+        .thenComparing(TreeRecord::spanId)
+        .thenComparingDouble(t -> along(frames.get(t.spanId()), t, true))
+        .thenComparingDouble(t -> along(frames.get(t.spanId()), t, false))
+        .thenComparingDouble(TreeRecord::x)
+        .thenComparingDouble(TreeRecord::y)
+        .thenComparingDouble(TreeRecord::topZ)
+        .thenComparingDouble(TreeRecord::heightM));
     List<TreeRecord> numbered = new ArrayList<>();
     for (int i = 0; i < ranked.size(); i++) {
       TreeRecord t = ranked.get(i);
@@ -214,6 +230,13 @@ final class RunWriter {
     RunModel first = parts.get(0);
     return new RunModel(first.toolVersion(), first.units(), first.conditions(),
         first.keepRadiusM(), first.vegetation(), groundDescription(), spans, numbered);
+  }
+
+  private static double along(org.clearance.line.SpanFrame f, TreeRecord t, boolean station) {
+    if (f == null) {
+      return 0;
+    }
+    return station ? f.station(t.x(), t.y()) : f.offset(t.x(), t.y());
   }
 
   /** The ground models' counts summed over the spans' work areas. */

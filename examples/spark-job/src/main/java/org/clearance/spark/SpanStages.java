@@ -29,6 +29,7 @@ import org.clearance.clearance.UncertaintyFile;
 import org.clearance.clearance.VegetationSelector;
 import org.clearance.ground.GroundModel;
 import org.clearance.ground.GroundModelBuilder;
+import org.clearance.label.ObjectLabeller;
 import org.clearance.line.SpanLayout;
 import org.clearance.run.RunModel;
 import org.clearance.run.RunModelJson;
@@ -310,11 +311,20 @@ final class SpanStages {
       }
       ClearanceEngine engine = new ClearanceEngine(engineSpans, conditions, fit.ground(),
           vegetation, options.engine(), options.trees());
+      SetAside aside = union(setAside, true);
+      if (vegetation.inferred()) {
+        // the command line's labelling step, over the spans this task measures: man-made
+        // objects join the points set aside
+        ObjectLabeller.label(consumers -> feed(blocks, consumers.get()),
+            engineSpans.stream().map(m -> m.span().frame()).toList(),
+            options.engine().treeReach() + ClearanceCheck.LABEL_REGION_MARGIN_M, fit.ground(),
+            aside);
+      }
       Path near = temp.resolve(NearPointFile.FILE_NAME);
       Measurement all;
       try (NearPointWriter out = new NearPointWriter(near, engine.nearPointLayout())) {
         all = engine.measure((threads, consumers) -> feed(blocks, consumers.get()), out,
-            union(setAside, true));
+            aside);
       }
       Measurement measured = new Measurement(
           all.spans().stream().filter(c -> c.spanId().equals(id)).toList(),

@@ -225,7 +225,7 @@ class SparkCheckTest {
     for (Map<String, String> a : actual) {
       Map<String, String> e = expectedById.get(a.get("span_id"));
       if (fed.contains(a.get("span_id"))) {
-        assertEquals("NOT_ASSESSED", a.get("status"), a.toString());
+        assertEquals("NOT ASSESSED", a.get("status"), a.toString());
         assertTrue(a.get("reason").contains(tileName) && a.get("reason").contains("record"),
             a.get("reason"));
       } else {
