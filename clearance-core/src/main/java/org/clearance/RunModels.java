@@ -287,6 +287,6 @@ public final class RunModels {
 
   private static StructureRecord structure(Structure s) {
     return new StructureRecord(s.id(), s.x(), s.y(), s.groundZ(),
-        s.type().name().toLowerCase(Locale.ROOT));
+        s.type().name().toLowerCase(Locale.ROOT), s.equipmentText());
   }
 }

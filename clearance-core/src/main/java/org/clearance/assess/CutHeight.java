@@ -62,7 +62,7 @@ public final class CutHeight {
     double growth = withGrowth ? cycleGrowth(rules.profile(), point.classification()) : 0;
     double length = rules.span().lengthM();
     double top = Double.POSITIVE_INFINITY;
-    for (ConditionDistance d : point.distances()) {
+    for (ConditionDistance d : point.distancesFor(ref.zone().roles())) {
       if (!ref.zone().conditions().selects(d) || Double.isNaN(d.horizontal())
           || Double.isNaN(d.vertical())) {
         continue;

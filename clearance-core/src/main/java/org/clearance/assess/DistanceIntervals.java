@@ -1,6 +1,6 @@
 package org.clearance.assess;
 
-import java.util.ArrayList;
+import java.util.EnumSet;
 import java.util.List;
 import java.util.Optional;
 import org.clearance.clearance.ConditionDistance;
@@ -8,6 +8,7 @@ import org.clearance.clearance.DistanceUncertainty;
 import org.clearance.clearance.PointClearance;
 import org.clearance.clearance.StateUncertainty;
 import org.clearance.clearance.UncertaintyFile;
+import org.clearance.line.ConductorPosition.Role;
 import org.clearance.rules.PointFinding;
 import org.clearance.rules.SpanRules;
 import org.clearance.rules.ZoneViolation;
@@ -45,45 +46,30 @@ final class DistanceIntervals {
    * with the interval and verdict of the condition the finding names.
    */
   Outcome evaluate(SpanRules rules, PointClearance p) {
-    List<ConditionDistance> low = new ArrayList<>();
-    List<ConditionDistance> high = new ArrayList<>();
-    List<DistanceUncertainty> sig = new ArrayList<>();
-    for (ConditionDistance d : p.distances()) {
-      if (Double.isNaN(d.distance())) {
-        low.add(d);
-        high.add(d);
-        sig.add(null);
-        continue;
-      }
-      StateUncertainty state = uncertainty.state(p.spanId(), d.conductor(), d.condition())
-          .orElse(null);
-      DistanceUncertainty u = DistanceUncertainty.of(state, uncertainty.options(), d.distance(),
-          d.horizontal(), d.vertical(), d.station());
-      sig.add(u);
-      low.add(moved(d, -k * u.sigma()));
-      high.add(moved(d, k * u.sigma()));
-    }
-    PointFinding atLow = rules.evaluate(withDistances(p, low));
+    PointClearance low = p.mapDistances(d -> moved(d, -k * sigma(p, d)));
+    PointFinding atLow = rules.evaluate(low);
     if (atLow.verdict() != PointFinding.Verdict.INSIDE_ZONE) {
       return new Outcome(atLow, Optional.empty());
     }
     PointFinding nominal = rules.evaluate(p);
-    PointFinding atHigh = rules.evaluate(withDistances(p, high));
+    PointFinding atHigh = rules.evaluate(p.mapDistances(d -> moved(d, k * sigma(p, d))));
     boolean nominallyInside = nominal.verdict() == PointFinding.Verdict.INSIDE_ZONE;
     PointFinding finding = nominallyInside ? nominal : atLow;
     ZoneViolation v = finding.violation().orElseThrow();
-    int c = conditionIndex(p, v.condition());
-    if (!nominallyInside && c >= 0 && low.get(c).distance() > 0) {
+    int c = entryIndex(p, v.condition(), v.conductor());
+    List<ConditionDistance> all = all(p);
+    List<ConditionDistance> lowAll = all(low);
+    if (!nominallyInside && c >= 0 && lowAll.get(c).distance() > 0) {
       // Inside only by its lower bound: report the distance as measured; the deficit stays the
       // one from the lower bound (what clears the point at the confidence level).
-      double back = p.distances().get(c).distance() / low.get(c).distance();
+      double back = all.get(c).distance() / lowAll.get(c).distance();
       v = new ZoneViolation(v.zone(), v.condition(), v.group(), v.conductor(), v.stationM(),
           v.component(), v.actualM() * back, v.requiredM(), v.deficitM());
       finding = new PointFinding(finding.verdict(), Optional.of(v), finding.yearsToViolation(),
           finding.notAssessedReason(), finding.gaps());
     }
-    DistanceUncertainty u = c < 0 ? null : sig.get(c);
-    double d = c < 0 ? Double.NaN : p.distances().get(c).distance();
+    DistanceUncertainty u = c < 0 ? null : uncertainty(p, all.get(c));
+    double d = c < 0 ? Double.NaN : all.get(c).distance();
     double s = u == null ? Double.NaN : u.sigma();
     FindingInterval.Verdict verdict = atHigh.verdict() == PointFinding.Verdict.INSIDE_ZONE
         ? FindingInterval.Verdict.VIOLATION : FindingInterval.Verdict.POSSIBLE_VIOLATION;
@@ -91,9 +77,32 @@ final class DistanceIntervals {
         d + k * s, confidencePercent, verdict, u == null ? "" : u.dominant())));
   }
 
-  private static int conditionIndex(PointClearance p, String condition) {
-    for (int i = 0; i < p.distances().size(); i++) {
-      if (p.distances().get(i).condition().equals(condition)) {
+  /** Every stored distance of a point, of every role, in a fixed order. */
+  private static List<ConditionDistance> all(PointClearance p) {
+    return p.distancesFor(EnumSet.allOf(Role.class));
+  }
+
+  /** The standard uncertainty of one stored distance, or null when it was not computed. */
+  private DistanceUncertainty uncertainty(PointClearance p, ConditionDistance d) {
+    if (Double.isNaN(d.distance())) {
+      return null;
+    }
+    StateUncertainty state = uncertainty.state(p.spanId(), d.conductor(), d.condition())
+        .orElse(null);
+    return DistanceUncertainty.of(state, uncertainty.options(), d.distance(), d.horizontal(),
+        d.vertical(), d.station());
+  }
+
+  private double sigma(PointClearance p, ConditionDistance d) {
+    DistanceUncertainty u = uncertainty(p, d);
+    return u == null ? 0 : u.sigma();
+  }
+
+  /** Index in {@link #all} of the distance of a condition to a named conductor, or -1. */
+  private static int entryIndex(PointClearance p, String condition, String conductor) {
+    List<ConditionDistance> all = all(p);
+    for (int i = 0; i < all.size(); i++) {
+      if (all.get(i).condition().equals(condition) && all.get(i).conductor().equals(conductor)) {
         return i;
       }
     }
@@ -108,8 +117,4 @@ final class DistanceIntervals {
         d.vertical() * f, d.conductor(), d.station());
   }
 
-  private static PointClearance withDistances(PointClearance p, List<ConditionDistance> d) {
-    return new PointClearance(p.spanId(), p.x(), p.y(), p.z(), p.classification(),
-        p.heightAboveGround(), d);
-  }
 }

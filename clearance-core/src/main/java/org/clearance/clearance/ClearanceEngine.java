@@ -11,6 +11,7 @@ import org.clearance.ground.GroundModel;
 import org.clearance.ground.HeightModel;
 import org.clearance.ground.Tree;
 import org.clearance.ground.TreeOptions;
+import org.clearance.line.ConductorPosition.Role;
 import org.clearance.survey.PointChunk;
 import org.clearance.wire.SetAside;
 
@@ -35,6 +36,14 @@ public final class ClearanceEngine {
 
   /** Points buffered per worker before they are handed to the writer. */
   private static final int FLUSH_POINTS = 4096;
+
+  /**
+   * Structure exclusion around a pole, m (issue 15): a wood or steel pole is 0.25-0.45 m across
+   * and carries its hardware on arms, which {@code EngineWorker}'s arm box excludes apart; a
+   * metre around its centre holds the pole's own returns (common practice, no source). The 8 m
+   * of a lattice tower would drop the vegetation along a sixth of a 100 m feeder span.
+   */
+  public static final double POLE_EXCLUSION_M = 1.0;
 
   /**
    * Options.
@@ -142,15 +151,18 @@ public final class ClearanceEngine {
   public NearPointFile nearPointLayout() {
     List<String> ids = new ArrayList<>();
     List<String> names = new ArrayList<>();
+    java.util.EnumSet<Role> roles = java.util.EnumSet.of(Role.PHASE);
     for (PreparedSpan p : spans) {
       ids.add(p.model.span().id());
+      roles.addAll(java.util.Arrays.asList(p.roles));
       for (String n : p.names) {
         if (!names.contains(n)) {
           names.add(n);
         }
       }
     }
-    return new NearPointFile(conditions.names(), conditions.groups(), ids, names);
+    return new NearPointFile(conditions.names(), conditions.groups(), ids, names,
+        List.copyOf(roles));
   }
 
   /**

@@ -7,6 +7,7 @@ import java.util.List;
 import java.util.function.Consumer;
 import org.clearance.ground.CanopyBuilder;
 import org.clearance.ground.HeightModel;
+import org.clearance.line.ConductorPosition.Role;
 import org.clearance.survey.PointChunk;
 import org.clearance.wire.SetAside;
 
@@ -59,10 +60,14 @@ final class EngineWorker implements Consumer<PointChunk> {
   final double[] unreadNearest;
   final java.util.BitSet[] unreadClasses;
   private final SetAside setAside;
-  private final double[] best;
-  private final int[] bestConductor;
-  private final double[] bestAngle;
-  private final double[] bestStation;
+  /** The conductor roles measured apart, indexed by ordinal. */
+  private static final Role[] ROLES = Role.values();
+  private static final int PHASE = Role.PHASE.ordinal();
+  /** Per condition and role: nearest distance, conductor index, swing angle and station. */
+  private final double[][] best;
+  private final int[][] bestConductor;
+  private final double[][] bestAngle;
+  private final double[][] bestStation;
 
   EngineWorker(List<PreparedSpan> spans, SpanIndex index, ConditionSet conditions,
       HeightModel heights, VegetationSelector vegetation, ClearanceEngine.Options options,
@@ -92,10 +97,10 @@ final class EngineWorker implements Consumer<PointChunk> {
     for (int i = 0; i < n; i++) {
       unreadClasses[i] = new java.util.BitSet(256);
     }
-    best = new double[nc];
-    bestConductor = new int[nc];
-    bestAngle = new double[nc];
-    bestStation = new double[nc];
+    best = new double[nc][ROLES.length];
+    bestConductor = new int[nc][ROLES.length];
+    bestAngle = new double[nc][ROLES.length];
+    bestStation = new double[nc][ROLES.length];
   }
 
   @Override
@@ -229,6 +234,11 @@ final class EngineWorker implements Consumer<PointChunk> {
     return best;
   }
 
+  /**
+   * Measures one point: per condition, the nearest conductor of each role (energised, neutral,
+   * shield; issue 15). The span minima count energised conductors only; the point is kept when
+   * within the keep radius of any conductor, so a zone that names another role can be checked.
+   */
   private void measure(PreparedSpan p, double x, double y, double z, int cls, double hag) {
     int sp = p.index;
     int nc = conditions.size();
@@ -246,71 +256,86 @@ final class EngineWorker implements Consumer<PointChunk> {
     boolean mayKeep = lowest <= options.keepRadius();
     double nearest = Double.POSITIVE_INFINITY;
     for (int k = 0; k < nc; k++) {
-      best[k] = Double.POSITIVE_INFINITY;
-      bestConductor[k] = -1;
+      java.util.Arrays.fill(best[k], Double.POSITIVE_INFINITY);
+      java.util.Arrays.fill(bestConductor[k], -1);
       ConditionMinimum current = minimum[sp][k];
       double cutoff = mayKeep || current == null ? Double.POSITIVE_INFINITY : current.distance();
       CatenaryDistance[] row = p.kernels[k];
       for (int j = 0; j < row.length; j++) {
         CatenaryDistance kernel = row[j];
-        if (kernel == null) {
+        int g = p.roles[j].ordinal();
+        if (kernel == null || !mayKeep && g != PHASE) {
           continue;
         }
         double bound = p.lowerBound(k, j, x, y, z);
-        if (bound >= best[k] || bound >= cutoff) {
+        if (bound >= best[k][g] || bound >= cutoff) {
           continue;
         }
         double phi = p.swingMin[k][j] < 0 || p.swingMax[k][j] > 0
             ? kernel.closestSwingAngle(x, y, z, p.swingMin[k][j], p.swingMax[k][j]) : 0;
         double station = kernel.closestStation(x, y, z, phi);
         double d = kernel.distanceAt(x, y, z, phi, station);
-        if (d < best[k]) {
-          best[k] = d;
-          bestConductor[k] = j;
-          bestAngle[k] = phi;
-          bestStation[k] = station;
+        if (d < best[k][g]) {
+          best[k][g] = d;
+          bestConductor[k][g] = j;
+          bestAngle[k][g] = phi;
+          bestStation[k][g] = station;
         }
       }
-      nearest = Math.min(nearest, best[k]);
+      for (int g = 0; g < ROLES.length; g++) {
+        nearest = Math.min(nearest, best[k][g]);
+      }
     }
     measured[sp]++;
     boolean keep = nearest <= options.keepRadius();
-    List<ConditionDistance> details = keep ? new ArrayList<>(nc) : null;
-    for (int k = 0; k < nc; k++) {
-      int j = bestConductor[k];
-      String name = conditions.names().get(k);
-      String group = conditions.groups().get(k);
-      if (j < 0) {
-        if (keep) {
-          details.add(new ConditionDistance(name, group, Double.NaN, Double.NaN, Double.NaN, "",
-              Double.NaN));
+    List<List<ConditionDistance>> details = new ArrayList<>();
+    for (Role role : ROLES) {
+      int g = role.ordinal();
+      boolean present = role == Role.PHASE || p.has(role);
+      List<ConditionDistance> list = keep && present ? new ArrayList<>(nc) : null;
+      details.add(list == null ? List.of() : list);
+      for (int k = 0; k < nc; k++) {
+        int j = bestConductor[k][g];
+        String name = conditions.names().get(k);
+        String group = conditions.groups().get(k);
+        if (j < 0) {
+          if (list != null) {
+            list.add(new ConditionDistance(name, group, Double.NaN, Double.NaN, Double.NaN, "",
+                Double.NaN));
+          }
+          continue;
         }
-        continue;
-      }
-      ConditionMinimum current = minimum[sp][k];
-      boolean newMinimum = current == null || best[k] < current.distance();
-      if (!keep && !newMinimum) {
-        continue;
-      }
-      ConductorDistance cd = p.kernels[k][j].closestAt(x, y, z, bestAngle[k], bestStation[k]);
-      if (newMinimum) {
-        minimum[sp][k] = new ConditionMinimum(name, group, cd.distance(), cd.horizontal(),
-            cd.vertical(), p.names[j], x, y, z);
-      }
-      if (keep) {
-        double station = p.frame.station(cd.closestX(), cd.closestY());
-        details.add(new ConditionDistance(name, group, cd.distance(), cd.horizontal(),
-            cd.vertical(), p.names[j], station));
+        ConditionMinimum current = minimum[sp][k];
+        boolean newMinimum = role == Role.PHASE
+            && (current == null || best[k][g] < current.distance());
+        if (list == null && !newMinimum) {
+          continue;
+        }
+        ConductorDistance cd = p.kernels[k][j].closestAt(x, y, z, bestAngle[k][g],
+            bestStation[k][g]);
+        if (newMinimum) {
+          minimum[sp][k] = new ConditionMinimum(name, group, cd.distance(), cd.horizontal(),
+              cd.vertical(), p.names[j], x, y, z);
+        }
+        if (list != null) {
+          double station = p.frame.station(cd.closestX(), cd.closestY());
+          list.add(new ConditionDistance(name, group, cd.distance(), cd.horizontal(),
+              cd.vertical(), p.names[j], station));
+        }
       }
     }
     if (keep) {
       kept[sp]++;
-      buffer.add(new PointClearance(p.model.span().id(), x, y, z, cls, hag, details));
+      buffer.add(new PointClearance(p.model.span().id(), x, y, z, cls, hag,
+          details.get(Role.PHASE.ordinal()), details.get(Role.NEUTRAL.ordinal()),
+          details.get(Role.SHIELD.ordinal())));
     }
   }
 
   private boolean nearStructure(PreparedSpan p, double x, double y) {
-    double r2 = options.structureExclusion() * options.structureExclusion();
+    double r = Double.isNaN(p.model.structureExclusionM()) ? options.structureExclusion()
+        : Math.min(options.structureExclusion(), p.model.structureExclusionM());
+    double r2 = r * r;
     double ax = p.model.span().from().x() - x;
     double ay = p.model.span().from().y() - y;
     double bx = p.model.span().to().x() - x;

@@ -5,19 +5,24 @@ import java.nio.ByteOrder;
 import java.util.Arrays;
 import java.util.List;
 import java.util.Objects;
+import java.util.Set;
+import org.clearance.line.ConductorPosition.Role;
 
 /**
  * The layout of {@code near-points.bin}, the file in which the clearance engine keeps every
  * vegetation point near a conductor with its distances, so that rule profiles can be re-evaluated
  * without reading the survey again.
  *
- * <p>Little-endian binary. Header: the 8 ASCII bytes {@code CLRNEAR2} (format 2); int32 number of
+ * <p>Little-endian binary. Header: the 8 ASCII bytes {@code CLRNEAR3} (format 3); int32 number of
  * conditions, then per condition its name and report group; int32 number of spans, then each span
- * id; int32 number of conductor names, then each name (every string is an int16 byte length and
- * UTF-8 bytes). Records follow to the end of the file, each: int32 span index; float64 x, y, z
- * (metres, survey CRS scaled to metres); int16 ASPRS class; float32 height above ground (m, NaN
- * when unknown); then per condition, in header order: float32 distance, horizontal, vertical (m),
- * int16 conductor index (-1: none), float32 station (m). Float32 keeps distances to well under a
+ * id; int32 number of conductor names, then each name; int32 number of conductor roles measured,
+ * then each role ({@code phase} first, then {@code neutral} and/or {@code shield} when some span
+ * has them; every string is an int16 byte length and UTF-8 bytes). Records follow to the end of
+ * the file, each: int32 span index; float64 x, y, z (metres, survey CRS scaled to metres); int16
+ * ASPRS class; float32 height above ground (m, NaN when unknown); then per role, in header
+ * order, per condition, in header order: float32 distance, horizontal, vertical (m), int16
+ * conductor index (-1: none of that role), float32 station (m): the nearest conductor of that
+ * role. Float32 keeps distances to well under a
  * millimetre at the ranges stored (below a few hundred metres). Records are sorted by span index,
  * then x, y and z, then their remaining bytes, so the same survey gives the same file whatever
  * the order the reading threads met the points in. Trailer: the 8 ASCII bytes {@code CLRNEND2},
@@ -29,16 +34,18 @@ import java.util.Objects;
  *     {@code ice})
  * @param spanIds span ids that records refer to by index
  * @param conductors conductor names that records refer to by index
+ * @param roles conductor roles whose nearest distances each record holds, {@code PHASE} first
  */
 public record NearPointFile(
-    List<String> conditions, List<String> groups, List<String> spanIds, List<String> conductors) {
+    List<String> conditions, List<String> groups, List<String> spanIds, List<String> conductors,
+    List<Role> roles) {
 
   /** File name inside a run folder. */
   public static final String FILE_NAME = "near-points.bin";
   /** Magic bytes and format version. */
-  static final byte[] MAGIC = {'C', 'L', 'R', 'N', 'E', 'A', 'R', '2'};
+  static final byte[] MAGIC = {'C', 'L', 'R', 'N', 'E', 'A', 'R', '3'};
   /** Magic bytes of the trailer. */
-  static final byte[] END = {'C', 'L', 'R', 'N', 'E', 'N', 'D', '2'};
+  static final byte[] END = {'C', 'L', 'R', 'N', 'E', 'N', 'D', '3'};
   /** Bytes of the trailer: magic, int64 count, int32 CRC-32C. */
   static final int TRAILER_BYTES = 8 + 8 + 4;
   /** Byte offsets of the span index and of x, y, z in a record. */
@@ -53,6 +60,11 @@ public record NearPointFile(
     groups = List.copyOf(groups);
     spanIds = List.copyOf(spanIds);
     conductors = List.copyOf(conductors);
+    roles = List.copyOf(roles);
+    if (roles.isEmpty() || roles.get(0) != Role.PHASE || roles.size() != Set.copyOf(roles).size()) {
+      throw new IllegalArgumentException("roles must start with phase and name each role once: "
+          + roles);
+    }
     if (conditions.size() != groups.size()) {
       throw new IllegalArgumentException("one group per condition");
     }
@@ -67,7 +79,13 @@ public record NearPointFile(
 
   /** Bytes of one record. */
   public int recordBytes() {
-    return FIXED_BYTES + CONDITION_BYTES * conditions.size();
+    return FIXED_BYTES + CONDITION_BYTES * conditions.size() * roles.size();
+  }
+
+  /** A layout measuring energised (phase) conductors only. */
+  public NearPointFile(List<String> conditions, List<String> groups, List<String> spanIds,
+      List<String> conductors) {
+    this(conditions, groups, spanIds, conductors, List.of(Role.PHASE));
   }
 
   /**

@@ -17,6 +17,7 @@ import java.util.function.Consumer;
 import java.util.zip.CRC32C;
 import java.util.zip.CheckedInputStream;
 import org.clearance.InputException;
+import org.clearance.line.ConductorPosition.Role;
 
 /**
  * Reads {@link NearPointFile near-points.bin} back, streaming, one record at a time. A file of
@@ -88,21 +89,28 @@ public final class NearPointReader {
         double z = buf.getDouble();
         int cls = buf.getShort();
         double hag = buf.getFloat();
-        List<ConditionDistance> ds = new ArrayList<>(n);
-        for (int c = 0; c < n; c++) {
-          double d = buf.getFloat();
-          double hz = buf.getFloat();
-          double v = buf.getFloat();
-          int conductor = buf.getShort();
-          double st = buf.getFloat();
-          if (conductor < -1 || conductor >= layout.conductors().size()) {
-            throw new InputException(file, where, "conductor index", "conductor index "
-                + conductor + " outside the header's " + layout.conductors().size() + RERUN);
+        List<List<ConditionDistance>> byRole = new ArrayList<>();
+        for (Role role : layout.roles()) {
+          List<ConditionDistance> ds = new ArrayList<>(n);
+          for (int c = 0; c < n; c++) {
+            double d = buf.getFloat();
+            double hz = buf.getFloat();
+            double v = buf.getFloat();
+            int conductor = buf.getShort();
+            double st = buf.getFloat();
+            if (conductor < -1 || conductor >= layout.conductors().size()) {
+              throw new InputException(file, where, "conductor index", "conductor index "
+                  + conductor + " outside the header's " + layout.conductors().size() + RERUN);
+            }
+            ds.add(new ConditionDistance(layout.conditions().get(c), layout.groups().get(c), d,
+                hz, v, conductor < 0 ? "" : layout.conductors().get(conductor), st));
           }
-          ds.add(new ConditionDistance(layout.conditions().get(c), layout.groups().get(c), d, hz,
-              v, conductor < 0 ? "" : layout.conductors().get(conductor), st));
+          boolean none = role != Role.PHASE && ds.stream().allMatch(e -> e.conductor().isEmpty());
+          byRole.add(none ? List.of() : ds);
         }
-        sink.accept(new PointClearance(layout.spanIds().get(span), x, y, z, cls, hag, ds));
+        sink.accept(new PointClearance(layout.spanIds().get(span), x, y, z, cls, hag,
+            byRole.get(0), roleList(layout, byRole, Role.NEUTRAL),
+            roleList(layout, byRole, Role.SHIELD)));
       }
       long expected = crc.getValue();
       byte[] trailer = new byte[NearPointFile.TRAILER_BYTES];
@@ -126,6 +134,12 @@ public final class NearPointReader {
     }
   }
 
+  private static List<ConditionDistance> roleList(NearPointFile layout,
+      List<List<ConditionDistance>> byRole, Role role) {
+    int i = layout.roles().indexOf(role);
+    return i < 0 ? List.of() : byRole.get(i);
+  }
+
   /** A header and its length in bytes. */
   private record Header(NearPointFile layout, long bytes) {}
 
@@ -138,7 +152,7 @@ public final class NearPointReader {
         throw new InputException(file, "header", "format", older
             ? "near-points format " + (char) magic[7] + ", this version reads format "
                 + (char) NearPointFile.MAGIC[7] + ": run the check again with this version"
-            : "not a near-points file (no CLRNEAR2 marker)" + RERUN);
+            : "not a near-points file (no CLRNEAR3 marker)" + RERUN);
       }
       long[] bytes = {magic.length};
       List<String> conditions = readStrings(file, in, size, bytes);
@@ -148,8 +162,19 @@ public final class NearPointReader {
       }
       List<String> spans = readStrings(file, in, size, bytes);
       List<String> conductors = readStrings(file, in, size, bytes);
+      List<Role> roles = new ArrayList<>();
+      for (String r : readStrings(file, in, size, bytes)) {
+        roles.add(switch (r) {
+          case "phase" -> Role.PHASE;
+          case "neutral" -> Role.NEUTRAL;
+          case "shield" -> Role.SHIELD;
+          default -> throw new InputException(file, "header", "role", "unknown conductor role '"
+              + r + "'" + RERUN);
+        });
+      }
       try {
-        return new Header(new NearPointFile(conditions, groups, spans, conductors), bytes[0]);
+        return new Header(new NearPointFile(conditions, groups, spans, conductors, roles),
+            bytes[0]);
       } catch (IllegalArgumentException e) {
         throw new InputException(file, "header", null, e.getMessage() + RERUN);
       }

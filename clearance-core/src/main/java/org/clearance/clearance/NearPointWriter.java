@@ -12,11 +12,13 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.HashMap;
 import java.util.List;
+import java.util.Locale;
 import java.util.Map;
 import java.util.zip.CRC32C;
 import java.util.zip.CheckedOutputStream;
 import org.clearance.io.AtomicFiles;
 import org.clearance.io.RecordSort;
+import org.clearance.line.ConductorPosition.Role;
 
 /**
  * Writes {@link NearPointFile near-points.bin}. Thread-safe: workers may write concurrently (each
@@ -60,6 +62,7 @@ public final class NearPointWriter implements Closeable {
     }
     writeStrings(b, layout.spanIds());
     writeStrings(b, layout.conductors());
+    writeStrings(b, layout.roles().stream().map(r -> r.name().toLowerCase(Locale.ROOT)).toList());
     return b.toByteArray();
   }
 
@@ -100,16 +103,32 @@ public final class NearPointWriter implements Closeable {
       }
       buf.putInt(span).putDouble(p.x()).putDouble(p.y()).putDouble(p.z())
           .putShort((short) p.classification()).putFloat((float) p.heightAboveGround());
-      for (int c = 0; c < n; c++) {
-        ConditionDistance d = p.distances().get(c);
-        if (!d.condition().equals(layout.conditions().get(c))) {
-          throw new IllegalArgumentException("condition order differs from the header: "
-              + d.condition());
+      for (Role role : layout.roles()) {
+        List<ConditionDistance> ds = p.distances(role);
+        if (!ds.isEmpty() && ds.size() != n) {
+          throw new IllegalArgumentException("expected " + n + " conditions, got " + ds.size());
         }
-        Integer conductor = conductorIndex.get(d.conductor());
-        buf.putFloat((float) d.distance()).putFloat((float) d.horizontal())
-            .putFloat((float) d.vertical()).putShort(conductor == null ? -1 : conductor.shortValue())
-            .putFloat((float) d.station());
+        for (int c = 0; c < n; c++) {
+          if (ds.isEmpty()) {
+            buf.putFloat(Float.NaN).putFloat(Float.NaN).putFloat(Float.NaN).putShort((short) -1)
+                .putFloat(Float.NaN);
+            continue;
+          }
+          ConditionDistance d = ds.get(c);
+          if (!d.condition().equals(layout.conditions().get(c))) {
+            throw new IllegalArgumentException("condition order differs from the header: "
+                + d.condition());
+          }
+          Integer conductor = conductorIndex.get(d.conductor());
+          buf.putFloat((float) d.distance()).putFloat((float) d.horizontal())
+              .putFloat((float) d.vertical())
+              .putShort(conductor == null ? -1 : conductor.shortValue())
+              .putFloat((float) d.station());
+        }
+      }
+      if (!p.neutral().isEmpty() && !layout.roles().contains(Role.NEUTRAL)
+          || !p.shield().isEmpty() && !layout.roles().contains(Role.SHIELD)) {
+        throw new IllegalArgumentException("a role's distances the file header does not list");
       }
     }
     synchronized (this) {

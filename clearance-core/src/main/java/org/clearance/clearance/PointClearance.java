@@ -1,12 +1,22 @@
 package org.clearance.clearance;
 
+import java.util.ArrayList;
 import java.util.List;
 import java.util.Objects;
+import java.util.Set;
+import java.util.function.UnaryOperator;
+import org.clearance.line.ConductorPosition.Role;
 
 /**
  * One vegetation point near a span, with its distances to the span's conductors in every line
  * condition. The clearance engine stores these so that rule profiles can be re-evaluated without
  * reading the survey again.
+ *
+ * <p>Distances are kept per conductor role (issue 15): {@code distances} to the nearest
+ * energised conductor (a phase, or a fitted wire of no known role, taken as live), and, when the
+ * span has them, {@code neutral} to the nearest neutral or secondary conductor and
+ * {@code shield} to the nearest shield wire. A zone applies to the roles its profile names
+ * ({@link #distancesFor(Set)}); by default to the energised conductors only.
  *
  * @param spanId id of the span the distances refer to
  * @param x easting, m (survey CRS scaled to metres)
@@ -14,7 +24,12 @@ import java.util.Objects;
  * @param z elevation, m
  * @param classification ASPRS class of the point (as read, or as inferred for unclassified data)
  * @param heightAboveGround height above the ground model, m, or NaN where there is no ground
- * @param distances one entry per condition, the surveyed state first
+ * @param distances to the nearest energised conductor, one entry per condition, the surveyed
+ *     state first
+ * @param neutral to the nearest neutral conductor, one entry per condition in the same order,
+ *     or empty when the span has none
+ * @param shield to the nearest shield wire, one entry per condition, or empty when the span
+ *     has none
  */
 public record PointClearance(
     String spanId,
@@ -23,14 +38,62 @@ public record PointClearance(
     double z,
     int classification,
     double heightAboveGround,
-    List<ConditionDistance> distances) {
+    List<ConditionDistance> distances,
+    List<ConditionDistance> neutral,
+    List<ConditionDistance> shield) {
 
   public PointClearance {
     Objects.requireNonNull(spanId, "spanId");
     distances = List.copyOf(distances);
+    neutral = List.copyOf(neutral);
+    shield = List.copyOf(shield);
+    if (!neutral.isEmpty() && neutral.size() != distances.size()
+        || !shield.isEmpty() && shield.size() != distances.size()) {
+      throw new IllegalArgumentException("one distance per condition for every role of span "
+          + spanId);
+    }
   }
 
-  /** The smallest distance over all conditions. */
+  /** A point with distances to energised conductors only. */
+  public PointClearance(String spanId, double x, double y, double z, int classification,
+      double heightAboveGround, List<ConditionDistance> distances) {
+    this(spanId, x, y, z, classification, heightAboveGround, distances, List.of(), List.of());
+  }
+
+  /** The distances of one role (empty when the span has no conductor of it). */
+  public List<ConditionDistance> distances(Role role) {
+    return switch (role) {
+      case PHASE -> distances;
+      case NEUTRAL -> neutral;
+      case SHIELD -> shield;
+    };
+  }
+
+  /**
+   * Every distance to a conductor of the given roles: for each role, one entry per condition.
+   * A zone is checked against each of them; the worst counts.
+   */
+  public List<ConditionDistance> distancesFor(Set<Role> roles) {
+    if (roles.size() == 1 && roles.contains(Role.PHASE)) {
+      return distances;
+    }
+    List<ConditionDistance> out = new ArrayList<>();
+    for (Role r : Role.values()) {
+      if (roles.contains(r)) {
+        out.addAll(distances(r));
+      }
+    }
+    return out;
+  }
+
+  /** The same point with every distance of every role passed through {@code f}. */
+  public PointClearance mapDistances(UnaryOperator<ConditionDistance> f) {
+    return new PointClearance(spanId, x, y, z, classification, heightAboveGround,
+        distances.stream().map(f).toList(), neutral.stream().map(f).toList(),
+        shield.stream().map(f).toList());
+  }
+
+  /** The smallest distance to an energised conductor over all conditions. */
   public ConditionDistance governing() {
     ConditionDistance best = null;
     for (ConditionDistance d : distances) {

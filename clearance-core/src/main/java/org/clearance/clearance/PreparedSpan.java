@@ -3,6 +3,7 @@ package org.clearance.clearance;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
+import org.clearance.line.ConductorPosition.Role;
 import org.clearance.line.SpanFrame;
 import org.clearance.wire.Catenary;
 import org.clearance.wire.ConductorCurve;
@@ -40,6 +41,8 @@ final class PreparedSpan {
   final double[][] vertexZ;
   final double[][] constant;
   final String[] names;
+  /** Role of each conductor: a wire of no known role counts as energised (issue 15). */
+  final Role[] roles;
   /**
    * Cross-arm boxes at the span's two structures, in the span frame: per end (0 at the first
    * structure, 1 at the second) the least and largest offset and the lowest elevation of the
@@ -68,6 +71,7 @@ final class PreparedSpan {
     vertexZ = new double[conditions][n];
     constant = new double[conditions][n];
     names = new String[n];
+    roles = new Role[n];
     double lo = Double.POSITIVE_INFINITY;
     double hi = Double.NEGATIVE_INFINITY;
     double zLo = Double.POSITIVE_INFINITY;
@@ -77,6 +81,7 @@ final class PreparedSpan {
     for (int j = 0; j < n; j++) {
       ConductorModel conductor = model.conductors().get(j);
       names[j] = conductor.name();
+      roles[j] = Role.ofName(conductor.role());
       for (int k = 0; k < conditions; k++) {
         Optional<ConductorState> state = k < conductor.states().size()
             ? conductor.states().get(k) : Optional.empty();
@@ -165,6 +170,16 @@ final class PreparedSpan {
     }
     double across = v / ch; // sqrt(1 + sinh^2 t) = cosh t
     return Math.sqrt(e * e + across * across);
+  }
+
+  /** Whether the span has a conductor of this role. */
+  boolean has(Role role) {
+    for (Role r : roles) {
+      if (r == role) {
+        return true;
+      }
+    }
+    return false;
   }
 
   /** Whether a point lies in the measuring box. */

@@ -43,7 +43,20 @@ public record ConductorPosition(
      * A neutral or secondary (low-voltage) conductor of a distribution line, hung below the
      * primaries and not energised at the line's voltage (ASPRS LAS class 14, wire - conductor).
      */
-    NEUTRAL
+    NEUTRAL;
+
+    /**
+     * The role of a lower-case role name as run files store it ({@code phase}, {@code neutral},
+     * {@code shield}); any other name (a wire of no known position) is taken as energised, the
+     * safe reading (issue 15).
+     */
+    public static Role ofName(String name) {
+      return switch (name) {
+        case "neutral" -> NEUTRAL;
+        case "shield" -> SHIELD;
+        default -> PHASE;
+      };
+    }
   }
 
   public ConductorPosition {

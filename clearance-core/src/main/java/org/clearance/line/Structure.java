@@ -1,9 +1,12 @@
 package org.clearance.line;
 
 import java.util.Collections;
+import java.util.EnumSet;
 import java.util.LinkedHashMap;
 import java.util.Map;
 import java.util.Objects;
+import java.util.Set;
+import java.util.stream.Collectors;
 
 /**
  * One structure (tower, pole) of a line, as the structures file gives it, in metres.
@@ -20,6 +23,7 @@ import java.util.Objects;
  *     without a value are absent (unmodifiable, in file column order)
  * @param sourceFile the structures file, for messages
  * @param sourceLine 1-based line of the row (CSV) or of the feature (GeoJSON) in that file
+ * @param equipment equipment the file lists on the structure (empty when none or not given)
  */
 public record Structure(
     String id,
@@ -31,7 +35,14 @@ public record Structure(
     double groundZ,
     Map<String, Double> attachZ,
     String sourceFile,
-    int sourceLine) {
+    int sourceLine,
+    Set<PoleEquipment> equipment) {
+
+  /** A structure without listed equipment. */
+  public Structure(String id, String lineId, int sequence, StructureType type, double x, double y,
+      double groundZ, Map<String, Double> attachZ, String sourceFile, int sourceLine) {
+    this(id, lineId, sequence, type, x, y, groundZ, attachZ, sourceFile, sourceLine, Set.of());
+  }
 
   public Structure {
     Objects.requireNonNull(id, "id");
@@ -45,6 +56,14 @@ public record Structure(
       throw new IllegalArgumentException("plan position must be finite: " + x + ", " + y);
     }
     attachZ = Collections.unmodifiableMap(new LinkedHashMap<>(attachZ));
+    equipment = equipment.isEmpty() ? Set.of()
+        : Collections.unmodifiableSet(EnumSet.copyOf(equipment));
+  }
+
+  /** The listed equipment as files write it, in a fixed order, joined by {@code ;} ("" when none). */
+  public String equipmentText() {
+    return equipment.stream().sorted().map(PoleEquipment::fileName)
+        .collect(Collectors.joining(";"));
   }
 
   /** Attachment elevation of a conductor position, m, or NaN when the file does not give it. */

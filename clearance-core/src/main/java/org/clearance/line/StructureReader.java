@@ -35,9 +35,11 @@ public final class StructureReader {
   static final String SEQUENCE = "sequence";
   static final String TYPE = "type";
   static final String GROUND_Z = "ground_z";
+  static final String EQUIPMENT = "equipment";
   static final String ATTACH_PREFIX = "attach_z_";
   static final List<String> REQUIRED = List.of(ID, X, Y);
-  private static final List<String> FIXED = List.of(ID, X, Y, LINE_ID, SEQUENCE, TYPE, GROUND_Z);
+  private static final List<String> FIXED = List.of(ID, X, Y, LINE_ID, SEQUENCE, TYPE, GROUND_Z,
+      EQUIPMENT);
   /**
    * Plausible projected coordinates, metres: eastings and northings of every projected CRS in
    * use stay within 1e8 m (UTM northings reach 1e7 m). Common practice, no source.
@@ -229,7 +231,7 @@ public final class StructureReader {
     }
     return new Structure(id.text(), lineId, sequence, type, x, y,
         Double.isNaN(groundZ) ? Double.NaN : v.toMetres(groundZ), toMetres(attach, v), file,
-        r.line());
+        r.line(), equipment(f.get(EQUIPMENT), file));
   }
 
   /** The value in metres when inside the range, else an error naming the field. */
@@ -273,6 +275,32 @@ public final class StructureReader {
           "'" + field.text() + "' is not a whole number");
     }
     return Integer.parseInt(field.text());
+  }
+
+  /**
+   * The equipment column: kinds separated by {@code ;} (or spaces), each once; blank = none.
+   */
+  private static java.util.Set<PoleEquipment> equipment(Field field, String file) {
+    java.util.Set<PoleEquipment> out = java.util.EnumSet.noneOf(PoleEquipment.class);
+    if (field == null || field.text().isEmpty()) {
+      return out;
+    }
+    for (String word : field.text().split("[;\\s]+")) {
+      if (word.isEmpty()) {
+        continue;
+      }
+      PoleEquipment e = PoleEquipment.ofFileName(word);
+      if (e == null) {
+        throw new InputException(file, "line " + field.line(), EQUIPMENT, "'" + word
+            + "' is not equipment; use transformer, switch, fuse, arrester, dead_end or corner,"
+            + " separated by ';'");
+      }
+      if (!out.add(e)) {
+        throw new InputException(file, "line " + field.line(), EQUIPMENT, "'" + word
+            + "' is listed twice");
+      }
+    }
+    return out;
   }
 
   private static StructureType type(Field field, String file) {

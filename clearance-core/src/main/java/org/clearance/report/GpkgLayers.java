@@ -41,12 +41,12 @@ final class GpkgLayers {
     return out;
   }
 
-  /** The structures at the ends of the spans, once each: id, type and line. */
+  /** The structures at the ends of the spans, once each: id, type, line and equipment. */
   private static Layer structures(RunAssessment run, int srs) {
     LinearUnit h = run.model().units().horizontal();
     LinearUnit v = run.model().units().vertical();
     List<Column> cols = List.of(col("structure_id", "TEXT"), col("type", "TEXT"),
-        col("line_id", "TEXT"), col("ground_z", "REAL"));
+        col("line_id", "TEXT"), col("ground_z", "REAL"), col("equipment", "TEXT"));
     Map<String, Feature> byId = new LinkedHashMap<>();
     Extent e = new Extent();
     for (SpanRecord span : run.model().spans()) { // line order, not ranking order
@@ -58,7 +58,7 @@ final class GpkgLayers {
         }
         e.add(x, y);
         byId.put(s.id(), new Feature(GpkgGeometry.point(srs, x, y), values(s.id(), s.type(),
-            span.context().lineId(), v.fromMetres(s.groundZ()))));
+            span.context().lineId(), v.fromMetres(s.groundZ()), s.equipment())));
       }
     }
     return new Layer("structures", "Structures at the ends of the spans", "POINT", false, cols,

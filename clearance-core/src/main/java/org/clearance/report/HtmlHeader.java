@@ -115,7 +115,7 @@ final class HtmlHeader {
   static String conductors(LineFacts l) {
     Map<String, List<String>> byType = new LinkedHashMap<>();
     for (LineFacts.Position p : l.positions()) {
-      String where = p.position() + (p.role().equals("shield") ? " (shield)" : "")
+      String where = p.position() + (p.role().equals("phase") ? "" : " (" + p.role() + ")")
           + (p.bundle() > 1 ? " (bundle of " + p.bundle() + ")" : "");
       byType.computeIfAbsent(p.conductor(), k -> new ArrayList<>()).add(where);
     }

@@ -9,6 +9,7 @@ import org.clearance.rules.DistanceTable;
 import org.clearance.rules.GrowthRates;
 import org.clearance.rules.Measurement;
 import org.clearance.rules.ProfileOrigin;
+import org.clearance.rules.RuleExplainer;
 import org.clearance.rules.RuleProfile;
 import org.clearance.rules.Zone;
 
@@ -45,6 +46,7 @@ public final class ProfileText {
       }
       line(b, "      voltages: %s; applies in: %s", z.voltage().describe(),
           z.conditions().describe());
+      line(b, "      measured from: %s", RuleExplainer.roles(z));
       if (z.measurement() instanceof Measurement.Radial r) {
         line(b, "      radial: %s", spec(r.radial()));
       } else if (z.measurement() instanceof Measurement.Components c) {

@@ -10,6 +10,7 @@ import org.clearance.assess.RunAssessor;
 import org.clearance.assess.SpanPoints;
 import org.clearance.assess.SpanResult;
 import org.clearance.clearance.ConditionMinimum;
+import org.clearance.line.ConductorPosition.Role;
 import org.clearance.line.SpanFrame;
 import org.clearance.rules.Requirement;
 import org.clearance.rules.ResolvedZone;
@@ -25,7 +26,8 @@ import org.clearance.run.StructureRecord;
  * the line looking forward at the top) and a profile view (chainage to the right, elevation
  * upwards). Both show the conductors as surveyed (solid) and in the span's governing condition
  * (dashed; swung states at the end of their swing range), the band of the violation-reference
- * zone around the governing conductors, the vegetation near the line (a bounded sample), the
+ * zone around the governing conductors it applies to (energised ones unless the zone names
+ * neutrals or shield wires), the vegetation near the line (a bounded sample), the
  * points inside a zone in their zone's colour, fall-in trees and the structures. The two axes
  * have separate scales; the caption of each view says by how much the cross axis is stretched.
  */
@@ -48,6 +50,9 @@ final class SvgSpanViews {
   private final SpanRules rules;
   private final List<double[]> surveyed = new ArrayList<>();
   private final List<double[]> governing = new ArrayList<>();
+  /** The conductors above whose role the violation-reference zone applies to. */
+  private final List<double[]> surveyedZoned = new ArrayList<>();
+  private final List<double[]> governingZoned = new ArrayList<>();
 
   /** A drawing and the stretch of its cross axis relative to its chainage axis. */
   record View(String svg, double stretch) {}
@@ -71,11 +76,23 @@ final class SvgSpanViews {
       if (!k.fitted()) {
         continue;
       }
-      surveyed.add(ConductorSampler.sample(k.states().get(0).get(), 0));
+      // the zone's band goes only around the conductors it applies to: a neutral or shield
+      // wire is not drawn as if live unless the zone names its role (issue 15)
+      boolean zoned = reference.isPresent()
+          && reference.get().zone().roles().contains(Role.ofName(k.role()));
+      double[] s = ConductorSampler.sample(k.states().get(0).get(), 0);
+      surveyed.add(s);
+      if (zoned) {
+        surveyedZoned.add(s);
+      }
       if (conditionIndex > 0 && conditionIndex < k.states().size()
           && k.states().get(conditionIndex).isPresent()) {
         CurveRecord c = k.states().get(conditionIndex).get();
-        governing.add(ConductorSampler.sample(c, ConductorSampler.drawnSwing(c)));
+        double[] g = ConductorSampler.sample(c, ConductorSampler.drawnSwing(c));
+        governing.add(g);
+        if (zoned) {
+          governingZoned.add(g);
+        }
       }
     }
   }
@@ -106,7 +123,7 @@ final class SvgSpanViews {
     Range across = new Range();
     across.add(plan ? 0 : Double.NaN);
     List<double[]> bands = new ArrayList<>();
-    List<double[]> envelopeSource = governing.isEmpty() ? surveyed : governing;
+    List<double[]> envelopeSource = governing.isEmpty() ? surveyedZoned : governingZoned;
     for (double[] c : envelopeSource) {
       bands.add(band(c, plan));
     }

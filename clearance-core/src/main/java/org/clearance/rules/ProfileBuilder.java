@@ -11,13 +11,14 @@ import java.util.Set;
 import java.util.regex.Pattern;
 import org.clearance.io.ValueRange;
 import org.clearance.io.YamlMap;
+import org.clearance.line.ConductorPosition.Role;
 
 /** Merges the files of a profile's chain and builds the validated {@link RuleProfile}. */
 final class ProfileBuilder {
 
   private static final Set<String> ZONE_KEYS = Set.of("name", "note", "priority",
       "violation_reference", "voltage", "conditions", "condition_names", "radial_m",
-      "horizontal_m", "vertical_m", "midspan_allowance");
+      "horizontal_m", "vertical_m", "midspan_allowance", "conductor_roles");
   private static final Set<String> RATE_KEYS = Set.of("vertical", "lateral");
   private static final Set<String> FALL_IN_KEYS =
       Set.of("enabled", "conditions", "condition_names", "reach_allowance_m");
@@ -204,7 +205,35 @@ final class ProfileBuilder {
     MidspanAllowance allowance = map.optional("midspan_allowance")
         .map(DistanceParser::allowance).orElse(MidspanAllowance.NONE);
     String note = map.optional("note").map(YamlMap.Entry::text).orElse("");
-    return new Zone(name, priority, reference, band, conditions, measurement, allowance, note);
+    Set<Role> roles = map.optional("conductor_roles").map(ProfileBuilder::roles)
+        .orElse(Zone.ENERGISED);
+    if (reference && !roles.contains(Role.PHASE)) {
+      throw map.required("conductor_roles").error("a violation-reference zone must apply to "
+          + "the energised conductors: list phase");
+    }
+    return new Zone(name, priority, reference, band, conditions, measurement, allowance, note,
+        roles);
+  }
+
+  /** The roles of {@code conductor_roles}: a list of phase, neutral and shield, each once. */
+  private static Set<Role> roles(YamlMap.Entry entry) {
+    Set<Role> roles = java.util.EnumSet.noneOf(Role.class);
+    for (String r : entry.texts()) {
+      Role role = switch (r) {
+        case "phase" -> Role.PHASE;
+        case "neutral" -> Role.NEUTRAL;
+        case "shield" -> Role.SHIELD;
+        default -> throw entry.error("unknown conductor role '" + r + "'; roles: phase, "
+            + "neutral, shield");
+      };
+      if (!roles.add(role)) {
+        throw entry.error("conductor role '" + r + "' is listed twice");
+      }
+    }
+    if (roles.isEmpty()) {
+      throw entry.error("list at least one conductor role (phase, neutral, shield)");
+    }
+    return roles;
   }
 
   /** A selector from {@code conditions} (report groups) and {@code condition_names}. */

@@ -7,6 +7,7 @@ import java.util.Map;
 import java.util.Optional;
 import java.util.TreeMap;
 import org.clearance.clearance.SpanContext;
+import org.clearance.line.ConductorPosition.Role;
 
 /**
  * Plain-text explanation of which zones and distances a rule profile applies to a span, and
@@ -105,6 +106,7 @@ public final class RuleExplainer {
           VoltageBand.kv(span.nominalVoltageKv()));
     }
     line(out, "%sapplies in: %s", INDENT, z.conditions().describe());
+    line(out, "%smeasured from: %s", INDENT, roles(z));
     if (rz.radial().isPresent()) {
       line(out, "%sinside when the 3D distance to a conductor is less than %s", INDENT,
           distance(rz.radial().get(), span));
@@ -124,6 +126,24 @@ public final class RuleExplainer {
           INDENT, a.describe(), a.fullAllowance(span.lengthM()), margin,
           span.lengthM() - margin);
     }
+  }
+
+  /** The conductor roles a zone is measured from, in words. */
+  public static String roles(Zone z) {
+    List<String> out = new ArrayList<>();
+    if (z.roles().contains(Role.PHASE)) {
+      out.add("energised (phase) conductors");
+    }
+    if (z.roles().contains(Role.NEUTRAL)) {
+      out.add("neutral and secondary conductors");
+    }
+    if (z.roles().contains(Role.SHIELD)) {
+      out.add("shield wires");
+    }
+    String s = String.join(", ", out);
+    return z.roles().contains(Role.SHIELD) && z.roles().contains(Role.NEUTRAL) ? s
+        : s + " (not " + (z.roles().contains(Role.NEUTRAL) ? "shield wires"
+        : z.roles().contains(Role.SHIELD) ? "neutrals" : "neutrals or shield wires") + ")";
   }
 
   /** The distance at the ends of the span, and in the middle when an allowance changes it. */

@@ -7,6 +7,7 @@ import java.util.Optional;
 import org.clearance.clearance.ConditionDistance;
 import org.clearance.clearance.PointClearance;
 import org.clearance.clearance.SpanContext;
+import org.clearance.line.ConductorPosition.Role;
 
 /**
  * A rule profile resolved for one span: the zones that apply with their distances, the zones
@@ -123,9 +124,13 @@ public final class SpanRules {
     boolean referenceChecked = false;
     boolean referenceViolated = false;
     for (ResolvedZone z : zones) {
+      List<ConditionDistance> measured = point.distancesFor(z.zone().roles());
+      if (measured.isEmpty() && !z.zone().roles().contains(Role.PHASE)) {
+        continue; // a zone for neutrals or shield wires on a span without them
+      }
       boolean matched = false;
       ZoneViolation zoneWorst = null;
-      for (ConditionDistance d : point.distances()) {
+      for (ConditionDistance d : measured) {
         if (!usable(z, d) || !z.zone().conditions().selects(d)) {
           continue; // a distance not computed checks nothing
         }
@@ -207,7 +212,7 @@ public final class SpanRules {
     }
     GrowthRates.Rate rate = profile.growth().get().forClass(point.classification());
     double best = Double.POSITIVE_INFINITY;
-    for (ConditionDistance d : point.distances()) {
+    for (ConditionDistance d : point.distancesFor(reference.zone().roles())) {
       if (!usable(reference, d) || !reference.zone().conditions().selects(d)) {
         continue;
       }

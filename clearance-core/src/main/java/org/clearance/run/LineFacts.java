@@ -25,7 +25,7 @@ public record LineFacts(
    * One conductor position.
    *
    * @param position position name, e.g. {@code A}
-   * @param role {@code phase} or {@code shield}
+   * @param role {@code phase}, {@code shield} or {@code neutral}
    * @param circuit circuit number (1 when the specification gives none)
    * @param conductor conductor type code, e.g. {@code Drake}
    * @param bundle sub-conductors per phase
@@ -54,7 +54,8 @@ public record LineFacts(
   }
 
   private static Position position(ConductorPosition p) {
-    return new Position(p.position(), p.isPhase() ? "phase" : "shield", p.circuit(),
+    return new Position(p.position(), p.role().name().toLowerCase(java.util.Locale.ROOT),
+        p.circuit(),
         p.conductor().code(), p.bundle());
   }
 

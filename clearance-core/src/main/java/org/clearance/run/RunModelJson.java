@@ -164,7 +164,8 @@ public final class RunModelJson {
     o.set("x", JsonFiles.number(r.x()));
     o.set("y", JsonFiles.number(r.y()));
     o.set("ground_z", JsonFiles.number(r.groundZ()));
-    return o.put("type", r.type());
+    o.put("type", r.type());
+    return r.equipment().isEmpty() ? o : o.put("equipment", r.equipment());
   }
 
   /** Writes the model to a file (temporary file, then moved into place). */
@@ -309,7 +310,7 @@ public final class RunModelJson {
 
     private static StructureRecord structure(JsonAt o) {
     return new StructureRecord(o.str("id"), o.num("x"), o.num("y"), o.num("ground_z"),
-        o.str("type"));
+        o.str("type"), o.has("equipment") ? o.str("equipment") : "");
   }
 
   private static String sha256(byte[] bytes) {

@@ -90,7 +90,7 @@ final class SpanWireFinder {
         ? WireClusters.of(p, seeds.toArray(), g.stationStretch(), g.clusterRadiusM(),
             g.clusterMinPoints())
         : WireClusters.of(p, seeds.toArray(), close.stationStretch(), close.clusterRadiusM(),
-            g.clusterMinPoints());
+            g.clusterMinPoints(), SagReference.of(p, seeds.toArray(), length));
     double[] tube = close == null ? tube(spec) : new double[] {close.tubeM(), close.tubeM()};
     List<int[]> wires = WireGrowth.grow(p, clusters, 0, length, g, tube[0], tube[1]);
     List<ConductorFit.Result> fits = new ArrayList<>();

@@ -27,6 +27,12 @@ final class TubeModel {
   static final double MAX_EXTRA_LATERAL_M = 1.0;
   /** Most the vertical tube may widen beyond the piece, m. */
   static final double MAX_EXTRA_VERTICAL_M = 1.5;
+  /**
+   * Most a narrowed tube (closely spaced conductors) may widen beyond the piece, as a share of
+   * its half-size: a tube of 0.4 of the spacing then reaches 0.6 of it, short of the next
+   * conductor (issue 15: a straight piece at a steep end otherwise reached the wire below).
+   */
+  static final double CLOSE_EXTRA_SHARE = 0.5;
   /** The default tube's half-sizes ({@link WireFinderOptions.Growth#defaults()}), m: narrower
    * tubes widen less beyond the piece. */
   static final double DEFAULT_TUBE_LATERAL_M = 0.6;
@@ -226,9 +232,11 @@ final class TubeModel {
     double d = s < lo ? lo - s : s > hi ? s - hi : 0;
     double k = Math.min(1, Math.min(tolLateral / DEFAULT_TUBE_LATERAL_M,
         tolVertical / DEFAULT_TUBE_VERTICAL_M));
-    double lat = tolLateral + Math.min(k * MAX_EXTRA_LATERAL_M, SLOPE_ALLOWANCE * d);
+    double extraLat = k < 1 ? CLOSE_EXTRA_SHARE * tolLateral : MAX_EXTRA_LATERAL_M;
+    double extraVert = k < 1 ? CLOSE_EXTRA_SHARE * tolVertical : MAX_EXTRA_VERTICAL_M;
+    double lat = tolLateral + Math.min(extraLat, SLOPE_ALLOWANCE * d);
     double bend = curved ? 0 : d * d / (2 * CURVE_ALLOWANCE_C);
-    double vert = tolVertical + Math.min(k * MAX_EXTRA_VERTICAL_M, SLOPE_ALLOWANCE * d + bend);
+    double vert = tolVertical + Math.min(extraVert, SLOPE_ALLOWANCE * d + bend);
     return Math.abs(p.e(i) - e(s)) <= lat && Math.abs(p.z(i) - z(s)) <= vert;
   }
 }

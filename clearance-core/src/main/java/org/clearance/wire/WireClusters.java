@@ -3,6 +3,7 @@ package org.clearance.wire;
 import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.List;
+import java.util.function.DoubleUnaryOperator;
 import smile.clustering.DBSCAN;
 import smile.clustering.PartitionClustering;
 
@@ -29,6 +30,18 @@ final class WireClusters {
    */
   static List<int[]> of(SpanPoints p, int[] seeds, double stretch, double radius,
       int minPoints) {
+    return of(p, seeds, stretch, radius, minPoints, s -> 0);
+  }
+
+  /**
+   * Clusters the seeds with their elevations taken relative to a reference profile along the
+   * span ({@link SagReference}): with the common sag shape of a span's wires removed, the steep
+   * ends of stacked conductors no longer link diagonally to the next wire (issue 15).
+   *
+   * @param reference reference elevation at a station, m (station in m)
+   */
+  static List<int[]> of(SpanPoints p, int[] seeds, double stretch, double radius,
+      int minPoints, DoubleUnaryOperator reference) {
     List<int[]> out = new ArrayList<>();
     if (seeds.length < minPoints) {
       return out;
@@ -36,7 +49,8 @@ final class WireClusters {
     double[][] data = new double[seeds.length][];
     for (int k = 0; k < seeds.length; k++) {
       int i = seeds[k];
-      data[k] = new double[] {p.s(i) / stretch, p.e(i), p.z(i)};
+      double s = p.s(i);
+      data[k] = new double[] {s / stretch, p.e(i), p.z(i) - reference.applyAsDouble(s)};
     }
     DBSCAN<double[]> db = DBSCAN.fit(data, minPoints, radius);
     IntList[] groups = new IntList[db.k];

@@ -311,4 +311,12 @@ public final class WireFinder {
     double h = heights.heightAboveGround(s.x(), s.y(), 0);
     return Double.isFinite(h) ? -h : Double.NaN;
   }
+
+  /**
+   * Whether a line hangs its conductors closer than 2.5 m apart (a distribution framing on
+   * poles, {@link CloseSpacing}): its structures are thin poles, not lattice towers.
+   */
+  public static boolean isPoleLine(org.clearance.line.LineSpec spec) {
+    return StructureRefiner.isPoleLine(spec);
+  }
 }

@@ -15,11 +15,12 @@ import java.util.List;
 import java.util.Random;
 import java.util.stream.Stream;
 import org.clearance.InputException;
+import org.clearance.line.ConductorPosition.Role;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
 /**
- * near-points.bin format 2: the same points give the same bytes whatever the order they were
+ * near-points.bin format 3: the same points give the same bytes whatever the order they were
  * written in (issue 10, item 11), and a damaged file is an input error naming the file (item 9).
  */
 class NearPointFileTest {
@@ -53,6 +54,48 @@ class NearPointFileTest {
       }
     }
     return f;
+  }
+
+  /**
+   * Issue 15: a point keeps its distance to the nearest neutral and shield wire beside the one
+   * to the nearest energised conductor; a span without such conductors reads back without them.
+   */
+  @Test
+  void distancesPerRoleRoundTrip() throws IOException {
+    NearPointFile layout = new NearPointFile(List.of("survey", "hot"), List.of("survey", "hot"),
+        List.of("F/1-2", "F/2-3"), List.of("A", "N", "SW"),
+        List.of(Role.PHASE, Role.NEUTRAL, Role.SHIELD));
+    List<ConditionDistance> phase = List.of(
+        new ConditionDistance("survey", "survey", 2.5, 1.5, -2.0, "A", 30),
+        new ConditionDistance("hot", "hot", 2.25, 1.5, -1.6770510, "A", 31));
+    List<ConditionDistance> neutral = List.of(
+        new ConditionDistance("survey", "survey", 0.5, 0.3, -0.4, "N", 29),
+        new ConditionDistance("hot", "hot", Double.NaN, Double.NaN, Double.NaN, "", Double.NaN));
+    List<ConditionDistance> shield = List.of(
+        new ConditionDistance("survey", "survey", 5.0, 3.0, -4.0, "SW", 28),
+        new ConditionDistance("hot", "hot", 4.5, 2.7, -3.6, "SW", 27));
+    PointClearance a = new PointClearance("F/1-2", 1, 2, 3, 5, 1.5, phase, neutral, shield);
+    PointClearance b = new PointClearance("F/2-3", 4, 5, 6, 3, 0.5, phase);
+    Path f = dir.resolve("roles.bin");
+    try (NearPointWriter w = new NearPointWriter(f, layout)) {
+      w.write(List.of(b, a));
+    }
+    List<PointClearance> back = new ArrayList<>();
+    assertEquals(layout, NearPointReader.forEach(f, back::add));
+    assertEquals(2, back.size());
+    PointClearance ra = back.get(0);
+    assertEquals(0.5, ra.neutral().get(0).distance(), 1e-6);
+    assertEquals("N", ra.neutral().get(0).conductor());
+    assertTrue(Double.isNaN(ra.neutral().get(1).distance()));
+    assertEquals(4.5, ra.shield().get(1).distance(), 1e-6);
+    assertEquals("SW", ra.shield().get(1).conductor());
+    assertEquals(2.25, ra.distances().get(1).distance(), 1e-6);
+    assertEquals(6, ra.distancesFor(java.util.EnumSet.allOf(Role.class)).size());
+    PointClearance rb = back.get(1);
+    assertTrue(rb.neutral().isEmpty() && rb.shield().isEmpty(), rb.toString());
+    assertEquals(2, rb.distancesFor(java.util.EnumSet.allOf(Role.class)).size());
+    assertEquals(NearPointFile.FIXED_BYTES + 3 * 2 * NearPointFile.CONDITION_BYTES,
+        layout.recordBytes());
   }
 
   @Test

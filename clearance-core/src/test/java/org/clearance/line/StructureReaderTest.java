@@ -62,6 +62,28 @@ class StructureReaderTest {
     assertEquals(71.5, t3.attachmentZ("A"), EXACT);
   }
 
+  /** Issue 15: the optional equipment column, in CSV and GeoJSON. */
+  @Test
+  void readsPoleEquipment() {
+    List<Structure> s = read("e.csv", "structure_id,x,y,equipment\n"
+        + "P1,0,0,transformer; fuse\nP2,50,0,\nP3,100,0,Dead-End;corner;arrester;switch\n",
+        METRES);
+    assertEquals(java.util.Set.of(PoleEquipment.TRANSFORMER, PoleEquipment.FUSE),
+        s.get(0).equipment());
+    assertEquals("transformer;fuse", s.get(0).equipmentText());
+    assertTrue(s.get(1).equipment().isEmpty());
+    assertEquals("", s.get(1).equipmentText());
+    assertEquals("switch;arrester;dead_end;corner", s.get(2).equipmentText());
+    String json = "{\"type\":\"FeatureCollection\",\"features\":[{\"type\":\"Feature\","
+        + "\"geometry\":{\"type\":\"Point\",\"coordinates\":[0,0]},\"properties\":"
+        + "{\"structure_id\":\"P1\",\"equipment\":\"switch\"}},{\"type\":\"Feature\","
+        + "\"geometry\":{\"type\":\"Point\",\"coordinates\":[9,0]},\"properties\":"
+        + "{\"structure_id\":\"P2\",\"equipment\":null}}]}";
+    List<Structure> g = read("e.geojson", json, METRES);
+    assertEquals(java.util.Set.of(PoleEquipment.SWITCH), g.get(0).equipment());
+    assertTrue(g.get(1).equipment().isEmpty());
+  }
+
   @Test
   void minimalCsvUsesFileOrderAndNoLineId() {
     List<Structure> s = read("m.csv", "structure_id,x,y\nP1,0,0\nP2,1.5e2,-3\n", METRES);
@@ -175,7 +197,11 @@ class StructureReaderTest {
         Arguments.of("unclosed quote", h + "\"T1,0,0\n", 2, "column 1", "not closed"),
         Arguments.of("header named twice", "structure_id,x,y,X\n", 1, "X", "twice"),
         Arguments.of("bad attachment value", "structure_id,x,y,attach_z_B\nT,0,0,high\n", 2,
-            "attach_z_B", "not a number"));
+            "attach_z_B", "not a number"),
+        Arguments.of("unknown equipment", "structure_id,x,y,equipment\nT,0,0,fuse;recloser\n", 2,
+            "equipment", "'recloser' is not equipment"),
+        Arguments.of("equipment twice", "structure_id,x,y,equipment\nT,0,0,fuse;Fuse\n", 2,
+            "equipment", "listed twice"));
   }
 
   @ParameterizedTest(name = "{0}")

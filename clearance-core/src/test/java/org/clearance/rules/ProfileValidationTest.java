@@ -241,6 +241,22 @@ class ProfileValidationTest {
               - {name: a, priority: 1, violation_reference: true, conditions: [all], radial_m: 2}
             fall_in: {enabled: true, reach_allowance_m: 0.5}
             """, 6, "conditions", "fall-in rule needs the conditions"),
+        error("unknown conductor role", HEAD + """
+              - {name: a, priority: 1, violation_reference: true, conditions: [all], radial_m: 2,
+                 conductor_roles: [phase, earth]}
+            """, 6, "conductor_roles", "unknown conductor role 'earth'"),
+        error("conductor role twice", HEAD + """
+              - {name: a, priority: 1, violation_reference: true, conditions: [all], radial_m: 2,
+                 conductor_roles: [phase, neutral, phase]}
+            """, 6, "conductor_roles", "listed twice"),
+        error("no conductor role", HEAD + """
+              - {name: a, priority: 1, violation_reference: true, conditions: [all], radial_m: 2,
+                 conductor_roles: []}
+            """, 6, "conductor_roles", "at least one conductor role"),
+        error("reference zone without the energised conductors", HEAD + """
+              - {name: a, priority: 1, violation_reference: true, conditions: [all], radial_m: 2,
+                 conductor_roles: [neutral]}
+            """, 6, "conductor_roles", "must apply to the energised conductors"),
         error("not YAML", HEAD + """
               - {name: a, priority: 1
             """, 6, null, "not valid YAML"));

@@ -82,11 +82,16 @@ class RuleCasesTest {
     String name = str(p, "name");
     int cls = p.containsKey("class") ? ((Number) p.get("class")).intValue() : 1;
     PointClearance point = new PointClearance("S", 0, 0, 0, cls, Double.NaN,
-        distances(list(p.get("distances"))));
+        distances(list(p.get("distances")), "A"),
+        p.containsKey("neutral") ? distances(list(p.get("neutral")), "N") : List.of(),
+        p.containsKey("shield") ? distances(list(p.get("shield")), "SW") : List.of());
     PointFinding f = rules.evaluate(point);
     Map<String, Object> e = map(p.get("expect"));
     String verdict = str(e, "verdict").toUpperCase(Locale.ROOT);
     assertEquals(verdict, f.verdict().name(), name + ": " + f);
+    if (e.containsKey("gaps")) {
+      assertEquals(((Number) e.get("gaps")).intValue(), f.gaps().size(), name + ": " + f.gaps());
+    }
     if (e.containsKey("reason")) {
       String reason = f.notAssessedReason().orElseThrow();
       assertTrue(reason.contains(str(e, "reason")), name + ": " + reason);
@@ -95,6 +100,7 @@ class RuleCasesTest {
       ZoneViolation v = f.violation().get();
       assertEquals(str(e, "zone"), v.zone().name(), name);
       assertEquals(str(e, "condition"), v.condition(), name);
+      assertEquals(e.containsKey("conductor") ? str(e, "conductor") : "A", v.conductor(), name);
       assertEquals(e.containsKey("component") ? str(e, "component") : "radial",
           v.component().name().toLowerCase(Locale.ROOT), name);
       assertEquals(num(e, "required"), v.requiredM(), TOL_M, name + " required");
@@ -115,7 +121,7 @@ class RuleCasesTest {
   }
 
   private static void checkTree(SpanRules rules, Map<String, Object> t) {
-    FallInFinding f = rules.fallIn(num(t, "height"), distances(list(t.get("distances"))));
+    FallInFinding f = rules.fallIn(num(t, "height"), distances(list(t.get("distances")), "A"));
     Map<String, Object> e = map(t.get("expect"));
     if (e.containsKey("not_assessed")) {
       assertTrue(f.notAssessedReason().orElseThrow().contains(str(e, "not_assessed")),
@@ -129,8 +135,11 @@ class RuleCasesTest {
     assertEquals(num(e, "margin"), f.marginM(), TOL_M);
   }
 
-  /** Distances per condition; h and v default to a point straight below the conductor. */
-  private static List<ConditionDistance> distances(List<Object> rows) {
+  /**
+   * Distances per condition to the named conductor; h and v default to a point straight below
+   * the conductor.
+   */
+  private static List<ConditionDistance> distances(List<Object> rows, String conductor) {
     List<ConditionDistance> out = new ArrayList<>();
     for (Object o : rows) {
       Map<String, Object> d = map(o);
@@ -143,7 +152,7 @@ class RuleCasesTest {
       String condition = str(d, "condition");
       String group = d.containsKey("group") ? str(d, "group") : condition;
       double station = d.containsKey("station") ? num(d, "station") : 0;
-      out.add(new ConditionDistance(condition, group, dist, h, v, "A", station));
+      out.add(new ConditionDistance(condition, group, dist, h, v, conductor, station));
     }
     return out;
   }

@@ -33,6 +33,19 @@ class RuleExplainerTest {
     assertHas(text, "Result: assessed");
   }
 
+  /** Issue 15: each zone says which conductor roles it is measured from. */
+  @Test
+  void explainsTheConductorRolesOfAZone() {
+    String prc = RuleExplainer.explain(RuleProfiles.builtin("ca-prc4293"),
+        new SpanContext("F7/P1-P2", "F7", 12.47, 40, 80));
+    assertHas(prc, "measured from: energised (phase) conductors, neutral and secondary "
+        + "conductors (not shield wires)");
+    String mvcd = RuleExplainer.explain(RuleProfiles.builtin("us-fac003-mvcd"),
+        new SpanContext("S", "L", 345, 100, 400));
+    assertHas(mvcd, "measured from: energised (phase) conductors (not neutrals or shield "
+        + "wires)");
+  }
+
   @Test
   void explainsAltitudeApproximation() {
     String text = RuleExplainer.explain(RuleProfiles.builtin("us-fac003-mvcd"),

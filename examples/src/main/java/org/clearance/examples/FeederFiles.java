@@ -8,6 +8,7 @@ import java.io.Writer;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.List;
 import java.util.Locale;
 import org.clearance.InputException;
 import org.clearance.io.AtomicFiles;
@@ -78,12 +79,30 @@ public final class FeederFiles {
     w.write("# Poles of feeder " + FeederScene.LINE_ID + " (" + FeederScene.LINE_NAME + "), "
         + DemoScene.UTILITY + ". Invented demo data; x, y, ground_z in "
         + scene.options().unit().symbol() + ".\n");
-    w.write("structure_id,x,y,line_id,sequence,type,ground_z\n");
+    w.write("structure_id,x,y,line_id,sequence,type,ground_z,equipment\n");
     for (FeederPole p : scene.poles()) {
-      w.write(String.format(Locale.ROOT, "%s,%.3f,%.3f,%s,%d,%s,%.3f\n", p.id(), p.x() / u,
+      w.write(String.format(Locale.ROOT, "%s,%.3f,%.3f,%s,%d,%s,%.3f,%s\n", p.id(), p.x() / u,
           p.y() / u, FeederScene.LINE_ID, p.sequence(), p.deadEnd() ? "dead_end" : "suspension",
-          p.groundZ() / u));
+          p.groundZ() / u, equipment(p)));
     }
+  }
+
+  /**
+   * The equipment column (issue 15): dead-ends at the ends, a transformer with its fuse and
+   * arrester on every fourth pole, a switch on every seventh (invented, fixed by sequence).
+   */
+  static String equipment(FeederPole p) {
+    List<String> e = new java.util.ArrayList<>();
+    if (p.sequence() % 4 == 2) {
+      e.addAll(List.of("transformer", "fuse", "arrester"));
+    }
+    if (p.sequence() % 7 == 3) {
+      e.add("switch");
+    }
+    if (p.deadEnd()) {
+      e.add("dead_end");
+    }
+    return String.join(";", e);
   }
 
   /**

@@ -14,6 +14,7 @@ import org.clearance.clearance.ConductorModel;
 import org.clearance.clearance.ConductorState;
 import org.clearance.clearance.SurveyedConductor;
 import org.clearance.line.ConductorLibrary;
+import org.clearance.line.ConductorPosition.Role;
 import org.clearance.line.LineSpec;
 import org.clearance.line.LineSpecReader;
 import org.clearance.line.SpanFrame;
@@ -57,7 +58,10 @@ final class TruthDistances {
     for (int i = 0; i < spans.size(); i++) {
       List<SurveyedConductor> list = new ArrayList<>();
       for (ConductorRecord c : spans.get(i).conductors()) {
-        if ((!fittedOnly || c.fitted()) && hasWire(scene.spans().get(i), c.name())) {
+        // the energised conductors: the ones the engine's minima and stored distances count
+        // (issue 15; shield wires are measured apart)
+        if ((!fittedOnly || c.fitted()) && hasWire(scene.spans().get(i), c.name())
+            && Role.ofName(c.role()) == Role.PHASE) {
           DemoWire w = scene.spans().get(i).wire(c.name());
           list.add(new SurveyedConductor(c.name(), c.name(), c.role(), w.curve()));
         }
