@@ -20,6 +20,7 @@ import org.clearance.clearance.NearPointWriter;
 import org.clearance.clearance.PointClearance;
 import org.clearance.clearance.UncertaintyFile;
 import org.clearance.ground.GroundSource;
+import org.clearance.line.ConductorPosition.Role;
 import org.clearance.line.LineLayout;
 import org.clearance.report.ReportOptions;
 import org.clearance.report.ReportStage;
@@ -143,11 +144,14 @@ final class RunWriter {
   private void writeNearPoints() throws IOException {
     List<String> spanIds = new ArrayList<>();
     List<String> names = new ArrayList<>();
+    java.util.EnumSet<Role> roles = java.util.EnumSet.of(Role.PHASE);
     for (SpanOutcome o : outcomes.values()) {
       spanIds.add(ctx.spans.get(o.key()).span().id());
       Path part = parts.resolve(o.key() + ".bin");
       if (Files.exists(part)) {
-        for (String n : NearPointReader.header(part).conductors()) {
+        NearPointFile header = NearPointReader.header(part);
+        roles.addAll(header.roles());
+        for (String n : header.conductors()) {
           if (!names.contains(n)) {
             names.add(n);
           }
@@ -155,8 +159,9 @@ final class RunWriter {
       }
     }
     var conditions = ctx.conditions.get(line);
+    // roles as the engine lists them: phase first, then the others in their order
     NearPointFile layout = new NearPointFile(conditions.names(), conditions.groups(), spanIds,
-        names);
+        names, List.copyOf(roles));
     try (NearPointWriter out = new NearPointWriter(staging.resolve(NearPointFile.FILE_NAME),
         layout)) {
       for (SpanOutcome o : outcomes.values()) {
