@@ -69,7 +69,7 @@ public final class ClearanceCheck {
 
   /** Margin of the labelling region beyond the tree reach, m: the conductors' own offset from
    * the span's chord (a double circuit's outer phase, about 15 m; common practice, no source). */
-  static final double LABEL_REGION_MARGIN_M = 20.0;
+  public static final double LABEL_REGION_MARGIN_M = 20.0;
 
   /** Told when each stage ends; the benchmark uses it to read the heap. */
   @FunctionalInterface
@@ -237,8 +237,11 @@ public final class ClearanceCheck {
     return outcome;
   }
 
-  /** Per span, the fitted conductors as the line conditions need them. */
-  static Map<String, List<SurveyedConductor>> surveyed(WireResult wires) {
+  /**
+   * Per span, the fitted conductors as the line conditions need them. Public for runs that fit
+   * the spans elsewhere (the Spark job), so both hand the conditions the same input.
+   */
+  public static Map<String, List<SurveyedConductor>> surveyed(WireResult wires) {
     Map<String, List<SurveyedConductor>> out = new LinkedHashMap<>();
     for (SpanWires sw : wires.spans()) {
       List<SurveyedConductor> list = new ArrayList<>();
@@ -254,12 +257,24 @@ public final class ClearanceCheck {
 
   /** The survey temperatures: given, or computed at each span's flight time. */
   private static SurveyTemperatures surveyTemperatures(Survey survey, FlightTimes flight) {
-    boolean adjusted = survey.files().stream().allMatch(f -> f.header().adjustedGpsTime());
-    LonLat.Lookup geo = LonLat.forUnits(survey.units());
     Map<String, Double> times = new LinkedHashMap<>();
     flight.result().forEach((id, t) -> times.put(id, t.meanGps()));
+    return surveyTemperatures(survey, times);
+  }
+
+  /**
+   * The survey temperatures from the spans' flight times: the survey's clock (adjusted GPS time
+   * when every file says so) and CRS. Public for runs that date the spans elsewhere (the Spark
+   * job), so both hand the conditions the same input.
+   *
+   * @param spanGpsTimes per span id, its mean GPS time of flight, s (NaN when unknown)
+   */
+  public static SurveyTemperatures surveyTemperatures(Survey survey,
+      Map<String, Double> spanGpsTimes) {
+    boolean adjusted = survey.files().stream().allMatch(f -> f.header().adjustedGpsTime());
+    LonLat.Lookup geo = LonLat.forUnits(survey.units());
     return new SurveyTemperatures(new SurveyTemperatures.Clock(adjusted), geo.transform(),
-        geo.note(), times);
+        geo.note(), spanGpsTimes);
   }
 
   private void sayTemperatures(List<LineSpec> specs, Map<String, SpanTemperature> bySpan) {
@@ -276,7 +291,11 @@ public final class ClearanceCheck {
     }
   }
 
-  private static List<SpanModel> spanModels(SpanLayout layout,
+  /**
+   * The spans of the layout, in layout order, with their conductors in every condition (an empty
+   * list for a span without models) and the context the rules need.
+   */
+  public static List<SpanModel> spanModels(SpanLayout layout,
       Map<String, List<ConductorModel>> models) {
     List<SpanModel> out = new ArrayList<>();
     for (LineLayout line : layout.lines()) {

@@ -43,8 +43,11 @@ import org.clearance.wire.SpanWires;
 import org.clearance.wire.StructureChange;
 import org.clearance.wire.WireResult;
 
-/** Assembles the {@link RunModel} of a check from what each stage produced. */
-final class RunModels {
+/**
+ * Assembles the {@link RunModel} of a check from what each stage produced. Public for runs that
+ * produce the stages' results elsewhere (the Spark job builds one span's model at a time).
+ */
+public final class RunModels {
 
   private RunModels() {}
 
@@ -55,7 +58,7 @@ final class RunModels {
    * @param gpsMin earliest GPS time of the survey, s, or NaN
    * @param gpsMax latest GPS time, s, or NaN
    */
-  static RunFacts facts(List<LineSpec> specs, RunRecord.Builder record, Survey survey,
+  public static RunFacts facts(List<LineSpec> specs, RunRecord.Builder record, Survey survey,
       double gpsMin, double gpsMax) {
     List<LineFacts> lines = specs.stream().map(LineFacts::of).toList();
     Optional<LocalDate> first = Optional.empty();
@@ -84,7 +87,15 @@ final class RunModels {
     return path.substring(cut + 1);
   }
 
-  static RunModel of(String toolVersion, SurveyUnits units, ConditionSet conditions,
+  /**
+   * The run model.
+   *
+   * @param ground the ground model (its description, and each span's survey coverage)
+   * @param wires the fitted spans; the model has one span record per span here, in this order
+   * @param spanModels the spans' conductors in every condition
+   * @param measured per span what was measured, and the trees near the line (numbered in order)
+   */
+  public static RunModel of(String toolVersion, SurveyUnits units, ConditionSet conditions,
       CheckOptions options, VegetationSelector vegetation, GroundModel ground, WireResult wires,
       List<SpanModel> spanModels, Measurement measured,
       Map<String, SpanTemperature> temperatures) {

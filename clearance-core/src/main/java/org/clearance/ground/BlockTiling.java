@@ -68,4 +68,22 @@ final class BlockTiling {
     }
     return out;
   }
+
+  /**
+   * The read windows of the blocks that {@link #cover} lays over cells {@code [col0, col1] x
+   * [row0, row1]}: {@code {firstCol, firstRow, endCol, endRow}} (end exclusive), cells.
+   */
+  static List<int[]> windows(int tileCells, int blockCells, int overlapCells, int col0, int row0,
+      int col1, int row1) {
+    int tilesPerBlock = Math.max(1, (blockCells + tileCells - 1) / tileCells);
+    int size = tilesPerBlock * tileCells;
+    List<int[]> out = new ArrayList<>();
+    for (int br = Math.floorDiv(row0, size); br <= Math.floorDiv(row1, size); br++) {
+      for (int bc = Math.floorDiv(col0, size); bc <= Math.floorDiv(col1, size); bc++) {
+        out.add(new int[] {bc * size - overlapCells, br * size - overlapCells,
+            (bc + 1) * size + overlapCells, (br + 1) * size + overlapCells});
+      }
+    }
+    return out;
+  }
 }

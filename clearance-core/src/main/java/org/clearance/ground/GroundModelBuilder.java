@@ -39,6 +39,9 @@ public final class GroundModelBuilder implements Consumer<PointChunk> {
   /** ASPRS class 18: high noise. */
   static final int CLASS_HIGH_NOISE = 18;
 
+  /** Cells beyond an area that its heights interpolate from (bilinear: one; one more spare). */
+  static final int INTERPOLATION_PAD_CELLS = 2;
+
   private final GroundOptions options;
   private LowestPointGrid surface;
   private LowestPointGrid classified;
@@ -84,6 +87,28 @@ public final class GroundModelBuilder implements Consumer<PointChunk> {
       first.absorb(b);
     }
     return first.build();
+  }
+
+  /**
+   * The plan rectangles whose points decide the terrain over an area: the read windows (core
+   * plus overlap) of the blocks that the area touches, with the cells that heights inside the
+   * area interpolate from. A builder fed every point of these rectangles, and perhaps others,
+   * gives inside the area the terrain of a builder fed the whole survey, provided both decide the
+   * same way between class 2 and the filter (with {@link GroundOptions.Source#AUTO}: a survey
+   * classified throughout). A distributed run reads a span's points this way (docs/spark.md).
+   *
+   * @param options the ground options (cell size, block size, overlap)
+   * @return rectangles {@code {minX, minY, maxX, maxY}}, m, in row-major block order
+   */
+  public static List<double[]> inputWindows(GroundOptions options, double minX, double minY,
+      double maxX, double maxY) {
+    double cell = options.smrf().cellSize();
+    int pad = INTERPOLATION_PAD_CELLS;
+    return BlockTiling.windows(SparseGrid.DEFAULT_TILE_CELLS, options.blockCells(),
+        options.overlapCells(), (int) Math.floor(minX / cell) - pad,
+        (int) Math.floor(minY / cell) - pad, (int) Math.floor(maxX / cell) + pad,
+        (int) Math.floor(maxY / cell) + pad).stream()
+        .map(w -> new double[] {w[0] * cell, w[1] * cell, w[2] * cell, w[3] * cell}).toList();
   }
 
   /** Adds everything another builder (same options) has collected; that builder is emptied. */

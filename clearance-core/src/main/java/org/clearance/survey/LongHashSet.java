@@ -66,6 +66,21 @@ public final class LongHashSet {
     return false;
   }
 
+  /** The keys, in no particular order. */
+  public long[] toArray() {
+    long[] out = new long[(int) size()];
+    int n = 0;
+    for (long k : slots) {
+      if (k != EMPTY) {
+        out[n++] = k;
+      }
+    }
+    if (hasEmptyKey) {
+      out[n] = EMPTY;
+    }
+    return out;
+  }
+
   /** Number of keys. */
   public long size() {
     return used + (hasEmptyKey ? 1 : 0);

@@ -88,6 +88,26 @@ final class PointStreamer {
   }
 
   /**
+   * Reads records {@code [first, first + count)} of file {@code fileIndex} in chunks on the
+   * calling thread; a chunk's {@link PointChunk#firstRecord()} is its first record's number.
+   */
+  void readRecords(int fileIndex, long first, long count, Consumer<PointChunk> consumer) {
+    LasHeader h = files.get(fileIndex).header();
+    if (first < 0 || count < 0 || first + count > h.pointCount()) {
+      throw new IllegalArgumentException("records [" + first + ", " + (first + count)
+          + ") outside the file's " + h.pointCount() + " points");
+    }
+    Worker w = new Worker();
+    try {
+      for (long at = first; at < first + count; at += chunkPoints) {
+        consumer.accept(w.load(fileIndex, at, (int) Math.min(chunkPoints, first + count - at)));
+      }
+    } finally {
+      w.close();
+    }
+  }
+
+  /**
    * Reads all chunks on {@code threads} worker threads, each with its own chunk, buffer and
    * consumer; chunks arrive in no particular order. The first failure stops all workers and is
    * rethrown here.
@@ -195,10 +215,15 @@ final class PointStreamer {
       while (starts[i + 1] == k) {
         i++;
       }
+      long first = (k - starts[i]) * chunkPoints;
+      return load(i, first, (int) Math.min(chunkPoints,
+          files.get(i).header().pointCount() - first));
+    }
+
+    /** Reads and decodes {@code n} records of file {@code i} from record {@code first}. */
+    PointChunk load(int i, long first, int n) {
       LasFile f = files.get(i);
       LasHeader h = f.header();
-      long first = (k - starts[i]) * chunkPoints;
-      int n = (int) Math.min(chunkPoints, h.pointCount() - first);
       try {
         if (i != fileIndex) {
           close();

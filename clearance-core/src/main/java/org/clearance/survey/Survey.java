@@ -140,6 +140,21 @@ public final class Survey {
   }
 
   /**
+   * Reads the records {@code [first, first + count)} of one file on the calling thread, by their
+   * byte offsets in the file (a distributed job reads a tile's pieces this way). The chunk is
+   * reused as in {@link #read}.
+   *
+   * @param fileIndex index in {@link #files()}
+   * @param first first record, 0-based
+   * @param count number of records, &gt;= 0
+   * @throws IllegalArgumentException when the range is outside the file
+   * @throws InputException when the file turns out shorter than its header said
+   */
+  public void readRecords(int fileIndex, long first, long count, Consumer<PointChunk> consumer) {
+    streamer.readRecords(fileIndex, first, count, consumer);
+  }
+
+  /**
    * Reads every byte of the point data of every file without decoding, through the same
    * positional reads as {@link #read}; a baseline for throughput measurements.
    *

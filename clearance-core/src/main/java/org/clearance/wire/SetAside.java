@@ -86,6 +86,16 @@ public final class SetAside {
     return object.contains(key) ? Reason.OBJECT : Reason.NONE;
   }
 
+  /** The keys of the points set aside as wire, in no particular order (to send elsewhere). */
+  public synchronized long[] wireKeys() {
+    return wire.toArray();
+  }
+
+  /** The keys of the isolated airborne points, in no particular order. */
+  public synchronized long[] airborneKeys() {
+    return airborne.toArray();
+  }
+
   /** Points set aside as wire. */
   public long wireCount() {
     return wire.size();

@@ -85,6 +85,104 @@ public final class WireFinder {
             k + 1 < ls.size() ? ls.get(k + 1) : null));
       }
     }
+    CandidateCollector all = collect(source, corridors, heights);
+    Processed done = processSpans(spans, specs, arms, corridors, all, heights);
+    return new WireResult(used, done.spans(), changes, done.setAside());
+  }
+
+  /**
+   * Finds the wires of one span from points of its neighbourhood: the span-level entry point
+   * that a distributed run calls once per span (docs/spark.md), with the same steps and the same
+   * code per span as {@link #find}. The layout is used as given: structure refinement pairs
+   * towers over a whole line and is done by {@link #find} only. The span's neighbours in the
+   * layout give the directions of its cross arms. The points set aside follow in a second step,
+   * once the wire points of the neighbouring spans are known ({@link SpanFind#setAside}).
+   *
+   * @param source points of at least the span's corridor (others are ignored)
+   * @param layout the spans, with the line specifications
+   * @param spanId the span to fit
+   * @param heights heights above ground of survey points (a ground model)
+   * @throws IllegalArgumentException when the layout has no span {@code spanId}
+   */
+  public SpanFind findSpan(PointSource source, SpanLayout layout, String spanId,
+      HeightModel heights) {
+    Objects.requireNonNull(source, "source");
+    Objects.requireNonNull(heights, "heights");
+    for (LineLayout line : layout.lines()) {
+      List<Span> ls = line.spans();
+      for (int k = 0; k < ls.size(); k++) {
+        Span span = ls.get(k);
+        if (!span.id().equals(spanId)) {
+          continue;
+        }
+        ConductorEnds arm = arms(span, k > 0 ? ls.get(k - 1) : null,
+            k + 1 < ls.size() ? ls.get(k + 1) : null);
+        SpanCorridor corridor = corridor(span, line.spec(), heights);
+        CandidateCollector all = collect(source, List.of(corridor), heights);
+        return fitSpan(new SpanWireFinder(options), all, 0, span, line.spec(), arm, corridor,
+            heights);
+      }
+    }
+    throw new IllegalArgumentException("no span " + spanId + " in the layout");
+  }
+
+  /**
+   * One span's conductors with the evidence of which of its candidates are wire points, as
+   * {@link #findSpan} returns it: holds the span's candidates until {@link #setAside} is done.
+   */
+  public static final class SpanFind {
+    private final SpanWires wires;
+    private final SpanPoints points;
+    private final boolean[] onWire;
+    private final boolean[] linear;
+    private final double floorM;
+
+    SpanFind(SpanWireFinder.Found found, SpanPoints points, double floorM) {
+      this.wires = found.wires();
+      this.points = points;
+      this.onWire = found.onWire();
+      this.linear = found.linear();
+      this.floorM = floorM;
+    }
+
+    /** The span's conductors. */
+    public SpanWires wires() {
+      return wires;
+    }
+
+    /** Number of the span's wire candidates. */
+    public int candidates() {
+      return points.size();
+    }
+
+    /** The keys ({@link SetAside#key}) of the span's candidates that lie on its wires. */
+    public long[] wireKeys() {
+      long[] out = new long[onWire.length];
+      int n = 0;
+      for (int i = 0; i < onWire.length; i++) {
+        if (onWire[i]) {
+          out[n++] = points.key(i);
+        }
+      }
+      return java.util.Arrays.copyOf(out, n);
+    }
+
+    /**
+     * Adds the span's points that are not vegetation to {@code out} ({@link PointEvidence}).
+     *
+     * @param wires the wire points of every span whose corridor meets this one's, this span's
+     *     own included ({@link #wireKeys})
+     */
+    public void setAside(SetAside wires, SetAside out) {
+      if (onWire.length == points.size()) {
+        PointEvidence.setAside(points, onWire, linear, wires, floorM, out);
+      }
+    }
+  }
+
+  /** One streaming pass: the wire candidates of every corridor. */
+  private static CandidateCollector collect(PointSource source, List<SpanCorridor> corridors,
+      HeightModel heights) {
     CorridorIndex index = new CorridorIndex(corridors.stream().map(SpanCorridor::corners)
         .toList());
     List<CandidateCollector> collectors = Collections.synchronizedList(new ArrayList<>());
@@ -99,8 +197,16 @@ public final class WireFinder {
       all.absorb(collectors.get(k));
     }
     collectors.clear();
-    Processed done = processSpans(spans, specs, arms, corridors, all, heights);
-    return new WireResult(used, done.spans(), changes, done.setAside());
+    return all;
+  }
+
+  /** Fits the span whose candidates are corridor {@code idx} of {@code all}. */
+  private static SpanFind fitSpan(SpanWireFinder finder, CandidateCollector all, int idx,
+      Span span, LineSpec spec, ConductorEnds arms, SpanCorridor corridor, HeightModel heights) {
+    SpanPoints p = all.sorted(idx);
+    return new SpanFind(finder.findWithEvidence(p, all.seen(idx), span, spec,
+        groundAt(span.from(), heights), groundAt(span.to(), heights), arms), p,
+        corridor.minHeightM());
   }
 
   /**
@@ -130,28 +236,19 @@ public final class WireFinder {
     SpanWireFinder finder = new SpanWireFinder(options);
     ExecutorService pool = Executors.newFixedThreadPool(options.threads());
     try {
-      List<Future<SpanWireFinder.Found>> futures = new ArrayList<>();
+      List<Future<SpanFind>> futures = new ArrayList<>();
       for (int k = 0; k < spans.size(); k++) {
         int idx = k;
-        futures.add(pool.submit(() -> {
-          Span span = spans.get(idx);
-          return finder.findWithEvidence(all.sorted(idx), all.seen(idx), span, specs.get(idx),
-              groundAt(span.from(), heights), groundAt(span.to(), heights), arms.get(idx));
-        }));
+        futures.add(pool.submit(() -> fitSpan(finder, all, idx, spans.get(idx),
+            specs.get(idx), arms.get(idx), corridors.get(idx), heights)));
       }
-      List<SpanWireFinder.Found> found = new ArrayList<>();
+      List<SpanFind> found = new ArrayList<>();
       SetAside onWire = new SetAside();
-      for (Future<SpanWireFinder.Found> f : futures) {
-        SpanWireFinder.Found r = f.get();
+      for (Future<SpanFind> f : futures) {
+        SpanFind r = f.get();
         found.add(r);
-      }
-      for (int k = 0; k < spans.size(); k++) {
-        SpanPoints p = all.sorted(k);
-        boolean[] on = found.get(k).onWire();
-        for (int i = 0; i < on.length; i++) {
-          if (on[i]) {
-            onWire.addWire(p.key(i));
-          }
+        for (long key : r.wireKeys()) {
+          onWire.addWire(key);
         }
       }
       SetAside out = new SetAside();
@@ -159,19 +256,14 @@ public final class WireFinder {
       for (int k = 0; k < spans.size(); k++) {
         int idx = k;
         second.add(pool.submit(() -> {
-          SpanWireFinder.Found r = found.get(idx);
-          SpanPoints p = all.sorted(idx);
-          if (r.onWire().length == p.size()) {
-            PointEvidence.setAside(p, r.onWire(), r.linear(), onWire,
-                corridors.get(idx).minHeightM(), out);
-          }
+          found.get(idx).setAside(onWire, out);
           all.release(idx);
         }));
       }
       for (Future<?> f : second) {
         f.get();
       }
-      return new Processed(found.stream().map(SpanWireFinder.Found::wires).toList(), out);
+      return new Processed(found.stream().map(SpanFind::wires).toList(), out);
     } catch (InterruptedException e) {
       Thread.currentThread().interrupt();
       throw new IllegalStateException("interrupted while fitting spans", e);

@@ -122,6 +122,26 @@ class SurveyTest {
   }
 
   @Test
+  void aRecordRangeReadsThoseRecordsOnly() {
+    Survey s = Survey.open(List.of(tileA, tileB), UnitsChoice.fromFile(), 256);
+    List<String> order = new ArrayList<>();
+    double[] sumY = new double[1];
+    s.readRecords(1, 300, 700, c -> {
+      order.add(c.fileIndex() + ":" + c.firstRecord() + "+" + c.size());
+      for (int i = 0; i < c.size(); i++) {
+        long rec = c.firstRecord() + i;
+        assertEquals(601_000 + rec, c.x()[i], TOL_B);
+        sumY[0] += c.y()[i];
+      }
+    });
+    // 700 records from 300 in chunks of 256: 256 + 256 + 188.
+    assertEquals(List.of("1:300+256", "1:556+256", "1:812+188"), order);
+    // sum of 2i for i in [300, 1000) is 999 * 1000 - 299 * 300 = 909 300.
+    assertEquals(909_300.0, sumY[0], 1e-3);
+    assertThrows(IllegalArgumentException.class, () -> s.readRecords(0, 900, 101, c -> { }));
+  }
+
+  @Test
   void rawScanReadsAllPointBytes() {
     Survey s = Survey.open(List.of(tileA, tileB), UnitsChoice.fromFile());
     assertEquals(N_A * 28L + N_B * 36L, s.rawScan());

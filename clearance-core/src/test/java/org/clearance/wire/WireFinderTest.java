@@ -52,6 +52,44 @@ class WireFinderTest {
     }
   }
 
+  /** The span-level entry point gives, span by span, exactly what the whole-layout pass gives:
+   * the same code runs per span, only the candidate collection is limited to one corridor. */
+  @ParameterizedTest
+  @EnumSource(SyntheticCorridor.Mode.class)
+  void oneSpanAtATimeEqualsTheWholeLayout(SyntheticCorridor.Mode mode) {
+    SyntheticCorridor c = SyntheticCorridor.standard(mode, 7);
+    WireFinder finder = new WireFinder(Fixtures.options(false));
+    WireResult whole = finder.find(c, Fixtures.layout(c), c);
+    java.util.List<WireFinder.SpanFind> finds = new java.util.ArrayList<>();
+    SetAside wires = new SetAside();
+    for (SpanWires expected : whole.spans()) {
+      WireFinder.SpanFind found = finder.findSpan(c, Fixtures.layout(c), expected.span().id(),
+          c);
+      finds.add(found);
+      for (long k : found.wireKeys()) {
+        wires.addWire(k);
+      }
+      SpanWires one = found.wires();
+      assertEquals(expected.status(), one.status());
+      assertEquals(expected.reason(), one.reason());
+      assertEquals(expected.conductors().size(), one.conductors().size());
+      for (FittedConductor f : expected.conductors()) {
+        FittedConductor g = one.conductor(f.name()).orElseThrow();
+        assertEquals(f.curve(), g.curve(), f.name());
+        assertEquals(f.quality(), g.quality(), f.name());
+      }
+    }
+    // the points set aside, span by span with every span's wire points, are the whole pass's
+    SetAside apart = new SetAside();
+    finds.forEach(f -> f.setAside(wires, apart));
+    assertEquals(sorted(whole.setAside().wireKeys()), sorted(apart.wireKeys()));
+    assertEquals(sorted(whole.setAside().airborneKeys()), sorted(apart.airborneKeys()));
+  }
+
+  private static java.util.List<Long> sorted(long[] keys) {
+    return java.util.Arrays.stream(keys).sorted().boxed().toList();
+  }
+
   @ParameterizedTest
   @EnumSource(SyntheticCorridor.Mode.class)
   void missingPositionIsNotAssessedAndBlocksTheSpan(SyntheticCorridor.Mode mode) {
