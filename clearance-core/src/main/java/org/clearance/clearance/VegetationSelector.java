@@ -3,6 +3,7 @@ package org.clearance.clearance;
 import java.util.BitSet;
 import java.util.Objects;
 import java.util.Set;
+import java.util.stream.Collectors;
 
 /**
  * Decides which survey points count as vegetation.
@@ -120,6 +121,7 @@ public final class VegetationSelector {
     return inferred
         ? "inferred: classes 0/1 above " + UNCLASSIFIED_MIN_HEIGHT
             + " m over ground, not conductor, not structure"
-        : "classes " + classes;
+        : "classes " + classes.stream().mapToObj(Integer::toString)
+            .collect(Collectors.joining(", "));
   }
 }
