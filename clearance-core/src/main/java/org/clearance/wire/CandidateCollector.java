@@ -15,12 +15,21 @@ import org.clearance.survey.PointChunk;
  * points never classified or unclassified (class 0 or 1) at least the corridor's minimum height
  * above ground. Every other class was given a meaning by the survey's classifier (ground,
  * vegetation, building, noise, tower, ...) and is not a wire; withheld points are skipped.
+ * Every other point in a corridor that is not ground or noise (ASPRS class 2, 7, 18) and stands
+ * below the candidate height goes to the corridor's {@link Understorey}: the evidence of what
+ * stands under a small group of candidates ({@link PointEvidence}).
  */
 final class CandidateCollector implements Consumer<PointChunk> {
   /** ASPRS class 0: created, never classified. */
   static final int NEVER_CLASSIFIED = 0;
   /** ASPRS class 1: unclassified. */
   static final int UNCLASSIFIED = 1;
+  /** ASPRS class 2: ground. */
+  static final int GROUND = 2;
+  /** ASPRS class 7: low point (noise). */
+  static final int LOW_NOISE = 7;
+  /** ASPRS class 18: high noise. */
+  static final int HIGH_NOISE = 18;
 
   private final List<SpanCorridor> corridors;
   private final CorridorIndex index;
@@ -59,6 +68,7 @@ final class CandidateCollector implements Consumer<PointChunk> {
       int k = cls[i];
       boolean label = k == SpanPoints.SHIELD_CLASS || k == SpanPoints.CONDUCTOR_CLASS;
       boolean open = k == NEVER_CLASSIFIED || k == UNCLASSIFIED;
+      boolean standing = k != GROUND && k != LOW_NOISE && k != HIGH_NOISE;
       double hag = Double.NaN;
       boolean hagDone = false;
       for (int c : near) {
@@ -70,15 +80,17 @@ final class CandidateCollector implements Consumer<PointChunk> {
           continue;
         }
         seen[c]++;
-        if (!label && !open) {
+        if (!label && !standing) {
           continue;
         }
         if (!hagDone) {
           hag = heights.heightAboveGround(x[i], y[i], z[i]);
           hagDone = true;
         }
-        if (label || hag >= corridor.minHeightM()) {
+        if (label || open && hag >= corridor.minHeightM()) {
           points[c].add(s, e, z[i], hag, k, SetAside.key(x[i], y[i], z[i]));
+        } else if (hag < corridor.minHeightM()) {
+          points[c].below().add(s, e, hag);
         }
       }
     }
