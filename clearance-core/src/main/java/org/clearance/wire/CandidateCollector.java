@@ -15,9 +15,10 @@ import org.clearance.survey.PointChunk;
  * points never classified or unclassified (class 0 or 1) at least the corridor's minimum height
  * above ground. Every other class was given a meaning by the survey's classifier (ground,
  * vegetation, building, noise, tower, ...) and is not a wire; withheld points are skipped.
- * Every other point in a corridor that is not ground or noise (ASPRS class 2, 7, 18) and stands
- * below the candidate height goes to the corridor's {@link Understorey}: the evidence of what
- * stands under a small group of candidates ({@link PointEvidence}).
+ * Every other point that is not ground, noise or a labelled wire (ASPRS class 2, 7, 18, 13,
+ * 14), in a corridor below the candidate height or in the {@value StandingGrid#BAND_M} m band
+ * around it, goes to the corridor's {@link StandingGrid}: the evidence of what stands under and
+ * beside a small group of candidates ({@link PointEvidence}).
  */
 final class CandidateCollector implements Consumer<PointChunk> {
   /** ASPRS class 0: created, never classified. */
@@ -68,7 +69,7 @@ final class CandidateCollector implements Consumer<PointChunk> {
       int k = cls[i];
       boolean label = k == SpanPoints.SHIELD_CLASS || k == SpanPoints.CONDUCTOR_CLASS;
       boolean open = k == NEVER_CLASSIFIED || k == UNCLASSIFIED;
-      boolean standing = k != GROUND && k != LOW_NOISE && k != HIGH_NOISE;
+      boolean standing = !label && k != GROUND && k != LOW_NOISE && k != HIGH_NOISE;
       double hag = Double.NaN;
       boolean hagDone = false;
       for (int c : near) {
@@ -76,10 +77,13 @@ final class CandidateCollector implements Consumer<PointChunk> {
         SpanFrame f = corridor.frame();
         double s = f.station(x[i], y[i]);
         double e = f.offset(x[i], y[i]);
-        if (!corridor.contains(s, e)) {
+        boolean inside = corridor.contains(s, e);
+        if (!inside && !(standing && corridor.contains(s, e, StandingGrid.BAND_M))) {
           continue;
         }
-        seen[c]++;
+        if (inside) {
+          seen[c]++;
+        }
         if (!label && !standing) {
           continue;
         }
@@ -87,10 +91,10 @@ final class CandidateCollector implements Consumer<PointChunk> {
           hag = heights.heightAboveGround(x[i], y[i], z[i]);
           hagDone = true;
         }
-        if (label || open && hag >= corridor.minHeightM()) {
+        if (inside && (label || open && hag >= corridor.minHeightM())) {
           points[c].add(s, e, z[i], hag, k, SetAside.key(x[i], y[i], z[i]));
-        } else if (hag < corridor.minHeightM()) {
-          points[c].below().add(s, e, hag);
+        } else if (standing) {
+          points[c].standing().add(s, e, hag);
         }
       }
     }

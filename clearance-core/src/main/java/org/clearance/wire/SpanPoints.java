@@ -10,7 +10,7 @@ import java.util.Arrays;
  *
  * <p>Each point also keeps its key ({@link SetAside#key}) so that the points found to be wire can
  * be named to the clearance engine. Beside the candidates it holds the corridor's {@link
- * Understorey}: what non-ground points stand below the candidate height.
+ * StandingGrid}: the non-ground points that are not candidates.
  *
  * <p>26 bytes a point: memory follows the number of candidates, never the survey. Not
  * thread-safe; one instance per reading thread, merged with {@link #addAll}.
@@ -31,7 +31,7 @@ final class SpanPoints {
   private byte[] c = new byte[INITIAL];
   private long[] k = new long[INITIAL];
   private int n;
-  private final Understorey below = new Understorey();
+  private final StandingGrid standing = new StandingGrid();
 
   /** @param zRef reference elevation subtracted before storing, m, finite */
   SpanPoints(double zRef) {
@@ -85,7 +85,7 @@ final class SpanPoints {
     System.arraycopy(other.c, 0, c, n, other.n);
     System.arraycopy(other.k, 0, k, n, other.n);
     n += other.n;
-    below.addAll(other.below);
+    standing.addAll(other.standing);
   }
 
   /**
@@ -128,9 +128,9 @@ final class SpanPoints {
     k = k2;
   }
 
-  /** The highest non-ground points below the candidate height, per plan cell (mutable). */
-  Understorey below() {
-    return below;
+  /** The highest non-ground point that is not a candidate, per plan cell (mutable). */
+  StandingGrid standing() {
+    return standing;
   }
 
   int size() {

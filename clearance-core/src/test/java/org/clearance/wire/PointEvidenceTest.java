@@ -36,9 +36,9 @@ class PointEvidenceTest {
   void crownTopAboveItsCrownIsMeasured() {
     SpanPoints p = group();
     // the lower crown below the candidate floor: returns 1.5-2.9 m above ground under the top
-    p.below().add(50.2, 2.4, 2.9);
-    p.below().add(49.0, 1.0, 2.2);
-    p.below().add(51.5, 3.0, 1.5);
+    p.standing().add(50.2, 2.4, 2.9);
+    p.standing().add(49.0, 1.0, 2.2);
+    p.standing().add(51.5, 3.0, 1.5);
     SetAside out = run(p);
     assertEquals(0, out.airborneCount());
     for (long k = 1; k <= GROUP.length; k++) {
@@ -50,8 +50,8 @@ class PointEvidenceTest {
   void sameGroupOverBareGroundIsSetAside() {
     SpanPoints p = group();
     // unclassified ground returns (under 0.5 m) are no crown
-    p.below().add(50.2, 2.4, 0.1);
-    p.below().add(49.0, 1.0, -0.2);
+    p.standing().add(50.2, 2.4, 0.1);
+    p.standing().add(49.0, 1.0, -0.2);
     SetAside out = run(p);
     assertEquals(GROUP.length, out.airborneCount());
     for (long k = 1; k <= GROUP.length; k++) {
@@ -63,7 +63,7 @@ class PointEvidenceTest {
   void birdHighOverALowCrownIsSetAside() {
     SpanPoints p = group();
     // a shrub 1.5 m high under the group: more than UNDER_DEPTH_M below its lowest point
-    p.below().add(50.2, 2.4, 1.5);
+    p.standing().add(50.2, 2.4, 1.5);
     assertEquals(GROUP.length, run(p).airborneCount());
   }
 
@@ -71,7 +71,29 @@ class PointEvidenceTest {
   void crownBesideTheColumnDoesNotCount() {
     SpanPoints p = group();
     // 2.9 m high, but 3 m to the side of the group's extent: outside the 1 m column margin
-    p.below().add(50.0, 5.8, 2.9);
+    p.standing().add(50.0, 5.8, 2.9);
     assertEquals(GROUP.length, run(p).airborneCount());
+  }
+
+  @Test
+  void crownSpreadingPastTheCorridorEdgeIsMeasured() {
+    SpanPoints p = group();
+    // the rest of the crown stands just outside the corridor, higher than the group
+    p.standing().add(50.2, 3.1, 11.0);
+    assertEquals(0, run(p).airborneCount());
+  }
+
+  @Test
+  void gridKeepsTheHighestPointPerCellAcrossTiles() {
+    StandingGrid a = new StandingGrid();
+    a.add(-0.5, -16.5, 2.0);
+    a.add(-0.2, -16.1, 3.0);
+    StandingGrid b = new StandingGrid();
+    b.add(-0.7, -16.9, 2.5);
+    b.add(40.0, 3.0, 0.4);
+    a.addAll(b);
+    assertEquals(3.0, a.highestIn(-1.0, -0.1, -17.0, -16.0), 1e-6);
+    assertEquals(Double.NEGATIVE_INFINITY, a.highestIn(0.0, 50.0, -15.5, 15.0));
+    assertEquals(1, a.cells());
   }
 }
