@@ -20,8 +20,8 @@ import java.util.List;
  * stands in the group's column, its plan extent widened by {@value #COLUMN_MARGIN_M} m, higher
  * than {@value #UNDER_DEPTH_M} m below the group's lowest point. The top of a crown whose lower
  * crown lies below the candidate height, or whose crown spreads past the corridor's edge, has
- * that crown in its column and is measured; a group of at least {@value #MIN_LINE_POINTS} points, at least
- * {@value #LINE_SHARE} of them linear, running {@value #MIN_LINE_RUN_M} m or more along the span,
+ * that crown in its column and is measured. A group of at least {@value #MIN_LINE_POINTS}
+ * points, at least {@value #LINE_SHARE} of them linear, running {@value #MIN_LINE_RUN_M} m or more along the span,
  * is a wire nobody fitted. A wire point with a point of another group (vegetation) within
  * {@value #TOUCH_M} m is not set aside: where a branch touches a wire the two cannot be told
  * apart, and the point is measured.

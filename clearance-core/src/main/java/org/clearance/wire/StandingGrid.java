@@ -13,8 +13,8 @@ import java.util.Map;
  * corridor's edge.
  *
  * <p>Cells are stored in tiles of {@value #TILE} by {@value #TILE} cells, only tiles holding such
- * a point (about 4.4 bytes a cell): memory follows the corridor's area, never the survey's size. Not thread-safe; one per reading thread, merged with
- * {@link #addAll}.
+ * a point (about 4.4 bytes a cell): memory follows the corridor's area, never the survey's
+ * size. Not thread-safe; one per reading thread, merged with {@link #addAll}.
  */
 final class StandingGrid {
   /** Cell size of the grid, m: finer than the column radius of {@link PointEvidence}. */
