@@ -15,12 +15,22 @@ import org.clearance.survey.PointChunk;
  * points never classified or unclassified (class 0 or 1) at least the corridor's minimum height
  * above ground. Every other class was given a meaning by the survey's classifier (ground,
  * vegetation, building, noise, tower, ...) and is not a wire; withheld points are skipped.
+ * Every other point that is not ground, noise or a labelled wire (ASPRS class 2, 7, 18, 13,
+ * 14), in a corridor below the candidate height or in the {@value StandingGrid#BAND_M} m band
+ * around it, goes to the corridor's {@link StandingGrid}: the evidence of what stands under and
+ * beside a small group of candidates ({@link PointEvidence}).
  */
 final class CandidateCollector implements Consumer<PointChunk> {
   /** ASPRS class 0: created, never classified. */
   static final int NEVER_CLASSIFIED = 0;
   /** ASPRS class 1: unclassified. */
   static final int UNCLASSIFIED = 1;
+  /** ASPRS class 2: ground. */
+  static final int GROUND = 2;
+  /** ASPRS class 7: low point (noise). */
+  static final int LOW_NOISE = 7;
+  /** ASPRS class 18: high noise. */
+  static final int HIGH_NOISE = 18;
 
   private final List<SpanCorridor> corridors;
   private final CorridorIndex index;
@@ -59,6 +69,7 @@ final class CandidateCollector implements Consumer<PointChunk> {
       int k = cls[i];
       boolean label = k == SpanPoints.SHIELD_CLASS || k == SpanPoints.CONDUCTOR_CLASS;
       boolean open = k == NEVER_CLASSIFIED || k == UNCLASSIFIED;
+      boolean standing = !label && k != GROUND && k != LOW_NOISE && k != HIGH_NOISE;
       double hag = Double.NaN;
       boolean hagDone = false;
       for (int c : near) {
@@ -66,19 +77,24 @@ final class CandidateCollector implements Consumer<PointChunk> {
         SpanFrame f = corridor.frame();
         double s = f.station(x[i], y[i]);
         double e = f.offset(x[i], y[i]);
-        if (!corridor.contains(s, e)) {
+        boolean inside = corridor.contains(s, e);
+        if (!inside && !(standing && corridor.contains(s, e, StandingGrid.BAND_M))) {
           continue;
         }
-        seen[c]++;
-        if (!label && !open) {
+        if (inside) {
+          seen[c]++;
+        }
+        if (!label && !standing) {
           continue;
         }
         if (!hagDone) {
           hag = heights.heightAboveGround(x[i], y[i], z[i]);
           hagDone = true;
         }
-        if (label || hag >= corridor.minHeightM()) {
+        if (inside && (label || open && hag >= corridor.minHeightM())) {
           points[c].add(s, e, z[i], hag, k, SetAside.key(x[i], y[i], z[i]));
+        } else if (standing) {
+          points[c].standing().add(s, e, hag);
         }
       }
     }

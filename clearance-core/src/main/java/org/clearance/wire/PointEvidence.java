@@ -14,9 +14,14 @@ import java.util.List;
  * known (a neighbouring span's wire reaches into the corridor near a structure): the remaining
  * candidates are joined into groups of points within {@value #LINK_M} m; a group of at most
  * {@value #MAX_AIRBORNE_POINTS} points whose lowest point is at least {@value #AIRBORNE_GAP_M} m
- * above the lowest candidate height is an isolated airborne point (a bird, high noise, a wire
- * return far off its curve); a group of at least {@value #MIN_LINE_POINTS} points, at least
- * {@value #LINE_SHARE} of them linear, running {@value #MIN_LINE_RUN_M} m or more along the span,
+ * above the lowest candidate height, with open air below it, is an isolated airborne point (a
+ * bird, high noise, a wire return far off its curve). Open air: no non-ground point that is not a
+ * candidate (below the candidate height, or just outside the corridor: {@link StandingGrid})
+ * stands in the group's column, its plan extent widened by {@value #COLUMN_MARGIN_M} m, higher
+ * than {@value #UNDER_DEPTH_M} m below the group's lowest point. The top of a crown whose lower
+ * crown lies below the candidate height, or whose crown spreads past the corridor's edge, has
+ * that crown in its column and is measured. A group of at least {@value #MIN_LINE_POINTS}
+ * points, at least {@value #LINE_SHARE} of them linear, running {@value #MIN_LINE_RUN_M} m or more along the span,
  * is a wire nobody fitted. A wire point with a point of another group (vegetation) within
  * {@value #TOUCH_M} m is not set aside: where a branch touches a wire the two cannot be told
  * apart, and the point is measured.
@@ -38,6 +43,17 @@ final class PointEvidence {
   /** Least height of an airborne group's lowest point above the lowest candidate height, m:
    * a group that reaches down to the candidates' floor may stand on something below it. */
   static final double AIRBORNE_GAP_M = 1.5;
+  /** Widening of an airborne group's plan extent for its column, m: a crown spreads out below
+   * its top, so its lower crown lies within a metre of the top's outline in plan (common
+   * practice, no source); a bird has open air there. */
+  static final double COLUMN_MARGIN_M = 1.0;
+  /** Depth below an airborne group's lowest point within which a non-ground point in its column
+   * shows that the group stands on something (a crown), m. A crown top cut off its crown by the
+   * candidate floor stands at least {@value #AIRBORNE_GAP_M} m above that floor, and a sparse
+   * crown's next returns lie up to {@value #LINK_M} m further down; twice that sum allows for
+   * crowns sampled unevenly (common practice, no source). Erring deep is safe: a bird flying
+   * lower than this over a crown is measured, which only brings a reading closer. */
+  static final double UNDER_DEPTH_M = 2 * (AIRBORNE_GAP_M + LINK_M);
   /** Fewest points of an unfitted wire. */
   static final int MIN_LINE_POINTS = 10;
   /** Least share of linear points in an unfitted wire (crowns: 0.1 % of points are linear). */
@@ -117,6 +133,10 @@ final class PointEvidence {
     double[] lowest = new double[n];
     double[] sMin = new double[n];
     double[] sMax = new double[n];
+    double[] eMin = new double[n];
+    double[] eMax = new double[n];
+    java.util.Arrays.fill(eMin, Double.POSITIVE_INFINITY);
+    java.util.Arrays.fill(eMax, Double.NEGATIVE_INFINITY);
     java.util.Arrays.fill(lowest, Double.POSITIVE_INFINITY);
     java.util.Arrays.fill(sMin, Double.POSITIVE_INFINITY);
     java.util.Arrays.fill(sMax, Double.NEGATIVE_INFINITY);
@@ -131,6 +151,8 @@ final class PointEvidence {
       lowest[g] = Double.isNaN(h) ? Double.NEGATIVE_INFINITY : Math.min(lowest[g], h);
       sMin[g] = Math.min(sMin[g], p.s(i));
       sMax[g] = Math.max(sMax[g], p.s(i));
+      eMin[g] = Math.min(eMin[g], p.e(i));
+      eMax[g] = Math.max(eMax[g], p.e(i));
     }
     boolean[] vegetation = new boolean[n];
     for (int i = 0; i < n; i++) {
@@ -138,7 +160,8 @@ final class PointEvidence {
       if (g < 0) {
         continue;
       }
-      if (count[g] <= MAX_AIRBORNE_POINTS && lowest[g] >= floorM + AIRBORNE_GAP_M) {
+      if (count[g] <= MAX_AIRBORNE_POINTS && lowest[g] >= floorM + AIRBORNE_GAP_M
+          && openBelow(p.standing(), sMin[g], sMax[g], eMin[g], eMax[g], lowest[g])) {
         out.addAirborne(p.key(i));
       } else if (count[g] >= MIN_LINE_POINTS && lin[g] >= LINE_SHARE * count[g]
           && sMax[g] - sMin[g] >= MIN_LINE_RUN_M) {
@@ -161,6 +184,16 @@ final class PointEvidence {
         out.addWire(p.key(i));
       }
     }
+  }
+
+  /** True when no non-ground point stands in the group's column (plan box s0-s1, e0-e1, widened
+   * by {@link #COLUMN_MARGIN_M}) higher than {@link #UNDER_DEPTH_M} below its lowest point
+   * (height above ground, m). */
+  static boolean openBelow(StandingGrid standing, double s0, double s1, double e0, double e1,
+      double lowestM) {
+    double top = standing.highestIn(s0 - COLUMN_MARGIN_M, s1 + COLUMN_MARGIN_M,
+        e0 - COLUMN_MARGIN_M, e1 + COLUMN_MARGIN_M);
+    return top < lowestM - UNDER_DEPTH_M;
   }
 
   /** Groups (single linkage within {@link #LINK_M}) of the points that are not wire; -1 for

@@ -32,12 +32,23 @@ record SpanCorridor(Span span, double halfWidthM, double stationMarginM, double 
         && Math.abs(e) <= halfWidthM;
   }
 
+  /** True when the plan point lies in the corridor widened by {@code bandM} m on every side. */
+  boolean contains(double s, double e, double bandM) {
+    return s >= -stationMarginM - bandM && s <= span.lengthM() + stationMarginM + bandM
+        && Math.abs(e) <= halfWidthM + bandM;
+  }
+
   /** The four plan corners of the corridor, x0 y0 x1 y1 ..., m. */
   double[] corners() {
+    return corners(0);
+  }
+
+  /** The four plan corners of the corridor widened by {@code bandM} m on every side. */
+  double[] corners(double bandM) {
     SpanFrame f = frame();
-    double s0 = -stationMarginM;
-    double s1 = span.lengthM() + stationMarginM;
-    double w = halfWidthM;
+    double s0 = -stationMarginM - bandM;
+    double s1 = span.lengthM() + stationMarginM + bandM;
+    double w = halfWidthM + bandM;
     return new double[] {f.x(s0, -w), f.y(s0, -w), f.x(s1, -w), f.y(s1, -w), f.x(s1, w),
         f.y(s1, w), f.x(s0, w), f.y(s0, w)};
   }

@@ -9,7 +9,8 @@ import java.util.Arrays;
  * that floats keep millimetres), height above ground (m, NaN where unknown) and ASPRS class.
  *
  * <p>Each point also keeps its key ({@link SetAside#key}) so that the points found to be wire can
- * be named to the clearance engine.
+ * be named to the clearance engine. Beside the candidates it holds the corridor's {@link
+ * StandingGrid}: the non-ground points that are not candidates.
  *
  * <p>26 bytes a point: memory follows the number of candidates, never the survey. Not
  * thread-safe; one instance per reading thread, merged with {@link #addAll}.
@@ -30,6 +31,7 @@ final class SpanPoints {
   private byte[] c = new byte[INITIAL];
   private long[] k = new long[INITIAL];
   private int n;
+  private final StandingGrid standing = new StandingGrid();
 
   /** @param zRef reference elevation subtracted before storing, m, finite */
   SpanPoints(double zRef) {
@@ -83,6 +85,7 @@ final class SpanPoints {
     System.arraycopy(other.c, 0, c, n, other.n);
     System.arraycopy(other.k, 0, k, n, other.n);
     n += other.n;
+    standing.addAll(other.standing);
   }
 
   /**
@@ -123,6 +126,11 @@ final class SpanPoints {
     h = h2;
     c = c2;
     k = k2;
+  }
+
+  /** The highest non-ground point that is not a candidate, per plan cell (mutable). */
+  StandingGrid standing() {
+    return standing;
   }
 
   int size() {

@@ -183,8 +183,8 @@ public final class WireFinder {
   /** One streaming pass: the wire candidates of every corridor. */
   private static CandidateCollector collect(PointSource source, List<SpanCorridor> corridors,
       HeightModel heights) {
-    CorridorIndex index = new CorridorIndex(corridors.stream().map(SpanCorridor::corners)
-        .toList());
+    CorridorIndex index = new CorridorIndex(corridors.stream()
+        .map(c -> c.corners(StandingGrid.BAND_M)).toList());
     List<CandidateCollector> collectors = Collections.synchronizedList(new ArrayList<>());
     source.stream(() -> {
       CandidateCollector c = new CandidateCollector(corridors, index, heights);

@@ -49,4 +49,42 @@ class CandidateCollectorTest {
     assertEquals(14, p.cls(0), "sorted by station, then offset, elevation");
     assertEquals(4, p.hag(0), 1e-6);
   }
+
+  /** What stands under or beside the candidates goes to the span's {@link StandingGrid}. */
+  @Test
+  void recordsStandingPointsThatAreNotCandidates() {
+    SyntheticCorridor c = SyntheticCorridor.standard(SyntheticCorridor.Mode.LABELLED, 1);
+    SpanLayout layout = Fixtures.layout(c);
+    WireFinder finder = new WireFinder(Fixtures.options(false));
+    Span span = layout.spans().get(0);
+    SpanCorridor corridor = finder.corridor(span, layout.lines().get(0).spec(), c);
+    CandidateCollector cc = new CandidateCollector(List.of(corridor),
+        new CorridorIndex(List.of(corridor.corners(StandingGrid.BAND_M))), c);
+    PointChunk chunk = new PointChunk(16);
+    double[][] at = {
+      {100, 0, 4, 1}, // unclassified crown, 4 m up (below the 5 m candidate floor): standing
+      {110, 0, 9, 5}, // high vegetation label above the floor: standing, not a candidate
+      {120, 15.5, 9, 1}, // unclassified, in the 1 m band outside the 15 m half-width: standing
+      {130, 16.5, 9, 1}, // beyond the band: nothing
+      {140, 0, 3, 2}, // ground class: nothing
+      {150, 0, 3, 18}, // high noise: nothing
+      {160, 0, 3, 14}, // labelled conductor: a candidate, not standing
+      {170, 0, 0.2, 1} // unclassified ground return: under the grid's 0.5 m floor
+    };
+    for (double[] a : at) {
+      double x = span.frame().x(a[0], a[1]);
+      double y = span.frame().y(a[0], a[1]);
+      chunk.add(x, y, c.groundZ(x, y) + a[2], (int) a[3]);
+    }
+    cc.accept(chunk);
+    SpanPoints p = cc.sorted(0);
+    assertEquals(1, p.size());
+    StandingGrid g = p.standing();
+    assertEquals(3, g.cells());
+    assertEquals(4, g.highestIn(99.5, 100.5, -0.5, 0.5), 1e-3);
+    assertEquals(9, g.highestIn(109.5, 110.5, -0.5, 0.5), 1e-3);
+    assertEquals(9, g.highestIn(119.5, 120.5, 15, 16), 1e-3);
+    // the band point is not inside the corridor: not counted as seen
+    assertEquals(6, cc.seen(0));
+  }
 }
