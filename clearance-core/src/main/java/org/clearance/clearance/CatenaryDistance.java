@@ -7,7 +7,7 @@ import org.clearance.wire.ConductorCurve;
 
 /**
  * Exact 3D distance from points to one conductor between its attachments, hanging or swung about
- * its chord (shared/reference/methods.md section 6.1).
+ * its chord (docs/methods.md section 6.1).
  *
  * <p>In the conductor's frame (station s, offset e, elevation z) the curve is C(s) = (s, 0, z(s))
  * for s in [0, L]. The squared distance from a point q = (s_q, e_q, z_q) is

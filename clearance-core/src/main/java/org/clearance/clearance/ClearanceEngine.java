@@ -17,7 +17,7 @@ import org.clearance.wire.SetAside;
 
 /**
  * Measures, for every vegetation point near the line, its true 3D distance to every conductor of
- * the nearby spans in every condition (shared/reference/methods.md section 6).
+ * the nearby spans in every condition (docs/methods.md section 6).
  *
  * <p>Spans are indexed, points are streamed: each worker thread takes whole chunks, finds the
  * spans whose measuring box (conductor envelope in all conditions plus the keep radius) may

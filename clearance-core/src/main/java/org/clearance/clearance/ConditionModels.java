@@ -29,7 +29,7 @@ import org.clearance.wire.ConductorCurve;
 
 /**
  * Builds every conductor's geometry in every condition of a run from the fitted survey state
- * (shared/reference/methods.md section 3.5): per tension section and conductor, the survey
+ * (docs/methods.md section 3.5): per tension section and conductor, the survey
  * tension from the fitted catenary constants of the section's spans ({@link SectionTension}),
  * the section's ruling span and the survey temperature of the line specification; then per span
  * the state in each condition ({@link ConditionSolver}).

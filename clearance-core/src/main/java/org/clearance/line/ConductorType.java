@@ -7,7 +7,7 @@ import java.util.Optional;
  * Mechanical data of one conductor type (a library entry such as ACSR "Drake"), in SI units.
  *
  * <p>Bimetallic conductors (ACSR) also give their steel core, used above the knee-point temperature
- * where the aluminium carries no tension (shared/reference/methods.md section 3.5); single-material
+ * where the aluminium carries no tension (docs/methods.md section 3.5); single-material
  * conductors leave the core values NaN.
  *
  * @param code trade code name, e.g. {@code Drake}; unique in a library (case-insensitive)

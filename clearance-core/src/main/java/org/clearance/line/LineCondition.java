@@ -30,7 +30,7 @@ public record LineCondition(
     double swingAngleRad,
     double extraSagM) {
 
-  /** Glaze ice density, kg/m^3 (shared/reference/methods.md section 3.7: 913, 57 lb/ft^3). */
+  /** Glaze ice density, kg/m^3 (docs/methods.md section 3.7: 913, 57 lb/ft^3). */
   public static final double GLAZE_ICE_DENSITY = 913.0;
 
   /** What a condition changes relative to the surveyed state. */

@@ -5,7 +5,7 @@ package org.clearance.line;
  * offset {@code e} across it (positive to the left looking from the start towards the end), and
  * elevation unchanged.
  *
- * <p>All values in metres. The frame is the one of shared/reference/methods.md (notation): u = unit
+ * <p>All values in metres. The frame is the one of docs/methods.md (notation): u = unit
  * plan vector from start to end, n = (-u_y, u_x).
  *
  * @param originX easting of the start, m

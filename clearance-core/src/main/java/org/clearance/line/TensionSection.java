@@ -28,7 +28,7 @@ public record TensionSection(
 
   /**
    * The ruling span RS = sqrt(sum S_i^3 / sum S_i) of spans with horizontal lengths S_i
-   * (shared/reference/methods.md section 3.4; CIGRE TB 324). Any length unit; the result is in the
+   * (docs/methods.md section 3.4; CIGRE TB 324). Any length unit; the result is in the
    * same unit.
    *
    * @param spanLengths horizontal span lengths, each finite and &gt; 0, at least one

@@ -8,7 +8,7 @@ import org.clearance.wire.Catenary;
  * Points along a stored conductor state for drawing and GIS output. A swung state is drawn
  * rotated about its chord by one angle: each point hanging a sag {@code f} below the chord moves
  * {@code f sin(phi)} sideways (positive to the left looking from attachment A to B) and rises to
- * {@code f cos(phi)} below the chord (shared/reference/methods.md section 3.6, the swing geometry
+ * {@code f cos(phi)} below the chord (docs/methods.md section 3.6, the swing geometry
  * of check-values.md section 2).
  */
 final class ConductorSampler {

@@ -6,7 +6,7 @@ import java.util.Objects;
  * The fall-in (strike) rule: a tree can strike the line when it is at least as tall as the
  * distance from its base to the nearest conductor in the rule's condition, less an allowance
  * (a rigid tree rotating about its base sweeps a sphere of radius equal to its height:
- * shared/reference/methods.md section 5.2).
+ * docs/methods.md section 5.2).
  *
  * @param enabled whether fall-in is assessed
  * @param conditions the conditions whose conductor position counts (null when disabled)

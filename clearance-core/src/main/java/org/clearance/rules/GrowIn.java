@@ -7,7 +7,7 @@ package org.clearance.rules;
  * towards the conductor (in plan) at the lateral growth rate, and stops moving sideways once it
  * is under or over the conductor. The conductor is taken as locally horizontal at its nearest
  * point. With only vertical growth and a point straight below the conductor, the radial time is
- * t = (d - r) / g of shared/reference/methods.md section 5.2; in general it is the first time
+ * t = (d - r) / g of docs/methods.md section 5.2; in general it is the first time
  * the moving point's distance falls below the required one. Growth upwards moves a point that is
  * above the conductor away from it, so such a point only enters by lateral growth.
  *

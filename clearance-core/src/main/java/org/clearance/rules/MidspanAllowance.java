@@ -7,7 +7,7 @@ import java.util.Locale;
  * "in the middle {@code fraction} of the span add {@code perHundredM} metres for every 100 m of
  * span length beyond {@code beyondM}". Regulations that give a larger space towards mid-span,
  * where the conductor sags and sways most, have this structure (for example the Victorian
- * Electricity Safety (Electric Line Clearance) Regulations: shared/reference/check-values.md
+ * Electricity Safety (Electric Line Clearance) Regulations: docs/check-values.md
  * section 4, structure published, values not verified).
  *
  * @param middleFraction length of the middle part as a fraction of the span, centred on

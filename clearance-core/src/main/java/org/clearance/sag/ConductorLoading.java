@@ -7,7 +7,7 @@ import org.clearance.line.LineCondition;
  * The load per length on a conductor in one line condition: a vertical part (bare weight plus ice)
  * and a transverse (horizontal, across the span) part from wind.
  *
- * <p>Formulas of shared/reference/methods.md sections 3.6 and 3.7: ice weight
+ * <p>Formulas of docs/methods.md sections 3.6 and 3.7: ice weight
  * w_ice = rho_ice g pi t (D + t); wind load q (D + 2 t) on the iced diameter; resultant
  * sqrt(vertical^2 + transverse^2); swing (blowout) angle from vertical
  * phi = atan(transverse / vertical).

@@ -2,7 +2,7 @@ package org.clearance.sag;
 
 /**
  * The ruling span of a tension section: S_R = sqrt(sum S_i^3 / sum S_i) over the plan lengths of
- * all spans between two dead-ends (shared/reference/methods.md 3.4; check-values.md section 2).
+ * all spans between two dead-ends (docs/methods.md 3.4; check-values.md section 2).
  *
  * <p>Suspension strings are assumed to equalise the horizontal tension between spans, so the whole
  * section behaves under a change of state like one level span of length S_R.

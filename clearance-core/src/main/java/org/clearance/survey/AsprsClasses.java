@@ -4,7 +4,7 @@ package org.clearance.survey;
  * Names of the ASPRS standard point classes.
  *
  * <p>Source: ASPRS LAS Specification 1.4 R15, table 9 (formats 0-5) and table 17 (formats 6-10);
- * see shared/reference/check-values.md section 1. Formats 0-5 define classes 0-9 and 12 (8 model
+ * see docs/check-values.md section 1. Formats 0-5 define classes 0-9 and 12 (8 model
  * key-point, 12 overlap); classes 10-11 and 13-18 are reserved there but used with the formats
  * 6-10 meaning in practice (common practice, no source), so those names are given with that
  * remark.

@@ -7,7 +7,7 @@ import java.util.Optional;
  * Linear units a survey's coordinate reference system may use.
  *
  * <p>Conversion factors: 1 international foot = 0.3048 m exactly; 1 US survey foot = 1200/3937 m
- * (NIST; see shared/reference/check-values.md section 1).
+ * (NIST; see docs/check-values.md section 1).
  */
 public enum LinearUnit {
   METRE("m", 1.0, 9001),

@@ -6,7 +6,7 @@ package org.clearance.wire;
  * <p>s is the horizontal station in the plane and z the elevation, both in metres; (s0, z0) is the
  * vertex (lowest point of the full curve, which may lie outside the span on inclined spans) and
  * c = H / w the catenary constant, m (horizontal tension over weight per length). Formulas:
- * shared/reference/check-values.md section 2 and shared/reference/methods.md section 2.5.
+ * docs/check-values.md section 2 and docs/methods.md section 2.5.
  *
  * @param s0 station of the vertex, m
  * @param z0 elevation of the vertex, m

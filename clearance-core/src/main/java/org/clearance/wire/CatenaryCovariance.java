@@ -5,7 +5,7 @@ package org.clearance.wire;
  * six distinct entries.
  *
  * <p>From least squares: Sigma = sigma0^2 (J^T W J)^-1 with sigma0^2 = r^T W r / (n - p)
- * (shared/reference/methods.md section 2.3). Variances in m^2, covariances in m^2. Fits with
+ * (docs/methods.md section 2.3). Variances in m^2, covariances in m^2. Fits with
  * fewer free parameters (attachments known) give a singular matrix of rank 1 or 2: the fixed
  * directions carry no variance of their own, only what follows from the free ones.
  *

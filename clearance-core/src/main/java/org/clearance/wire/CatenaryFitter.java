@@ -6,7 +6,7 @@ import java.util.Optional;
 
 /**
  * Fits a catenary z(s) = z0 + c (cosh((s - s0) / c) - 1) to points (s_i, z_i) of one conductor
- * in its span's vertical plane (shared/reference/methods.md section 2).
+ * in its span's vertical plane (docs/methods.md section 2).
  *
  * <p>Free fit ({@link #fit}): parabola start by linear least squares (methods.md 2.2), then
  * Levenberg-Marquardt with the analytic Jacobian and orthogonal-distance weights

@@ -5,7 +5,7 @@ import java.util.SplittableRandom;
 
 /**
  * RANSAC consensus for a catenary in the span plane (package-private). Fischler and Bolles
- * (1981), Comm. ACM 24(6):381; shared/reference/methods.md section 2.4.
+ * (1981), Comm. ACM 24(6):381; docs/methods.md section 2.4.
  *
  * <p>Each trial draws 3 points with well-spread stations, takes the catenary through them
  * ({@link ParabolaStart#throughThree}) and counts the points whose orthogonal residual is within

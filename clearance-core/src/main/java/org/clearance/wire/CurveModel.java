@@ -5,7 +5,7 @@ package org.clearance.wire;
  * elevation minus a reference), as the least-squares engine sees it. Package-private plumbing of
  * {@link CatenaryFitter}.
  *
- * <p>Derivatives from shared/reference/methods.md section 2.3 with t = (s - s0) / c:
+ * <p>Derivatives from docs/methods.md section 2.3 with t = (s - s0) / c:
  * dz/dz0 = 1, dz/ds0 = -sinh t, dz/dc = cosh t - 1 - t sinh t.
  */
 interface CurveModel {

@@ -7,7 +7,7 @@ import java.util.SplittableRandom;
 /**
  * Fits a straight line in plan to wire points (x, y) by total least squares: the line through
  * the centroid along the principal axis of the 2 x 2 covariance (Pearson 1901, "On lines and
- * planes of closest fit", Phil. Mag. 2(11):559; shared/reference/methods.md sections 2.1-2.2).
+ * planes of closest fit", Phil. Mag. 2(11):559; docs/methods.md sections 2.1-2.2).
  * The major-axis angle has the closed form theta = atan2(2 Sxy, Sxx - Syy) / 2.
  *
  * <p>Robust option: a least-median-of-squares start, then reweighted rounds with Tukey's biweight

@@ -9,7 +9,7 @@ import java.util.Arrays;
  * deviation of a normal distribution (Rousseeuw and Croux 1993, J. Amer. Statist. Assoc.
  * 88(424):1273). Weights: Tukey's biweight w(u) = (1 - u^2)^2 for |u| &lt; 1, u = r / (k sigma),
  * k = 4.685 for 95 % efficiency at the normal (Beaton and Tukey 1974, Technometrics 16(2):147;
- * shared/reference/methods.md section 2.3).
+ * docs/methods.md section 2.3).
  */
 final class RobustScale {
 

@@ -5,7 +5,7 @@ package org.clearance.wire;
  *
  * <p>A conductor swung by an angle phi about its chord hangs in a plane tilted from the vertical:
  * a point whose sag below the chord is d in that plane lies d cos(phi) below the chord and
- * d sin(phi) to the side (the swung-plane geometry of shared/reference/check-values.md section 2
+ * d sin(phi) to the side (the swung-plane geometry of docs/check-values.md section 2
  * and methods.md 3.6). Given the vertical sag v = d cos(phi) of the fitted catenary at each point,
  * the lateral offsets from the straight plan line therefore follow alpha + beta s + kappa v with
  * kappa = tan(phi); alpha and beta correct the plan line. Fitted by least squares with one round

@@ -4,7 +4,7 @@ import org.clearance.line.ConductorType;
 
 /**
  * The parabolic change-of-state equation on a ruling span, used to carry a section's chosen
- * tension to the survey temperature. Source: shared/reference/methods.md sections 3.2 and 3.4
+ * tension to the survey temperature. Source: docs/methods.md sections 3.2 and 3.4
  * (classic state equation, no creep, single modulus).
  *
  * <p>The conserved quantity is w^2 S^2 / (24 H^2) - H / (E A) - alpha theta: the parabolic slack

@@ -6,7 +6,7 @@ import org.clearance.wire.ConductorCurve;
 
 /**
  * True 3D distance from a point to a conductor curve between its attachments, by Newton's method
- * on the squared distance (shared/reference/methods.md section 6.1), with the two attachment
+ * on the squared distance (docs/methods.md section 6.1), with the two attachment
  * points as candidates too.
  */
 final class CurveDistance {

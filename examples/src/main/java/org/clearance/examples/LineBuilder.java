@@ -12,7 +12,7 @@ import org.clearance.wire.ConductorCurve;
 /**
  * Builds the demo line on the terrain: structures with heights, tension sections with tensions at
  * the survey temperature, and every conductor of every span as an exact catenary through its
- * attachment points (c = H / w, shared/reference/methods.md section 2.5), with its sampling plan.
+ * attachment points (c = H / w, docs/methods.md section 2.5), with its sampling plan.
  */
 final class LineBuilder {
   /** Temperature at which section tensions are chosen, degC. */
