@@ -227,6 +227,16 @@ public final class ClearanceCheck {
             + survey.units().vertical().symbol() + " (" + survey.units().source() + ")")
         .parameter("output_unit", options.report().outputUnit().symbol());
     timings.forEach(record::timing);
+    writeRecord(dir, record, outcome);
+    return outcome;
+  }
+
+  /**
+   * Lists a run's files in its record (the check's own files, the report stage's, the record
+   * itself) and writes run.json into {@code dir}; the Spark job writes its record so too.
+   */
+  public static void writeRecord(Path dir, RunRecord.Builder record, ReportStage.Outcome outcome)
+      throws IOException {
     for (String name : List.of(ConductorTable.FILE_NAME, NearPointFile.FILE_NAME,
         UncertaintyFile.FILE_NAME, RunModel.FILE_NAME)) {
       record.output(name);
@@ -234,7 +244,6 @@ public final class ClearanceCheck {
     outcome.written().forEach(record::output);
     record.output(RunRecord.FILE_NAME);
     RunRecordJson.write(dir, record.build());
-    return outcome;
   }
 
   /**

@@ -3,6 +3,7 @@ package org.clearance.assess;
 import java.util.Arrays;
 import java.util.HashMap;
 import java.util.Map;
+import org.clearance.io.DisjointSets;
 
 /**
  * Groups points into sites by single linkage: two points belong to the same site when a chain of
@@ -93,7 +94,7 @@ public final class SiteClusterer {
             for (int m = 1; m <= members[0]; m++) {
               int j = members[m];
               if (j > i && squared(x, y, z, i, j) <= link2) {
-                union(parent, i, j);
+                DisjointSets.union(parent, i, j);
               }
             }
           }
@@ -105,7 +106,7 @@ public final class SiteClusterer {
     Arrays.fill(rootLabel, -1);
     int next = 0;
     for (int i = 0; i < n; i++) {
-      int r = find(parent, i);
+      int r = DisjointSets.root(parent, i);
       if (rootLabel[r] < 0) {
         rootLabel[r] = next++;
       }
@@ -141,26 +142,5 @@ public final class SiteClusterer {
     out[count + 1] = value;
     out[0] = count + 1;
     return out;
-  }
-
-  private static int find(int[] parent, int i) {
-    int r = i;
-    while (parent[r] != r) {
-      r = parent[r];
-    }
-    while (parent[i] != r) { // path compression
-      int next = parent[i];
-      parent[i] = r;
-      i = next;
-    }
-    return r;
-  }
-
-  private static void union(int[] parent, int a, int b) {
-    int ra = find(parent, a);
-    int rb = find(parent, b);
-    if (ra != rb) {
-      parent[Math.max(ra, rb)] = Math.min(ra, rb);
-    }
   }
 }

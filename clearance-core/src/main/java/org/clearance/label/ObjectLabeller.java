@@ -6,6 +6,7 @@ import java.util.Collections;
 import java.util.Comparator;
 import java.util.List;
 import org.clearance.ground.GroundModel;
+import org.clearance.io.DisjointSets;
 import org.clearance.line.SpanFrame;
 import org.clearance.survey.LongHashSet;
 import org.clearance.wire.PointSource;
@@ -194,7 +195,7 @@ public final class ObjectLabeller {
           s[9] += dz * dz;
         }
         if (j != me && dx * dx + dy * dy + dz * dz <= LINK_M * LINK_M) {
-          union(parent, me, j);
+          DisjointSets.union(parent, me, j);
         }
       });
       if (s[0] >= MIN_NEIGHBOURS) {
@@ -204,7 +205,7 @@ public final class ObjectLabeller {
     }
     long multi = 0;
     for (int i = 0; i < n; i++) {
-      parent[i] = root(parent, i);
+      parent[i] = DisjointSets.root(parent, i);
       multi += p.returnNumber[i] >= 2 ? 1 : 0;
     }
     boolean echoes = multi >= ECHO_INFORMATIVE_SHARE * n;
@@ -352,26 +353,5 @@ public final class ObjectLabeller {
       return ObjectKind.PLANAR;
     }
     return ObjectKind.VEGETATION;
-  }
-
-  private static void union(int[] parent, int a, int b) {
-    int ra = root(parent, a);
-    int rb = root(parent, b);
-    if (ra != rb) {
-      parent[Math.max(ra, rb)] = Math.min(ra, rb);
-    }
-  }
-
-  private static int root(int[] parent, int i) {
-    int r = i;
-    while (parent[r] != r) {
-      r = parent[r];
-    }
-    while (parent[i] != r) {
-      int next = parent[i];
-      parent[i] = r;
-      i = next;
-    }
-    return r;
   }
 }

@@ -1,6 +1,7 @@
 package org.clearance.wire;
 
 import java.util.List;
+import org.clearance.io.DisjointSets;
 
 /**
  * Which unclassified wire candidates of a span are shown not to be vegetation (package-private).
@@ -213,32 +214,15 @@ final class PointEvidence {
       for (int t = 0; t < near.size(); t++) {
         int j = near.get(t);
         if (!wire[j]) {
-          int a = root(parent, i);
-          int b = root(parent, j);
-          if (a != b) {
-            parent[Math.max(a, b)] = Math.min(a, b);
-          }
+          DisjointSets.union(parent, i, j);
         }
       }
     }
     for (int i = 0; i < n; i++) {
       if (parent[i] >= 0) {
-        parent[i] = root(parent, i);
+        parent[i] = DisjointSets.root(parent, i);
       }
     }
     return parent;
-  }
-
-  private static int root(int[] parent, int i) {
-    int r = i;
-    while (parent[r] != r) {
-      r = parent[r];
-    }
-    while (parent[i] != r) {
-      int next = parent[i];
-      parent[i] = r;
-      i = next;
-    }
-    return r;
   }
 }

@@ -12,6 +12,7 @@ import java.util.Locale;
 import java.util.Map;
 import java.util.Optional;
 import java.util.TreeMap;
+import org.clearance.ClearanceCheck;
 import org.clearance.RunFolder;
 import org.clearance.RunModels;
 import org.clearance.clearance.NearPointFile;
@@ -28,7 +29,6 @@ import org.clearance.rules.RuleProfile;
 import org.clearance.run.RunModel;
 import org.clearance.run.RunModelJson;
 import org.clearance.run.RunRecord;
-import org.clearance.run.RunRecordJson;
 import org.clearance.run.SpanRecord;
 import org.clearance.run.TreeRecord;
 import org.clearance.wire.ConductorTable;
@@ -98,13 +98,7 @@ final class RunWriter {
     deleteParts();
     ReportStage.Outcome outcome = ReportStage.write(staging,
         ReportStage.assess(staging, model, profile, report), report, console);
-    for (String name : List.of(ConductorTable.FILE_NAME, NearPointFile.FILE_NAME,
-        UncertaintyFile.FILE_NAME, RunModel.FILE_NAME)) {
-      record.output(name);
-    }
-    outcome.written().forEach(record::output);
-    record.output(RunRecord.FILE_NAME);
-    RunRecordJson.write(staging, record.build());
+    ClearanceCheck.writeRecord(staging, record, outcome);
     return outcome;
   }
 
