@@ -8,7 +8,11 @@ package org.clearance.ground;
  *   <li>Empty cells of the minimum surface are inpainted ({@link Inpainter}).
  *   <li>Low outliers: cells that a closing with a one-cell disk raises by more than
  *       {@link #LOW_OUTLIER_DROP_PER_CELL} x cell size are set aside (the paper screens low
- *       outliers on the inverted surface; this is our one-step version of it).
+ *       outliers on the inverted surface; this is our one-step version of it), unless at least
+ *       {@link #LOW_OUTLIER_MIN_SUPPORT} other cells within {@link #LOW_OUTLIER_SUPPORT_CELLS}
+ *       cells hold a lowest point less than that drop above it: terrain continues at its level,
+ *       as sparse ground returns under a dense canopy do, while a multipath return lies below
+ *       everything around it.
  *   <li>Progressive opening with disks of radius r = 1 .. maxWindow/cell cells, each applied to the
  *       previous opened surface; a cell is an object cell once the surface drops there by more than
  *       slope x r x cell size in one step.
@@ -23,6 +27,15 @@ final class SmrfRaster {
    * one (about 79 degrees). From memory of the paper's low-outlier step (slope 5, one-cell window).
    */
   static final double LOW_OUTLIER_DROP_PER_CELL = 5.0;
+  /** Radius of the window in which a low cell looks for terrain at its own level, cells: under
+   * a canopy that a pulse reaches the ground through in 30 % of the cells or more, a 7 x 7
+   * window holds about 14 ground cells (issue 9, generated corridor seed 41: ground cells under
+   * a forest wider than the largest opening were all set aside as low outliers, and the canopy
+   * became the terrain, 0.58 m high at a 27 m tree and up to 13 m high in the stand). */
+  static final int LOW_OUTLIER_SUPPORT_CELLS = 3;
+  /** Fewest cells at its level that keep a low cell as terrain: more than the 3 other cells of a
+   * 2 x 2 cluster of multipath returns (GroundModelTest), which the one-cell closing fills. */
+  static final int LOW_OUTLIER_MIN_SUPPORT = 4;
 
   private SmrfRaster() {}
 
@@ -54,7 +67,8 @@ final class SmrfRaster {
     float[] screened = zmin.clone();
     boolean anyLow = false;
     for (int i = 0; i < n; i++) {
-      if (!Float.isNaN(zmin[i]) && closed[i] - zmin[i] > LOW_OUTLIER_DROP_PER_CELL * cell) {
+      if (!Float.isNaN(zmin[i]) && closed[i] - zmin[i] > LOW_OUTLIER_DROP_PER_CELL * cell
+          && !supported(zmin, width, height, i, LOW_OUTLIER_DROP_PER_CELL * cell)) {
         low[i] = true;
         screened[i] = Float.NaN;
         anyLow = true;
@@ -81,5 +95,25 @@ final class SmrfRaster {
       }
     }
     return new Result(Inpainter.fill(ground, width, height), object, low);
+  }
+
+  /** True when at least {@link #LOW_OUTLIER_MIN_SUPPORT} other cells within
+   * {@link #LOW_OUTLIER_SUPPORT_CELLS} of cell {@code i} hold a lowest point less than
+   * {@code dropM} above its own (or below it). */
+  static boolean supported(float[] zmin, int width, int height, int i, double dropM) {
+    int r0 = i / width;
+    int c0 = i % width;
+    int k = LOW_OUTLIER_SUPPORT_CELLS;
+    int found = 0;
+    for (int r = Math.max(0, r0 - k); r <= Math.min(height - 1, r0 + k); r++) {
+      for (int c = Math.max(0, c0 - k); c <= Math.min(width - 1, c0 + k); c++) {
+        int j = r * width + c;
+        if (j != i && !Float.isNaN(zmin[j]) && zmin[j] - zmin[i] < dropM
+            && ++found >= LOW_OUTLIER_MIN_SUPPORT) {
+          return true;
+        }
+      }
+    }
+    return false;
   }
 }
