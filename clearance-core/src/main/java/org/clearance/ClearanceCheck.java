@@ -177,7 +177,8 @@ public final class ClearanceCheck {
       ObjectLabels objects = ObjectLabeller.label(consumers -> survey.readParallel(
           options.threads(), progress.wrap("labels", consumers)),
           wires.layout().spans().stream().map(Span::frame).toList(),
-          options.engine().treeReach() + LABEL_REGION_MARGIN_M, scan.ground, wires.setAside());
+          options.engine().treeReach() + LABEL_REGION_MARGIN_M, scan.ground, wires.setAside(),
+          vegetation.mixed());
       say("labelling: %s", objects.describe());
       record.parameter("labelling", objects.describe());
       stop("labelling");

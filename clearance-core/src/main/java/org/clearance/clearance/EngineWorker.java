@@ -145,6 +145,7 @@ final class EngineWorker implements Consumer<PointChunk> {
     boolean inTreeRegion = false;
     boolean notVegetation = false;
     SetAside.Reason reason = null;
+    boolean inferredPoint = vegetation.inferredClass(cls);
     for (int sp : candidates) {
       PreparedSpan p = spans.get(sp);
       double s = p.frame.station(x, y);
@@ -155,12 +156,14 @@ final class EngineWorker implements Consumer<PointChunk> {
       if (!hagDone) {
         hag = heights.heightAboveGround(x, y, z);
         hagDone = true;
-        if (vegetation.inferred() && !(hag >= VegetationSelector.UNCLASSIFIED_MIN_HEIGHT)) {
+        if (inferredPoint && (cls == VegetationSelector.GROUND
+            ? !vegetation.groundLabelDoubted(hag)
+            : !(hag >= VegetationSelector.UNCLASSIFIED_MIN_HEIGHT))) {
           return;
         }
       }
       inTreeRegion = true;
-      if (vegetation.inferred() && (nearStructure(p, x, y) || onCrossArm(p, s, e, z))) {
+      if (inferredPoint && (nearStructure(p, x, y) || onCrossArm(p, s, e, z))) {
         if (p.inBox(s, e, z)) {
           excludedStructure[sp]++;
         }

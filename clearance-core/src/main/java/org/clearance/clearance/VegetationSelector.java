@@ -8,12 +8,17 @@ import java.util.stream.Collectors;
 /**
  * Decides which survey points count as vegetation.
  *
- * <p>A classified survey (one that has any point in a vegetation class) uses its vegetation
- * classes: 3, 4 and 5 by default (ASPRS LAS 1.4 R15, Table 17), or the user's choice. A survey
- * without vegetation classes is treated as unclassified: every point of class 0 or 1 (never
- * classified, unclassified) that is not ground, not part of a conductor and not part of a
- * structure counts as vegetation; the engine applies the conductor and structure tests, this
- * class the class and height tests.
+ * <p>Three modes ({@link Mode}). A survey with vegetation classes (any point in 3, 4 or 5, ASPRS
+ * LAS 1.4 R15, Table 17) is read as <em>partly labelled</em> ({@link Mode#MIXED}): its
+ * vegetation labels are used, and every point it left in class 0 or 1 (never classified,
+ * unclassified) is inferred as in an unlabelled survey, so vegetation a vendor did not label is
+ * never dropped without a reason (issue 9). A survey without vegetation classes is inferred
+ * ({@link Mode#INFERRED}): every point of class 0 or 1 that is not ground, not part of a
+ * conductor, a structure or a man-made object counts as vegetation. When the user names the
+ * vegetation classes ({@link Mode#LABELLED}) only those are read. Wherever class 0/1 is inferred, a
+ * class-2 point more than {@link #GROUND_LABEL_MAX_HEIGHT} above the ground model is not
+ * believed to be ground and is inferred too. The engine applies the conductor, structure and
+ * object tests, this class the class and height tests.
  */
 public final class VegetationSelector {
 
@@ -40,12 +45,32 @@ public final class VegetationSelector {
    * and road furniture stay below; common practice, no source). */
   static final double GROUND_LIKE_MAX_HEIGHT = 2.0;
 
-  private final BitSet classes;
-  private final boolean inferred;
+  /** Height above the ground model beyond which a class-2 label is not believed where class 0/1
+   * is inferred, m: SMRF's ground band is 0.5 m plus 1.25 m per unit of slope (docs/ground.md),
+   * and snow banks and kerbs stay below; as {@link #GROUND_LIKE_MAX_HEIGHT} (common practice, no
+   * source). */
+  public static final double GROUND_LABEL_MAX_HEIGHT =
+      org.clearance.label.ObjectLabeller.GROUND_LABEL_MAX_HEIGHT_M;
+  /** ASPRS class 2, ground. */
+  static final int GROUND = 2;
 
-  private VegetationSelector(BitSet classes, boolean inferred) {
+  /** How the survey's classes are read. */
+  public enum Mode {
+    /** Only the classes the user named are vegetation (class 0/1 as the vendor left it). */
+    LABELLED,
+    /** Vegetation classes read as labelled, class 0/1 inferred (a partly labelled survey, or a
+     * fully labelled one whose class 1 may still hold vegetation). */
+    MIXED,
+    /** No vegetation classes: class 0/1 inferred. */
+    INFERRED
+  }
+
+  private final BitSet classes;
+  private final Mode mode;
+
+  private VegetationSelector(BitSet classes, Mode mode) {
     this.classes = classes;
-    this.inferred = inferred;
+    this.mode = mode;
   }
 
   /**
@@ -66,13 +91,43 @@ public final class VegetationSelector {
       bits.set(c);
       any |= c < classCounts.length && classCounts[c] > 0;
     }
-    if (any || userClasses != null) {
-      return new VegetationSelector(bits, false);
+    if (userClasses != null) {
+      return new VegetationSelector(bits, Mode.LABELLED);
+    }
+    if (any) {
+      bits.set(0);
+      bits.set(1);
+      return new VegetationSelector(bits, Mode.MIXED);
     }
     BitSet unclassified = new BitSet(256);
     unclassified.set(0);
     unclassified.set(1);
-    return new VegetationSelector(unclassified, true);
+    return new VegetationSelector(unclassified, Mode.INFERRED);
+  }
+
+  /** How the survey's classes are read. */
+  public Mode mode() {
+    return mode;
+  }
+
+  /**
+   * Whether a point of this class is inferred (vegetation unless the evidence of the wire
+   * finder, the structure test or the labelling step says otherwise) rather than read as
+   * labelled: class 0/1 wherever vegetation is inferred, and class 2 (its height is then tested
+   * against {@link #GROUND_LABEL_MAX_HEIGHT}).
+   */
+  public boolean inferredClass(int classification) {
+    return mode != Mode.LABELLED && (classification <= 1 || classification == GROUND);
+  }
+
+  /**
+   * Whether a class-2 point at this height above ground is not believed to be ground and is
+   * inferred (only where class 0/1 is inferred).
+   *
+   * @param hag height above ground, m (NaN: believed)
+   */
+  public boolean groundLabelDoubted(double hag) {
+    return mode != Mode.LABELLED && hag > GROUND_LABEL_MAX_HEIGHT;
   }
 
   /**
@@ -103,25 +158,38 @@ public final class VegetationSelector {
         && !NOT_VEGETATION.contains(classification);
   }
 
-  /** Whether the class may hold vegetation. */
+  /** Whether the class may hold vegetation (class 2 only by {@link #groundLabelDoubted}). */
   public boolean candidateClass(int classification) {
-    return classes.get(classification);
+    return classes.get(classification) || (classification == GROUND && mode != Mode.LABELLED);
   }
 
   /**
-   * True when vegetation is inferred from an unclassified survey: the engine must then exclude
-   * conductor and structure points itself and require a small height above ground.
+   * True when some vegetation is inferred (class 0/1 of a survey without vegetation classes, or
+   * of a partly labelled one): the engine must then exclude conductor, structure and object
+   * points itself among the {@link #inferredClass inferred classes} and require a small height
+   * above ground, and the labelling step runs.
    */
   public boolean inferred() {
-    return inferred;
+    return mode != Mode.LABELLED;
+  }
+
+  /** True when the survey's vegetation labels are read and class 0/1 is inferred besides. */
+  public boolean mixed() {
+    return mode == Mode.MIXED;
   }
 
   /** Human-readable description for the run record. */
   public String describe() {
-    return inferred
-        ? "inferred: classes 0/1 above " + UNCLASSIFIED_MIN_HEIGHT
-            + " m over ground, not conductor, not structure"
-        : "classes " + classes.stream().mapToObj(Integer::toString)
-            .collect(Collectors.joining(", "));
+    String inferredText = "classes 0/1 inferred (above " + UNCLASSIFIED_MIN_HEIGHT
+        + " m over ground, not conductor, not structure, not man-made; class 2 more than "
+        + GROUND_LABEL_MAX_HEIGHT + " m over ground too)";
+    return switch (mode) {
+      case INFERRED -> "inferred: " + inferredText;
+      case MIXED -> "classes " + classes.stream().filter(c -> c > 1)
+          .mapToObj(Integer::toString).collect(Collectors.joining(", "))
+          + " as labelled where consistent; " + inferredText;
+      case LABELLED -> "classes " + classes.stream().mapToObj(Integer::toString)
+          .collect(Collectors.joining(", "));
+    };
   }
 }

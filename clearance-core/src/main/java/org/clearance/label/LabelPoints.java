@@ -11,19 +11,32 @@ import org.clearance.wire.SetAside;
 /**
  * The points the labelling looks at, gathered in one pass (one collector per reading thread,
  * merged after): unclassified points (class 0 or 1, not withheld) at least {@link #MIN_HAG_M}
- * above ground, within the region of a span, not set aside by the wire finder. About 40 bytes a
- * point; only the line's region is held, never the whole survey.
+ * above ground, class-2 points more than {@link #GROUND_LABEL_MAX_HEIGHT_M} above it (a ground
+ * label not believed) and, in a partly labelled survey, the points labelled vegetation (3-5) at
+ * least {@link #MIN_HAG_M} above ground, whose labels are trusted only as far as the objects
+ * they belong to look like vegetation; all within the region of a span, not set aside by the
+ * wire finder. About 40 bytes a point; only the line's region is held, never the whole survey.
  */
 final class LabelPoints implements Consumer<PointChunk> {
 
   /** Lowest point looked at, m above ground: the canopy's lowest return (half the 2 m least tree
    * height, Popescu and Wynne 2004), so every point that can make a tree is labelled. */
   static final double MIN_HAG_M = 1.0;
+  /** Height above ground beyond which a class-2 label is not believed, m
+   * ({@link ObjectLabeller#GROUND_LABEL_MAX_HEIGHT_M}). */
+  static final double GROUND_LABEL_MAX_HEIGHT_M = ObjectLabeller.GROUND_LABEL_MAX_HEIGHT_M;
+  /** What a point was labelled: unclassified (0 or 1). */
+  static final byte OPEN = 0;
+  /** What a point was labelled: vegetation (3-5), in a partly labelled survey. */
+  static final byte VEGETATION_LABEL = 1;
+  /** What a point was labelled: ground (2), standing above {@link #GROUND_LABEL_MAX_HEIGHT_M}. */
+  static final byte GROUND_DOUBTED = 2;
 
   private final List<SpanFrame> frames;
   private final double regionM;
   private final GroundModel ground;
   private final SetAside setAside;
+  private final boolean judgeVegetationLabels;
 
   int size;
   double[] x = new double[1024];
@@ -32,12 +45,17 @@ final class LabelPoints implements Consumer<PointChunk> {
   float[] hag = new float[1024];
   /** Return number of the point within its pulse (0 when the file does not say). */
   byte[] returnNumber = new byte[1024];
+  /** What each point was labelled ({@link #OPEN}, {@link #VEGETATION_LABEL},
+   * {@link #GROUND_DOUBTED}). */
+  byte[] label = new byte[1024];
 
-  LabelPoints(List<SpanFrame> frames, double regionM, GroundModel ground, SetAside setAside) {
+  LabelPoints(List<SpanFrame> frames, double regionM, GroundModel ground, SetAside setAside,
+      boolean judgeVegetationLabels) {
     this.frames = frames;
     this.regionM = regionM;
     this.ground = ground;
     this.setAside = setAside;
+    this.judgeVegetationLabels = judgeVegetationLabels;
   }
 
   @Override
@@ -45,7 +63,10 @@ final class LabelPoints implements Consumer<PointChunk> {
     short[] cls = chunk.classification();
     byte[] flags = chunk.flags();
     for (int i = 0; i < chunk.size(); i++) {
-      if (cls[i] > 1 || (flags[i] & PointChunk.FLAG_WITHHELD) != 0) {
+      int c = cls[i];
+      byte kind = c <= 1 ? OPEN : c == 2 ? GROUND_DOUBTED
+          : judgeVegetationLabels && c >= 3 && c <= 5 ? VEGETATION_LABEL : -1;
+      if (kind < 0 || (flags[i] & PointChunk.FLAG_WITHHELD) != 0) {
         continue;
       }
       double px = chunk.x()[i];
@@ -55,11 +76,11 @@ final class LabelPoints implements Consumer<PointChunk> {
         continue;
       }
       double h = ground.heightAboveGround(px, py, pz);
-      if (!(h >= MIN_HAG_M)
-          || setAside.reason(SetAside.key(px, py, pz)) != SetAside.Reason.NONE) {
+      boolean high = kind == GROUND_DOUBTED ? h > GROUND_LABEL_MAX_HEIGHT_M : h >= MIN_HAG_M;
+      if (!high || setAside.reason(SetAside.key(px, py, pz)) != SetAside.Reason.NONE) {
         continue;
       }
-      add(px, py, pz, h, chunk.returnNumber()[i]);
+      add(px, py, pz, h, chunk.returnNumber()[i], kind);
     }
   }
 
@@ -73,7 +94,7 @@ final class LabelPoints implements Consumer<PointChunk> {
     return false;
   }
 
-  void add(double px, double py, double pz, double h, byte n) {
+  void add(double px, double py, double pz, double h, byte n, byte kind) {
     if (size == x.length) {
       int cap = size * 2;
       x = Arrays.copyOf(x, cap);
@@ -81,19 +102,21 @@ final class LabelPoints implements Consumer<PointChunk> {
       z = Arrays.copyOf(z, cap);
       hag = Arrays.copyOf(hag, cap);
       returnNumber = Arrays.copyOf(returnNumber, cap);
+      label = Arrays.copyOf(label, cap);
     }
     x[size] = px;
     y[size] = py;
     z[size] = pz;
     hag[size] = (float) h;
     returnNumber[size] = n;
+    label[size] = kind;
     size++;
   }
 
   /** Adds another collector's points. */
   void absorb(LabelPoints o) {
     for (int i = 0; i < o.size; i++) {
-      add(o.x[i], o.y[i], o.z[i], o.hag[i], o.returnNumber[i]);
+      add(o.x[i], o.y[i], o.z[i], o.hag[i], o.returnNumber[i], o.label[i]);
     }
   }
 }

@@ -7,5 +7,8 @@ public enum ObjectKind {
   /** A thin tall structure with little spread at the top: a crane, mast, pole or lattice. */
   MAST,
   /** An object of planes: a roof, a wall, a fence, a vehicle. */
-  PLANAR
+  PLANAR,
+  /** A long thin object: a wire or cable the wire finder did not name, or points labelled
+   * vegetation that run along a wire. */
+  LINEAR
 }

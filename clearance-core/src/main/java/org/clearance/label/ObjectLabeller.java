@@ -105,6 +105,20 @@ public final class ObjectLabeller {
   /** Least height above ground of a fragment's lowest point for it to attach, m: a plant grows
    * from the ground, and every point from 1 m up is looked at (common practice, no source). */
   static final double FLOAT_M = 3.0;
+  /** Least mean linearity of a linear object (a wire sampled along its length with 3 cm noise
+   * over a 1 m neighbourhood: about 0.99; crowns at most 0.68, the demo's conifers, and the
+   * demo's tower crane 0.72; docs/labelling.md). */
+  static final double LINEAR_MIN_LINEARITY = 0.85;
+  /** Least share of linear points of a linear object (as the wire finder's unfitted wires,
+   * docs/wire-finder.md: 80 %). */
+  static final double LINEAR_MIN_SHARE = 0.8;
+  /** Least plan length of a linear object, m (the wire finder's least wire run). */
+  static final double LINEAR_MIN_LENGTH_M = 10.0;
+  /** Height above ground beyond which a class-2 label is not believed and the point is looked
+   * at as unclassified, m: SMRF's ground band is 0.5 m plus 1.25 m per unit of slope
+   * (docs/ground.md); snow banks and kerbs stay below (common practice, no source). The
+   * clearance engine uses the same value. */
+  public static final double GROUND_LABEL_MAX_HEIGHT_M = 2.0;
   /** Plan cell of the upper spread, m. */
   static final double SPREAD_CELL_M = 0.5;
 
@@ -119,17 +133,20 @@ public final class ObjectLabeller {
    * @param regionM points within this plan distance of a span's chord are looked at, m
    * @param ground the ground model
    * @param setAside the wire finder's points set aside; receives the man-made points
+   * @param judgeVegetationLabels true in a partly labelled survey: points labelled vegetation
+   *     (3-5) are clustered with the rest, and those of an object the evidence shows man-made
+   *     or linear are not trusted (set aside, counted)
    * @return the objects and counts
    */
   public static ObjectLabels label(PointSource source, List<SpanFrame> frames, double regionM,
-      GroundModel ground, SetAside setAside) {
+      GroundModel ground, SetAside setAside, boolean judgeVegetationLabels) {
     List<LabelPoints> parts = Collections.synchronizedList(new ArrayList<>());
     source.stream(() -> {
-      LabelPoints p = new LabelPoints(frames, regionM, ground, setAside);
+      LabelPoints p = new LabelPoints(frames, regionM, ground, setAside, judgeVegetationLabels);
       parts.add(p);
       return p;
     });
-    LabelPoints all = new LabelPoints(frames, regionM, ground, setAside);
+    LabelPoints all = new LabelPoints(frames, regionM, ground, setAside, judgeVegetationLabels);
     parts.forEach(all::absorb);
     sort(all);
     return label(all, setAside);
@@ -148,6 +165,7 @@ public final class ObjectLabeller {
     double[] z = new double[p.size];
     float[] h = new float[p.size];
     byte[] r = new byte[p.size];
+    byte[] l = new byte[p.size];
     for (int k = 0; k < p.size; k++) {
       int i = idx[k];
       x[k] = p.x[i];
@@ -155,18 +173,20 @@ public final class ObjectLabeller {
       z[k] = p.z[i];
       h[k] = p.hag[i];
       r[k] = p.returnNumber[i];
+      l[k] = p.label[i];
     }
     p.x = x;
     p.y = y;
     p.z = z;
     p.hag = h;
     p.returnNumber = r;
+    p.label = l;
   }
 
   static ObjectLabels label(LabelPoints p, SetAside setAside) {
     int n = p.size;
     if (n == 0) {
-      return new ObjectLabels(List.of(), 0, 0, false);
+      return ObjectLabels.NONE;
     }
     CellIndex index = new CellIndex(p.x, p.y, p.z, n, Math.max(RADIUS_M, LINK_M));
     LocalShape[] shape = new LocalShape[n];
@@ -213,14 +233,22 @@ public final class ObjectLabeller {
     List<LabelledObject> objects = objects(p, parent, shape, echoes, kindOf);
     attachFragments(p, parent, kindOf);
     long setAsideCount = 0;
+    long vegetationLabels = 0;
+    long vegetationLabelsDoubted = 0;
+    long groundDoubted = 0;
     for (int i = 0; i < n; i++) {
       ObjectKind k = kindOf[parent[i]];
-      if (k != null && k != ObjectKind.VEGETATION) {
+      boolean manMade = k != null && k != ObjectKind.VEGETATION;
+      vegetationLabels += p.label[i] == LabelPoints.VEGETATION_LABEL ? 1 : 0;
+      groundDoubted += p.label[i] == LabelPoints.GROUND_DOUBTED ? 1 : 0;
+      if (manMade) {
         setAside.addObject(SetAside.key(p.x[i], p.y[i], p.z[i]));
         setAsideCount++;
+        vegetationLabelsDoubted += p.label[i] == LabelPoints.VEGETATION_LABEL ? 1 : 0;
       }
     }
-    return new ObjectLabels(objects, n, setAsideCount, echoes);
+    return new ObjectLabels(objects, n, setAsideCount, echoes,
+        new ObjectLabels.Doubted(vegetationLabels, vegetationLabelsDoubted, groundDoubted));
   }
 
   /** The objects' evidence and kinds; {@code kindOf} receives the kind at each object's root. */
@@ -230,6 +258,15 @@ public final class ObjectLabeller {
     int[] count = new int[n];
     int[] withShape = new int[n];
     int[] planarDominant = new int[n];
+    int[] linearDominant = new int[n];
+    double[] xMin = new double[n];
+    double[] xMax = new double[n];
+    double[] yMin = new double[n];
+    double[] yMax = new double[n];
+    Arrays.fill(xMin, Double.POSITIVE_INFINITY);
+    Arrays.fill(yMin, Double.POSITIVE_INFINITY);
+    Arrays.fill(xMax, Double.NEGATIVE_INFINITY);
+    Arrays.fill(yMax, Double.NEGATIVE_INFINITY);
     int[] multi = new int[n];
     double[] sumLinearity = new double[n];
     double[] sumPlanarity = new double[n];
@@ -243,6 +280,10 @@ public final class ObjectLabeller {
       if (top[r] < 0 || p.hag[i] > p.hag[top[r]]) {
         top[r] = i;
       }
+      xMin[r] = Math.min(xMin[r], p.x[i]);
+      xMax[r] = Math.max(xMax[r], p.x[i]);
+      yMin[r] = Math.min(yMin[r], p.y[i]);
+      yMax[r] = Math.max(yMax[r], p.y[i]);
       LocalShape f = shape[i];
       if (f != null) {
         withShape[r]++;
@@ -250,6 +291,7 @@ public final class ObjectLabeller {
         sumPlanarity[r] += f.planarity();
         sumScattering[r] += f.scattering();
         planarDominant[r] += f.dominant() == 1 ? 1 : 0;
+        linearDominant[r] += f.dominant() == 0 ? 1 : 0;
       }
     }
     int[] upperCells = new int[n];
@@ -287,8 +329,13 @@ public final class ObjectLabeller {
       double spread = upperCells[r] * SPREAD_CELL_M * SPREAD_CELL_M / height;
       double baseShare = (double) base[r] / count[r];
       double multiShare = echoes ? (double) multi[r] / count[r] : Double.NaN;
+      double lengthM = Math.hypot(xMax[r] - xMin[r], yMax[r] - yMin[r]);
+      double linearShare = (double) linearDominant[r] / withShape[r];
       ObjectKind kind = decide(height, linearity, scattering, planarShare, spread, baseShare,
           multiShare);
+      if (kind == ObjectKind.VEGETATION && isLinear(linearity, linearShare, lengthM)) {
+        kind = ObjectKind.LINEAR;
+      }
       kindOf[r] = kind;
       out.add(new LabelledObject(kind, count[r], p.x[top[r]], p.y[top[r]], height, linearity,
           planarity, scattering, planarShare, spread, baseShare, multiShare));
@@ -334,6 +381,21 @@ public final class ObjectLabeller {
         kindOf[r] = verdict[r];
       }
     }
+  }
+
+  /**
+   * Step 5b: a long thin object, a wire or cable the wire finder did not name, or a run of
+   * points labelled vegetation along a wire: mean linearity at least
+   * {@link #LINEAR_MIN_LINEARITY}, at least {@link #LINEAR_MIN_SHARE} of its points linear, and
+   * at least {@link #LINEAR_MIN_LENGTH_M} long in plan.
+   *
+   * @param linearity mean linearity of its points (0-1)
+   * @param linearShare share of its points whose largest feature is linearity (0-1)
+   * @param lengthM diagonal of its plan extent, m
+   */
+  static boolean isLinear(double linearity, double linearShare, double lengthM) {
+    return linearity >= LINEAR_MIN_LINEARITY && linearShare >= LINEAR_MIN_SHARE
+        && lengthM >= LINEAR_MIN_LENGTH_M;
   }
 
   /** The decision of step 5 (class comment). */

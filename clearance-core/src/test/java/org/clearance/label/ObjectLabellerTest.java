@@ -17,6 +17,8 @@ class ObjectLabellerTest {
   /** Steel points per metre of member and point noise, m (as the demo's fixtures). */
   private static final double PER_METRE = 4.0;
   private static final double SIGMA_M = 0.03;
+  /** Wire points per metre of conductor at 20 points per m^2 (common practice, no source). */
+  private static final int WIRE_PER_METRE = 10;
 
   @Test
   void latticeMastIsMastLike() {
@@ -97,8 +99,50 @@ class ObjectLabellerTest {
         ObjectLabeller.decide(5, 0.4, 0.01, 0.8, 10, 0, 0.3));
   }
 
+  @Test
+  void aVegetationLabelAlongAWireIsNotTrusted() {
+    // Issue 9, partly labelled surveys: a vendor's class-5 label on 40 m of a conductor
+    // (15 m up, sagging 1 m, 10 points per metre with 3 cm noise: a line survey of 20 points
+    // per m^2) is a linear object and is set aside, counted as a label not trusted; a crown
+    // labelled 5 beside it keeps its label.
+    LabelPoints p = points();
+    SplittableRandom rng = new SplittableRandom(11);
+    for (int k = 0; k < WIRE_PER_METRE * 40; k++) {
+      double t = rng.nextDouble();
+      double x = 40 * t;
+      p.add(x + SIGMA_M * rng.nextGaussian(), SIGMA_M * rng.nextGaussian(),
+          15 - 4 * t * (1 - t) + SIGMA_M * rng.nextGaussian(), 15, (byte) 1,
+          LabelPoints.VEGETATION_LABEL);
+    }
+    for (int k = 0; k < 1200; k++) {
+      double a = rng.nextDouble(0, 2 * Math.PI);
+      double r = 3 * Math.sqrt(rng.nextDouble());
+      double zc = 10 + 4 * Math.sqrt(Math.max(0, 1 - r * r / 9)) - rng.nextDouble(0, 0.8);
+      p.add(20 + r * Math.cos(a), 8 + r * Math.sin(a), zc, zc, (byte) 1,
+          LabelPoints.VEGETATION_LABEL);
+    }
+    SetAside set = SetAside.none();
+    ObjectLabels labels = ObjectLabeller.label(p, set);
+    assertEquals(2, labels.objects().size(), labels.objects().toString());
+    assertEquals(1, labels.objects().stream().filter(o -> o.kind() == ObjectKind.LINEAR)
+        .count(), labels.objects().toString());
+    assertEquals(WIRE_PER_METRE * 40, labels.doubted().vegetationLabelsSetAside(),
+        labels.describe());
+    assertEquals(p.size, labels.doubted().vegetationLabels());
+  }
+
+  @Test
+  void linearNeedsLengthAndLinearity() {
+    // isLinear(): the thresholds of docs/labelling.md (0.85 mean linearity, 80 % linear
+    // points, 10 m), each on its own.
+    assertTrue(ObjectLabeller.isLinear(0.95, 0.9, 40));
+    assertTrue(!ObjectLabeller.isLinear(0.68, 0.9, 40));
+    assertTrue(!ObjectLabeller.isLinear(0.95, 0.5, 40));
+    assertTrue(!ObjectLabeller.isLinear(0.95, 0.9, 8));
+  }
+
   private static LabelPoints points() {
-    return new LabelPoints(java.util.List.of(), 0, null, SetAside.none());
+    return new LabelPoints(java.util.List.of(), 0, null, SetAside.none(), true);
   }
 
   private static void member(LabelPoints p, SplittableRandom rng, double x1, double y1,
@@ -113,6 +157,6 @@ class ObjectLabellerTest {
   }
 
   private static void add(LabelPoints p, double x, double y, double z, int returnNumber) {
-    p.add(x, y, z, z, (byte) returnNumber);
+    p.add(x, y, z, z, (byte) returnNumber, LabelPoints.OPEN);
   }
 }

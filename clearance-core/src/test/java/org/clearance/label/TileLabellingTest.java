@@ -60,7 +60,7 @@ class TileLabellingTest {
         ground::heightAboveGround);
     SetAside setAside = wires.setAside();
     ObjectLabels labels = ObjectLabeller.label(groundOnly,
-        layout.spans().stream().map(Span::frame).toList(), 70, ground, setAside);
+        layout.spans().stream().map(Span::frame).toList(), 70, ground, setAside, false);
     System.out.println("tile labelling, kept class " + keep + ": " + labels.describe());
     for (LabelledObject o : labels.objects()) {
       if (o.points() >= 100 || o.kind() != ObjectKind.VEGETATION) {

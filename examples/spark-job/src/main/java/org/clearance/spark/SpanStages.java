@@ -318,7 +318,7 @@ final class SpanStages {
         ObjectLabeller.label(consumers -> feed(blocks, consumers.get()),
             engineSpans.stream().map(m -> m.span().frame()).toList(),
             options.engine().treeReach() + ClearanceCheck.LABEL_REGION_MARGIN_M, fit.ground(),
-            aside);
+            aside, vegetation.mixed());
       }
       Path near = temp.resolve(NearPointFile.FILE_NAME);
       Measurement all;
