@@ -70,7 +70,7 @@ class UnlabelledTileTest {
   private record Site(String span, int priority, String zone, double x, double y, double z,
       double height) {}
 
-  private record Run(RunModel model, List<Site> sites) {}
+  private record Run(RunModel model, List<Site> sites, String console) {}
 
   @BeforeAll
   static void truth() {
@@ -89,12 +89,34 @@ class UnlabelledTileTest {
     });
   }
 
+  /** How the tile's classes are changed for a run: which vendor classes are reset to 1. */
+  private enum Mode {
+    /** As delivered (vegetation 5 and the vendor's class 1 read together: partly labelled). */
+    LABELLED(c -> false),
+    /** Every class but ground reset to 1. */
+    GROUND_ONLY(c -> c != 2),
+    /** Every class reset to 1. */
+    UNLABELLED(c -> true),
+    /** Vegetation (3-5) reset to 1, ground, water, wires, tower and cranes kept. */
+    VEGETATION_RESET(c -> c >= 3 && c <= 5),
+    /** Wires (13, 14) reset to 1, vegetation and the rest kept. */
+    WIRES_RESET(c -> c == 13 || c == 14);
+
+    final java.util.function.IntPredicate reset;
+
+    Mode(java.util.function.IntPredicate reset) {
+      this.reset = reset;
+    }
+  }
+
   @Test
   void labelsTakenAwayGiveTheLabelledFindings() throws IOException {
-    Run labelled = run("labelled", -1);
+    Run labelled = run(Mode.LABELLED);
     StringBuilder figures = new StringBuilder();
-    for (int keep : new int[] {2, 0}) {
-      Run r = run(keep == 2 ? "ground-only" : "unlabelled", keep);
+    for (Mode keep : Mode.values()) {
+      Run r = keep == Mode.LABELLED ? labelled : run(keep);
+      r.console().lines().filter(l -> l.contains("labelling")).forEach(l -> System.out.println(
+          "tile " + keep + ": " + l));
       int zoneSites = 0;
       int notVegetation = 0;
       int notAtVegetation = 0;
@@ -165,7 +187,7 @@ class UnlabelledTileTest {
           + " vegetation %d (of them with no labelled vegetation within 0.3 m %d: vendor class 1"
           + " %d, tower or crane 15/26 %d); spans with labelled zone sites left without one %d;"
           + " labelled zone sites without a match %d; fall-in sites %d, at no labelled tree of"
-          + " that height %d", keep == 2 ? "ground-only" : "unlabelled", zoneSites,
+          + " that height %d", keep, zoneSites,
           labelled.sites().stream().filter(s -> !s.zone().equals("fall-in")).count(),
           notVegetation, notAtVegetation, classOne, manMade, spansFalseClear, missed, fallIn,
           fallInWrong);
@@ -185,29 +207,25 @@ class UnlabelledTileTest {
     assertTrue(labelled.sites().size() >= 3, "labelled sites: " + labelled.sites().size());
   }
 
-  /**
-   * Runs the check on the tile with its classes changed: every class but {@code keep} reset to
-   * 1 (keep 0 resets all), or as it is (keep -1).
-   */
-  private static Run run(String name, int keep) throws IOException {
+  /** Runs the check on the tile with its classes changed as the mode says. */
+  private static Run run(Mode mode) throws IOException {
+    String name = mode.name();
     Path las = dir.resolve(name + ".las");
     byte[] bytes = Files.readAllBytes(SurveyTestFiles.open("corridor_12AN2_20_thinned.las"));
-    if (keep >= 0) {
-      relabel(bytes, keep);
-    }
+    relabel(bytes, mode.reset);
     Files.write(las, bytes);
     Path out = dir.resolve(name + "-run");
     CheckInputs inputs = new CheckInputs(List.of(las), UnitsChoice.of(LinearUnit.METRE),
         LINE_DIR.resolve("structures.csv"), List.of(LINE_DIR.resolve("line.yaml")),
         Optional.empty(), Optional.of(PROFILE), out);
-    new ClearanceCheck(CheckOptions.defaults(2), new PrintWriter(new StringWriter()))
-        .run(inputs, "test");
-
-    return new Run(RunModelJson.read(out.resolve(RunModel.FILE_NAME)), sites(out));
+    StringWriter console = new StringWriter();
+    new ClearanceCheck(CheckOptions.defaults(2), new PrintWriter(console)).run(inputs, "test");
+    return new Run(RunModelJson.read(out.resolve(RunModel.FILE_NAME)), sites(out),
+        console.toString());
   }
 
-  /** Sets the class of every point of a LAS 1.4 point format 6-10 file in place. */
-  private static void relabel(byte[] las, int keep) {
+  /** Sets the classes {@code reset} names to 1 in a LAS 1.4 point format 6-10 file, in place. */
+  private static void relabel(byte[] las, java.util.function.IntPredicate reset) {
     ByteBuffer b = ByteBuffer.wrap(las).order(ByteOrder.LITTLE_ENDIAN);
     int format = las[104] & 0x3F;
     assertTrue(format >= 6, "point format " + format);
@@ -216,7 +234,7 @@ class UnlabelledTileTest {
     long count = b.getLong(247);
     for (long i = 0; i < count; i++) {
       int at = (int) (offset + i * length + 16); // classification byte of formats 6-10
-      if ((las[at] & 0xFF) != keep) {
+      if (reset.test(las[at] & 0xFF)) {
         las[at] = 1;
       }
     }

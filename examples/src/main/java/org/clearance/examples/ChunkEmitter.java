@@ -48,7 +48,7 @@ final class ChunkEmitter {
    */
   void emit(double x, double y, double z, int fullClass, int truthId, int intensity,
       int returnNumber, int returns) {
-    int i = chunk.add(x, y, z, mode.label(fullClass));
+    int i = chunk.add(x, y, z, mode.label(fullClass, x, y));
     ids[i] = truthId;
     chunk.intensity()[i] = Math.max(0, Math.min(65535, intensity));
     chunk.returnNumber()[i] = (byte) returnNumber;

@@ -18,7 +18,17 @@ public enum ClassificationMode {
    */
   GROUND_ONLY,
   /** Every point class 1, not even ground. */
-  UNCLASSIFIED;
+  UNCLASSIFIED,
+  /**
+   * A survey classified in some tiles only, as vendors deliver it when a contract covers part
+   * of an area: in a checkerboard of {@link #TILE_M} m tiles (by easting and northing) every
+   * other tile is labelled as {@link #FULL} (without stray labels), the rest as
+   * {@link #GROUND_ONLY}.
+   */
+  PARTLY_LABELLED;
+
+  /** Side of the tiles of {@link #PARTLY_LABELLED}, m. */
+  static final double TILE_M = 100.0;
 
   /** ASPRS class 1, unclassified. */
   static final int UNCLASSIFIED_CLASS = 1;
@@ -42,6 +52,18 @@ public enum ClassificationMode {
    * @return the class written in this mode
    */
   public int label(int fullClass) {
+    return label(fullClass, 0, 0);
+  }
+
+  /**
+   * The class a point at (x, y) gets in this mode.
+   *
+   * @param fullClass the class the point has in {@link #FULL} mode, 0-255
+   * @param x easting, m
+   * @param y northing, m
+   * @return the class written in this mode
+   */
+  public int label(int fullClass, double x, double y) {
     switch (this) {
       case FULL:
         return fullClass;
@@ -54,6 +76,9 @@ public enum ClassificationMode {
             ? fullClass : UNCLASSIFIED_CLASS;
       case UNCLASSIFIED:
         return UNCLASSIFIED_CLASS;
+      case PARTLY_LABELLED:
+        return ((long) Math.floor(x / TILE_M) + (long) Math.floor(y / TILE_M)) % 2 == 0
+            ? fullClass : GROUND_ONLY.label(fullClass);
       default:
         throw new AssertionError(this);
     }

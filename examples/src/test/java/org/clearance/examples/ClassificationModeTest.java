@@ -24,6 +24,11 @@ class ClassificationModeTest {
     assertEquals(wiresUnlabelled, ClassificationMode.WIRES_UNLABELLED.label(full));
     assertEquals(groundOnly, ClassificationMode.GROUND_ONLY.label(full));
     assertEquals(unclassified, ClassificationMode.UNCLASSIFIED.label(full));
+    // PARTLY_LABELLED: tile (0, 0) and (1, 1) of 100 m labelled in full, (1, 0) ground-only
+    assertEquals(full, ClassificationMode.PARTLY_LABELLED.label(full, 50, 50));
+    assertEquals(full, ClassificationMode.PARTLY_LABELLED.label(full, 150, 150));
+    assertEquals(groundOnly, ClassificationMode.PARTLY_LABELLED.label(full, 150, 50));
+    assertEquals(groundOnly, ClassificationMode.PARTLY_LABELLED.label(full, -50, 50));
   }
 
   /** Points of a small scene in one mode: x, y, z, class, truth id. */
