@@ -135,8 +135,9 @@ public final class VegetationSelector {
    * unknown meaning (reserved 8, 12, 23-63, user-defined 64-255) at least
    * {@link #UNCLASSIFIED_MIN_HEIGHT} above ground, or a ground-like class more than
    * {@link #GROUND_LIKE_MAX_HEIGHT} above it. Such points near a conductor keep a span from being
-   * called clear (issue 10 item 3: vegetation delivered in class 20). Classes 0 and 1 of a survey
-   * that labels its vegetation are taken as the vendor left them: not vegetation.
+   * called clear (issue 10 item 3: vegetation delivered in class 20). Classes 0 and 1 are
+   * inferred (never unread) unless the user named the vegetation classes; then they are taken
+   * as the vendor left them: not vegetation.
    *
    * @param classification the point's ASPRS class
    * @param hag its height above ground, m (NaN: unknown, not counted)

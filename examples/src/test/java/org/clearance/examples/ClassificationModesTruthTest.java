@@ -46,6 +46,10 @@ class ClassificationModesTruthTest {
   private static final double SURVEY_TOL_M = 0.05;
     /** Fall-in tree height tolerance, m (issue 9's target). */
   private static final double FALL_IN_HEIGHT_TOL_M = 0.5;
+  /** A partly labelled run's zone site names the same vegetation as a fully labelled run's
+   * when this near in plan, m (site clustering joins points 1.5 m apart; as
+   * UnlabelledTileTest; common practice, no source). */
+  private static final double SAME_SITE_M = 5.0;
   /** A fall-in site's position names the tree top within this plan distance, m (the canopy's
    * 0.5 m cells and flat tops; docs/ground.md measured 0.67 m). */
   private static final double TOP_RADIUS_M = 1.5;
@@ -206,14 +210,34 @@ class ClassificationModesTruthTest {
       worstSurvey = Math.max(worstSurvey, mode == ClassificationMode.FULL ? Math.abs(excess)
           : excess);
     }
+    // 6. A partly labelled survey gives the fully labelled survey's zone sites: each has one in
+    // its span within SAME_SITE_M, at least as urgent.
+    int fullWithoutMatch = 0;
+    if (mode == ClassificationMode.PARTLY_LABELLED) {
+      DemoRuns.Run full = DemoRuns.of(DemoRuns.small(seed, ClassificationMode.FULL)
+          .withSurveySwing(swingDeg).withManMade(manMade), PROFILE);
+      for (Site f : sites(full)) {
+        if (f.zone().equals("fall-in")) {
+          continue;
+        }
+        if (sites.stream().noneMatch(s -> s.span().equals(f.span()) && !s.zone().equals(
+            "fall-in") && s.priority() <= f.priority()
+            && Math.hypot(s.x() - f.x(), s.y() - f.y()) <= SAME_SITE_M)) {
+          fullWithoutMatch++;
+          System.out.println("fully labelled site without a match: " + f);
+        }
+      }
+    }
     String figures = String.format(Locale.ROOT, "seed %d %s swing %.0f deg: worst survey-state"
         + " minimum error %.3f m; spans %d, spans with vegetation"
         + " in a zone %d, reported without a zone site %d; trees in a zone %d, without a site"
         + " %d; zone sites %d, not on vegetation %d; fall-in sites %d, not at a tree of that"
-        + " height %d; sites on man-made objects %d (man-made points %d)", seed, mode,
+        + " height %d; sites on man-made objects %d (man-made points %d); fully labelled zone"
+        + " sites without a match %d", seed, mode,
         swingDeg, worstSurvey, spans.size(), spansWithZoneVegetation.size(), falseClear,
         zoneTrees.size(), missed, zoneSites, notVegetation, fallIn, fallInWrong, onManMade,
-        kindAt.values().stream().filter(i -> TruthId.kind(i) == TruthId.Kind.MAN_MADE).count());
+        kindAt.values().stream().filter(i -> TruthId.kind(i) == TruthId.Kind.MAN_MADE).count(),
+        fullWithoutMatch);
     System.out.println(figures);
     assertTrue(worstSurvey <= SURVEY_TOL_M, figures);
     assertEquals(0, falseClear, figures);
@@ -221,6 +245,7 @@ class ClassificationModesTruthTest {
     assertTrue(notVegetation <= MAX_NOT_VEGETATION_SHARE * zoneSites, figures);
     assertEquals(0, fallInWrong, figures);
     assertEquals(0, onManMade, figures);
+    assertEquals(0, fullWithoutMatch, figures);
     assertTrue(zoneTrees.size() >= 3, figures);
   }
 
