@@ -89,7 +89,9 @@ class ClearanceEngineTest {
     ClearanceEngine engine = new ClearanceEngine(List.of(model), set, (x, y, z) -> z,
         classified(), ClearanceEngine.Options.defaults(1));
     double zMid = a.z(L / 2); // 30 - 6.4185 m
-    double[][] pts = {{150, 0, zMid - 4.0, 5}, {150, 0, zMid - 2.0, 2}, {10, 40, 5, 5}};
+    // the class-2 point lies 1.5 m above the ground (height model: z), where a ground label is
+    // believed
+    double[][] pts = {{150, 0, zMid - 4.0, 5}, {150, 0, 1.5, 2}, {10, 40, 5, 5}};
     Path file = dir.resolve(NearPointFile.FILE_NAME);
     List<SpanClearance> result;
     try (NearPointWriter w = new NearPointWriter(file, engine.nearPointLayout())) {
@@ -226,11 +228,14 @@ class ClearanceEngineTest {
       {150, 2, a.z(150) - 2, 20}, // a crown labelled ignored ground, 2.83 m from the wire
       {160, 4, a.z(160) - 5, 64}, // a user class
       {170, 0, 0.5, 20}, // class 20 on the ground: believed
-      {180, 0, a.z(180) - 4, 2}, // ground class: never counted
+      {180, 0, 1.8, 2}, // ground class on the ground: never counted
       {190, 1, a.z(190) - 3, 5}, // read as vegetation
+      // issue 9: a ground label 4 m under the wire, far above the ground, is not believed and
+      // the point is measured as unclassified (VegetationSelector.groundLabelDoubted)
+      {200, 0, a.z(200) - 4, 2},
     };
     SpanClearance r = engine.measure(points(pts), null).spans().get(0);
-    assertEquals(1, r.pointsMeasured());
+    assertEquals(2, r.pointsMeasured());
     assertEquals(2, r.unread().count());
     assertEquals(Math.hypot(2, 2), r.unread().nearestM(), 2e-3);
     assertEquals(List.of(20, 64), r.unread().classes());
