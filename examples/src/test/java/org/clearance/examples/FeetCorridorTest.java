@@ -31,7 +31,8 @@ import org.junit.jupiter.params.provider.EnumSource;
 /**
  * Issue 9 in US survey feet: the demo corridor's survey and structures rewritten in US survey
  * feet (1200/3937 m, NIST; check-values.md section 1) give the findings of the metre files, in
- * every classification mode that infers vegetation: the same sites in the same zones, their
+ * every classification mode that infers vegetation (all four: a labelled survey infers its
+ * class 0/1 too, issue 9): the same sites in the same zones, their
  * clearances within {@link #CLEARANCE_TOL_M} and their positions within {@link #POSITION_TOL_M},
  * and the same span minima (or the same bound beyond the keep radius). The corridor carries the
  * labelling fixtures (a tower crane over the line, a fence, a shed: ManMadeFixtures). With
@@ -56,7 +57,8 @@ class FeetCorridorTest {
   private record Site(String key, double clearance, double x, double y, double z) {}
 
   @ParameterizedTest
-  @EnumSource(value = ClassificationMode.class, names = {"GROUND_ONLY", "UNCLASSIFIED"})
+  @EnumSource(value = ClassificationMode.class, names = {"GROUND_ONLY", "UNCLASSIFIED",
+      "PARTLY_LABELLED", "FULL"})
   void feetGiveTheFindingsOfMetres(ClassificationMode mode) throws IOException {
     DemoRuns.Run metres = DemoRuns.of(DemoRuns.small(11L, mode).withManMade(true), PROFILE);
     Path las = dir.resolve("survey-ftus.las");
