@@ -28,8 +28,9 @@ public final class CheckSettings {
   Integer threads;
 
   @Option(names = "--vegetation-classes", paramLabel = "LIST", split = ",",
-      description = "ASPRS classes that hold vegetation (default 3,4,5; a survey without them is "
-          + "treated as unclassified).")
+      description = "ASPRS classes that hold vegetation, read only as named (default: 3,4,5 "
+          + "where consistent, and points left in class 0/1 inferred from their geometry; a "
+          + "survey without classes 3-5 is treated as unclassified).")
   Set<Integer> vegetationClasses;
 
   @Option(names = "--keep-radius", paramLabel = "M",
