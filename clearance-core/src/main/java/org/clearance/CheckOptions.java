@@ -14,8 +14,9 @@ import org.clearance.wire.WireFinderOptions;
  * Options of a clearance check, one record per stage.
  *
  * @param threads worker threads for reading and measuring (&gt;= 1)
- * @param vegetationClasses ASPRS classes taken as vegetation, or null for the default (3, 4, 5,
- *     or inferred in a survey without vegetation classes)
+ * @param vegetationClasses ASPRS classes taken as vegetation, read only as named; or null for
+ *     the default (3, 4, 5 where consistent, with class 0/1 inferred; all inferred in a survey
+ *     without vegetation classes: VegetationSelector)
  * @param ground ground model options
  * @param wires wire finder options
  * @param conditions line condition options
