@@ -18,7 +18,10 @@ import org.clearance.wire.SetAside;
  *
  * <ol>
  *   <li>The points: unclassified, at least 1 m above ground, within the region of a span, not
- *       already set aside as wire or airborne ({@link LabelPoints}).</li>
+ *       already set aside as wire or airborne ({@link LabelPoints}); class-2 points more than
+ *       {@link #GROUND_LABEL_MAX_HEIGHT_M} above ground (a ground label not believed); in a
+ *       partly labelled survey the points labelled vegetation too, whose labels are trusted
+ *       only as far as their object looks like vegetation.</li>
  *   <li>Per point, the dimensionality features of the points within {@link #RADIUS_M}
  *       ({@link LocalShape}).</li>
  *   <li>Objects: single-linkage clusters of the points at {@link #LINK_M}.</li>
@@ -39,7 +42,9 @@ import org.clearance.wire.SetAside;
  *       crane); {@link ObjectKind#PLANAR} when at least {@link #PLANAR_MIN_SHARE} of its
  *       points are planar and its mean scattering is at most {@link #PLANAR_MAX_SCATTERING}.
  *       Where echoes are recorded, an object with {@link #ECHO_VEGETATION_SHARE} or more later
- *       returns stays vegetation whatever its shape. Everything else stays vegetation.</li>
+ *       returns stays vegetation whatever its shape. An object that is none of these but long
+ *       and thin ({@link #isLinear}) is {@link ObjectKind#LINEAR}: a wire nobody named, or a
+ *       vegetation label along a wire. Everything else stays vegetation.</li>
  *   <li>Fragments too small to judge attach to a man-made object nearby
  *       ({@link #attachFragments}).</li>
  * </ol>
