@@ -59,11 +59,7 @@ final class DemoRuns {
       CheckInputs inputs = new CheckInputs(List.of(files.survey()), UnitsChoice.fromFile(),
           files.structures(), List.of(files.lineSpec()), Optional.empty(),
           Optional.ofNullable(rules), runDir);
-      CheckOptions co = CheckOptions.defaults(2);
-      if (System.getProperty("scratch.vegclasses") != null) {
-        co = co.with(co.report(), java.util.Set.of(3, 4, 5));
-      }
-      new ClearanceCheck(co, new PrintWriter(text)).run(inputs, "test");
+      new ClearanceCheck(CheckOptions.defaults(2), new PrintWriter(text)).run(inputs, "test");
       RunModel model = RunModelJson.read(runDir.resolve(RunModel.FILE_NAME));
       return new Run(options, DemoScene.create(options), input, runDir, model, text.toString());
     } catch (IOException e) {
