@@ -46,6 +46,15 @@ public final class ClearanceEngine {
   public static final double POLE_EXCLUSION_M = 1.0;
 
   /**
+   * Radius of a pole's own column of returns for pole-clearing zones, m: in a survey without
+   * vegetation labels, points closer than this in plan to a structure centre are taken to be
+   * the pole (counted in {@code pole-points.bin}, never measured as vegetation in a cylinder). A
+   * wood pole is 0.25-0.45 m across (issue 15): half the widest plus 0.275 m for the error of
+   * the centre position (common practice, no source).
+   */
+  public static final double POLE_COLUMN_M = 0.5;
+
+  /**
    * Options.
    *
    * @param keepRadius points closer than this to a conductor in any condition are stored for
@@ -166,6 +175,31 @@ public final class ClearanceEngine {
   }
 
   /**
+   * The layout of the engine's pole-points file: every structure at a span end, once, in span
+   * order, with the keep radius and height and (in a survey without vegetation labels) the
+   * pole column radius {@link #POLE_COLUMN_M}.
+   *
+   * @param keepRadiusM plan distance from a structure centre within which points are stored, m
+   * @param keepHeightM height above ground up to which points are stored, m
+   */
+  public PolePointFile polePointLayout(double keepRadiusM, double keepHeightM) {
+    List<PolePointFile.Pole> poles = new ArrayList<>();
+    java.util.Set<String> seen = new java.util.HashSet<>();
+    for (PreparedSpan p : spans) {
+      String line = p.model.context().lineId();
+      for (org.clearance.line.Structure s : List.of(p.model.span().from(),
+          p.model.span().to())) {
+        PolePointFile.Pole pole = new PolePointFile.Pole(line, s.id(), s.x(), s.y(), 0);
+        if (seen.add(pole.key())) {
+          poles.add(pole);
+        }
+      }
+    }
+    return new PolePointFile(keepRadiusM, keepHeightM,
+        vegetation.inferred() ? POLE_COLUMN_M : Double.NaN, poles);
+  }
+
+  /**
    * Streams all points of the source and measures them.
    *
    * @param source the survey
@@ -185,18 +219,42 @@ public final class ClearanceEngine {
    * @param setAside the wire finder's points set aside ({@code WireResult.setAside()})
    */
   public Measurement measure(ChunkSource source, NearPointWriter out, SetAside setAside) {
+    return measure(source, out, setAside, null);
+  }
+
+  /**
+   * Streams all points of the source, measures them and, when {@code poles} is given, also
+   * stores the vegetation points around every structure for pole-clearing zones.
+   *
+   * @param poles where points near structures go (layout from {@link #polePointLayout}), or null
+   */
+  public Measurement measure(ChunkSource source, NearPointWriter out, SetAside setAside,
+      PolePointWriter poles) {
     Objects.requireNonNull(setAside, "setAside");
     List<EngineWorker> workers = Collections.synchronizedList(new ArrayList<>());
+    List<PoleCollector> collectors = Collections.synchronizedList(new ArrayList<>());
+    java.util.Map<Long, int[]> grid = poles == null ? null : PoleCollector.grid(poles.layout());
     source.readParallel(options.threads(), () -> {
       CanopyBuilder canopy = treeOptions == null ? null
           : new CanopyBuilder(treeOptions, (x, y) -> true);
       EngineWorker w = new EngineWorker(spans, index, conditions, heights, vegetation, options,
           out, canopy, setAside);
       workers.add(w);
-      return w;
+      if (poles == null) {
+        return w;
+      }
+      PoleCollector c = new PoleCollector(grid, heights, vegetation, setAside, poles);
+      collectors.add(c);
+      return chunk -> {
+        w.accept(chunk);
+        c.accept(chunk);
+      };
     });
     for (EngineWorker w : workers) {
       w.flush();
+    }
+    for (PoleCollector c : collectors) {
+      c.flush();
     }
     return new Measurement(merge(workers), trees(workers));
   }

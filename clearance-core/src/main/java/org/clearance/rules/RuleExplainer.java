@@ -62,6 +62,13 @@ public final class RuleExplainer {
         zone(out, z, span);
       }
     }
+    if (!rules.poleZones().isEmpty()) {
+      line(out, "Pole-clearing zones at this span's structures, most urgent first:");
+      for (Zone z : rules.poleZones()) {
+        line(out, "  [%d] %s: %s", z.priority(), z.name(),
+            ((Measurement.PoleCylinder) z.measurement()).describe());
+      }
+    }
     if (!rules.gaps().isEmpty()) {
       line(out, "Zones that apply but cannot be assessed:");
       for (ZoneGap g : rules.gaps()) {
