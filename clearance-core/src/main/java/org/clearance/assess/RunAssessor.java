@@ -16,6 +16,7 @@ import org.clearance.clearance.ConditionDistance;
 import org.clearance.clearance.NearPointFile;
 import org.clearance.clearance.NearPointReader;
 import org.clearance.clearance.PointClearance;
+import org.clearance.clearance.PolePointFile;
 import org.clearance.clearance.SpanStatus;
 import org.clearance.clearance.UncertaintyFile;
 import org.clearance.line.SpanFrame;
@@ -108,6 +109,14 @@ public final class RunAssessor {
       }
       trees.computeIfAbsent(t.spanId(), k -> new ArrayList<>()).add(t);
     }
+    Map<String, SpanRules> rulesBySpan = new HashMap<>();
+    states.forEach((id, st) -> rulesBySpan.put(id, st.rules));
+    PoleSites.Result poles = PoleSites.check(model, rulesBySpan,
+        nearPoints.resolveSibling(PolePointFile.FILE_NAME));
+    for (SpanState st : states.values()) {
+      st.poleSites = poles.sites().getOrDefault(st.span.id(), List.of());
+      st.poleNotes = poles.notChecked().getOrDefault(st.span.id(), List.of());
+    }
     SiteBuilder builder = new SiteBuilder(options.linkDistanceM());
     List<SpanResult> results = new ArrayList<>();
     for (SpanState st : states.values()) {
@@ -174,6 +183,8 @@ public final class RunAssessor {
     final SpanRules rules;
     final DistanceIntervals intervals;
     final List<EncroachingPoint> inside = new ArrayList<>();
+    List<CutSite> poleSites = List.of();
+    List<String> poleNotes = List.of();
     long checked;
     long notAssessed;
     String firstNotAssessed = "";
@@ -240,6 +251,10 @@ public final class RunAssessor {
               + "again with --keep-radius %.0f or more", z.zone().name(), reach,
               model.keepRadiusM(), Math.ceil(reach)));
         }
+      }
+      if (rules.assessed()) {
+        sites.addAll(poleSites);
+        partial.addAll(poleNotes);
       }
       if (notAssessed > 0) {
         partial.add(notAssessed + " vegetation point" + (notAssessed == 1 ? "" : "s")

@@ -150,7 +150,9 @@ final class HtmlSections {
     r.sites().stream().map(s -> s.zone()).distinct().forEach(z -> {
       CutSite s = r.sites().stream().filter(x -> x.zone().equals(z)).findFirst().orElseThrow();
       item(b, "dot", Palette.site(s), s.kind() == CutSite.Kind.FALL_IN
-          ? "fall-in tree (crown in plan, stem in profile)" : "inside zone " + z);
+          ? "fall-in tree (crown in plan, stem in profile)"
+          : s.kind() == CutSite.Kind.POLE_CLEARING ? "inside pole-clearing zone " + z
+              + " (clear around the pole)" : "inside zone " + z);
     });
     b.append("</ul>");
   }
