@@ -10,6 +10,7 @@ import org.clearance.OutFolder;
 import org.clearance.RunFolder;
 import org.clearance.clearance.NearPointFile;
 import org.clearance.clearance.PolePointFile;
+import org.clearance.clearance.PolePointReader;
 import org.clearance.clearance.NearPointReader;
 import org.clearance.clearance.UncertaintyFile;
 import org.clearance.report.ReportOptions;
@@ -114,6 +115,9 @@ public final class EvaluateCommand implements Callable<Integer> {
       }
       RunModel runModel = RunModelJson.read(dir.resolve(RunModel.FILE_NAME));
       NearPointReader.verify(dir.resolve(NearPointFile.FILE_NAME));
+      if (Files.isRegularFile(dir.resolve(PolePointFile.FILE_NAME))) {
+        PolePointReader.forEach(dir.resolve(PolePointFile.FILE_NAME), p -> { });
+      }
       if (inPlace) {
         evaluateInto(source.beginReplacing("RUN_DIR"), dir, runModel, profile, record, true);
         source.publish();
