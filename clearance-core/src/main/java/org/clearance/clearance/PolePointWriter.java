@@ -65,6 +65,30 @@ public final class PolePointWriter implements Closeable {
     }
   }
 
+  /**
+   * Appends points (their structures must be in the layout); for tools and tests that build a
+   * file without the engine.
+   */
+  public void write(List<PolePoint> points) throws IOException {
+    java.util.Map<String, Integer> index = new java.util.HashMap<>();
+    for (int i = 0; i < layout.structures().size(); i++) {
+      index.put(layout.structures().get(i).key(), i);
+    }
+    ByteBuffer b = ByteBuffer.allocate(points.size() * PolePointFile.RECORD_BYTES)
+        .order(ByteOrder.LITTLE_ENDIAN);
+    for (PolePoint p : points) {
+      Integer s = index.get(p.lineId() + "\u0000" + p.structureId());
+      if (s == null) {
+        throw new IllegalArgumentException("structure not in the file header: "
+            + p.structureId());
+      }
+      b.putInt(s).putDouble(p.x()).putDouble(p.y()).putDouble(p.z())
+          .putShort((short) p.classification()).putFloat((float) p.heightAboveGround())
+          .putFloat((float) p.planDistanceM());
+    }
+    write(b, new long[layout.structures().size()]);
+  }
+
   /** Number of records written so far. */
   public synchronized long count() {
     return count;
