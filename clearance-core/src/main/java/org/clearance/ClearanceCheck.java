@@ -323,7 +323,8 @@ public final class ClearanceCheck {
     for (LineLayout line : layout.lines()) {
       for (Span span : line.spans()) {
         SpanContext context = new SpanContext(span.id(), line.spec().lineId(),
-            line.spec().nominalVoltageKv(), line.spec().altitudeM(), span.lengthM());
+            line.spec().nominalVoltageKv(), line.spec().altitudeM(), span.lengthM(),
+            line.spec().positionVoltagesKv());
         out.add(new SpanModel(span, context, models.getOrDefault(span.id(), List.of()),
             WireFinder.isPoleLine(line.spec()) ? ClearanceEngine.POLE_EXCLUSION_M : Double.NaN));
       }

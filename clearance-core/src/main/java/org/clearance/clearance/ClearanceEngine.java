@@ -111,6 +111,10 @@ public final class ClearanceEngine {
   private final SpanIndex index;
   private final GroundModel ground;
   private final TreeOptions treeOptions;
+  /** Voltages (kV) measured apart on spans whose circuits carry more than one, highest first. */
+  private final List<Double> voltages;
+  /** Per span and conductor, the indices in {@link #voltages} it counts in. */
+  private final int[][][] voltageGroups;
 
   /**
    * An engine that measures distances only (no trees).
@@ -154,6 +158,38 @@ public final class ClearanceEngine {
     }
     this.spans = List.copyOf(prepared);
     this.index = new SpanIndex(spans);
+    java.util.TreeSet<Double> kv = new java.util.TreeSet<>();
+    for (SpanModel m : models) {
+      if (m.context().multiVoltage()) {
+        kv.addAll(m.context().voltagesKv());
+      }
+    }
+    this.voltages = List.copyOf(kv.descendingSet());
+    this.voltageGroups = new int[spans.size()][][];
+    for (PreparedSpan p : spans) {
+      voltageGroups[p.index] = groups(p, voltages);
+    }
+  }
+
+  /**
+   * Per conductor of a span, the indices in {@code voltages} of the voltage groups it counts in:
+   * an energised conductor of known position in its circuit's, one of no known position in every
+   * voltage of the span (the safe reading); none on a span of one voltage.
+   */
+  private static int[][] groups(PreparedSpan p, List<Double> voltages) {
+    SpanContext c = p.model.context();
+    int[][] out = new int[p.names.length][];
+    for (int j = 0; j < out.length; j++) {
+      if (!c.multiVoltage() || p.roles[j] != Role.PHASE) {
+        out[j] = new int[0];
+        continue;
+      }
+      double v = c.voltageOf(p.names[j]);
+      out[j] = Double.isNaN(v)
+          ? c.voltagesKv().stream().mapToInt(voltages::indexOf).toArray()
+          : new int[] {voltages.indexOf(v)};
+    }
+    return out;
   }
 
   /** The layout the engine's near-points file must have. */
@@ -171,7 +207,7 @@ public final class ClearanceEngine {
       }
     }
     return new NearPointFile(conditions.names(), conditions.groups(), ids, names,
-        List.copyOf(roles));
+        List.copyOf(roles), voltages);
   }
 
   /**
@@ -238,7 +274,7 @@ public final class ClearanceEngine {
       CanopyBuilder canopy = treeOptions == null ? null
           : new CanopyBuilder(treeOptions, (x, y) -> true);
       EngineWorker w = new EngineWorker(spans, index, conditions, heights, vegetation, options,
-          out, canopy, setAside);
+          out, canopy, setAside, voltages, voltageGroups);
       workers.add(w);
       if (poles == null) {
         return w;
