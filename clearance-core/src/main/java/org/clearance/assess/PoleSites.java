@@ -95,13 +95,14 @@ final class PoleSites {
    * @param file the run's {@code pole-points.bin} (may be missing: every zone that applies is
    *     then not checked)
    */
-  static Result check(RunModel model, Map<String, SpanRules> rules, Path file)
+  static Result check(RunModel model, Map<String, List<SpanRules>> rules, Path file)
       throws IOException {
     Map<String, Gather> byStructure = new LinkedHashMap<>();
     Map<String, List<String>> notes = new HashMap<>();
     for (SpanRecord s : model.spans()) {
-      SpanRules r = rules.get(s.id());
-      if (r == null || !r.assessed() || r.poleZones().isEmpty()) {
+      List<SpanRules> parts = rules.getOrDefault(s.id(), List.of()).stream()
+          .filter(SpanRules::assessed).toList();
+      if (parts.isEmpty()) {
         continue;
       }
       for (StructureRecord st : List.of(s.from(), s.to())) {
@@ -109,7 +110,14 @@ final class PoleSites {
         if (byStructure.containsKey(key)) {
           continue;
         }
-        List<Zone> zones = PoleClearing.applicable(r, equipment(st));
+        // a structure carrying several voltages is held to the pole zones of each (issue 15)
+        java.util.TreeMap<Integer, Zone> byPriority = new java.util.TreeMap<>();
+        for (SpanRules r : parts) {
+          for (Zone z : PoleClearing.applicable(r, equipment(st))) {
+            byPriority.put(z.priority(), z);
+          }
+        }
+        List<Zone> zones = List.copyOf(byPriority.values());
         byStructure.put(key, zones.isEmpty() ? null : new Gather(s, st, zones));
       }
     }

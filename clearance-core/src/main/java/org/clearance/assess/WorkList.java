@@ -142,7 +142,7 @@ public final class WorkList {
       ids.add(s.siteId());
       String reason = s.kind() == CutSite.Kind.FALL_IN ? "fall-in (" + s.condition() + ")"
           : s.kind() == CutSite.Kind.POLE_CLEARING ? "zone " + s.zone() + " (around the pole)"
-          : "zone " + s.zone() + " (" + s.condition() + ")";
+          : "zone " + s.zone() + " (" + s.condition() + voltage(line, s.conductor()) + ")";
       if (!reasons.contains(reason)) {
         reasons.add(reason);
       }
@@ -212,6 +212,19 @@ public final class WorkList {
         fall == null ? Double.NaN : fall.requiredM(), vegHeight, x, y, z, lon, lat,
         spanStation + chainage, chainage, nearest, SiteBuilder.sideOf(signed), offset, row,
         grow == null ? OptionalInt.empty() : OptionalInt.of(points), area, years, ids);
+  }
+
+  /**
+   * On a line whose circuits carry different voltages (issue 15), {@code "; 12.47 kV"}: the
+   * voltage of the conductor's circuit, whose zones the site was checked against; else empty.
+   */
+  private static String voltage(Optional<LineFacts> line, String conductor) {
+    if (line.isEmpty() || line.get().circuitVoltagesKv().isEmpty() || conductor.isEmpty()) {
+      return "";
+    }
+    int circuit = line.get().circuitOf(conductor);
+    return circuit == 0 ? "" : "; " + org.clearance.rules.VoltageBand.kv(
+        line.get().circuitVoltageKv(circuit));
   }
 
   private static double minKnown(double a, double b) {
