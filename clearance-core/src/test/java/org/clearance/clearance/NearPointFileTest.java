@@ -122,8 +122,8 @@ class NearPointFileTest {
     }
     List<PointClearance> back = new ArrayList<>();
     assertEquals(layout, NearPointReader.forEach(f, back::add));
-    PointClearance rb = back.get(0); // F sorts before U
-    PointClearance ra = back.get(1);
+    PointClearance ra = back.get(0); // records sort by the header's span index: U/1-2 first
+    PointClearance rb = back.get(1);
     assertTrue(rb.circuits().isEmpty(), rb.toString());
     assertEquals(2, ra.circuits().size());
     assertEquals(4.0, ra.atVoltage(230).distances().get(1).distance(), 1e-6);
