@@ -186,8 +186,9 @@ final class HtmlSections {
       b.append(Html.f("<tr><td class=\"num\">%d</td><td>%s%s</td><td>%s</td><td>%s</td>"
           + "<td>%s</td></tr>", z.priority(), Html.esc(z.name()),
           z.violationReference() ? " <small>(violation reference)</small>" : "",
-          Html.esc(z.conditions().describe()), Html.esc(z.voltage().describe()),
-          Html.esc(z.note())));
+          Html.esc(z.measurement() instanceof org.clearance.rules.Measurement.PoleCylinder c
+              ? "pole clearing: " + c.describe() : z.conditions().describe()),
+          Html.esc(z.voltage().describe()), Html.esc(z.note())));
     }
     b.append("</tbody></table>");
     b.append("<p>").append(Html.esc(growth(p))).append(' ')
