@@ -107,7 +107,8 @@ final class HtmlSections {
         + "<th>years to violation</th><th>verdict (interval)</th></tr></thead><tbody>");
     for (CutSite s : r.sites()) {
       b.append("<tr><td>").append(Html.esc(s.siteId())).append("</td><td>")
-          .append(HtmlReport.swatch(s)).append(Html.esc(s.zone())).append("</td><td>")
+          .append(HtmlReport.swatch(s)).append(Html.esc(s.zone())).append(zoneNote(r, s))
+          .append("</td><td>")
           .append(Html.esc(s.condition())).append("</td><td class=\"num\">")
           .append(Html.len(u, s.minClearanceM())).append("</td><td class=\"num\">")
           .append(Html.len(u, s.requiredM())).append("</td><td class=\"num\">")
@@ -122,6 +123,24 @@ final class HtmlSections {
           .append("</td><td class=\"verdict\">").append(verdict(s, u)).append("</td></tr>");
     }
     b.append("</tbody></table>");
+  }
+
+  /**
+   * What the zone cell adds (HTML): a pole-clearing site is around the pole; on a span whose
+   * circuits carry different voltages, the conductor and its voltage (issue 15).
+   */
+  static String zoneNote(SpanResult r, CutSite s) {
+    if (s.kind() == CutSite.Kind.POLE_CLEARING) {
+      return " <small>(around the pole)</small>";
+    }
+    var c = r.span().context();
+    if (!c.multiVoltage() || s.conductor().isEmpty()) {
+      return "";
+    }
+    double kv = c.voltageOf(s.conductor());
+    return " <small>(" + Html.esc(s.conductor())
+        + (Double.isNaN(kv) ? "" : ", " + Html.esc(org.clearance.rules.VoltageBand.kv(kv)))
+        + ")</small>";
   }
 
   /** A site's verdict with its interval and the input that dominates its uncertainty (HTML). */

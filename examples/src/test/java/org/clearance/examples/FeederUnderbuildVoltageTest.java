@@ -217,6 +217,9 @@ class FeederUnderbuildVoltageTest {
         && sites.contains("," + c + ",")), sites);
     String report = Files.readString(runDir.resolve("report.html"));
     assertTrue(report.contains(": 12.47 kV") && report.contains(": 230 kV"), "report header");
+    // the report's site tables name the conductor and its voltage
+    assertTrue(report.contains(", 12.47 kV)</small>") || report.contains(", 230 kV)</small>"),
+        "report site table");
     assertTrue(txSpans > 0, "the test needs vegetation within 4 m of circuit 1");
     System.out.println("spans with a 230 kV site: " + txSpans + ", underbuild sites: "
         + distSites);
