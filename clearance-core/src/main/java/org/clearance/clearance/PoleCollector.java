@@ -44,14 +44,17 @@ final class PoleCollector implements Consumer<PointChunk> {
     this.setAside = setAside;
     this.out = out;
     this.cells = cells;
-    this.cell = layout.keepRadiusM();
+    this.cell = 2 * layout.keepRadiusM();
     this.column = new long[layout.structures().size()];
   }
 
-  /** The plan grid of structure indices, cell size the keep radius. */
+  /**
+   * The plan grid of structure indices, cell size twice the keep radius: a point reaches only
+   * its own cell and the three neighbours towards the nearer cell edges, four lookups.
+   */
   static Map<Long, int[]> grid(PolePointFile layout) {
     Map<Long, int[]> cells = new HashMap<>();
-    double c = layout.keepRadiusM();
+    double c = 2 * layout.keepRadiusM();
     for (int i = 0; i < layout.structures().size(); i++) {
       PolePointFile.Pole p = layout.structures().get(i);
       long key = key((long) Math.floor(p.x() / c), (long) Math.floor(p.y() / c));
@@ -83,13 +86,18 @@ final class PoleCollector implements Consumer<PointChunk> {
   }
 
   private void point(double x, double y, double z, int cls) {
-    long cx = (long) Math.floor(x / cell);
-    long cy = (long) Math.floor(y / cell);
-    double r2 = cell * cell;
+    double gx = x / cell;
+    double gy = y / cell;
+    long cx = (long) Math.floor(gx);
+    long cy = (long) Math.floor(gy);
+    long sx = gx - cx < 0.5 ? -1 : 1;
+    long sy = gy - cy < 0.5 ? -1 : 1;
+    double r = layout.keepRadiusM();
+    double r2 = r * r;
     double hag = Double.NaN;
     boolean hagDone = false;
-    for (long dx = -1; dx <= 1; dx++) {
-      for (long dy = -1; dy <= 1; dy++) {
+    for (long dx = 0; dx != 2 * sx; dx += sx) {
+      for (long dy = 0; dy != 2 * sy; dy += sy) {
         int[] in = cells.get(key(cx + dx, cy + dy));
         if (in == null) {
           continue;
