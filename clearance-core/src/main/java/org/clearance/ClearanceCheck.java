@@ -2,6 +2,7 @@ package org.clearance;
 
 import java.io.IOException;
 import java.io.PrintWriter;
+import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.LinkedHashMap;
@@ -17,6 +18,9 @@ import org.clearance.clearance.ConductorModel;
 import org.clearance.clearance.Measurement;
 import org.clearance.clearance.NearPointFile;
 import org.clearance.clearance.NearPointWriter;
+import org.clearance.clearance.PolePointFile;
+import org.clearance.clearance.PolePointWriter;
+import org.clearance.rules.PoleClearing;
 import org.clearance.clearance.SpanContext;
 import org.clearance.clearance.SpanModel;
 import org.clearance.clearance.SurveyedConductor;
@@ -200,12 +204,18 @@ public final class ClearanceCheck {
     ClearanceEngine engine = new ClearanceEngine(spanModels, conditions, scan.ground, vegetation,
         options.engine(), options.trees());
     Measurement measured;
+    PolePointFile poleLayout = engine.polePointLayout(
+        PoleClearing.keepRadiusM(profile), PoleClearing.keepHeightM(profile));
     try (NearPointWriter out = new NearPointWriter(dir.resolve(NearPointFile.FILE_NAME),
-        engine.nearPointLayout())) {
+        engine.nearPointLayout());
+        PolePointWriter poles = new PolePointWriter(dir.resolve(PolePointFile.FILE_NAME),
+            poleLayout)) {
       measured = engine.measure((threads, consumers) -> survey.readParallel(threads,
-          progress.wrap("clearance", consumers)), out, wires.setAside());
-      say("clearance: %,d vegetation points stored within %.1f m; %d trees near the line",
-          out.count(), options.engine().keepRadius(), measured.trees().size());
+          progress.wrap("clearance", consumers)), out, wires.setAside(), poles);
+      say("clearance: %,d vegetation points stored within %.1f m; %d trees near the line; "
+          + "%,d points within %.1f m of %d structures", out.count(),
+          options.engine().keepRadius(), measured.trees().size(), poles.count(),
+          poleLayout.keepRadiusM(), poleLayout.structures().size());
     }
     UncertaintyFile.write(dir.resolve(UncertaintyFile.FILE_NAME), spanModels, conditions,
         options.uncertainty());
@@ -241,6 +251,9 @@ public final class ClearanceCheck {
     for (String name : List.of(ConductorTable.FILE_NAME, NearPointFile.FILE_NAME,
         UncertaintyFile.FILE_NAME, RunModel.FILE_NAME)) {
       record.output(name);
+    }
+    if (Files.isRegularFile(dir.resolve(PolePointFile.FILE_NAME))) {
+      record.output(PolePointFile.FILE_NAME);
     }
     outcome.written().forEach(record::output);
     record.output(RunRecord.FILE_NAME);
@@ -311,7 +324,8 @@ public final class ClearanceCheck {
     for (LineLayout line : layout.lines()) {
       for (Span span : line.spans()) {
         SpanContext context = new SpanContext(span.id(), line.spec().lineId(),
-            line.spec().nominalVoltageKv(), line.spec().altitudeM(), span.lengthM());
+            line.spec().nominalVoltageKv(), line.spec().altitudeM(), span.lengthM(),
+            line.spec().positionVoltagesKv());
         out.add(new SpanModel(span, context, models.getOrDefault(span.id(), List.of()),
             WireFinder.isPoleLine(line.spec()) ? ClearanceEngine.POLE_EXCLUSION_M : Double.NaN));
       }

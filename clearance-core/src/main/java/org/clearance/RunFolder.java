@@ -272,8 +272,9 @@ public final class RunFolder implements Closeable {
       String shownNames = String.join(", ", foreign.subList(0, Math.min(5, foreign.size())))
           + (foreign.size() > 5 ? " and " + (foreign.size() - 5) + " more" : "");
       throw new InputException(shown.toString(), null, option, "is a run folder that also "
-          + "holds files Clearance did not write (" + shownNames + "); they are never deleted, "
-          + "so the folder is not replaced: move them out or choose a new folder");
+          + "holds files Clearance did not write (" + shownNames + ": not among the outputs "
+          + "its run record " + recordFile + " lists); they are never deleted, so the folder "
+          + "is not replaced: move them out or choose a new folder");
     }
   }
 

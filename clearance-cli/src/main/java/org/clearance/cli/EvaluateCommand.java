@@ -9,6 +9,8 @@ import org.clearance.InputException;
 import org.clearance.OutFolder;
 import org.clearance.RunFolder;
 import org.clearance.clearance.NearPointFile;
+import org.clearance.clearance.PolePointFile;
+import org.clearance.clearance.PolePointReader;
 import org.clearance.clearance.NearPointReader;
 import org.clearance.clearance.UncertaintyFile;
 import org.clearance.report.ReportOptions;
@@ -45,7 +47,7 @@ public final class EvaluateCommand implements Callable<Integer> {
 
   /** Files a run folder holds from the check that the evaluation carries over. */
   static final List<String> MEASURED = List.of(RunModel.FILE_NAME, NearPointFile.FILE_NAME,
-      "conductors.csv", UncertaintyFile.FILE_NAME);
+      "conductors.csv", UncertaintyFile.FILE_NAME, PolePointFile.FILE_NAME);
 
   @Parameters(paramLabel = "RUN_DIR", description = "Run folder of a finished check.")
   Path runDir;
@@ -113,6 +115,9 @@ public final class EvaluateCommand implements Callable<Integer> {
       }
       RunModel runModel = RunModelJson.read(dir.resolve(RunModel.FILE_NAME));
       NearPointReader.verify(dir.resolve(NearPointFile.FILE_NAME));
+      if (Files.isRegularFile(dir.resolve(PolePointFile.FILE_NAME))) {
+        PolePointReader.forEach(dir.resolve(PolePointFile.FILE_NAME), p -> { });
+      }
       if (inPlace) {
         evaluateInto(source.beginReplacing("RUN_DIR"), dir, runModel, profile, record, true);
         source.publish();

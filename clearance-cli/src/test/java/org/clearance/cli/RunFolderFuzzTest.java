@@ -24,7 +24,7 @@ import org.junit.jupiter.api.io.TempDir;
 
 /**
  * Seeded fuzz of damaged run folders through {@code clearance evaluate} (issue 10, item 9):
- * model.json, near-points.bin and run.json truncated, with bits flipped, bytes overwritten, or
+ * model.json, near-points.bin, pole-points.bin (issue 15) and run.json truncated, with bits flipped, bytes overwritten, or
  * another format version. Every case must end with exit 2 and one line naming the damaged file,
  * leave the folder exactly as it was (nothing copied or half-written left behind) - or, for a
  * change run.json's provenance can absorb, exit 0 with the same work list as the undamaged
@@ -43,6 +43,8 @@ class RunFolderFuzzTest {
     FILES.put("model.json", false);
     FILES.put("near-points.bin", false);
     FILES.put("run.json", true);
+    // last, so that the seeded cases of the files above stay those they were
+    FILES.put("pole-points.bin", false);
   }
 
   @TempDir static Path tmp;
@@ -53,9 +55,11 @@ class RunFolderFuzzTest {
   static void baseFolder() throws IOException {
     base = Files.createDirectory(tmp.resolve("base"));
     RunFixture.metric().write(base);
+    RunFixture.metric().writePolePoints(base);
     Files.writeString(base.resolve("conductors.csv"), "span_id,conductor\nKV-10-11,B1\n");
     RunRecordJson.write(base, RunRecord.builder("check", "test").parameter("keep_radius_m",
-        "15").output("conductors.csv").output("near-points.bin").output("model.json")
+        "15").output("conductors.csv").output("near-points.bin").output("pole-points.bin")
+        .output("model.json")
         .output("run.json").build());
     Path good = copy(base, tmp.resolve("good"));
     CliRun r = CliRun.of("evaluate", good.toString(), "--rules", "ca-prc4293");

@@ -78,7 +78,14 @@ public record CutSite(
     /** Vegetation points inside a zone. */
     GROW_IN,
     /** A tree tall enough to strike the line when it falls. */
-    FALL_IN
+    FALL_IN,
+    /**
+     * Vegetation inside a pole-clearing zone around a structure with listed equipment (e.g.
+     * California PRC 4292): clear the ground around the pole. Its minimum clearance is the
+     * governing point's plan distance from the structure centre, its required distance the
+     * zone's plan reach, its cut-to height the band's lower edge and its area the cleared ring.
+     */
+    POLE_CLEARING
   }
 
   /** Side of the centre line, looking from the span's first structure to its second. */

@@ -16,9 +16,11 @@ import org.clearance.clearance.ConditionDistance;
 import org.clearance.clearance.NearPointFile;
 import org.clearance.clearance.NearPointReader;
 import org.clearance.clearance.PointClearance;
+import org.clearance.clearance.PolePointFile;
 import org.clearance.clearance.SpanStatus;
 import org.clearance.clearance.UncertaintyFile;
 import org.clearance.line.SpanFrame;
+import org.clearance.rules.CircuitRules;
 import org.clearance.rules.PointFinding;
 import org.clearance.rules.Requirement;
 import org.clearance.rules.ResolvedZone;
@@ -84,7 +86,8 @@ public final class RunAssessor {
     DistanceIntervals intervals = intervals(nearPoints);
     Map<String, SpanState> states = new LinkedHashMap<>();
     for (SpanRecord s : model.spans()) {
-      states.put(s.id(), new SpanState(s, evaluator.forSpan(s.context()), intervals));
+      states.put(s.id(), new SpanState(s, CircuitRules.forSpan(evaluator, s.context()),
+          intervals));
     }
     NearPointFile layout = NearPointReader.header(nearPoints);
     if (!layout.conditions().equals(model.conditions().names())) {
@@ -107,6 +110,15 @@ public final class RunAssessor {
             "span " + t.spanId() + " is not in the model");
       }
       trees.computeIfAbsent(t.spanId(), k -> new ArrayList<>()).add(t);
+    }
+    Map<String, List<SpanRules>> rulesBySpan = new HashMap<>();
+    states.forEach((id, st) -> rulesBySpan.put(id, st.circuits.assessed().stream()
+        .map(CircuitRules.Part::rules).toList()));
+    PoleSites.Result poles = PoleSites.check(model, rulesBySpan,
+        nearPoints.resolveSibling(PolePointFile.FILE_NAME));
+    for (SpanState st : states.values()) {
+      st.poleSites = poles.sites().getOrDefault(st.span.id(), List.of());
+      st.poleNotes = poles.notChecked().getOrDefault(st.span.id(), List.of());
     }
     SiteBuilder builder = new SiteBuilder(options.linkDistanceM());
     List<SpanResult> results = new ArrayList<>();
@@ -171,23 +183,57 @@ public final class RunAssessor {
   /** What is gathered for one span while the points stream past. */
   private final class SpanState {
     final SpanRecord span;
+    final CircuitRules circuits;
+    /** The rules that speak for the whole span (fall-in, reference condition): the highest
+     * voltage the profile assesses. */
     final SpanRules rules;
     final DistanceIntervals intervals;
     final List<EncroachingPoint> inside = new ArrayList<>();
+    List<CutSite> poleSites = List.of();
+    List<String> poleNotes = List.of();
     long checked;
     long notAssessed;
     String firstNotAssessed = "";
 
-    SpanState(SpanRecord span, SpanRules rules, DistanceIntervals intervals) {
+    SpanState(SpanRecord span, CircuitRules circuits, DistanceIntervals intervals) {
       this.span = span;
-      this.rules = rules;
+      this.circuits = circuits;
+      this.rules = circuits.main();
       this.intervals = intervals;
     }
 
-    /** The finding of a point: with its interval when the profile asks for a confidence level. */
+    /**
+     * The finding of a point: with its interval when the profile asks for a confidence level;
+     * on a span of several voltages the worst over the voltages the profile assesses, each
+     * checked against the nearest conductor of its voltage (issue 15).
+     */
     DistanceIntervals.Outcome evaluate(PointClearance p) {
-      return intervals == null ? new DistanceIntervals.Outcome(rules.evaluate(p),
-          Optional.empty()) : intervals.evaluate(rules, p);
+      DistanceIntervals.Outcome worst = null;
+      for (CircuitRules.Part part : parts()) {
+        PointClearance at = p.atVoltage(part.kv());
+        DistanceIntervals.Outcome o = intervals == null ? new DistanceIntervals.Outcome(
+            part.rules().evaluate(at), Optional.empty()) : intervals.evaluate(part.rules(), at);
+        if (worst == null || CircuitRules.worse(o.finding(), worst.finding())) {
+          worst = o;
+        }
+      }
+      return worst;
+    }
+
+    /** The parts points are checked with: the assessed ones, or the first when none is. */
+    private List<CircuitRules.Part> parts() {
+      List<CircuitRules.Part> a = circuits.assessed();
+      return a.isEmpty() ? circuits.parts().subList(0, 1) : a;
+    }
+
+    /** The lowest allowed top over the voltages (the cut that clears every one), m. */
+    private double allowedTop(PointClearance p, boolean withGrowth) {
+      double top = Double.NaN;
+      for (CircuitRules.Part part : parts()) {
+        double t = CutHeight.allowedTop(part.rules(), p.atVoltage(part.kv()), withGrowth);
+        top = Double.isNaN(top) || t < top ? t : top;
+      }
+      return top;
     }
 
     void add(PointClearance p) {
@@ -196,8 +242,8 @@ public final class RunAssessor {
       PointFinding f = o.finding();
       if (f.verdict() == PointFinding.Verdict.INSIDE_ZONE) {
         inside.add(new EncroachingPoint(p.x(), p.y(), p.z(), p.heightAboveGround(),
-            f.violation().orElseThrow(), f.yearsToViolation(), CutHeight.allowedTop(rules, p),
-            CutHeight.allowedTop(rules, p, false), o.interval()));
+            f.violation().orElseThrow(), f.yearsToViolation(), allowedTop(p, true),
+            allowedTop(p, false), o.interval()));
       } else if (f.verdict() == PointFinding.Verdict.NOT_ASSESSED && notAssessed++ == 0) {
         firstNotAssessed = f.notAssessedReason().orElse("");
       }
@@ -212,9 +258,10 @@ public final class RunAssessor {
       if (!span.reason().isEmpty() && status != SpanStatus.ASSESSED) {
         reasons.add(span.reason());
       }
-      if (rules.notAssessedReason().isPresent()) {
+      if (circuits.notAssessedReason().isPresent()) {
         status = SpanStatus.NOT_ASSESSED;
-        reasons.add("rule profile " + profile.name() + ": " + rules.notAssessedReason().get());
+        reasons.add("rule profile " + profile.name() + ": "
+            + circuits.notAssessedReason().get());
       } else {
         Optional<String> noCondition = referenceConditionMissing(model);
         if (noCondition.isPresent()) {
@@ -223,23 +270,33 @@ public final class RunAssessor {
         }
       }
       List<String> partial = new ArrayList<>();
-      for (ZoneGap g : rules.gaps()) {
-        partial.add("zone " + g.zone() + " not checked: " + g.reason());
+      for (String u : circuits.uncovered()) {
+        partial.add("rule profile " + profile.name() + ": " + u);
       }
-      for (ResolvedZone z : rules.zones()) {
-        if (!z.zone().violationReference() && !selectsAny(z, model)) {
-          partial.add("zone " + z.zone().name() + " not checked: the run computed no "
-              + "condition it applies in (" + z.zone().conditions().describe() + ")");
+      for (CircuitRules.Part part : circuits.assessed()) {
+        String at = circuits.multiVoltage() ? " at " + part.describe() : "";
+        for (ZoneGap g : part.rules().gaps()) {
+          partial.add("zone " + g.zone() + at + " not checked: " + g.reason());
+        }
+        for (ResolvedZone z : part.rules().zones()) {
+          if (!z.zone().violationReference() && !selectsAny(z, model)) {
+            partial.add("zone " + z.zone().name() + at + " not checked: the run computed no "
+                + "condition it applies in (" + z.zone().conditions().describe() + ")");
+          }
+        }
+        for (ResolvedZone z : part.rules().zones()) {
+          double reach = reach(z, span.context().lengthM());
+          if (reach > model.keepRadiusM()) {
+            partial.add(String.format(Locale.ROOT, "zone %s%s reaches %.2f m from the "
+                + "conductors, beyond the %.2f m within which the check stored vegetation; run "
+                + "the check again with --keep-radius %.0f or more", z.zone().name(), at, reach,
+                model.keepRadiusM(), Math.ceil(reach)));
+          }
         }
       }
-      for (ResolvedZone z : rules.zones()) {
-        double reach = reach(z, span.context().lengthM());
-        if (reach > model.keepRadiusM()) {
-          partial.add(String.format(Locale.ROOT, "zone %s reaches %.2f m from the conductors, "
-              + "beyond the %.2f m within which the check stored vegetation; run the check "
-              + "again with --keep-radius %.0f or more", z.zone().name(), reach,
-              model.keepRadiusM(), Math.ceil(reach)));
-        }
+      if (!circuits.assessed().isEmpty()) {
+        sites.addAll(poleSites);
+        partial.addAll(poleNotes);
       }
       if (notAssessed > 0) {
         partial.add(notAssessed + " vegetation point" + (notAssessed == 1 ? "" : "s")
@@ -291,12 +348,14 @@ public final class RunAssessor {
 
     /** Why the violation-reference zone cannot apply to the run, if it cannot. */
     private Optional<String> referenceConditionMissing(RunModel model) {
-      ResolvedZone ref = rules.reference().orElseThrow();
-      if (selectsAny(ref, model)) {
-        return Optional.empty();
+      for (CircuitRules.Part part : circuits.assessed()) {
+        ResolvedZone ref = part.rules().reference().orElseThrow();
+        if (!selectsAny(ref, model)) {
+          return Optional.of("the run computed no condition the violation-reference zone "
+              + ref.zone().name() + " applies in (" + ref.zone().conditions().describe() + ")");
+        }
       }
-      return Optional.of("the run computed no condition the violation-reference zone "
-          + ref.zone().name() + " applies in (" + ref.zone().conditions().describe() + ")");
+      return Optional.empty();
     }
   }
 

@@ -76,11 +76,16 @@ public record WorkItem(
      * Inside a zone that asks for no cut yet (e.g. a watch band): its top is already below the
      * height that keeps it clear of the violation-reference zone for a trim cycle.
      */
-    NO_CUT_NOW;
+    NO_CUT_NOW,
+    /**
+     * Vegetation inside a pole-clearing zone (e.g. California PRC 4292): clear the ground and
+     * the zone's height band around the pole out to the zone's radius.
+     */
+    CLEAR_AROUND_POLE;
 
     /**
      * Words for files: {@code remove tree}, {@code clear to height}, {@code side-trim},
-     * {@code no cut now (re-check)}.
+     * {@code no cut now (re-check)}, {@code clear around pole}.
      */
     public String words() {
       return switch (this) {
@@ -88,6 +93,7 @@ public record WorkItem(
         case CLEAR_TO_HEIGHT -> "clear to height";
         case SIDE_TRIM -> "side-trim";
         case NO_CUT_NOW -> "no cut now (re-check)";
+        case CLEAR_AROUND_POLE -> "clear around pole";
       };
     }
   }

@@ -102,6 +102,9 @@ public final class WorkList {
     double bestD = Double.POSITIVE_INFINITY;
     for (TreeRecord t : trees) {
       double d = Math.hypot(s.x() - t.x(), s.y() - t.y());
+      if (s.kind() == CutSite.Kind.POLE_CLEARING) {
+        return null; // clearing around a pole is work of its own, never a tree's
+      }
       boolean same = s.kind() == CutSite.Kind.FALL_IN ? d == 0 && s.z() == t.topZ()
           : d <= crown(t) + linkDistanceM;
       if (same && d < bestD) {
@@ -124,6 +127,9 @@ public final class WorkList {
         .orElse(null);
     CutSite fall = sites.stream().filter(s -> s.kind() == CutSite.Kind.FALL_IN).findFirst()
         .orElse(null);
+    if (grow == null && fall == null && first.kind() == CutSite.Kind.POLE_CLEARING) {
+      grow = first; // its distances fill the clearance columns
+    }
     List<String> reasons = new ArrayList<>();
     List<String> ids = new ArrayList<>();
     double cutNow = Double.NaN;
@@ -134,15 +140,16 @@ public final class WorkList {
     double besideDeficit = Double.NaN;
     for (CutSite s : sites) {
       ids.add(s.siteId());
-      String reason = (s.kind() == CutSite.Kind.FALL_IN ? "fall-in" : "zone " + s.zone())
-          + " (" + s.condition() + ")";
+      String reason = s.kind() == CutSite.Kind.FALL_IN ? "fall-in (" + s.condition() + ")"
+          : s.kind() == CutSite.Kind.POLE_CLEARING ? "zone " + s.zone() + " (around the pole)"
+          : "zone " + s.zone() + " (" + s.condition() + voltage(line, s.conductor()) + ")";
       if (!reasons.contains(reason)) {
         reasons.add(reason);
       }
       cutNow = minKnown(cutNow, s.cutToNowM());
       cutCycle = minKnown(cutCycle, s.cutToHeightM());
       vegHeight = maxKnown(vegHeight, s.vegHeightM());
-      if (s.kind() == CutSite.Kind.GROW_IN) {
+      if (s.kind() != CutSite.Kind.FALL_IN) {
         years = minKnown(years, s.yearsToViolation());
         points += s.points().orElse(0);
         if (Double.isNaN(s.cutToHeightM())) {
@@ -156,7 +163,9 @@ public final class WorkList {
           grow.yearsToViolation()));
     }
     WorkItem.Work work;
-    if (fall != null) {
+    if (first.kind() == CutSite.Kind.POLE_CLEARING) {
+      work = WorkItem.Work.CLEAR_AROUND_POLE;
+    } else if (fall != null) {
       work = WorkItem.Work.REMOVE_TREE;
     } else if (Double.isNaN(cutCycle) && !Double.isNaN(besideDeficit)) {
       work = WorkItem.Work.SIDE_TRIM;
@@ -203,6 +212,19 @@ public final class WorkList {
         fall == null ? Double.NaN : fall.requiredM(), vegHeight, x, y, z, lon, lat,
         spanStation + chainage, chainage, nearest, SiteBuilder.sideOf(signed), offset, row,
         grow == null ? OptionalInt.empty() : OptionalInt.of(points), area, years, ids);
+  }
+
+  /**
+   * On a line whose circuits carry different voltages (issue 15), {@code "; 12.47 kV"}: the
+   * voltage of the conductor's circuit, whose zones the site was checked against; else empty.
+   */
+  private static String voltage(Optional<LineFacts> line, String conductor) {
+    if (line.isEmpty() || line.get().circuitVoltagesKv().isEmpty() || conductor.isEmpty()) {
+      return "";
+    }
+    int circuit = line.get().circuitOf(conductor);
+    return circuit == 0 ? "" : "; " + org.clearance.rules.VoltageBand.kv(
+        line.get().circuitVoltageKv(circuit));
   }
 
   private static double minKnown(double a, double b) {

@@ -46,6 +46,15 @@ public final class ClearanceEngine {
   public static final double POLE_EXCLUSION_M = 1.0;
 
   /**
+   * Radius of a pole's own column of returns for pole-clearing zones, m: in a survey without
+   * vegetation labels, points closer than this in plan to a structure centre are taken to be
+   * the pole (counted in {@code pole-points.bin}, never measured as vegetation in a cylinder). A
+   * wood pole is 0.25-0.45 m across (issue 15): half the widest plus 0.275 m for the error of
+   * the centre position (common practice, no source).
+   */
+  public static final double POLE_COLUMN_M = 0.5;
+
+  /**
    * Options.
    *
    * @param keepRadius points closer than this to a conductor in any condition are stored for
@@ -102,6 +111,10 @@ public final class ClearanceEngine {
   private final SpanIndex index;
   private final GroundModel ground;
   private final TreeOptions treeOptions;
+  /** Voltages (kV) measured apart on spans whose circuits carry more than one, highest first. */
+  private final List<Double> voltages;
+  /** Per span and conductor, the indices in {@link #voltages} it counts in. */
+  private final int[][][] voltageGroups;
 
   /**
    * An engine that measures distances only (no trees).
@@ -145,6 +158,38 @@ public final class ClearanceEngine {
     }
     this.spans = List.copyOf(prepared);
     this.index = new SpanIndex(spans);
+    java.util.TreeSet<Double> kv = new java.util.TreeSet<>();
+    for (SpanModel m : models) {
+      if (m.context().multiVoltage()) {
+        kv.addAll(m.context().voltagesKv());
+      }
+    }
+    this.voltages = List.copyOf(kv.descendingSet());
+    this.voltageGroups = new int[spans.size()][][];
+    for (PreparedSpan p : spans) {
+      voltageGroups[p.index] = groups(p, voltages);
+    }
+  }
+
+  /**
+   * Per conductor of a span, the indices in {@code voltages} of the voltage groups it counts in:
+   * an energised conductor of known position in its circuit's, one of no known position in every
+   * voltage of the span (the safe reading); none on a span of one voltage.
+   */
+  private static int[][] groups(PreparedSpan p, List<Double> voltages) {
+    SpanContext c = p.model.context();
+    int[][] out = new int[p.names.length][];
+    for (int j = 0; j < out.length; j++) {
+      if (!c.multiVoltage() || p.roles[j] != Role.PHASE) {
+        out[j] = new int[0];
+        continue;
+      }
+      double v = c.voltageOf(p.names[j]);
+      out[j] = Double.isNaN(v)
+          ? c.voltagesKv().stream().mapToInt(voltages::indexOf).toArray()
+          : new int[] {voltages.indexOf(v)};
+    }
+    return out;
   }
 
   /** The layout the engine's near-points file must have. */
@@ -162,7 +207,32 @@ public final class ClearanceEngine {
       }
     }
     return new NearPointFile(conditions.names(), conditions.groups(), ids, names,
-        List.copyOf(roles));
+        List.copyOf(roles), voltages);
+  }
+
+  /**
+   * The layout of the engine's pole-points file: every structure at a span end, once, in span
+   * order, with the keep radius and height and (in a survey without vegetation labels) the
+   * pole column radius {@link #POLE_COLUMN_M}.
+   *
+   * @param keepRadiusM plan distance from a structure centre within which points are stored, m
+   * @param keepHeightM height above ground up to which points are stored, m
+   */
+  public PolePointFile polePointLayout(double keepRadiusM, double keepHeightM) {
+    List<PolePointFile.Pole> poles = new ArrayList<>();
+    java.util.Set<String> seen = new java.util.HashSet<>();
+    for (PreparedSpan p : spans) {
+      String line = p.model.context().lineId();
+      for (org.clearance.line.Structure s : List.of(p.model.span().from(),
+          p.model.span().to())) {
+        PolePointFile.Pole pole = new PolePointFile.Pole(line, s.id(), s.x(), s.y(), 0);
+        if (seen.add(pole.key())) {
+          poles.add(pole);
+        }
+      }
+    }
+    return new PolePointFile(keepRadiusM, keepHeightM,
+        vegetation.inferred() ? POLE_COLUMN_M : Double.NaN, poles);
   }
 
   /**
@@ -185,18 +255,42 @@ public final class ClearanceEngine {
    * @param setAside the wire finder's points set aside ({@code WireResult.setAside()})
    */
   public Measurement measure(ChunkSource source, NearPointWriter out, SetAside setAside) {
+    return measure(source, out, setAside, null);
+  }
+
+  /**
+   * Streams all points of the source, measures them and, when {@code poles} is given, also
+   * stores the vegetation points around every structure for pole-clearing zones.
+   *
+   * @param poles where points near structures go (layout from {@link #polePointLayout}), or null
+   */
+  public Measurement measure(ChunkSource source, NearPointWriter out, SetAside setAside,
+      PolePointWriter poles) {
     Objects.requireNonNull(setAside, "setAside");
     List<EngineWorker> workers = Collections.synchronizedList(new ArrayList<>());
+    List<PoleCollector> collectors = Collections.synchronizedList(new ArrayList<>());
+    java.util.Map<Long, int[]> grid = poles == null ? null : PoleCollector.grid(poles.layout());
     source.readParallel(options.threads(), () -> {
       CanopyBuilder canopy = treeOptions == null ? null
           : new CanopyBuilder(treeOptions, (x, y) -> true);
       EngineWorker w = new EngineWorker(spans, index, conditions, heights, vegetation, options,
-          out, canopy, setAside);
+          out, canopy, setAside, voltages, voltageGroups);
       workers.add(w);
-      return w;
+      if (poles == null) {
+        return w;
+      }
+      PoleCollector c = new PoleCollector(grid, heights, vegetation, setAside, poles);
+      collectors.add(c);
+      return chunk -> {
+        w.accept(chunk);
+        c.accept(chunk);
+      };
     });
     for (EngineWorker w : workers) {
       w.flush();
+    }
+    for (PoleCollector c : collectors) {
+      c.flush();
     }
     return new Measurement(merge(workers), trees(workers));
   }

@@ -74,11 +74,18 @@ final class EngineWorker implements Consumer<PointChunk> {
   private final int[][] bestConductor;
   private final double[][] bestAngle;
   private final double[][] bestStation;
+  /** Voltages measured apart (kV), and per span and conductor the voltage slots it counts in
+   * (slot {@code ROLES.length + index}). */
+  private final List<Double> voltages;
+  private final int[][][] voltageGroups;
 
   EngineWorker(List<PreparedSpan> spans, SpanIndex index, ConditionSet conditions,
       HeightModel heights, VegetationSelector vegetation, ClearanceEngine.Options options,
-      NearPointWriter out, CanopyBuilder canopy, SetAside setAside) {
+      NearPointWriter out, CanopyBuilder canopy, SetAside setAside, List<Double> voltages,
+      int[][][] voltageGroups) {
     this.setAside = setAside;
+    this.voltages = voltages;
+    this.voltageGroups = voltageGroups;
     this.spans = spans;
     this.index = index;
     this.conditions = conditions;
@@ -103,10 +110,11 @@ final class EngineWorker implements Consumer<PointChunk> {
     for (int i = 0; i < n; i++) {
       unreadClasses[i] = new java.util.BitSet(256);
     }
-    best = new double[nc][ROLES.length];
-    bestConductor = new int[nc][ROLES.length];
-    bestAngle = new double[nc][ROLES.length];
-    bestStation = new double[nc][ROLES.length];
+    int slots = ROLES.length + voltages.size();
+    best = new double[nc][slots];
+    bestConductor = new int[nc][slots];
+    bestAngle = new double[nc][slots];
+    bestStation = new double[nc][slots];
   }
 
   @Override
@@ -276,8 +284,13 @@ final class EngineWorker implements Consumer<PointChunk> {
         if (kernel == null || !mayKeep && g != PHASE) {
           continue;
         }
+        int[] own = mayKeep ? voltageGroups[sp][j] : NO_GROUPS;
+        double need = best[k][g];
+        for (int q : own) {
+          need = Math.max(need, best[k][ROLES.length + q]);
+        }
         double bound = p.lowerBound(k, j, x, y, z);
-        if (bound >= best[k][g] || bound >= cutoff) {
+        if (bound >= need || bound >= cutoff) {
           continue;
         }
         double phi = p.swingMin[k][j] < 0 || p.swingMax[k][j] > 0
@@ -289,6 +302,15 @@ final class EngineWorker implements Consumer<PointChunk> {
           bestConductor[k][g] = j;
           bestAngle[k][g] = phi;
           bestStation[k][g] = station;
+        }
+        for (int q : own) {
+          int slot = ROLES.length + q;
+          if (d < best[k][slot]) {
+            best[k][slot] = d;
+            bestConductor[k][slot] = j;
+            bestAngle[k][slot] = phi;
+            bestStation[k][slot] = station;
+          }
         }
       }
       for (int g = 0; g < ROLES.length; g++) {
@@ -337,8 +359,43 @@ final class EngineWorker implements Consumer<PointChunk> {
       kept[sp]++;
       buffer.add(new PointClearance(p.model.span().id(), x, y, z, cls, hag,
           details.get(Role.PHASE.ordinal()), details.get(Role.NEUTRAL.ordinal()),
-          details.get(Role.SHIELD.ordinal())));
+          details.get(Role.SHIELD.ordinal()), byVoltage(p, nc, x, y, z)));
     }
+  }
+
+  /** No voltage slots: a span of one voltage, or a point that is not kept. */
+  private static final int[] NO_GROUPS = new int[0];
+
+  /**
+   * The point's distances to the nearest energised conductor of each voltage of the span
+   * (issue 15), from the slots {@link #measure} filled; empty on a span of one voltage.
+   */
+  private List<PointClearance.VoltageDistances> byVoltage(PreparedSpan p, int nc, double x,
+      double y, double z) {
+    if (!p.model.context().multiVoltage()) {
+      return List.of();
+    }
+    List<PointClearance.VoltageDistances> out = new ArrayList<>();
+    for (double kv : p.model.context().voltagesKv()) {
+      int slot = ROLES.length + voltages.indexOf(kv);
+      List<ConditionDistance> list = new ArrayList<>(nc);
+      for (int k = 0; k < nc; k++) {
+        int j = bestConductor[k][slot];
+        String name = conditions.names().get(k);
+        String group = conditions.groups().get(k);
+        if (j < 0) {
+          list.add(new ConditionDistance(name, group, Double.NaN, Double.NaN, Double.NaN, "",
+              Double.NaN));
+          continue;
+        }
+        ConductorDistance cd = p.kernels[k][j].closestAt(x, y, z, bestAngle[k][slot],
+            bestStation[k][slot]);
+        list.add(new ConditionDistance(name, group, cd.distance(), cd.horizontal(),
+            cd.vertical(), p.names[j], p.frame.station(cd.closestX(), cd.closestY())));
+      }
+      out.add(new PointClearance.VoltageDistances(kv, list));
+    }
+    return out;
   }
 
   private boolean nearStructure(PreparedSpan p, double x, double y) {

@@ -17,12 +17,14 @@ import org.clearance.line.ConductorPosition.Role;
  * conditions, then per condition its name and report group; int32 number of spans, then each span
  * id; int32 number of conductor names, then each name; int32 number of conductor roles measured,
  * then each role ({@code phase} first, then {@code neutral} and/or {@code shield} when some span
- * has them; every string is an int16 byte length and UTF-8 bytes). Records follow to the end of
+ * has them; then, when some span's energised conductors carry more than one voltage (issue 15),
+ * one entry {@code phase@<kV>} per voltage, e.g. {@code phase@12.47}; every string is an int16
+ * byte length and UTF-8 bytes). Records follow to the end of
  * the file, each: int32 span index; float64 x, y, z (metres, survey CRS scaled to metres); int16
  * ASPRS class; float32 height above ground (m, NaN when unknown); then per role, in header
  * order, per condition, in header order: float32 distance, horizontal, vertical (m), int16
  * conductor index (-1: none of that role), float32 station (m): the nearest conductor of that
- * role. Float32 keeps distances to well under a
+ * role; then the same per voltage entry: the nearest energised conductor of that voltage. Float32 keeps distances to well under a
  * millimetre at the ranges stored (below a few hundred metres). Records are sorted by span index,
  * then x, y and z, then their remaining bytes, so the same survey gives the same file whatever
  * the order the reading threads met the points in. Trailer: the 8 ASCII bytes {@code CLRNEND2},
@@ -35,10 +37,15 @@ import org.clearance.line.ConductorPosition.Role;
  * @param spanIds span ids that records refer to by index
  * @param conductors conductor names that records refer to by index
  * @param roles conductor roles whose nearest distances each record holds, {@code PHASE} first
+ * @param voltages voltages (kV) whose nearest energised conductor each record holds too, for
+ *     spans whose circuits carry different voltages; empty when none does
  */
 public record NearPointFile(
     List<String> conditions, List<String> groups, List<String> spanIds, List<String> conductors,
-    List<Role> roles) {
+    List<Role> roles, List<Double> voltages) {
+
+  /** Prefix of a voltage entry in the header's role list. */
+  static final String VOLTAGE_PREFIX = "phase@";
 
   /** File name inside a run folder. */
   public static final String FILE_NAME = "near-points.bin";
@@ -61,6 +68,15 @@ public record NearPointFile(
     spanIds = List.copyOf(spanIds);
     conductors = List.copyOf(conductors);
     roles = List.copyOf(roles);
+    voltages = List.copyOf(voltages);
+    for (double v : voltages) {
+      if (!(Double.isFinite(v) && v > 0)) {
+        throw new IllegalArgumentException("voltage entries must be positive: " + voltages);
+      }
+    }
+    if (voltages.size() != Set.copyOf(voltages).size()) {
+      throw new IllegalArgumentException("a voltage is listed twice: " + voltages);
+    }
     if (roles.isEmpty() || roles.get(0) != Role.PHASE || roles.size() != Set.copyOf(roles).size()) {
       throw new IllegalArgumentException("roles must start with phase and name each role once: "
           + roles);
@@ -79,7 +95,13 @@ public record NearPointFile(
 
   /** Bytes of one record. */
   public int recordBytes() {
-    return FIXED_BYTES + CONDITION_BYTES * conditions.size() * roles.size();
+    return FIXED_BYTES + CONDITION_BYTES * conditions.size() * (roles.size() + voltages.size());
+  }
+
+  /** A layout without distances by voltage. */
+  public NearPointFile(List<String> conditions, List<String> groups, List<String> spanIds,
+      List<String> conductors, List<Role> roles) {
+    this(conditions, groups, spanIds, conductors, roles, List.of());
   }
 
   /** A layout measuring energised (phase) conductors only. */

@@ -90,7 +90,12 @@ public final class NearPointReader {
         int cls = buf.getShort();
         double hag = buf.getFloat();
         List<List<ConditionDistance>> byRole = new ArrayList<>();
-        for (Role role : layout.roles()) {
+        List<Role> entries = new ArrayList<>(layout.roles());
+        for (int v = 0; v < layout.voltages().size(); v++) {
+          entries.add(Role.PHASE);
+        }
+        for (int e = 0; e < entries.size(); e++) {
+          Role role = e < layout.roles().size() ? entries.get(e) : null;
           List<ConditionDistance> ds = new ArrayList<>(n);
           for (int c = 0; c < n; c++) {
             double d = buf.getFloat();
@@ -105,12 +110,20 @@ public final class NearPointReader {
             ds.add(new ConditionDistance(layout.conditions().get(c), layout.groups().get(c), d,
                 hz, v, conductor < 0 ? "" : layout.conductors().get(conductor), st));
           }
-          boolean none = role != Role.PHASE && ds.stream().allMatch(e -> e.conductor().isEmpty());
+          boolean none = role != Role.PHASE
+              && ds.stream().allMatch(d -> d.conductor().isEmpty());
           byRole.add(none ? List.of() : ds);
+        }
+        List<PointClearance.VoltageDistances> circuits = new ArrayList<>();
+        for (int v = 0; v < layout.voltages().size(); v++) {
+          List<ConditionDistance> ds = byRole.get(layout.roles().size() + v);
+          if (!ds.isEmpty()) {
+            circuits.add(new PointClearance.VoltageDistances(layout.voltages().get(v), ds));
+          }
         }
         sink.accept(new PointClearance(layout.spanIds().get(span), x, y, z, cls, hag,
             byRole.get(0), roleList(layout, byRole, Role.NEUTRAL),
-            roleList(layout, byRole, Role.SHIELD)));
+            roleList(layout, byRole, Role.SHIELD), circuits));
       }
       long expected = crc.getValue();
       byte[] trailer = new byte[NearPointFile.TRAILER_BYTES];
@@ -163,7 +176,21 @@ public final class NearPointReader {
       List<String> spans = readStrings(file, in, size, bytes);
       List<String> conductors = readStrings(file, in, size, bytes);
       List<Role> roles = new ArrayList<>();
+      List<Double> voltages = new ArrayList<>();
       for (String r : readStrings(file, in, size, bytes)) {
+        if (r.startsWith(NearPointFile.VOLTAGE_PREFIX)) {
+          try {
+            voltages.add(Double.parseDouble(r.substring(NearPointFile.VOLTAGE_PREFIX.length())));
+          } catch (NumberFormatException e) {
+            throw new InputException(file, "header", "role", "unknown conductor role '" + r
+                + "'" + RERUN);
+          }
+          continue;
+        }
+        if (!voltages.isEmpty()) {
+          throw new InputException(file, "header", "role", "conductor role '" + r
+              + "' after the voltage entries" + RERUN);
+        }
         roles.add(switch (r) {
           case "phase" -> Role.PHASE;
           case "neutral" -> Role.NEUTRAL;
@@ -173,8 +200,8 @@ public final class NearPointReader {
         });
       }
       try {
-        return new Header(new NearPointFile(conditions, groups, spans, conductors, roles),
-            bytes[0]);
+        return new Header(new NearPointFile(conditions, groups, spans, conductors, roles,
+            voltages), bytes[0]);
       } catch (IllegalArgumentException e) {
         throw new InputException(file, "header", null, e.getMessage() + RERUN);
       }

@@ -62,7 +62,12 @@ public final class NearPointWriter implements Closeable {
     }
     writeStrings(b, layout.spanIds());
     writeStrings(b, layout.conductors());
-    writeStrings(b, layout.roles().stream().map(r -> r.name().toLowerCase(Locale.ROOT)).toList());
+    List<String> roles = new java.util.ArrayList<>(layout.roles().stream()
+        .map(r -> r.name().toLowerCase(Locale.ROOT)).toList());
+    for (double v : layout.voltages()) {
+      roles.add(NearPointFile.VOLTAGE_PREFIX + v);
+    }
+    writeStrings(b, roles);
     return b.toByteArray();
   }
 
@@ -103,8 +108,21 @@ public final class NearPointWriter implements Closeable {
       }
       buf.putInt(span).putDouble(p.x()).putDouble(p.y()).putDouble(p.z())
           .putShort((short) p.classification()).putFloat((float) p.heightAboveGround());
+      List<List<ConditionDistance>> groups = new java.util.ArrayList<>();
       for (Role role : layout.roles()) {
-        List<ConditionDistance> ds = p.distances(role);
+        groups.add(p.distances(role));
+      }
+      for (double v : layout.voltages()) {
+        groups.add(p.circuits().stream().filter(c -> c.kv() == v).findFirst()
+            .map(PointClearance.VoltageDistances::distances).orElse(List.of()));
+      }
+      for (PointClearance.VoltageDistances c : p.circuits()) {
+        if (!layout.voltages().contains(c.kv())) {
+          throw new IllegalArgumentException("a voltage the file header does not list: "
+              + c.kv());
+        }
+      }
+      for (List<ConditionDistance> ds : groups) {
         if (!ds.isEmpty() && ds.size() != n) {
           throw new IllegalArgumentException("expected " + n + " conditions, got " + ds.size());
         }

@@ -30,6 +30,9 @@ import org.clearance.line.ConductorPosition.Role;
  *     or empty when the span has none
  * @param shield to the nearest shield wire, one entry per condition, or empty when the span
  *     has none
+ * @param circuits when the span's energised conductors carry more than one voltage (issue 15:
+ *     underbuild), per voltage the distances to the nearest energised conductor of that voltage
+ *     (a wire of no known position counts at every voltage); empty otherwise
  */
 public record PointClearance(
     String spanId,
@@ -40,18 +43,62 @@ public record PointClearance(
     double heightAboveGround,
     List<ConditionDistance> distances,
     List<ConditionDistance> neutral,
-    List<ConditionDistance> shield) {
+    List<ConditionDistance> shield,
+    List<VoltageDistances> circuits) {
+
+  /**
+   * The distances to the nearest energised conductor of one voltage.
+   *
+   * @param kv the voltage, kV
+   * @param distances one entry per condition, the surveyed state first
+   */
+  public record VoltageDistances(double kv, List<ConditionDistance> distances) {
+    public VoltageDistances {
+      distances = List.copyOf(distances);
+    }
+  }
 
   public PointClearance {
     Objects.requireNonNull(spanId, "spanId");
     distances = List.copyOf(distances);
     neutral = List.copyOf(neutral);
     shield = List.copyOf(shield);
+    circuits = List.copyOf(circuits);
+    for (VoltageDistances v : circuits) {
+      if (v.distances().size() != distances.size()) {
+        throw new IllegalArgumentException("one distance per condition at every voltage of span "
+            + spanId);
+      }
+    }
     if (!neutral.isEmpty() && neutral.size() != distances.size()
         || !shield.isEmpty() && shield.size() != distances.size()) {
       throw new IllegalArgumentException("one distance per condition for every role of span "
           + spanId);
     }
+  }
+
+  /** A point whose energised conductors carry one voltage. */
+  public PointClearance(String spanId, double x, double y, double z, int classification,
+      double heightAboveGround, List<ConditionDistance> distances,
+      List<ConditionDistance> neutral, List<ConditionDistance> shield) {
+    this(spanId, x, y, z, classification, heightAboveGround, distances, neutral, shield,
+        List.of());
+  }
+
+  /**
+   * The point as the conductors of one voltage see it: its energised distances are those to
+   * the nearest conductor of that voltage (neutral and shield distances stay). The point itself
+   * when it holds no distances by voltage (a span of one voltage, or no conductor of that
+   * voltage fitted: then the nearest energised conductor of any voltage, the safe reading).
+   */
+  public PointClearance atVoltage(double kv) {
+    for (VoltageDistances v : circuits) {
+      if (v.kv() == kv) {
+        return new PointClearance(spanId, x, y, z, classification, heightAboveGround,
+            v.distances(), neutral, shield);
+      }
+    }
+    return this;
   }
 
   /** A point with distances to energised conductors only. */
@@ -90,7 +137,8 @@ public record PointClearance(
   public PointClearance mapDistances(UnaryOperator<ConditionDistance> f) {
     return new PointClearance(spanId, x, y, z, classification, heightAboveGround,
         distances.stream().map(f).toList(), neutral.stream().map(f).toList(),
-        shield.stream().map(f).toList());
+        shield.stream().map(f).toList(), circuits.stream().map(v -> new VoltageDistances(v.kv(),
+            v.distances().stream().map(f).toList())).toList());
   }
 
   /** The smallest distance to an energised conductor over all conditions. */

@@ -1,6 +1,7 @@
 package org.clearance.line;
 
 import java.util.List;
+import java.util.Map;
 import java.util.Objects;
 import java.util.Optional;
 
@@ -22,6 +23,9 @@ import java.util.Optional;
  * @param surveyTemperature how the survey-time conductor temperature is known (given with a range,
  *     or computed by the IEEE Std 738-2012 heat balance); {@code surveyConductorTemperatureC} is
  *     the given value, NaN when computed
+ * @param circuitVoltagesKv nominal phase-to-phase voltage of the circuits that carry another
+ *     voltage than {@code nominalVoltageKv}, kV, by circuit number (issue 15: distribution built
+ *     under a transmission line); every other circuit carries {@code nominalVoltageKv}
  */
 public record LineSpec(
     String lineId,
@@ -33,7 +37,8 @@ public record LineSpec(
     List<ConductorPosition> conductors,
     List<LineCondition> conditions,
     String sourceFile,
-    SurveyTemperatureSpec surveyTemperature) {
+    SurveyTemperatureSpec surveyTemperature,
+    Map<Integer, Double> circuitVoltagesKv) {
 
   public LineSpec {
     Objects.requireNonNull(lineId, "lineId");
@@ -45,6 +50,42 @@ public record LineSpec(
     }
     conductors = List.copyOf(conductors);
     conditions = List.copyOf(conditions);
+    circuitVoltagesKv = java.util.Collections.unmodifiableMap(new java.util.TreeMap<>(
+        circuitVoltagesKv));
+    for (double v : circuitVoltagesKv.values()) {
+      if (!(Double.isFinite(v) && v > 0)) {
+        throw new IllegalArgumentException("circuit voltage must be positive: " + v);
+      }
+    }
+  }
+
+  /** A specification whose circuits all carry the nominal voltage. */
+  public LineSpec(String lineId, String name, double nominalVoltageKv, double altitudeM,
+      double surveyConductorTemperatureC, double rowHalfWidthM, List<ConductorPosition> conductors,
+      List<LineCondition> conditions, String sourceFile,
+      SurveyTemperatureSpec surveyTemperature) {
+    this(lineId, name, nominalVoltageKv, altitudeM, surveyConductorTemperatureC, rowHalfWidthM,
+        conductors, conditions, sourceFile, surveyTemperature, Map.of());
+  }
+
+  /** The nominal voltage of a circuit, kV: its own when given, else the line's. */
+  public double circuitVoltageKv(int circuit) {
+    return circuitVoltagesKv.getOrDefault(circuit, nominalVoltageKv);
+  }
+
+  /**
+   * The voltage of every energised (phase) position by name, kV, when some circuit carries its
+   * own voltage; empty when every circuit carries {@code nominalVoltageKv}.
+   */
+  public Map<String, Double> positionVoltagesKv() {
+    if (circuitVoltagesKv.isEmpty()) {
+      return Map.of();
+    }
+    Map<String, Double> out = new java.util.LinkedHashMap<>();
+    for (ConductorPosition p : phases()) {
+      out.put(p.position(), circuitVoltageKv(p.circuit()));
+    }
+    return out;
   }
 
   /** A specification whose survey temperature, when given, is assumed with the default range. */

@@ -6,6 +6,7 @@ import java.util.HashMap;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
+import java.util.Optional;
 import java.util.regex.Pattern;
 import org.clearance.InputException;
 import org.clearance.io.TextFiles;
@@ -71,7 +72,7 @@ public final class LineSpecReader {
 
   private static List<String> topKeys() {
     List<String> k = new ArrayList<>(List.of("line_id", "name", "nominal_voltage_kv",
-        "altitude_m", "row_half_width_m", "conductors", "conditions"));
+        "circuit_voltages_kv", "altitude_m", "row_half_width_m", "conductors", "conditions"));
     k.addAll(SurveyTemperatureReader.TOP_KEYS);
     return List.copyOf(k);
   }
@@ -133,7 +134,43 @@ public final class LineSpecReader {
       }
     }
     return new LineSpec(lineId, top.text("name", ""), kv, altitude, surveyT, rowHalf, positions,
-        conditions, name, survey);
+        conditions, name, survey, circuitVoltages(top, positions, kv));
+  }
+
+  /**
+   * {@code circuit_voltages_kv}: circuit number to nominal voltage, kV (issue 15). Every circuit
+   * named must be the circuit of a phase position; a voltage equal to the line's is allowed
+   * (it changes nothing).
+   */
+  private static Map<Integer, Double> circuitVoltages(YamlMap top,
+      List<ConductorPosition> positions, double lineKv) {
+    Optional<YamlMap.Entry> entry = top.optional("circuit_voltages_kv");
+    if (entry.isEmpty()) {
+      return Map.of();
+    }
+    Map<Integer, Double> out = new java.util.TreeMap<>();
+    YamlMap map = entry.get().map();
+    for (YamlMap.Entry e : map.entries()) {
+      int circuit;
+      try {
+        circuit = Integer.parseInt(e.key().strip());
+      } catch (NumberFormatException ex) {
+        throw e.error("a circuit number (whole number 1 to 12) is expected as the key, "
+            + "found '" + e.key() + "'");
+      }
+      if (!RANGES.get("circuit").contains(circuit)) {
+        throw e.error("circuit " + circuit + " is outside 1 to 12");
+      }
+      if (positions.stream().noneMatch(p -> p.isPhase() && p.circuit() == circuit)) {
+        throw e.error("circuit " + circuit + " has no phase position (give the positions of "
+            + "that circuit circuit: " + circuit + ")");
+      }
+      out.put(circuit, e.within(RANGES.get("nominal_voltage_kv")));
+    }
+    if (out.isEmpty()) {
+      throw entry.get().error("list at least one circuit and its voltage, e.g. {2: 12.47}");
+    }
+    return out;
   }
 
   private static List<ConductorPosition> positions(YamlMap top, String file,

@@ -52,7 +52,7 @@ public final class CsvOutputs {
         u.column("offset"), u.column("veg_height"), u.column("cut_to_height"), "n_points",
         u.areaColumn(), "years_to_violation", "conductor", u.column("cut_to_height_now"),
         "verdict", "confidence_percent", u.column("clearance_sigma"), u.column("clearance_low"),
-        u.column("clearance_high"), "uncertainty_dominant");
+        u.column("clearance_high"), "uncertainty_dominant", "kind");
   }
 
   /** The span-table header for an output unit. */
@@ -102,9 +102,14 @@ public final class CsvOutputs {
           u.lengthText(s.interval().map(FindingInterval::sigmaM).orElse(Double.NaN)),
           u.lengthText(s.interval().map(FindingInterval::lowM).orElse(Double.NaN)),
           u.lengthText(s.interval().map(FindingInterval::highM).orElse(Double.NaN)),
-          s.interval().map(FindingInterval::dominant).orElse("")));
+          s.interval().map(FindingInterval::dominant).orElse(""), kind(s)));
     }
     return b.toString();
+  }
+
+  /** A site's kind in files: {@code grow-in}, {@code fall-in} or {@code pole-clearing}. */
+  static String kind(CutSite s) {
+    return s.kind().name().toLowerCase(java.util.Locale.ROOT).replace('_', '-');
   }
 
   /** The span table's text, in ranking order. */

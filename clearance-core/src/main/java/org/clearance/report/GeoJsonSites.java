@@ -53,7 +53,8 @@ public final class GeoJsonSites {
       }
       ObjectNode p = f.putObject("properties").put("site_id", s.siteId())
           .put("span_id", s.spanId()).put("priority", s.priority())
-          .put("zone", s.zone()).put("condition", s.condition());
+          .put("zone", s.zone()).put("condition", s.condition())
+          .put("kind", CsvOutputs.kind(s));
       p.set(u.column("min_clearance"), length(u.length(s.minClearanceM())));
       p.set(u.column("required"), length(u.length(s.requiredM())));
       p.set(u.column("deficit"), length(u.length(s.deficitM())));

@@ -125,7 +125,7 @@ final class GpkgLayers {
       }
       byte[] geometry = located ? GpkgGeometry.point(srs, x, y) : null;
       features.add(new Feature(geometry, values(s.siteId(), s.spanId(),
-          s.kind().name().toLowerCase(java.util.Locale.ROOT).replace('_', '-'),
+          CsvOutputs.kind(s),
           (long) s.priority(), s.zone(), s.condition(), u.length(s.minClearanceM()),
           u.length(s.requiredM()), u.length(s.deficitM()), v.fromMetres(s.z()), s.lon(),
           s.lat(), u.length(s.chainageM()), s.side().word(), u.length(s.offsetM()),

@@ -105,7 +105,7 @@ final class HtmlHeader {
     List<String> parts = new ArrayList<>();
     for (var e : byCircuit.entrySet()) {
       parts.add("circuit " + e.getKey() + " (" + String.join(", ", e.getValue()) + "): "
-          + OutputUnit.plain(l.nominalVoltageKv()) + " kV");
+          + OutputUnit.plain(l.circuitVoltageKv(e.getKey())) + " kV");
     }
     return parts.isEmpty() ? OutputUnit.plain(l.nominalVoltageKv()) + " kV"
         : String.join("; ", parts);

@@ -198,8 +198,9 @@ public final class HtmlReport {
       b.append("<p class=\"note\">").append(Html.esc(note)).append("</p>");
     }
     HtmlSections.siteTable(b, r, u);
-    SpanRules rules = run.profile().map(p -> new ZoneEvaluator(p).forSpan(s.context()))
-        .orElse(null);
+    // on a span of several voltages, the zone band of the highest voltage the profile covers
+    SpanRules rules = run.profile().map(p -> org.clearance.rules.CircuitRules.forSpan(
+        new ZoneEvaluator(p), s.context()).main()).orElse(null);
     SvgSpanViews views = new SvgSpanViews(r, SvgSpanViews.governingIndex(r, run.model()),
         rules, run.drawings().get(r.id()), u);
     if (!views.drawable()) {

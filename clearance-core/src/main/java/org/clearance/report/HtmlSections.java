@@ -107,7 +107,8 @@ final class HtmlSections {
         + "<th>years to violation</th><th>verdict (interval)</th></tr></thead><tbody>");
     for (CutSite s : r.sites()) {
       b.append("<tr><td>").append(Html.esc(s.siteId())).append("</td><td>")
-          .append(HtmlReport.swatch(s)).append(Html.esc(s.zone())).append("</td><td>")
+          .append(HtmlReport.swatch(s)).append(Html.esc(s.zone())).append(zoneNote(r, s))
+          .append("</td><td>")
           .append(Html.esc(s.condition())).append("</td><td class=\"num\">")
           .append(Html.len(u, s.minClearanceM())).append("</td><td class=\"num\">")
           .append(Html.len(u, s.requiredM())).append("</td><td class=\"num\">")
@@ -122,6 +123,24 @@ final class HtmlSections {
           .append("</td><td class=\"verdict\">").append(verdict(s, u)).append("</td></tr>");
     }
     b.append("</tbody></table>");
+  }
+
+  /**
+   * What the zone cell adds (HTML): a pole-clearing site is around the pole; on a span whose
+   * circuits carry different voltages, the conductor and its voltage (issue 15).
+   */
+  static String zoneNote(SpanResult r, CutSite s) {
+    if (s.kind() == CutSite.Kind.POLE_CLEARING) {
+      return " <small>(around the pole)</small>";
+    }
+    var c = r.span().context();
+    if (!c.multiVoltage() || s.conductor().isEmpty()) {
+      return "";
+    }
+    double kv = c.voltageOf(s.conductor());
+    return " <small>(" + Html.esc(s.conductor())
+        + (Double.isNaN(kv) ? "" : ", " + Html.esc(org.clearance.rules.VoltageBand.kv(kv)))
+        + ")</small>";
   }
 
   /** A site's verdict with its interval and the input that dominates its uncertainty (HTML). */
@@ -150,7 +169,9 @@ final class HtmlSections {
     r.sites().stream().map(s -> s.zone()).distinct().forEach(z -> {
       CutSite s = r.sites().stream().filter(x -> x.zone().equals(z)).findFirst().orElseThrow();
       item(b, "dot", Palette.site(s), s.kind() == CutSite.Kind.FALL_IN
-          ? "fall-in tree (crown in plan, stem in profile)" : "inside zone " + z);
+          ? "fall-in tree (crown in plan, stem in profile)"
+          : s.kind() == CutSite.Kind.POLE_CLEARING ? "inside pole-clearing zone " + z
+              + " (clear around the pole)" : "inside zone " + z);
     });
     b.append("</ul>");
   }
@@ -184,8 +205,9 @@ final class HtmlSections {
       b.append(Html.f("<tr><td class=\"num\">%d</td><td>%s%s</td><td>%s</td><td>%s</td>"
           + "<td>%s</td></tr>", z.priority(), Html.esc(z.name()),
           z.violationReference() ? " <small>(violation reference)</small>" : "",
-          Html.esc(z.conditions().describe()), Html.esc(z.voltage().describe()),
-          Html.esc(z.note())));
+          Html.esc(z.measurement() instanceof org.clearance.rules.Measurement.PoleCylinder c
+              ? "pole clearing: " + c.describe() : z.conditions().describe()),
+          Html.esc(z.voltage().describe()), Html.esc(z.note())));
     }
     b.append("</tbody></table>");
     b.append("<p>").append(Html.esc(growth(p))).append(' ')

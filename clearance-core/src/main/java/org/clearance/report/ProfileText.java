@@ -44,6 +44,10 @@ public final class ProfileText {
       if (!z.note().isEmpty()) {
         line(b, "      %s", oneLine(z.note()));
       }
+      if (z.measurement() instanceof Measurement.PoleCylinder c) {
+        line(b, "      voltages: %s; pole clearing: %s", z.voltage().describe(), c.describe());
+        continue;
+      }
       line(b, "      voltages: %s; applies in: %s", z.voltage().describe(),
           z.conditions().describe());
       line(b, "      measured from: %s", RuleExplainer.roles(z));

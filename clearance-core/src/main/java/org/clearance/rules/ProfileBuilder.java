@@ -18,7 +18,30 @@ final class ProfileBuilder {
 
   private static final Set<String> ZONE_KEYS = Set.of("name", "note", "priority",
       "violation_reference", "voltage", "conditions", "condition_names", "radial_m",
-      "horizontal_m", "vertical_m", "midspan_allowance", "conductor_roles");
+      "horizontal_m", "vertical_m", "midspan_allowance", "conductor_roles", "pole_clearing");
+  /** Keys of a pole-clearing cylinder. */
+  private static final Set<String> CYLINDER_KEYS = Set.of("radius_m", "pole_radius_m",
+      "from_height_m", "to_height_m", "equipment");
+  /** Keys a pole-clearing zone may not have: it measures from structures, not conductors. */
+  private static final List<String> CONDUCTOR_ONLY_KEYS = List.of("radial_m", "horizontal_m",
+      "vertical_m", "midspan_allowance", "conductor_roles", "conditions", "condition_names");
+  /**
+   * Plausible clearing radius around a structure, m: rules ask for a few metres (PRC 4292:
+   * 10 ft, docs/references.md R7); 30 m leaves room (common practice, no source).
+   */
+  static final ValueRange CLEARING_RADIUS = new ValueRange(0, 30, "m",
+      "pole clearing, common practice, no source");
+  /**
+   * Plausible radius of a structure to its outer surface, m: a wood pole 0.1-0.25 m, a lattice
+   * tower's legs up to about 10 m from its centre (common practice, no source).
+   */
+  static final ValueRange STRUCTURE_RADIUS = new ValueRange(0, 10, "m",
+      "structure size, common practice, no source");
+  /** Plausible height band above ground, m: up to the top of a tall structure. */
+  static final ValueRange BAND_HEIGHT = new ValueRange(0, 150, "m",
+      "structure heights, common practice, no source");
+  /** The selector a pole-clearing zone carries: it is checked on the surveyed state only. */
+  static final ConditionSelector SURVEYED = new ConditionSelector(Set.of("survey"), Set.of());
   private static final Set<String> RATE_KEYS = Set.of("vertical", "lateral");
   private static final Set<String> FALL_IN_KEYS =
       Set.of("enabled", "conditions", "condition_names", "reach_allowance_m");
@@ -180,6 +203,22 @@ final class ProfileBuilder {
         map.optional("violation_reference").map(YamlMap.Entry::bool).orElse(false);
     VoltageBand band =
         map.optional("voltage").map(DistanceParser::zoneBand).orElse(VoltageBand.ALL);
+    String note = map.optional("note").map(YamlMap.Entry::text).orElse("");
+    Optional<YamlMap.Entry> cylinder = map.optional("pole_clearing");
+    if (cylinder.isPresent()) {
+      for (String k : CONDUCTOR_ONLY_KEYS) {
+        if (map.optional(k).isPresent() && !map.required(k).isNull()) {
+          throw map.required(k).error("a pole_clearing zone is measured around structures, "
+              + "not from conductors in line conditions: remove " + k);
+        }
+      }
+      if (reference) {
+        throw map.required("violation_reference").error("a pole_clearing zone cannot be the "
+            + "violation reference (the governing minimum measured from the conductors)");
+      }
+      return new Zone(name, priority, false, band, SURVEYED, cylinder(cylinder.get()),
+          MidspanAllowance.NONE, note, Zone.ENERGISED);
+    }
     ConditionSelector conditions = selector(map, "zone '" + name + "'");
     Measurement measurement;
     Optional<YamlMap.Entry> radial = map.optional("radial_m");
@@ -204,7 +243,6 @@ final class ProfileBuilder {
     }
     MidspanAllowance allowance = map.optional("midspan_allowance")
         .map(DistanceParser::allowance).orElse(MidspanAllowance.NONE);
-    String note = map.optional("note").map(YamlMap.Entry::text).orElse("");
     Set<Role> roles = map.optional("conductor_roles").map(ProfileBuilder::roles)
         .orElse(Zone.ENERGISED);
     if (reference && !roles.contains(Role.PHASE)) {
@@ -213,6 +251,43 @@ final class ProfileBuilder {
     }
     return new Zone(name, priority, reference, band, conditions, measurement, allowance, note,
         roles);
+  }
+
+  /** A pole-clearing cylinder (docs/rules.md, "Pole-clearing zones"). */
+  private static Measurement.PoleCylinder cylinder(YamlMap.Entry entry) {
+    YamlMap m = entry.map();
+    m.checkKeys(CYLINDER_KEYS);
+    YamlMap.Entry radius = m.required("radius_m");
+    double r = radius.within(CLEARING_RADIUS);
+    if (!(r > 0)) {
+      throw radius.error("a clearing radius must be greater than 0 m");
+    }
+    double pole = m.optional("pole_radius_m").map(e -> e.within(STRUCTURE_RADIUS)).orElse(0.0);
+    double from = m.optional("from_height_m").map(e -> e.within(BAND_HEIGHT)).orElse(0.0);
+    YamlMap.Entry toEntry = m.required("to_height_m");
+    double to = toEntry.within(BAND_HEIGHT);
+    if (!(to > from)) {
+      throw toEntry.error("to_height_m (" + to + " m) must be above from_height_m (" + from
+          + " m)");
+    }
+    YamlMap.Entry eq = m.required("equipment");
+    Set<org.clearance.line.PoleEquipment> kinds =
+        java.util.EnumSet.noneOf(org.clearance.line.PoleEquipment.class);
+    for (String w : eq.texts()) {
+      org.clearance.line.PoleEquipment k = org.clearance.line.PoleEquipment.ofFileName(w);
+      if (k == null) {
+        throw eq.error("unknown equipment kind '" + w + "'; kinds: transformer, switch, fuse, "
+            + "arrester, dead_end, corner (the structures file's equipment column)");
+      }
+      if (!kinds.add(k)) {
+        throw eq.error("equipment kind '" + w + "' is listed twice");
+      }
+    }
+    if (kinds.isEmpty()) {
+      throw eq.error("list at least one equipment kind that makes a structure subject to "
+          + "the zone");
+    }
+    return new Measurement.PoleCylinder(r, pole, from, to, kinds);
   }
 
   /** The roles of {@code conductor_roles}: a list of phase, neutral and shield, each once. */
@@ -396,7 +471,8 @@ final class ProfileBuilder {
       DistanceSpec next = component(target, component);
       if (next == null) {
         throw entry.error("zone '" + target.name() + "' has no " + component + " to build on ("
-            + (target.radial() ? "it measures radial_m" : "it measures components") + ")");
+            + (target.radial() ? "it measures radial_m" : target.poleClearing()
+                ? "it is a pole_clearing zone" : "it measures components") + ")");
       }
       follow(next, component, entry, path);
     }
@@ -404,6 +480,9 @@ final class ProfileBuilder {
     private static DistanceSpec component(Zone zone, String component) {
       if (zone.measurement() instanceof Measurement.Radial r) {
         return component.equals("radial_m") ? r.radial() : null;
+      }
+      if (zone.measurement() instanceof Measurement.PoleCylinder) {
+        return null;
       }
       Measurement.Components c = (Measurement.Components) zone.measurement();
       switch (component) {

@@ -27,6 +27,19 @@ public final class RuleExplainer {
    * @return several lines of text, each ending in a newline
    */
   public static String explain(RuleProfile profile, SpanContext span) {
+    if (span.multiVoltage()) {
+      // issue 15: each circuit is held to the zones of its own voltage
+      StringBuilder out = new StringBuilder();
+      line(out, "Span %s carries %d voltages; each conductor is checked against the zones of "
+          + "its circuit's voltage.", span.spanId(), span.voltagesKv().size());
+      for (CircuitRules.Part part : CircuitRules.forSpan(new ZoneEvaluator(profile), span)
+          .parts()) {
+        out.append('\n');
+        line(out, "== Conductors at %s ==", part.describe());
+        out.append(explain(profile, span.atVoltage(part.kv())));
+      }
+      return out.toString();
+    }
     SpanRules rules = new ZoneEvaluator(profile).forSpan(span);
     StringBuilder out = new StringBuilder();
     line(out, "Span %s of line %s: %s, altitude %s, plan length %.1f m", span.spanId(),
@@ -60,6 +73,13 @@ public final class RuleExplainer {
       line(out, "Zones in force, most urgent first:");
       for (ResolvedZone z : rules.zones()) {
         zone(out, z, span);
+      }
+    }
+    if (!rules.poleZones().isEmpty()) {
+      line(out, "Pole-clearing zones at this span's structures, most urgent first:");
+      for (Zone z : rules.poleZones()) {
+        line(out, "  [%d] %s: %s", z.priority(), z.name(),
+            ((Measurement.PoleCylinder) z.measurement()).describe());
       }
     }
     if (!rules.gaps().isEmpty()) {

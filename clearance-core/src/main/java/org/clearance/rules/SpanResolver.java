@@ -46,7 +46,12 @@ final class SpanResolver {
     List<Zone> outOfBand = new ArrayList<>();
     String referenceFailure = null;
     boolean referenceFound = false;
+    List<Zone> poleZones = new ArrayList<>();
     for (Zone zone : profile.zones()) {
+      if (zone.poleClearing()) {
+        (zone.voltage().contains(span.nominalVoltageKv()) ? poleZones : outOfBand).add(zone);
+        continue;
+      }
       Outcome o = outcome(zone);
       if (!o.applies()) {
         outOfBand.add(zone);
@@ -77,7 +82,7 @@ final class SpanResolver {
           + ")";
     }
     return new SpanRules(profile, span, Optional.ofNullable(referenceFailure), resolved, gaps,
-        outOfBand, fallIn, Optional.ofNullable(fallInFailure));
+        outOfBand, fallIn, Optional.ofNullable(fallInFailure), poleZones);
   }
 
   private Outcome outcome(Zone zone) {

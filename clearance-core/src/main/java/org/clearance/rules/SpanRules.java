@@ -30,10 +30,13 @@ public final class SpanRules {
   private final ResolvedZone reference;
   private final Optional<ResolvedDistance> fallInAllowance;
   private final Optional<String> fallInFailure;
+  private final List<Zone> poleZones;
 
   SpanRules(RuleProfile profile, SpanContext span, Optional<String> notAssessedReason,
       List<ResolvedZone> zones, List<ZoneGap> gaps, List<Zone> outOfBand,
-      Optional<ResolvedDistance> fallInAllowance, Optional<String> fallInFailure) {
+      Optional<ResolvedDistance> fallInAllowance, Optional<String> fallInFailure,
+      List<Zone> poleZones) {
+    this.poleZones = List.copyOf(poleZones);
     this.profile = Objects.requireNonNull(profile, "profile");
     this.span = Objects.requireNonNull(span, "span");
     this.notAssessedReason = notAssessedReason;
@@ -48,7 +51,7 @@ public final class SpanRules {
 
   static SpanRules notAssessed(RuleProfile profile, SpanContext span, String reason) {
     return new SpanRules(profile, span, Optional.of(reason), List.of(), List.of(), List.of(),
-        Optional.empty(), Optional.of(reason));
+        Optional.empty(), Optional.of(reason), List.of());
   }
 
   public RuleProfile profile() {
@@ -72,6 +75,15 @@ public final class SpanRules {
   /** Resolved zones, most urgent first. */
   public List<ResolvedZone> zones() {
     return zones;
+  }
+
+  /**
+   * Pole-clearing zones whose voltage band holds the span's voltage, most urgent first (empty
+   * when the span is NOT ASSESSED); {@link PoleClearing} checks the points around its
+   * structures against them.
+   */
+  public List<Zone> poleZones() {
+    return poleZones;
   }
 
   /** Zones that apply to the span's voltage but could not be resolved. */

@@ -50,7 +50,8 @@ public record VoltageBand(double minKv, double maxKv, boolean maxIncluded) {
         + (maxIncluded ? " inclusive" : "");
   }
 
-  static String kv(double kv) {
+  /** A voltage in words, e.g. {@code 12.47 kV}. */
+  public static String kv(double kv) {
     return String.format(Locale.ROOT, "%s kV", trim(kv));
   }
 

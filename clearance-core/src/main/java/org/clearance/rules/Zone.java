@@ -56,6 +56,11 @@ public record Zone(
     return !roles.equals(ENERGISED);
   }
 
+  /** Whether the zone is a pole-clearing cylinder around structures. */
+  public boolean poleClearing() {
+    return measurement instanceof Measurement.PoleCylinder;
+  }
+
   /** Whether the zone measures the radial distance. */
   public boolean radial() {
     return measurement instanceof Measurement.Radial;

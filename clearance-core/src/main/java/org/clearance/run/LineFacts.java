@@ -16,10 +16,26 @@ import org.clearance.line.LineSpec;
  * @param rowHalfWidthM right-of-way half width, m, or NaN when not given
  * @param positions the conductor positions in file order
  * @param conditions the line conditions with their parameters
+ * @param circuitVoltagesKv the circuits that carry another voltage than the line's, kV, by
+ *     circuit number (issue 15); empty when every circuit carries {@code nominalVoltageKv}
  */
 public record LineFacts(
     String lineId, String name, double nominalVoltageKv, double surveyConductorTemperatureC,
-    double rowHalfWidthM, List<Position> positions, List<LineCondition> conditions) {
+    double rowHalfWidthM, List<Position> positions, List<LineCondition> conditions,
+    java.util.Map<Integer, Double> circuitVoltagesKv) {
+
+  /** The facts of a line whose circuits all carry its nominal voltage. */
+  public LineFacts(String lineId, String name, double nominalVoltageKv,
+      double surveyConductorTemperatureC, double rowHalfWidthM, List<Position> positions,
+      List<LineCondition> conditions) {
+    this(lineId, name, nominalVoltageKv, surveyConductorTemperatureC, rowHalfWidthM, positions,
+        conditions, java.util.Map.of());
+  }
+
+  /** The nominal voltage of a circuit, kV: its own when given, else the line's. */
+  public double circuitVoltageKv(int circuit) {
+    return circuitVoltagesKv.getOrDefault(circuit, nominalVoltageKv);
+  }
 
   /**
    * One conductor position.
@@ -44,13 +60,16 @@ public record LineFacts(
     Objects.requireNonNull(name, "name");
     positions = List.copyOf(positions);
     conditions = List.copyOf(conditions);
+    circuitVoltagesKv = java.util.Collections.unmodifiableMap(new java.util.TreeMap<>(
+        circuitVoltagesKv));
   }
 
   /** The facts of a read specification. */
   public static LineFacts of(LineSpec spec) {
     return new LineFacts(spec.lineId(), spec.name(), spec.nominalVoltageKv(),
         spec.surveyConductorTemperatureC(), spec.rowHalfWidthM(),
-        spec.conductors().stream().map(LineFacts::position).toList(), spec.conditions());
+        spec.conductors().stream().map(LineFacts::position).toList(), spec.conditions(),
+        spec.circuitVoltagesKv());
   }
 
   private static Position position(ConductorPosition p) {

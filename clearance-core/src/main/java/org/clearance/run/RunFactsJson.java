@@ -26,6 +26,11 @@ final class RunFactsJson {
     for (LineFacts l : f.lines()) {
       ObjectNode n = lines.addObject().put("line_id", l.lineId()).put("name", l.name());
       n.set("nominal_voltage_kv", JsonFiles.number(l.nominalVoltageKv()));
+      if (!l.circuitVoltagesKv().isEmpty()) {
+        ObjectNode cv = n.putObject("circuit_voltages_kv");
+        l.circuitVoltagesKv().forEach((c, v) -> cv.set(Integer.toString(c),
+            JsonFiles.number(v)));
+      }
       n.set("survey_conductor_temperature_c",
           JsonFiles.number(l.surveyConductorTemperatureC()));
       n.set("row_half_width_m", JsonFiles.number(l.rowHalfWidthM()));
@@ -83,9 +88,19 @@ final class RunFactsJson {
             c.num("creep_allowance_c"), c.num("ice_thickness_m"), c.num("ice_density_kg_m3"),
             c.num("wind_pressure_pa"), c.num("swing_angle_rad"), c.num("extra_sag_m")));
       }
+      java.util.Map<Integer, Double> circuitKv = new java.util.TreeMap<>();
+      if (l.has("circuit_voltages_kv")) {
+        for (var e : l.numberMap("circuit_voltages_kv").entrySet()) {
+          try {
+            circuitKv.put(Integer.parseInt(e.getKey()), e.getValue());
+          } catch (NumberFormatException ex) {
+            throw l.error("circuit_voltages_kv", "not a circuit number: " + e.getKey());
+          }
+        }
+      }
       lines.add(new LineFacts(l.str("line_id"), l.str("name"), l.num("nominal_voltage_kv"),
           l.num("survey_conductor_temperature_c"), l.num("row_half_width_m"), positions,
-          conditions));
+          conditions, circuitKv));
     }
     List<RunRecord.InputFile> inputs = new ArrayList<>();
     for (JsonAt i : o.objects("inputs")) {

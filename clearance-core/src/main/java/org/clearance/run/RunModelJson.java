@@ -14,6 +14,7 @@ import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.HexFormat;
 import java.util.List;
+import java.util.Map;
 import java.util.Optional;
 import java.util.OptionalInt;
 import org.clearance.InputException;
@@ -105,6 +106,10 @@ public final class RunModelJson {
     o.set("nominal_voltage_kv", JsonFiles.number(c.nominalVoltageKv()));
     o.set("altitude_m", JsonFiles.number(c.altitudeM()));
     o.set("length_m", JsonFiles.number(c.lengthM()));
+    if (!c.positionVoltagesKv().isEmpty()) {
+      ObjectNode pv = o.putObject("position_voltages_kv");
+      c.positionVoltagesKv().forEach((k, v) -> pv.set(k, JsonFiles.number(v)));
+    }
     o.set("from", structure(s.from()));
     o.set("to", structure(s.to()));
     o.put("status", s.status().name()).put("reason", s.reason());
@@ -249,7 +254,8 @@ public final class RunModelJson {
 
   private static SpanRecord span(JsonAt s, int conditions) {
     SpanContext context = new SpanContext(s.str("id"), s.str("line_id"),
-        s.num("nominal_voltage_kv"), s.num("altitude_m"), s.num("length_m"));
+        s.num("nominal_voltage_kv"), s.num("altitude_m"), s.num("length_m"),
+        s.has("position_voltages_kv") ? s.numberMap("position_voltages_kv") : Map.of());
     List<ConductorRecord> conductors = new ArrayList<>();
     for (JsonAt k : s.objects("conductors")) {
       List<Optional<CurveRecord>> states = new ArrayList<>();

@@ -98,6 +98,41 @@ class NearPointFileTest {
         layout.recordBytes());
   }
 
+  /**
+   * Issue 15: on a span whose circuits carry 230 and 12.47 kV, a point keeps its distance to
+   * the nearest conductor of each voltage; a span of one voltage reads back without them.
+   */
+  @Test
+  void distancesPerVoltageRoundTrip() throws IOException {
+    NearPointFile layout = new NearPointFile(List.of("survey", "hot"), List.of("survey", "hot"),
+        List.of("U/1-2", "F/1-2"), List.of("B", "D"), List.of(Role.PHASE), List.of(230.0, 12.47));
+    List<ConditionDistance> to12 = List.of(
+        new ConditionDistance("survey", "survey", 1.5, 1.0, -1.1180340, "D", 40),
+        new ConditionDistance("hot", "hot", 1.25, 1.0, -0.75, "D", 41));
+    List<ConditionDistance> to230 = List.of(
+        new ConditionDistance("survey", "survey", 4.5, 2.0, 4.0311289, "B", 42),
+        new ConditionDistance("hot", "hot", 4.0, 2.0, 3.4641016, "B", 43));
+    PointClearance a = new PointClearance("U/1-2", 1, 2, 3, 5, 1.5, to12, List.of(), List.of(),
+        List.of(new PointClearance.VoltageDistances(230, to230),
+            new PointClearance.VoltageDistances(12.47, to12)));
+    PointClearance b = new PointClearance("F/1-2", 4, 5, 6, 3, 0.5, to12);
+    Path f = dir.resolve("voltages.bin");
+    try (NearPointWriter w = new NearPointWriter(f, layout)) {
+      w.write(List.of(a, b));
+    }
+    List<PointClearance> back = new ArrayList<>();
+    assertEquals(layout, NearPointReader.forEach(f, back::add));
+    PointClearance ra = back.get(0); // records sort by the header's span index: U/1-2 first
+    PointClearance rb = back.get(1);
+    assertTrue(rb.circuits().isEmpty(), rb.toString());
+    assertEquals(2, ra.circuits().size());
+    assertEquals(4.0, ra.atVoltage(230).distances().get(1).distance(), 1e-6);
+    assertEquals("B", ra.atVoltage(230).distances().get(0).conductor());
+    assertEquals(1.5, ra.atVoltage(12.47).distances().get(0).distance(), 1e-6);
+    assertEquals(NearPointFile.FIXED_BYTES + 3 * 2 * NearPointFile.CONDITION_BYTES,
+        layout.recordBytes());
+  }
+
   @Test
   void samePointsInAnyOrderGiveTheSameBytesSortedBySpanAndPosition() throws IOException {
     List<PointClearance> pts = points(2000, 7);

@@ -69,13 +69,14 @@ class ReportStageTest {
 
   @Test
   void siteColumnsAreExactlyTheAgreedOnes() throws IOException {
-    // issue 5: the agreed column list, in this order; issue 11: units in coordinate names
+    // issue 5: the agreed column list, in this order; issue 11: units in coordinate names;
+    // issue 15: the site's kind (grow-in, fall-in, pole-clearing) last
     assertEquals(List.of("site_id", "span_id", "priority", "zone", "condition",
         "min_clearance_m", "required_m", "deficit_m", "x_m", "y_m", "z_m", "lon_deg", "lat_deg",
         "chainage_m", "side", "offset_m", "veg_height_m", "cut_to_height_m", "n_points",
         "area_m2", "years_to_violation", "conductor", "cut_to_height_now_m", "verdict",
         "confidence_percent", "clearance_sigma_m", "clearance_low_m", "clearance_high_m",
-        "uncertainty_dominant"),
+        "uncertainty_dominant", "kind"),
         CsvText.header(Files.readString(dir.resolve("sites.csv"))));
   }
 
@@ -279,7 +280,7 @@ class ReportStageTest {
         "lat_deg", "chainage_ft", "side", "offset_ft", "veg_height_ft", "cut_to_height_ft",
         "n_points", "area_ft2", "years_to_violation", "conductor", "cut_to_height_now_ft",
         "verdict", "confidence_percent", "clearance_sigma_ft", "clearance_low_ft",
-        "clearance_high_ft", "uncertainty_dominant"),
+        "clearance_high_ft", "uncertainty_dominant", "kind"),
         header);
     Map<String, String> m = sites().get(0);
     Map<String, String> f = CsvText.rows(text).get(0);

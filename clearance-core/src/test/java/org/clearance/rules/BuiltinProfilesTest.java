@@ -35,7 +35,7 @@ class BuiltinProfilesTest {
 
   @Test
   void namesListEveryBuiltinAndEachLoads() {
-    assertEquals(List.of("us-fac003-mvcd", "ca-prc4293", "ca-go95-appendix-e",
+    assertEquals(List.of("us-fac003-mvcd", "ca-prc4293", "ca-prc4292", "ca-go95-appendix-e",
         "ca-go95-appendix-e-fire", "example-utility", "example-utility-95"),
         RuleProfiles.names());
     for (String name : RuleProfiles.names()) {

@@ -138,6 +138,30 @@ public final class RunFixture {
     return dir;
   }
 
+  /**
+   * Writes a small pole-points.bin beside: the four structures, three grass points around the
+   * first one, keep radius 5 m and height 4 m (labelled survey).
+   */
+  public Path writePolePoints(Path dir) throws IOException {
+    List<org.clearance.clearance.PolePointFile.Pole> poles = new ArrayList<>();
+    for (int k = 0; k <= 3; k++) {
+      poles.add(new org.clearance.clearance.PolePointFile.Pole("KV", "KV-" + (10 + k),
+          x0 + 200 * k, y0, 0));
+    }
+    try (org.clearance.clearance.PolePointWriter w = new org.clearance.clearance.PolePointWriter(
+        dir.resolve(org.clearance.clearance.PolePointFile.FILE_NAME),
+        new org.clearance.clearance.PolePointFile(5, 4, Double.NaN, poles))) {
+      w.write(List.of(
+          new org.clearance.clearance.PolePoint("KV", "KV-10", x0 + 1, y0, GROUND + 0.2, 3, 0.2,
+              1),
+          new org.clearance.clearance.PolePoint("KV", "KV-10", x0, y0 + 2, GROUND + 1.5, 4, 1.5,
+              2),
+          new org.clearance.clearance.PolePoint("KV", "KV-10", x0 - 4, y0, GROUND + 0.3, 3, 0.3,
+              4)));
+    }
+    return dir;
+  }
+
   SpanFrame frame(int k) {
     return SpanFrame.between(x0 + 200 * k, y0, x0 + 200 * (k + 1), y0);
   }

@@ -1,0 +1,147 @@
+package org.clearance.clearance;
+
+import java.io.IOException;
+import java.io.UncheckedIOException;
+import java.nio.ByteBuffer;
+import java.nio.ByteOrder;
+import java.util.HashMap;
+import java.util.Map;
+import java.util.function.Consumer;
+import org.clearance.ground.HeightModel;
+import org.clearance.survey.PointChunk;
+import org.clearance.wire.SetAside;
+
+/**
+ * One worker's share of {@code pole-points.bin}: every vegetation point within the keep radius
+ * in plan of a structure centre and at most the keep height above ground, with its plan
+ * distance from the centre, for pole-clearing zones (docs/rules.md). In a survey without
+ * vegetation labels, a point counts as vegetation as the clearance engine counts it (at least
+ * {@link VegetationSelector#UNCLASSIFIED_MIN_HEIGHT} above ground, not set aside as wire, object
+ * or airborne); points within the pole column radius of the centre are the pole itself and are
+ * only counted.
+ */
+final class PoleCollector implements Consumer<PointChunk> {
+
+  /** Records buffered before they go to the writer. */
+  private static final int FLUSH_RECORDS = 4096;
+
+  private final PolePointFile layout;
+  private final HeightModel heights;
+  private final VegetationSelector vegetation;
+  private final SetAside setAside;
+  private final PolePointWriter out;
+  private final Map<Long, int[]> cells;
+  private final double cell;
+  private final long[] column;
+  private final ByteBuffer buffer = ByteBuffer.allocate(FLUSH_RECORDS * PolePointFile.RECORD_BYTES)
+      .order(ByteOrder.LITTLE_ENDIAN);
+
+  PoleCollector(Map<Long, int[]> cells, HeightModel heights, VegetationSelector vegetation,
+      SetAside setAside, PolePointWriter out) {
+    this.layout = out.layout();
+    this.heights = heights;
+    this.vegetation = vegetation;
+    this.setAside = setAside;
+    this.out = out;
+    this.cells = cells;
+    this.cell = 2 * layout.keepRadiusM();
+    this.column = new long[layout.structures().size()];
+  }
+
+  /**
+   * The plan grid of structure indices, cell size twice the keep radius: a point reaches only
+   * its own cell and the three neighbours towards the nearer cell edges, four lookups.
+   */
+  static Map<Long, int[]> grid(PolePointFile layout) {
+    Map<Long, int[]> cells = new HashMap<>();
+    double c = 2 * layout.keepRadiusM();
+    for (int i = 0; i < layout.structures().size(); i++) {
+      PolePointFile.Pole p = layout.structures().get(i);
+      long key = key((long) Math.floor(p.x() / c), (long) Math.floor(p.y() / c));
+      int[] old = cells.getOrDefault(key, new int[0]);
+      int[] grown = java.util.Arrays.copyOf(old, old.length + 1);
+      grown[old.length] = i;
+      cells.put(key, grown);
+    }
+    return cells;
+  }
+
+  private static long key(long cx, long cy) {
+    return cx * 0x9E3779B97F4A7C15L ^ cy;
+  }
+
+  @Override
+  public void accept(PointChunk chunk) {
+    double[] xs = chunk.x();
+    double[] ys = chunk.y();
+    double[] zs = chunk.z();
+    short[] cls = chunk.classification();
+    byte[] flags = chunk.flags();
+    for (int i = 0; i < chunk.size(); i++) {
+      if ((flags[i] & PointChunk.FLAG_WITHHELD) != 0 || !vegetation.candidateClass(cls[i])) {
+        continue;
+      }
+      point(xs[i], ys[i], zs[i], cls[i]);
+    }
+  }
+
+  private void point(double x, double y, double z, int cls) {
+    double gx = x / cell;
+    double gy = y / cell;
+    long cx = (long) Math.floor(gx);
+    long cy = (long) Math.floor(gy);
+    long sx = gx - cx < 0.5 ? -1 : 1;
+    long sy = gy - cy < 0.5 ? -1 : 1;
+    double r = layout.keepRadiusM();
+    double r2 = r * r;
+    double hag = Double.NaN;
+    boolean hagDone = false;
+    for (long dx = 0; dx != 2 * sx; dx += sx) {
+      for (long dy = 0; dy != 2 * sy; dy += sy) {
+        int[] in = cells.get(key(cx + dx, cy + dy));
+        if (in == null) {
+          continue;
+        }
+        for (int s : in) {
+          PolePointFile.Pole p = layout.structures().get(s);
+          double ex = x - p.x();
+          double ey = y - p.y();
+          double d2 = ex * ex + ey * ey;
+          if (!(d2 <= r2)) {
+            continue;
+          }
+          if (!hagDone) {
+            hag = heights.heightAboveGround(x, y, z);
+            hagDone = true;
+            if (hag > layout.keepHeightM() || vegetation.inferred()
+                && !(hag >= VegetationSelector.UNCLASSIFIED_MIN_HEIGHT
+                && setAside.reason(SetAside.key(x, y, z)) == SetAside.Reason.NONE)) {
+              return;
+            }
+          }
+          double plan = Math.sqrt(d2);
+          if (vegetation.inferred() && plan < layout.columnRadiusM()) {
+            column[s]++;
+            continue;
+          }
+          buffer.putInt(s).putDouble(x).putDouble(y).putDouble(z).putShort((short) cls)
+              .putFloat((float) hag).putFloat((float) plan);
+          if (!buffer.hasRemaining()) {
+            flush();
+          }
+        }
+      }
+    }
+  }
+
+  /** Hands the buffered records and column counts to the writer. */
+  void flush() {
+    try {
+      out.write(buffer, column);
+    } catch (IOException e) {
+      throw new UncheckedIOException(e);
+    }
+    buffer.clear();
+    java.util.Arrays.fill(column, 0);
+  }
+}
