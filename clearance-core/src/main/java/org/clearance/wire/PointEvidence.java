@@ -23,7 +23,10 @@ import org.clearance.io.DisjointSets;
  * crown lies below the candidate height, or whose crown spreads past the corridor's edge, has
  * that crown in its column and is measured. A group of at least {@value #MIN_LINE_POINTS}
  * points, at least {@value #LINE_SHARE} of them linear, running {@value #MIN_LINE_RUN_M} m or more along the span,
- * is a wire nobody fitted. A wire point with a point of another group (vegetation) within
+ * is a wire nobody fitted; so is a group that is a thin hanging line in any direction ({@link
+ * WirePiece}: a crossing service line, a piece of a conductor the finder could not fit), and a
+ * group of at least {@value #STRANDS_LINEAR_SHARE} linear points made only of such lines (two
+ * unfitted conductors within the link distance of each other). A wire point with a point of another group (vegetation) within
  * {@value #TOUCH_M} m is not set aside: where a branch touches a wire the two cannot be told
  * apart, and the point is measured.
  */
