@@ -22,11 +22,13 @@ import org.clearance.io.DisjointSets;
  * than {@value #UNDER_DEPTH_M} m below the group's lowest point. The top of a crown whose lower
  * crown lies below the candidate height, or whose crown spreads past the corridor's edge, has
  * that crown in its column and is measured. A group of at least {@value #MIN_LINE_POINTS}
- * points, at least {@value #LINE_SHARE} of them linear, running {@value #MIN_LINE_RUN_M} m or more along the span,
- * is a wire nobody fitted; so is a group that is a thin hanging line in any direction ({@link
- * WirePiece}: a crossing service line, a piece of a conductor the finder could not fit), and a
- * group of at least {@value #STRANDS_LINEAR_SHARE} linear points made only of such lines (two
- * unfitted conductors within the link distance of each other). A wire point with a point of another group (vegetation) within
+ * points, at least {@value #LINE_SHARE} of them linear, running {@value #MIN_LINE_RUN_M} m or
+ * more along the span, is a wire nobody fitted; so is a group that is a thin hanging line in any
+ * direction ({@link WirePiece}: a crossing service line, a piece of a conductor the finder could
+ * not fit), and a group, at least {@value #STRANDS_LINEAR_SHARE} of it linear, made only of such
+ * lines (two unfitted conductors within the link distance of each other). On a pole line the
+ * points within {@value #POLE_RADIUS_M} m of a pole join no group. A wire point with a point of
+ * another group (vegetation) within
  * {@value #TOUCH_M} m is not set aside: where a branch touches a wire the two cannot be told
  * apart, and the point is measured.
  */
@@ -68,6 +70,10 @@ final class PointEvidence {
    * WirePiece#strands}): most points of a wire show linear evidence; crowns measured on the demo
    * feeders hold 10-35 % (common practice, no source). */
   static final double STRANDS_LINEAR_SHARE = 0.5;
+  /** Plan radius around a pole kept out of the groups, m: the clearance engine's pole
+   * exclusion (ClearanceEngine.POLE_EXCLUSION_M, a later package), within which no point is
+   * measured. */
+  static final double POLE_RADIUS_M = 1.0;
   /** A wire point with vegetation this near is measured, not set aside, m. */
   static final double TOUCH_M = 0.3;
 
@@ -129,10 +135,28 @@ final class PointEvidence {
    */
   static void setAside(SpanPoints p, boolean[] on, boolean[] linear, SetAside wires,
       double floorM, SetAside out) {
+    setAside(p, on, linear, wires, floorM, Double.NaN, Double.NaN, out);
+  }
+
+  /**
+   * As {@link #setAside(SpanPoints, boolean[], boolean[], SetAside, double, SetAside)}, on a pole
+   * line: the candidates within {@code poleRadiusM} in plan of the span's structures (station 0
+   * and {@code lengthM}, offset 0) join no group. The clearance engine never measures them (its
+   * pole exclusion, docs/clearance.md), and through them the pieces of the wires tied to the
+   * pole would join the pole into one group that is no wire.
+   *
+   * @param lengthM the span's length, m (the second structure's station)
+   * @param poleRadiusM plan radius kept out of the groups around each structure, m, or NaN for
+   *     none (lattice towers: their exclusion is wider and their members are no wire)
+   */
+  static void setAside(SpanPoints p, boolean[] on, boolean[] linear, SetAside wires,
+      double floorM, double lengthM, double poleRadiusM, SetAside out) {
     int n = p.size();
     boolean[] wire = new boolean[n];
     for (int i = 0; i < n; i++) {
-      wire[i] = on[i] || p.labelled(i) || wires.reason(p.key(i)) == SetAside.Reason.WIRE;
+      wire[i] = on[i] || p.labelled(i) || wires.reason(p.key(i)) == SetAside.Reason.WIRE
+          || Math.hypot(p.s(i), p.e(i)) < poleRadiusM
+          || Math.hypot(p.s(i) - lengthM, p.e(i)) < poleRadiusM;
     }
     PointGrid grid = new PointGrid(p, LINK_M);
     int[] group = groups(p, wire, grid);

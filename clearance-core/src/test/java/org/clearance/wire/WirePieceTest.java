@@ -118,6 +118,33 @@ class WirePieceTest {
   }
 
   @Test
+  void pieceTiedToAPoleIsWireOnAPoleLine() {
+    // regression (issue 9, seed 62 triangular, ground-only, span P202-P203): a piece of a
+    // conductor the finder could not fit, 1.2-5.2 m from the pole, joined the pole's points
+    // (within 2 m) into one group that is no wire, and was measured 0.94 m from the next
+    // conductor (truth 4.33 m). The pole's points, within the clearance engine's 1 m pole
+    // exclusion, now join no group on a pole line.
+    SpanPoints p = new SpanPoints(GROUND_Z);
+    wire(p, 3.2, -0.8, 0, 2, 11, 300, 6);
+    for (int k = 0; k < 10; k++) {
+      double h = 6 + 0.6 * k;
+      p.add(0.15 * Math.cos(k), 0.15 * Math.sin(k), GROUND_Z + h, h,
+          CandidateCollector.UNCLASSIFIED, nextKey++);
+    }
+    p.sort();
+    boolean[] none = new boolean[p.size()];
+    SetAside towerLine = SetAside.none();
+    PointEvidence.setAside(p, none, none, SetAside.none(), FLOOR_M, towerLine);
+    assertEquals(0, reasons(towerLine, 1, 17, SetAside.Reason.WIRE), "no pole radius");
+    SetAside poleLine = SetAside.none();
+    PointEvidence.setAside(p, none, none, SetAside.none(), FLOOR_M, 80,
+        PointEvidence.POLE_RADIUS_M, poleLine);
+    assertEquals(6, reasons(poleLine, 1, 7, SetAside.Reason.WIRE), "the piece");
+    assertEquals(0, reasons(poleLine, 7, 17, SetAside.Reason.WIRE)
+        + reasons(poleLine, 7, 17, SetAside.Reason.AIRBORNE), "the pole: left to the engine");
+  }
+
+  @Test
   void crownPoleAndBirdAreNoPieces() {
     SpanPoints p = new SpanPoints(GROUND_Z);
     crown(p, 10, 5, 8, 2.0, 80);
