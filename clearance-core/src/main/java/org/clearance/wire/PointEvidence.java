@@ -285,24 +285,46 @@ final class PointEvidence {
     return piece;
   }
 
-  /** True when every strand of the group (member index of its root per member) is a piece. */
+  /**
+   * True when every strand of the group (member index of its root per member) is a wire piece:
+   * a strand of at least {@link WirePiece#MIN_POINTS} points on its own, a shorter one (the end
+   * of a wire beyond a gap) together with one of those pieces.
+   */
   private static boolean allPieces(SpanPoints p, int[] m, int[] root) {
-    int[] buf = new int[m.length];
+    List<int[]> pieces = new java.util.ArrayList<>();
+    List<int[]> short_ = new java.util.ArrayList<>();
     for (int r = 0; r < m.length; r++) {
       if (root[r] != r) {
         continue;
       }
       int c = 0;
+      int[] buf = new int[m.length];
       for (int k = 0; k < m.length; k++) {
         if (root[k] == r) {
           buf[c++] = m[k];
         }
       }
-      if (!WirePiece.isPiece(p, buf, c)) {
+      int[] strand = java.util.Arrays.copyOf(buf, c);
+      if (c < WirePiece.MIN_POINTS) {
+        short_.add(strand);
+      } else if (WirePiece.isPiece(p, strand, c)) {
+        pieces.add(strand);
+      } else {
         return false;
       }
     }
-    return true;
+    for (int[] s : short_) {
+      boolean continues = false;
+      for (int t = 0; t < pieces.size() && !continues; t++) {
+        int[] both = java.util.Arrays.copyOf(pieces.get(t), pieces.get(t).length + s.length);
+        System.arraycopy(s, 0, both, pieces.get(t).length, s.length);
+        continues = WirePiece.isPiece(p, both, both.length);
+      }
+      if (!continues) {
+        return false;
+      }
+    }
+    return !pieces.isEmpty();
   }
 
   /** The members of every group, indexed by group id (null for ids that name no group). */

@@ -38,11 +38,17 @@ final class WirePiece {
    * wire sampled at one to three points per metre. */
   static final double STRAND_HALF_LENGTH_M = CloseSpacing.ALONG_REACH_M;
 
+  /** Slope under which two neighbours of a strand join whatever their best lines, dz/ds: a
+   * conductor away from its structures (common practice, no source). Over the sleeve's length
+   * it allows {@value #TOL_M} + 0.3 m, less than the 0.6 m least vertical spacing of the demo's
+   * stacked framing, so conductors one above the other stay apart. */
+  static final double LEVEL_SLOPE = 0.1;
+
   private WirePiece() {}
 
   /**
-   * The strands of a group: its points with linear evidence, joined when one lies in the other's
-   * best sleeve along the span (radius {@link #TOL_M} across and up about the line through the
+   * The strands of a group: its points with linear evidence, joined when each lies in the
+   * other's best sleeve along the span (radius {@link #TOL_M} across and up about the line through the
    * point whose slope, tried from -{@link SleeveEvidence#MAX_SLOPE} to {@link
    * SleeveEvidence#MAX_SLOPE}, holds the most of them; a Hough vote, methods.md 1.4). Two
    * conductors hung one above the other, a conductor and the pole it is tied to, or a wire and a
@@ -70,41 +76,33 @@ final class WirePiece {
     double reach = Math.hypot(STRAND_HALF_LENGTH_M, SleeveEvidence.MAX_SLOPE
         * STRAND_HALF_LENGTH_M + TOL_M);
     IntList nb = new IntList();
-    IntList in = new IntList();
+    double[] slope = new double[m];
+    for (int k = 0; k < m; k++) {
+      if (parent[k] >= 0) {
+        grid.within(members[k], reach, nb);
+        slope[k] = bestSlope(p, members[k], nb, inGroup, linear, votes);
+      }
+    }
     for (int k = 0; k < m; k++) {
       int i = members[k];
       if (parent[k] < 0) {
         continue;
       }
       grid.within(i, reach, nb);
-      in.clear();
       for (int t = 0; t < nb.size(); t++) {
         int j = nb.get(t);
-        if (j != i && inGroup[j] && linear[j]
-            && Math.abs(p.s(j) - p.s(i)) <= STRAND_HALF_LENGTH_M
-            && Math.abs(p.e(j) - p.e(i)) <= TOL_M) {
-          in.add(j);
+        if (j == i || !inSleeve(p, i, j, inGroup, linear)) {
+          continue;
         }
-      }
-      java.util.Arrays.fill(votes, 0);
-      for (int t = 0; t < in.size(); t++) {
-        int j = in.get(t);
+        int q = slot.get(j);
         double ds = p.s(j) - p.s(i);
         double dz = p.z(j) - p.z(i);
-        for (int q = 0; q < slopes; q++) {
-          double v = dz - (-SleeveEvidence.MAX_SLOPE + q * SleeveEvidence.SLOPE_STEP) * ds;
-          votes[q] += Math.abs(v) <= TOL_M ? 1 : 0;
-        }
-      }
-      int best = 0;
-      for (int q = 1; q < slopes; q++) {
-        best = votes[q] > votes[best] ? q : best;
-      }
-      double slope = -SleeveEvidence.MAX_SLOPE + best * SleeveEvidence.SLOPE_STEP;
-      for (int t = 0; t < in.size(); t++) {
-        int j = in.get(t);
-        if (Math.abs(p.z(j) - p.z(i) - slope * (p.s(j) - p.s(i))) <= TOL_M) {
-          org.clearance.io.DisjointSets.union(parent, k, slot.get(j));
+        // joined when each lies in the other's best sleeve (the end of one conductor whose
+        // best line climbs to the next one is not joined to it), or when the two are nearly
+        // level (a wire's end, whose best line may point elsewhere)
+        if (Math.abs(dz - slope[k] * ds) <= TOL_M && Math.abs(dz - slope[q] * ds) <= TOL_M
+            || Math.abs(dz) <= TOL_M + LEVEL_SLOPE * Math.abs(ds)) {
+          org.clearance.io.DisjointSets.union(parent, k, q);
         }
       }
     }
@@ -114,6 +112,39 @@ final class WirePiece {
       }
     }
     return parent;
+  }
+
+  /** True when j is a usable neighbour of i within the sleeve's length and radius across. */
+  private static boolean inSleeve(SpanPoints p, int i, int j, boolean[] inGroup,
+      boolean[] linear) {
+    return inGroup[j] && linear[j] && Math.abs(p.s(j) - p.s(i)) <= STRAND_HALF_LENGTH_M
+        && Math.abs(p.e(j) - p.e(i)) <= TOL_M;
+  }
+
+  /** The slope dz/ds of the line through point i that holds the most sleeve neighbours. */
+  private static double bestSlope(SpanPoints p, int i, IntList nb, boolean[] inGroup,
+      boolean[] linear, int[] votes) {
+    java.util.Arrays.fill(votes, 0);
+    for (int t = 0; t < nb.size(); t++) {
+      int j = nb.get(t);
+      if (j == i || !inSleeve(p, i, j, inGroup, linear)) {
+        continue;
+      }
+      double ds = p.s(j) - p.s(i);
+      double dz = p.z(j) - p.z(i);
+      for (int q = 0; q < votes.length; q++) {
+        votes[q] += Math.abs(dz - slopeOf(q) * ds) <= TOL_M ? 1 : 0;
+      }
+    }
+    int best = 0;
+    for (int q = 1; q < votes.length; q++) {
+      best = votes[q] > votes[best] ? q : best;
+    }
+    return slopeOf(best);
+  }
+
+  private static double slopeOf(int q) {
+    return -SleeveEvidence.MAX_SLOPE + q * SleeveEvidence.SLOPE_STEP;
   }
 
   /**

@@ -104,6 +104,20 @@ class WirePieceTest {
   }
 
   @Test
+  void shortEndOfAStackedConductorContinuesItsPiece() {
+    // regression (issue 9, FeederModesTruthTest seed 66 vertical, ground-only, span P204-P205):
+    // two unfitted conductors 0.85 m apart, one above the other, in one group over 21 m; the
+    // end of the lower one climbed to the upper one (its best line) and joined the two, and
+    // 3 points of the upper one beyond a 3.5 m gap formed a strand too short to be a piece. A
+    // zone site stood on them 0.27 m from the conductor (truth 4.61 m).
+    SpanPoints p = new SpanPoints(GROUND_Z);
+    wire(p, 27, 0.3, 0, 5, 10.6, 400, 12);
+    wire(p, 37, 0.3, 0, 6, 11.45, 400, 13);
+    wire(p, 26.5, 0.3, 0, 1, 11.45, 400, 3);
+    assertEquals(28, reasons(run(p, true), 1, 29, SetAside.Reason.WIRE));
+  }
+
+  @Test
   void wireWithACrownBesideItIsMeasured() {
     // the same conductor piece with a crown 1.5 m beside it: one group, not made of wire
     // pieces only, so every point is measured (a point near a wire is vegetation unless the
