@@ -22,8 +22,13 @@ import org.clearance.io.DisjointSets;
  * than {@value #UNDER_DEPTH_M} m below the group's lowest point. The top of a crown whose lower
  * crown lies below the candidate height, or whose crown spreads past the corridor's edge, has
  * that crown in its column and is measured. A group of at least {@value #MIN_LINE_POINTS}
- * points, at least {@value #LINE_SHARE} of them linear, running {@value #MIN_LINE_RUN_M} m or more along the span,
- * is a wire nobody fitted. A wire point with a point of another group (vegetation) within
+ * points, at least {@value #LINE_SHARE} of them linear, running {@value #MIN_LINE_RUN_M} m or
+ * more along the span, is a wire nobody fitted; so is a group that is a thin hanging line in any
+ * direction ({@link WirePiece}: a crossing service line, a piece of a conductor the finder could
+ * not fit), and a group, at least {@value #STRANDS_LINEAR_SHARE} of it linear, made only of such
+ * lines (two unfitted conductors within the link distance of each other). On a pole line the
+ * points within {@value #POLE_RADIUS_M} m of a pole join no group. A wire point with a point of
+ * another group (vegetation) within
  * {@value #TOUCH_M} m is not set aside: where a branch touches a wire the two cannot be told
  * apart, and the point is measured.
  */
@@ -61,6 +66,14 @@ final class PointEvidence {
   static final double LINE_SHARE = 0.8;
   /** Least run along the span of an unfitted wire, m (the growth step's least wire length). */
   static final double MIN_LINE_RUN_M = 10;
+  /** Least share of linear points in a group that is split into strands ({@link
+   * WirePiece#strands}): most points of a wire show linear evidence; crowns measured on the demo
+   * feeders hold 10-35 % (common practice, no source). */
+  static final double STRANDS_LINEAR_SHARE = 0.5;
+  /** Plan radius around a pole kept out of the groups, m: the clearance engine's pole
+   * exclusion (ClearanceEngine.POLE_EXCLUSION_M, a later package), within which no point is
+   * measured. */
+  static final double POLE_RADIUS_M = 1.0;
   /** A wire point with vegetation this near is measured, not set aside, m. */
   static final double TOUCH_M = 0.3;
 
@@ -122,10 +135,28 @@ final class PointEvidence {
    */
   static void setAside(SpanPoints p, boolean[] on, boolean[] linear, SetAside wires,
       double floorM, SetAside out) {
+    setAside(p, on, linear, wires, floorM, Double.NaN, Double.NaN, out);
+  }
+
+  /**
+   * As {@link #setAside(SpanPoints, boolean[], boolean[], SetAside, double, SetAside)}, on a pole
+   * line: the candidates within {@code poleRadiusM} in plan of the span's structures (station 0
+   * and {@code lengthM}, offset 0) join no group. The clearance engine never measures them (its
+   * pole exclusion, docs/clearance.md), and through them the pieces of the wires tied to the
+   * pole would join the pole into one group that is no wire.
+   *
+   * @param lengthM the span's length, m (the second structure's station)
+   * @param poleRadiusM plan radius kept out of the groups around each structure, m, or NaN for
+   *     none (lattice towers: their exclusion is wider and their members are no wire)
+   */
+  static void setAside(SpanPoints p, boolean[] on, boolean[] linear, SetAside wires,
+      double floorM, double lengthM, double poleRadiusM, SetAside out) {
     int n = p.size();
     boolean[] wire = new boolean[n];
     for (int i = 0; i < n; i++) {
-      wire[i] = on[i] || p.labelled(i) || wires.reason(p.key(i)) == SetAside.Reason.WIRE;
+      wire[i] = on[i] || p.labelled(i) || wires.reason(p.key(i)) == SetAside.Reason.WIRE
+          || Math.hypot(p.s(i), p.e(i)) < poleRadiusM
+          || Math.hypot(p.s(i) - lengthM, p.e(i)) < poleRadiusM;
     }
     PointGrid grid = new PointGrid(p, LINK_M);
     int[] group = groups(p, wire, grid);
@@ -155,20 +186,31 @@ final class PointEvidence {
       eMin[g] = Math.min(eMin[g], p.e(i));
       eMax[g] = Math.max(eMax[g], p.e(i));
     }
+    int[][] members = members(group, count);
+    boolean[] piece = new boolean[n];
+    for (int g = 0; g < n; g++) {
+      piece[g] = members[g] != null && WirePiece.isPiece(p, members[g], count[g]);
+    }
     boolean[] vegetation = new boolean[n];
     for (int i = 0; i < n; i++) {
       int g = group[i];
       if (g < 0) {
         continue;
       }
-      if (count[g] <= MAX_AIRBORNE_POINTS && lowest[g] >= floorM + AIRBORNE_GAP_M
+      if (count[g] >= MIN_LINE_POINTS && lin[g] >= LINE_SHARE * count[g]
+          && sMax[g] - sMin[g] >= MIN_LINE_RUN_M || piece[g]) {
+        out.addWire(p.key(i));
+      } else if (count[g] <= MAX_AIRBORNE_POINTS && lowest[g] >= floorM + AIRBORNE_GAP_M
           && openBelow(p.standing(), sMin[g], sMax[g], eMin[g], eMax[g], lowest[g])) {
         out.addAirborne(p.key(i));
-      } else if (count[g] >= MIN_LINE_POINTS && lin[g] >= LINE_SHARE * count[g]
-          && sMax[g] - sMin[g] >= MIN_LINE_RUN_M) {
-        out.addWire(p.key(i));
       } else {
         vegetation[i] = true;
+      }
+    }
+    boolean[] strand = strandPieces(p, count, lin, members, vegetation, grid);
+    for (int i = 0; i < n; i++) {
+      if (strand[i]) {
+        out.addWire(p.key(i));
       }
     }
     IntList near = new IntList();
@@ -176,11 +218,7 @@ final class PointEvidence {
       if (!on[i]) {
         continue;
       }
-      grid.within(i, TOUCH_M, near);
-      boolean touched = false;
-      for (int t = 0; t < near.size() && !touched; t++) {
-        touched = vegetation[near.get(t)];
-      }
+      boolean touched = touched(grid, i, vegetation, near);
       if (!touched) {
         out.addWire(p.key(i));
       }
@@ -195,6 +233,115 @@ final class PointEvidence {
     double top = standing.highestIn(s0 - COLUMN_MARGIN_M, s1 + COLUMN_MARGIN_M,
         e0 - COLUMN_MARGIN_M, e1 + COLUMN_MARGIN_M);
     return top < lowestM - UNDER_DEPTH_M;
+  }
+
+  /** True when a point of {@code vegetation} lies within {@link #TOUCH_M} of point i. */
+  private static boolean touched(PointGrid grid, int i, boolean[] vegetation, IntList near) {
+    grid.within(i, TOUCH_M, near);
+    for (int t = 0; t < near.size(); t++) {
+      if (vegetation[near.get(t)]) {
+        return true;
+      }
+    }
+    return false;
+  }
+
+  /**
+   * The points of groups that are vegetation as a whole yet made of wire pieces only: every
+   * point of the group lies on a strand ({@link WirePiece#strands}) that is a wire piece ({@link
+   * WirePiece#isPiece}). Two conductors hung one above the other, or side by side, whose pieces
+   * fall within the group's link distance, form one such group; a group holding anything else (a
+   * crown, a pole) keeps all its points as vegetation. Only groups of at least twice {@link
+   * WirePiece#MIN_POINTS} points, at least {@link #STRANDS_LINEAR_SHARE} of them with linear
+   * evidence, are split (a crown's share is lower). The points are taken out of {@code
+   * vegetation}; no vegetation can touch them, as the group holds every point within {@link
+   * #LINK_M} of them.
+   */
+  private static boolean[] strandPieces(SpanPoints p, int[] count, int[] lin, int[][] members,
+      boolean[] vegetation, PointGrid grid) {
+    int n = p.size();
+    boolean[] piece = new boolean[n];
+    boolean[] inGroup = new boolean[n];
+    for (int g = 0; g < n; g++) {
+      int[] m = members[g];
+      if (m == null || !vegetation[m[0]] || count[g] < 2 * WirePiece.MIN_POINTS
+          || lin[g] < STRANDS_LINEAR_SHARE * count[g]) {
+        continue;
+      }
+      for (int i : m) {
+        inGroup[i] = true;
+      }
+      int[] root = WirePiece.strands(p, m, inGroup, inGroup, grid);
+      for (int i : m) {
+        inGroup[i] = false;
+      }
+      if (allPieces(p, m, root)) {
+        for (int i : m) {
+          piece[i] = true;
+          vegetation[i] = false;
+        }
+      }
+    }
+    return piece;
+  }
+
+  /**
+   * True when every strand of the group (member index of its root per member) is a wire piece:
+   * a strand of at least {@link WirePiece#MIN_POINTS} points on its own, a shorter one (the end
+   * of a wire beyond a gap) together with one of those pieces.
+   */
+  private static boolean allPieces(SpanPoints p, int[] m, int[] root) {
+    List<int[]> pieces = new java.util.ArrayList<>();
+    List<int[]> short_ = new java.util.ArrayList<>();
+    for (int r = 0; r < m.length; r++) {
+      if (root[r] != r) {
+        continue;
+      }
+      int c = 0;
+      int[] buf = new int[m.length];
+      for (int k = 0; k < m.length; k++) {
+        if (root[k] == r) {
+          buf[c++] = m[k];
+        }
+      }
+      int[] strand = java.util.Arrays.copyOf(buf, c);
+      if (c < WirePiece.MIN_POINTS) {
+        short_.add(strand);
+      } else if (WirePiece.isPiece(p, strand, c)) {
+        pieces.add(strand);
+      } else {
+        return false;
+      }
+    }
+    for (int[] s : short_) {
+      boolean continues = false;
+      for (int t = 0; t < pieces.size() && !continues; t++) {
+        int[] both = java.util.Arrays.copyOf(pieces.get(t), pieces.get(t).length + s.length);
+        System.arraycopy(s, 0, both, pieces.get(t).length, s.length);
+        continues = WirePiece.isPiece(p, both, both.length);
+      }
+      if (!continues) {
+        return false;
+      }
+    }
+    return !pieces.isEmpty();
+  }
+
+  /** The members of every group, indexed by group id (null for ids that name no group). */
+  private static int[][] members(int[] group, int[] count) {
+    int n = group.length;
+    int[][] out = new int[n][];
+    int[] fill = new int[n];
+    for (int i = 0; i < n; i++) {
+      int g = group[i];
+      if (g >= 0) {
+        if (out[g] == null) {
+          out[g] = new int[count[g]];
+        }
+        out[g][fill[g]++] = i;
+      }
+    }
+    return out;
   }
 
   /** Groups (single linkage within {@link #LINK_M}) of the points that are not wire; -1 for

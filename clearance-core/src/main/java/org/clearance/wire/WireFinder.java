@@ -136,13 +136,15 @@ public final class WireFinder {
     private final boolean[] onWire;
     private final boolean[] linear;
     private final double floorM;
+    private final double poleRadiusM;
 
-    SpanFind(SpanWireFinder.Found found, SpanPoints points, double floorM) {
+    SpanFind(SpanWireFinder.Found found, SpanPoints points, double floorM, double poleRadiusM) {
       this.wires = found.wires();
       this.points = points;
       this.onWire = found.onWire();
       this.linear = found.linear();
       this.floorM = floorM;
+      this.poleRadiusM = poleRadiusM;
     }
 
     /** The span's conductors. */
@@ -175,7 +177,8 @@ public final class WireFinder {
      */
     public void setAside(SetAside wires, SetAside out) {
       if (onWire.length == points.size()) {
-        PointEvidence.setAside(points, onWire, linear, wires, floorM, out);
+        PointEvidence.setAside(points, onWire, linear, wires, floorM, wires().span().lengthM(),
+            poleRadiusM, out);
       }
     }
   }
@@ -206,7 +209,7 @@ public final class WireFinder {
     SpanPoints p = all.sorted(idx);
     return new SpanFind(finder.findWithEvidence(p, all.seen(idx), span, spec,
         groundAt(span.from(), heights), groundAt(span.to(), heights), arms), p,
-        corridor.minHeightM());
+        corridor.minHeightM(), isPoleLine(spec) ? PointEvidence.POLE_RADIUS_M : Double.NaN);
   }
 
   /**

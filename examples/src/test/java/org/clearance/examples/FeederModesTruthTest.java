@@ -18,26 +18,42 @@ import java.util.Optional;
 import org.clearance.CheckInputs;
 import org.clearance.CheckOptions;
 import org.clearance.ClearanceCheck;
+import org.clearance.clearance.ConditionMinimum;
+import org.clearance.clearance.SpanStatus;
+import org.clearance.run.RunModel;
+import org.clearance.run.RunModelJson;
+import org.clearance.run.SpanRecord;
+import org.clearance.survey.LinearUnit;
 import org.clearance.survey.UnitsChoice;
+import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.io.TempDir;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.CsvSource;
 
 /**
  * Issue 9 on the demo feeder (distribution: poles, conductors 0.3-2.5 m apart, neutral,
- * crossing service line): the same feeder surveyed fully labelled, ground-only and unlabelled.
- * Against the generator's truth (the kind of every point) and the labelled run: no span with a
- * labelled zone site is left without one; every labelled zone site has one within
- * {@link #SAME_SITE_M} at least as urgent; at most 2 % of zone sites stand on something that is
- * not vegetation; every fall-in site stands at a real tree whose height the check gives within
- * 0.5 m. Metres (the feet runs of the transmission corridor are FeetCorridorTest's).
+ * crossing service line): the same feeder surveyed fully labelled, ground-only and unlabelled,
+ * in every framing, in metres and in US survey feet. Against the generator's truth (the kind of
+ * every point) and the labelled run, every run is held to issue 9's targets: no span with a
+ * labelled zone site is left without one (no span reported clear while vegetation is inside a
+ * zone); every labelled zone site has one within {@link #SAME_SITE_M} at least as urgent (every
+ * tree in a zone has a site); at most 2 % of zone sites stand on something that is not
+ * vegetation; every fall-in site stands at a real tree whose height the check gives within
+ * 0.5 m. And per span, the surveyed-state minimum of a span with true vegetation within
+ * {@link #COMPARED_WITHIN_M}: never above the truth by more than {@link #TOL_M} (the inferred
+ * vegetation holds every true vegetation point), and never set by a point of the line's own
+ * wires (issue 9 item 2). The labelled run is the reference for the zones: FeederClearanceTest
+ * holds its minima to the truth within 5 cm.
  *
- * <p>Known gap (issue 9, not closed on feeders): in the ground-only and unlabelled runs a few
- * points of the feeder's own conductors are measured as vegetation (zone sites on them, and
- * fall-in "trees" made of them), because the wire evidence (docs/wire-finder.md, "Points set
- * aside") does not yet set aside every conductor point of closely spaced feeder wires. Those
- * runs are held to: every site not on vegetation stands on a conductor point, and every fall-in
- * site at no real tree has conductor points under it; nothing else.
+ * <p>Regression (issue 9): in the ground-only and unlabelled runs, points of the feeder's own
+ * wires were measured as vegetation: the crossing service line (it crosses the span, so it did
+ * not run 10 m along it), and pieces of conductors the finder could not fit, shorter than 10 m
+ * or of fewer than 10 points (seed 61 horizontal: 3 of 9 zone sites and 2 of 10 fall-in sites on
+ * the service line of span P204-P205; seed 62 triangular: 1 of 16 zone sites). Both are now
+ * wire pieces (docs/wire-finder.md, "Points set aside"). Seed 66 (vertical framing): two
+ * unfitted conductors one above the other in one group gave 5 of 10 zone sites and 9 of 13
+ * fall-in sites on the wires of span P204-P205 (minimum 0.272 m against a true 4.611 m) until
+ * the group's strands kept the two apart.
  */
 class FeederModesTruthTest {
 
@@ -50,76 +66,87 @@ class FeederModesTruthTest {
   private static final double HEIGHT_TOL_M = 0.5;
   /** A fall-in site names the tree top within this plan distance, m (as the transmission test). */
   private static final double TOP_RADIUS_M = 1.5;
+  /** Span minimum tolerance against the truth, m (issue 15, as FeederClearanceTest). */
+  private static final double TOL_M = 0.05;
+  /** Only minima this close are compared, m (as FeederClearanceTest). */
+  private static final double COMPARED_WITHIN_M = 10.0;
 
   @TempDir Path dir;
 
   private record Site(String span, int priority, String zone, double x, double y, double z,
       double height) {}
 
-  @ParameterizedTest(name = "seed {0}, {1}")
-  @CsvSource({"61, HORIZONTAL", "62, TRIANGULAR"})
-  void sameFindingsInEveryClassificationMode(long seed, Framing framing) throws IOException {
+  @ParameterizedTest(name = "seed {0}, {1}, {2}")
+  @CsvSource({"61, HORIZONTAL, METRE", "62, TRIANGULAR, METRE", "63, VERTICAL, US_SURVEY_FOOT"})
+  void sameFindingsInEveryClassificationMode(long seed, Framing framing, LinearUnit unit)
+      throws IOException {
+    check(seed, framing, unit);
+  }
+
+  @Tag("slow")
+  @ParameterizedTest(name = "seed {0}, {1}, {2}")
+  @CsvSource({"64, HORIZONTAL, US_SURVEY_FOOT", "65, TRIANGULAR, US_SURVEY_FOOT",
+      "66, VERTICAL, METRE"})
+  void sweepSameFindingsInEveryClassificationMode(long seed, Framing framing, LinearUnit unit)
+      throws IOException {
+    check(seed, framing, unit);
+  }
+
+  private void check(long seed, Framing framing, LinearUnit unit) throws IOException {
     FeederOptions base = FeederOptions.defaults().withSeed(seed).withSpanCount(6)
-        .withFraming(framing);
+        .withFraming(framing).withUnit(unit);
     FeederScene scene = FeederScene.create(base.withMode(ClassificationMode.FULL));
     Map<Long, Integer> kindAt = new HashMap<>();
     List<double[]> treePoints = new ArrayList<>();
-    List<double[]> wirePoints = new ArrayList<>();
     scene.points((chunk, ids) -> {
       for (int i = 0; i < chunk.size(); i++) {
-        kindAt.put(key(chunk.x()[i], chunk.y()[i], chunk.z()[i]), ids[i]);
+        if (TruthId.kind(ids[i]) != TruthId.Kind.GROUND) {
+          kindAt.put(key(chunk.x()[i], chunk.y()[i], chunk.z()[i]), ids[i]);
+        }
         if (TruthId.kind(ids[i]) == TruthId.Kind.TREE) {
           treePoints.add(new double[] {chunk.x()[i], chunk.y()[i], chunk.z()[i]});
         }
-        if (TruthId.kind(ids[i]) == TruthId.Kind.WIRE) {
-          wirePoints.add(new double[] {chunk.x()[i], chunk.y()[i], chunk.z()[i]});
-        }
       }
     });
-    List<Site> labelled = run(base.withMode(ClassificationMode.FULL), "full");
-    StringBuilder all = new StringBuilder();
+    Run labelled = run(base.withMode(ClassificationMode.FULL), "full");
     List<String> figures = new ArrayList<>();
     for (ClassificationMode mode : List.of(ClassificationMode.FULL,
         ClassificationMode.GROUND_ONLY, ClassificationMode.UNCLASSIFIED)) {
-      List<Site> sites = mode == ClassificationMode.FULL ? labelled
-          : run(base.withMode(mode), mode.name());
+      Run r = mode == ClassificationMode.FULL ? labelled : run(base.withMode(mode), mode.name());
+      String tag = "feeder seed " + seed + " " + framing + " " + unit.symbol() + " " + mode;
       int zoneSites = 0;
       int notVegetation = 0;
-      int onConductor = 0;
-      for (Site s : sites) {
+      for (Site s : r.sites()) {
         if (s.zone().equals("fall-in")) {
           continue;
         }
         zoneSites++;
-        Integer id = kindAt.get(key(s.x(), s.y(), s.z()));
-        TruthId.Kind k = id == null ? null : TruthId.kind(id);
+        TruthId.Kind k = kind(kindAt, s.x(), s.y(), s.z());
         if (k != TruthId.Kind.TREE && k != TruthId.Kind.LOW_VEGETATION) {
           notVegetation++;
-          onConductor += k == TruthId.Kind.WIRE ? 1 : 0;
-          System.out.println("feeder " + mode + ": site not on vegetation: " + s + " " + k);
+          System.out.println(tag + ": site not on vegetation: " + s + " " + k);
         }
       }
       int spansLeft = 0;
       int missed = 0;
-      for (Site l : labelled) {
+      for (Site l : labelled.sites()) {
         if (l.zone().equals("fall-in")) {
           continue;
         }
-        if (sites.stream().noneMatch(s -> s.span().equals(l.span())
+        if (r.sites().stream().noneMatch(s -> s.span().equals(l.span())
             && !s.zone().equals("fall-in"))) {
           spansLeft++;
         }
-        if (sites.stream().noneMatch(s -> s.span().equals(l.span())
+        if (r.sites().stream().noneMatch(s -> s.span().equals(l.span())
             && s.priority() <= l.priority()
             && Math.hypot(s.x() - l.x(), s.y() - l.y()) <= SAME_SITE_M)) {
           missed++;
-          System.out.println("feeder " + mode + ": labelled site without a match: " + l);
+          System.out.println(tag + ": labelled site without a match: " + l);
         }
       }
       int fallIn = 0;
       int fallInWrong = 0;
-      int fallInOnConductor = 0;
-      for (Site s : sites) {
+      for (Site s : r.sites()) {
         if (!s.zone().equals("fall-in")) {
           continue;
         }
@@ -134,60 +161,131 @@ class FeederModesTruthTest {
         double h = top == null ? Double.NaN : top[2] - scene.groundZ(top[0], top[1]);
         if (!(Math.abs(h - s.height()) <= HEIGHT_TOL_M)) {
           fallInWrong++;
-          fallInOnConductor += wirePoints.stream().anyMatch(w -> Math.hypot(w[0] - s.x(),
-              w[1] - s.y()) <= TOP_RADIUS_M && Math.abs(w[2] - s.z()) <= HEIGHT_TOL_M) ? 1 : 0;
-          System.out.println("feeder " + mode + ": fall-in site not at a tree of its height: "
-              + s + " truth " + h);
+          System.out.println(tag + ": fall-in site not at a tree of its height: " + s
+              + " truth " + h);
         }
       }
-      String f = String.format(Locale.ROOT, "feeder seed %d %s %s: zone sites %d, not on"
-          + " vegetation %d (on a conductor %d); labelled zone sites without a match %d (spans"
-          + " left without one %d); fall-in sites %d, not at a tree of that height %d (over a"
-          + " conductor %d)", seed, framing, mode, zoneSites, notVegetation, onConductor, missed,
-          spansLeft, fallIn, fallInWrong, fallInOnConductor);
-      System.out.println(f);
-      all.append(f).append('\n');
-      figures.add(f);
-      assertEquals(0, spansLeft, f);
-      assertEquals(0, missed, f);
-      if (mode == ClassificationMode.FULL) {
-        assertTrue(notVegetation <= MAX_NOT_VEGETATION_SHARE * zoneSites, f);
-        assertEquals(0, fallInWrong, f);
-      } else {
-        // the known gap of the class comment, and nothing else
-        assertEquals(notVegetation, onConductor, f);
-        assertEquals(fallInWrong, fallInOnConductor, f);
+      // per span: the surveyed-state minimum against the truth (the true curves of the
+      // conductors this run fitted: a conductor not fitted is not measured, and its span is
+      // INCOMPLETE)
+      double[] truth = FeederClearanceTest.truthMinima(scene, r.model(), "phase");
+      int compared = 0;
+      int above = 0;
+      int onOwnWire = 0;
+      for (int i = 0; i < truth.length; i++) {
+        SpanRecord span = r.model().spans().get(i);
+        if (span.status() == SpanStatus.NOT_ASSESSED || !(truth[i] < COMPARED_WITHIN_M)) {
+          continue;
+        }
+        compared++;
+        ConditionMinimum m = span.minima().get(0);
+        TruthId.Kind k = kind(kindAt, m.x(), m.y(), m.z());
+        String line = String.format(Locale.ROOT, "%s %s %s: truth %.3f m, check %.3f m on %s",
+            tag, span.id(), span.status(), truth[i], m.distance(), k);
+        if (m.distance() > truth[i] + TOL_M) {
+          above++;
+          System.out.println(line + " ABOVE THE TRUTH");
+        } else if (k == TruthId.Kind.WIRE) {
+          onOwnWire++;
+          System.out.println(line + " SET BY THE LINE'S OWN WIRE");
+        }
       }
+      String f = String.format(Locale.ROOT, "%s: zone sites %d, not on vegetation %d; labelled"
+          + " zone sites without a match %d (spans left without one %d); fall-in sites %d, not"
+          + " at a tree of that height %d; span minima compared %d, above the truth %d, set by"
+          + " the line's own wire %d", tag, zoneSites, notVegetation, missed, spansLeft, fallIn,
+          fallInWrong, compared, above, onOwnWire);
+      System.out.println(f);
+      figures.add(f);
     }
-    assertTrue(labelled.stream().anyMatch(s -> !s.zone().equals("fall-in")), all.toString());
+    String all = String.join("\n", figures);
+    for (String f : figures) {
+      int[] v = numbers(f);
+      // v: zone sites, not on vegetation, missed, spans left, fall-in, wrong fall-in,
+      // compared, above, on own wire
+      assertEquals(0, v[3], all);
+      assertEquals(0, v[2], all);
+      assertTrue(v[1] <= MAX_NOT_VEGETATION_SHARE * v[0], all);
+      assertEquals(0, v[5], all);
+      assertEquals(0, v[7], all);
+      assertEquals(0, v[8], all);
+    }
+    assertTrue(labelled.sites().stream().anyMatch(s -> !s.zone().equals("fall-in")), all);
   }
 
-  private List<Site> run(FeederOptions options, String name) throws IOException {
+  /** The integers of a figures line after its tag, in order. */
+  private static int[] numbers(String f) {
+    return java.util.Arrays.stream(f.substring(f.indexOf(": ") + 2).split("[^0-9]+"))
+        .filter(t -> !t.isEmpty()).mapToInt(Integer::parseInt).toArray();
+  }
+
+  private record Run(List<Site> sites, RunModel model) {}
+
+  private Run run(FeederOptions options, String name) throws IOException {
     DemoCorridor.DemoFiles files = FeederFiles.write(dir.resolve(name + "-in"), options);
     Path out = dir.resolve(name + "-run");
     StringWriter console = new StringWriter();
     new ClearanceCheck(CheckOptions.defaults(2), new PrintWriter(console)).run(
         new CheckInputs(List.of(files.survey()), UnitsChoice.fromFile(), files.structures(),
             List.of(files.lineSpec()), Optional.empty(), Optional.of(PROFILE), out), "test");
-    console.toString().lines().filter(l -> l.startsWith("labelling")).forEach(System.out::println);
     List<String> lines = Files.readAllLines(out.resolve("sites.csv"), StandardCharsets.UTF_8);
     List<String> header = List.of(lines.get(0).split(",", -1));
+    int xCol = column(header, "x_");
+    int yCol = column(header, "y_");
+    int zCol = column(header, "z_");
+    int hCol = column(header, "veg_height_");
+    double xy = header.get(xCol).endsWith("_m") ? 1 : options.unit().metres();
+    double zu = header.get(zCol).endsWith("_m") ? 1 : options.unit().metres();
+    double hu = header.get(hCol).endsWith("_m") ? 1 : options.unit().metres();
     List<Site> sites = new ArrayList<>();
     for (String line : lines.subList(1, lines.size())) {
       String[] f = line.split(",", -1);
-      String h = f[header.indexOf("veg_height_m")];
+      String h = f[hCol];
       sites.add(new Site(f[header.indexOf("span_id")],
           Integer.parseInt(f[header.indexOf("priority")]), f[header.indexOf("zone")],
-          Double.parseDouble(f[header.indexOf("x_m")]), Double.parseDouble(f[header.indexOf(
-              "y_m")]), Double.parseDouble(f[header.indexOf("z_m")]),
-          h.isEmpty() ? Double.NaN : Double.parseDouble(h)));
+          xy * Double.parseDouble(f[xCol]), xy * Double.parseDouble(f[yCol]),
+          zu * Double.parseDouble(f[zCol]),
+          h.isEmpty() ? Double.NaN : hu * Double.parseDouble(h)));
     }
-    return sites;
+    return new Run(sites, RunModelJson.read(out.resolve(RunModel.FILE_NAME)));
+  }
+
+  private static int column(List<String> header, String prefix) {
+    for (int i = 0; i < header.size(); i++) {
+      if (header.get(i).startsWith(prefix)) {
+        return i;
+      }
+    }
+    throw new AssertionError("no " + prefix + " column in " + header);
+  }
+
+  /**
+   * The truth kind of the point at (x, y, z), m: the generated point within a millimetre in
+   * each axis (a survey in US survey feet rounds to its own scale), or null (ground).
+   */
+  private static TruthId.Kind kind(Map<Long, Integer> kindAt, double x, double y, double z) {
+    long kx = Math.round(x * 1000);
+    long ky = Math.round(y * 1000);
+    long kz = Math.round(z * 1000);
+    for (long a = -1; a <= 1; a++) {
+      for (long b = -1; b <= 1; b++) {
+        for (long c = -1; c <= 1; c++) {
+          Integer id = kindAt.get(packed(kx + a, ky + b, kz + c));
+          if (id != null) {
+            return TruthId.kind(id);
+          }
+        }
+      }
+    }
+    return null;
   }
 
   /** Key of a point at millimetres (as sites.csv writes it). */
   private static long key(double x, double y, double z) {
-    return Math.round(x * 1000) * 1_000_003L * 1_000_003L + Math.round(y * 1000) * 1_000_003L
-        + Math.round(z * 1000);
+    return packed(Math.round(x * 1000), Math.round(y * 1000), Math.round(z * 1000));
+  }
+
+  private static long packed(long mx, long my, long mz) {
+    return mx * 1_000_003L * 1_000_003L + my * 1_000_003L + mz;
   }
 }
