@@ -116,16 +116,19 @@ final class PointEvidence {
    * @param p the span's candidates
    * @param on this span's wire points from {@link #onCurve}
    * @param linear per candidate, linear evidence
+   * @param crossing per candidate, true for a point of a wire crossing the span ({@link
+   *     CrossingFinder}): set aside as such unless vegetation touches it, as a wire point
    * @param wires every span's wire points so far (to know a neighbour's wire)
    * @param floorM the span's lowest candidate height above ground, m
    * @param out where the points set aside go
    */
-  static void setAside(SpanPoints p, boolean[] on, boolean[] linear, SetAside wires,
-      double floorM, SetAside out) {
+  static void setAside(SpanPoints p, boolean[] on, boolean[] linear, boolean[] crossing,
+      SetAside wires, double floorM, SetAside out) {
     int n = p.size();
     boolean[] wire = new boolean[n];
     for (int i = 0; i < n; i++) {
-      wire[i] = on[i] || p.labelled(i) || wires.reason(p.key(i)) == SetAside.Reason.WIRE;
+      wire[i] = on[i] || crossing[i] || p.labelled(i)
+          || wires.reason(p.key(i)) == SetAside.Reason.WIRE;
     }
     PointGrid grid = new PointGrid(p, LINK_M);
     int[] group = groups(p, wire, grid);
@@ -173,7 +176,7 @@ final class PointEvidence {
     }
     IntList near = new IntList();
     for (int i = 0; i < n; i++) {
-      if (!on[i]) {
+      if (!on[i] && !(crossing[i] && !p.labelled(i))) {
         continue;
       }
       grid.within(i, TOUCH_M, near);
@@ -181,8 +184,13 @@ final class PointEvidence {
       for (int t = 0; t < near.size() && !touched; t++) {
         touched = vegetation[near.get(t)];
       }
-      if (!touched) {
+      if (touched) {
+        continue;
+      }
+      if (on[i]) {
         out.addWire(p.key(i));
+      } else {
+        out.addCrossing(p.key(i));
       }
     }
   }

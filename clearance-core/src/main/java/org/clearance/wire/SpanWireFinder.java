@@ -61,8 +61,15 @@ final class SpanWireFinder {
    * @param wires the span's conductors
    * @param onWire per candidate, true when it lies on a wire ({@link PointEvidence#onCurve})
    * @param linear per candidate, linear evidence
+   * @param crossing per candidate, true when it is a point of a wire crossing the span
    */
-  record Found(SpanWires wires, boolean[] onWire, boolean[] linear) {}
+  record Found(SpanWires wires, boolean[] onWire, boolean[] linear, boolean[] crossing) {
+
+    /** Without crossing wires. */
+    Found(SpanWires wires, boolean[] onWire, boolean[] linear) {
+      this(wires, onWire, linear, new boolean[onWire.length]);
+    }
+  }
 
   /** As {@link #find}, with the evidence of which candidates are wire points. */
   Found findWithEvidence(SpanPoints p, long seen, Span span, LineSpec spec, double groundA,
@@ -154,8 +161,17 @@ final class SpanWireFinder {
     for (ConductorFit.Result r : failed) {
       naming.addFailedExtra(roleHint(p, r.members()).orElse(ConductorPosition.Role.PHASE), r);
     }
-    return new Found(naming.spanWires(p.size(), labelled), PointEvidence.onCurve(p, finals,
-        linear), linear);
+    boolean[] onWire = PointEvidence.onCurve(p, finals, linear);
+    boolean[] taken = onWire.clone();
+    for (int[] w : wires) {
+      for (int i : w) {
+        taken[i] = true;
+      }
+    }
+    SpanWires found = naming.spanWires(p.size(), labelled);
+    CrossingFinder.Found crossing = CrossingFinder.find(p, taken, span, found.conductors());
+    return new Found(found.withCrossings(crossing.crossings()), onWire, linear,
+        crossing.member());
   }
 
   /**

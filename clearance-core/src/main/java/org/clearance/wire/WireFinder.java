@@ -135,6 +135,7 @@ public final class WireFinder {
     private final SpanPoints points;
     private final boolean[] onWire;
     private final boolean[] linear;
+    private final boolean[] crossing;
     private final double floorM;
 
     SpanFind(SpanWireFinder.Found found, SpanPoints points, double floorM) {
@@ -142,6 +143,7 @@ public final class WireFinder {
       this.points = points;
       this.onWire = found.onWire();
       this.linear = found.linear();
+      this.crossing = found.crossing();
       this.floorM = floorM;
     }
 
@@ -175,7 +177,7 @@ public final class WireFinder {
      */
     public void setAside(SetAside wires, SetAside out) {
       if (onWire.length == points.size()) {
-        PointEvidence.setAside(points, onWire, linear, wires, floorM, out);
+        PointEvidence.setAside(points, onWire, linear, crossing, wires, floorM, out);
       }
     }
   }
