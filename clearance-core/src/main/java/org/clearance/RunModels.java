@@ -38,6 +38,7 @@ import org.clearance.sag.TemperatureEstimate;
 import org.clearance.survey.GpsTime;
 import org.clearance.survey.Survey;
 import org.clearance.survey.SurveyUnits;
+import org.clearance.wire.Crossing;
 import org.clearance.wire.FittedConductor;
 import org.clearance.wire.SpanWires;
 import org.clearance.wire.StructureChange;
@@ -235,15 +236,19 @@ public final class RunModels {
             ch.fromX(), ch.fromY(), ch.toX(), ch.toY(), ch.evidence()));
       }
     }
+    for (Crossing c : sw.crossings()) {
+      notes.add(crossingNote(c));
+    }
     if (clearance != null && clearance.excludedAsConductor() + clearance.excludedAsStructure()
-        + clearance.excludedAsAirborne() + clearance.excludedAsObject() > 0) {
+        + clearance.excludedAsAirborne() + clearance.excludedAsObject()
+        + clearance.excludedAsCrossing() > 0) {
       notes.add(String.format(Locale.ROOT, "unclassified points set aside: %d on a wire (on a "
           + "fitted curve within its fit tolerance, or on a long linear piece), %d within %.1f m "
           + "of a structure, %d isolated airborne (birds, noise), %d of man-made objects "
-          + "(mast-like or planar, docs/labelling.md)",
+          + "(mast-like or planar, docs/labelling.md), %d of wires crossing the span",
           clearance.excludedAsConductor(), clearance.excludedAsStructure(),
           engine.structureExclusion(), clearance.excludedAsAirborne(),
-          clearance.excludedAsObject()));
+          clearance.excludedAsObject(), clearance.excludedAsCrossing()));
     }
     return new SpanRecord(model.context(), lineName, structure(span.from()), structure(span.to()),
         status, reason, conductors, clearance == null ? List.of() : clearance.minima(),
@@ -251,8 +256,20 @@ public final class RunModels {
         clearance == null ? 0 : clearance.pointsKept(), notes, clearance == null
             ? SpanRecord.SetAsideCounts.NONE : new SpanRecord.SetAsideCounts(
                 clearance.excludedAsConductor(), clearance.excludedAsStructure(),
-                clearance.excludedAsAirborne(), clearance.excludedAsObject()),
-        temperatureRecord(temperature));
+                clearance.excludedAsAirborne(), clearance.excludedAsObject(),
+                clearance.excludedAsCrossing()),
+        temperatureRecord(temperature), sw.crossings());
+  }
+
+  /** A crossing wire as the report's span notes give it (where: crossings.csv). */
+  static String crossingNote(Crossing c) {
+    String below = Double.isFinite(c.separationM())
+        ? String.format(Locale.ROOT, ", %.2f m %s conductor %s", Math.abs(c.separationM()),
+            c.separationM() >= 0 ? "below" : "above", c.conductor())
+        : ", no fitted conductor there to compare";
+    return String.format(Locale.ROOT, "a wire crosses the span %.1f m from %s at %.0f degrees"
+        + "%s (%d points; not a conductor of this span; crossings.csv)", c.stationM(),
+        "the first structure", c.angleDeg(), below, c.points());
   }
 
   /** The span's and its section's survey temperature as the run model stores them. */

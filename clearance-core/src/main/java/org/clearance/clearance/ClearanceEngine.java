@@ -307,12 +307,14 @@ public final class ClearanceEngine {
       long exStructure = 0;
       long exAirborne = 0;
       long exObject = 0;
+      long exCrossing = 0;
       long unread = 0;
       double unreadNearest = Double.POSITIVE_INFINITY;
       java.util.BitSet unreadClasses = new java.util.BitSet(256);
       for (EngineWorker w : workers) {
         exAirborne += w.excludedAirborne[i];
         exObject += w.excludedObject[i];
+        exCrossing += w.excludedCrossing[i];
         unread += w.unreadCount[i];
         unreadNearest = Math.min(unreadNearest, w.unreadNearest[i]);
         unreadClasses.or(w.unreadClasses[i]);
@@ -336,7 +338,7 @@ public final class ClearanceEngine {
       result.add(new SpanClearance(p.model.span().id(), minima, measured, kept, exConductor,
           exStructure, exAirborne, new SpanClearance.Unread(unread,
               unread > 0 ? unreadNearest : Double.NaN, unreadClasses.stream().boxed().toList()),
-          exObject));
+          exObject, exCrossing));
     }
     return result;
   }

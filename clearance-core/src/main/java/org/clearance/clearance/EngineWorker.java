@@ -60,6 +60,7 @@ final class EngineWorker implements Consumer<PointChunk> {
   final long[] excludedStructure;
   final long[] excludedAirborne;
   final long[] excludedObject;
+  final long[] excludedCrossing;
   /** Per span: points of classes not read that may be vegetation within the keep radius, the
    * nearest of them (m) and their classes. */
   final long[] unreadCount;
@@ -103,6 +104,7 @@ final class EngineWorker implements Consumer<PointChunk> {
     excludedStructure = new long[n];
     excludedAirborne = new long[n];
     excludedObject = new long[n];
+    excludedCrossing = new long[n];
     unreadCount = new long[n];
     unreadNearest = new double[n];
     java.util.Arrays.fill(unreadNearest, Double.POSITIVE_INFINITY);
@@ -187,6 +189,7 @@ final class EngineWorker implements Consumer<PointChunk> {
             (switch (reason) {
               case WIRE -> excludedConductor;
               case OBJECT -> excludedObject;
+              case CROSSING -> excludedCrossing;
               default -> excludedAirborne;
             })[sp]++;
           }

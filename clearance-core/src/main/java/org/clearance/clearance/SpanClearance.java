@@ -21,11 +21,21 @@ import java.util.Optional;
  *     ({@link VegetationSelector#unread}) within the keep radius of a conductor
  * @param excludedAsObject points of an unclassified survey inside the measuring box set aside
  *     as parts of man-made objects (the labelling step's evidence, docs/labelling.md)
+ * @param excludedAsCrossing points of an unclassified survey inside the measuring box set aside
+ *     as points of a wire crossing the span (docs/wire-finder.md, "Crossing wires")
  */
 public record SpanClearance(
     String spanId, List<ConditionMinimum> minima, long pointsMeasured, long pointsKept,
     long excludedAsConductor, long excludedAsStructure, long excludedAsAirborne, Unread unread,
-    long excludedAsObject) {
+    long excludedAsObject, long excludedAsCrossing) {
+
+  /** A span's measurement without crossing wires set aside. */
+  public SpanClearance(String spanId, List<ConditionMinimum> minima, long pointsMeasured,
+      long pointsKept, long excludedAsConductor, long excludedAsStructure,
+      long excludedAsAirborne, Unread unread, long excludedAsObject) {
+    this(spanId, minima, pointsMeasured, pointsKept, excludedAsConductor, excludedAsStructure,
+        excludedAsAirborne, unread, excludedAsObject, 0);
+  }
 
   /**
    * Points not read as vegetation that may be vegetation, near the conductors.

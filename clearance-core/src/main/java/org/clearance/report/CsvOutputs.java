@@ -13,6 +13,7 @@ import org.clearance.io.AtomicFiles;
 import org.clearance.io.CsvCells;
 import org.clearance.run.SpanRecord;
 import org.clearance.survey.SurveyUnits;
+import org.clearance.wire.Crossing;
 
 /**
  * Writes {@code worklist.csv} (one line per tree or vegetation patch, {@link WorkListCsv}),
@@ -55,8 +56,19 @@ public final class CsvOutputs {
         u.column("clearance_high"), "uncertainty_dominant", "kind");
   }
 
-  /** The span-table header for an output unit. */
-  public static List<String> spansHeader(ReportOptions options) {
+  /** The span-table header for an output unit and the survey's units. */
+  public static List<String> spansHeader(ReportOptions options, SurveyUnits su) {
+    List<String> h = new ArrayList<>(spansHeader(options));
+    String hu = su.horizontal().symbol();
+    OutputUnit u = new OutputUnit(options.outputUnit());
+    h.addAll(List.of("points_set_aside_crossing", "n_crossings", "crossing_x_" + hu,
+        "crossing_y_" + hu, "crossing_z_" + su.vertical().symbol(),
+        u.column("crossing_separation")));
+    return h;
+  }
+
+  /** The span-table header for an output unit, without the crossing columns. */
+  static List<String> spansHeader(ReportOptions options) {
     OutputUnit u = new OutputUnit(options.outputUnit());
     return List.of("span_id", "line_id", "from_structure", "to_structure", u.column("length"),
         "status", "reason", "n_conductors_fitted", u.column("min_clearance_survey"),
@@ -117,7 +129,8 @@ public final class CsvOutputs {
     OutputUnit u = new OutputUnit(options.outputUnit());
     boolean ruled = run.profile().isPresent();
     StringBuilder b = new StringBuilder();
-    row(b, spansHeader(options));
+    SurveyUnits su = run.model().units();
+    row(b, spansHeader(options, su));
     for (SpanResult r : run.spans()) {
       SpanRecord s = r.span();
       List<String> f = new ArrayList<>();
@@ -153,6 +166,18 @@ public final class CsvOutputs {
       f.add(t(st.source()));
       f.add(temperature(st.sectionC()));
       f.add(temperature(st.sectionSigmaC()));
+      f.add(Long.toString(s.setAside().crossing()));
+      f.add(Integer.toString(s.crossings().size()));
+      Crossing c = s.crossings().stream().filter(k -> Double.isFinite(k.separationM()))
+          .min(java.util.Comparator.comparingDouble(k -> Math.abs(k.separationM())))
+          .orElse(s.crossings().isEmpty() ? null : s.crossings().get(0));
+      f.add(c == null ? "" : OutputUnit.fixed(su.horizontal().fromMetres(c.x()),
+          LENGTH_DECIMALS));
+      f.add(c == null ? "" : OutputUnit.fixed(su.horizontal().fromMetres(c.y()),
+          LENGTH_DECIMALS));
+      f.add(c == null ? "" : OutputUnit.fixed(su.vertical().fromMetres(c.z()),
+          LENGTH_DECIMALS));
+      f.add(u.lengthText(c == null ? Double.NaN : c.separationM()));
       row(b, f);
     }
     return b.toString();

@@ -22,6 +22,7 @@ import org.clearance.clearance.ConditionMinimum;
 import org.clearance.clearance.ConditionSet;
 import org.clearance.clearance.SpanContext;
 import org.clearance.clearance.SpanStatus;
+import org.clearance.wire.Crossing;
 import org.clearance.io.AtomicFiles;
 import org.clearance.io.JsonAt;
 import org.clearance.io.JsonFiles;
@@ -153,7 +154,19 @@ public final class RunModelJson {
     o.put("points_set_aside_wire", s.setAside().wire())
         .put("points_set_aside_structure", s.setAside().structure())
         .put("points_set_aside_airborne", s.setAside().airborne())
-        .put("points_set_aside_object", s.setAside().object());
+        .put("points_set_aside_object", s.setAside().object())
+        .put("points_set_aside_crossing", s.setAside().crossing());
+    ArrayNode crossings = o.putArray("crossings");
+    for (Crossing k : s.crossings()) {
+      ObjectNode n = crossings.addObject();
+      n.set("x", JsonFiles.number(k.x()));
+      n.set("y", JsonFiles.number(k.y()));
+      n.set("z", JsonFiles.number(k.z()));
+      n.set("station_m", JsonFiles.number(k.stationM()));
+      n.set("angle_deg", JsonFiles.number(k.angleDeg()));
+      n.put("points", k.points()).put("conductor", k.conductor());
+      n.set("separation_m", JsonFiles.number(k.separationM()));
+    }
     ArrayNode notes = o.putArray("notes");
     s.notes().forEach(notes::add);
     ObjectNode t = o.putObject("survey_temperature").put("source", s.temperature().source());
@@ -292,11 +305,25 @@ public final class RunModelJson {
           s.integer("points_kept", 0, Long.MAX_VALUE), s.strings("notes"),
           new SpanRecord.SetAsideCounts(count(s, "points_set_aside_wire"),
               count(s, "points_set_aside_structure"), count(s, "points_set_aside_airborne"),
-              count(s, "points_set_aside_object")),
-          temperature(s));
+              count(s, "points_set_aside_object"), count(s, "points_set_aside_crossing")),
+          temperature(s), crossings(s));
     } catch (IllegalArgumentException e) {
       throw s.error(null, e.getMessage() + RERUN);
     }
+  }
+
+  /** The crossing wires; runs written before they were found lack them: none then. */
+  private static List<Crossing> crossings(JsonAt s) {
+    List<Crossing> out = new ArrayList<>();
+    if (!s.has("crossings")) {
+      return out;
+    }
+    for (JsonAt c : s.objects("crossings")) {
+      out.add(new Crossing(c.num("x"), c.num("y"), c.num("z"), c.num("station_m"),
+          c.num("angle_deg"), (int) c.integer("points", 0, Integer.MAX_VALUE),
+          c.str("conductor"), c.num("separation_m")));
+    }
+    return out;
   }
 
   /** The survey temperature; runs written before it existed lack it: none then. */

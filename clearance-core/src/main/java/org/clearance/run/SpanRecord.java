@@ -5,6 +5,7 @@ import java.util.Objects;
 import org.clearance.clearance.ConditionMinimum;
 import org.clearance.clearance.SpanContext;
 import org.clearance.clearance.SpanStatus;
+import org.clearance.wire.Crossing;
 
 /**
  * One span of a run as stored in the run model.
@@ -22,12 +23,22 @@ import org.clearance.clearance.SpanStatus;
  * @param notes further remarks for the report (structure refinements, excluded points ...)
  * @param setAside unclassified points in the span's measuring box set aside as not vegetation
  * @param temperature the survey-time conductor temperature of the span and of its section
+ * @param crossings wires crossing the span (docs/wire-finder.md, "Crossing wires"), by station
  */
 public record SpanRecord(
     SpanContext context, String lineName, StructureRecord from, StructureRecord to,
     SpanStatus status, String reason, List<ConductorRecord> conductors,
     List<ConditionMinimum> minima, long pointsMeasured, long pointsKept, List<String> notes,
-    SetAsideCounts setAside, SurveyTemperature temperature) {
+    SetAsideCounts setAside, SurveyTemperature temperature, List<Crossing> crossings) {
+
+  /** A span without crossing wires. */
+  public SpanRecord(SpanContext context, String lineName, StructureRecord from,
+      StructureRecord to, SpanStatus status, String reason, List<ConductorRecord> conductors,
+      List<ConditionMinimum> minima, long pointsMeasured, long pointsKept, List<String> notes,
+      SetAsideCounts setAside, SurveyTemperature temperature) {
+    this(context, lineName, from, to, status, reason, conductors, minima, pointsMeasured,
+        pointsKept, notes, setAside, temperature, List.of());
+  }
 
   /**
    * The conductor temperature during the survey (docs/clearance.md, "Survey temperature"): the
@@ -68,10 +79,17 @@ public record SpanRecord(
    * @param structure on a structure (within the structure radius or on its cross arms)
    * @param airborne isolated airborne points (birds, high noise)
    * @param object parts of man-made objects (buildings, cranes, masts, fences, vehicles)
+   * @param crossing points of wires crossing the span (service drops, lines crossing it)
    */
-  public record SetAsideCounts(long wire, long structure, long airborne, long object) {
+  public record SetAsideCounts(long wire, long structure, long airborne, long object,
+      long crossing) {
     /** Nothing set aside. */
-    public static final SetAsideCounts NONE = new SetAsideCounts(0, 0, 0, 0);
+    public static final SetAsideCounts NONE = new SetAsideCounts(0, 0, 0, 0, 0);
+
+    /** Counts without crossing wires. */
+    public SetAsideCounts(long wire, long structure, long airborne, long object) {
+      this(wire, structure, airborne, object, 0);
+    }
 
     /** Counts without man-made objects. */
     public SetAsideCounts(long wire, long structure, long airborne) {
@@ -96,6 +114,7 @@ public record SpanRecord(
     notes = List.copyOf(notes);
     Objects.requireNonNull(setAside, "setAside");
     Objects.requireNonNull(temperature, "temperature");
+    crossings = List.copyOf(crossings);
   }
 
   /** The span id. */

@@ -129,32 +129,35 @@ final class PointEvidence {
    * @param p the span's candidates
    * @param on this span's wire points from {@link #onCurve}
    * @param linear per candidate, linear evidence
+   * @param crossing per candidate, true for a point of a wire crossing the span ({@link
+   *     CrossingFinder}): set aside as such unless vegetation touches it, as a wire point
    * @param wires every span's wire points so far (to know a neighbour's wire)
    * @param floorM the span's lowest candidate height above ground, m
    * @param out where the points set aside go
    */
-  static void setAside(SpanPoints p, boolean[] on, boolean[] linear, SetAside wires,
-      double floorM, SetAside out) {
-    setAside(p, on, linear, wires, floorM, Double.NaN, Double.NaN, out);
+  static void setAside(SpanPoints p, boolean[] on, boolean[] linear, boolean[] crossing,
+      SetAside wires, double floorM, SetAside out) {
+    setAside(p, on, linear, crossing, wires, floorM, Double.NaN, Double.NaN, out);
   }
 
   /**
-   * As {@link #setAside(SpanPoints, boolean[], boolean[], SetAside, double, SetAside)}, on a pole
-   * line: the candidates within {@code poleRadiusM} in plan of the span's structures (station 0
-   * and {@code lengthM}, offset 0) join no group. The clearance engine never measures them (its
-   * pole exclusion, docs/clearance.md), and through them the pieces of the wires tied to the
-   * pole would join the pole into one group that is no wire.
+   * As {@link #setAside(SpanPoints, boolean[], boolean[], boolean[], SetAside, double,
+   * SetAside)}, on a pole line: the candidates within {@code poleRadiusM} in plan of the span's
+   * structures (station 0 and {@code lengthM}, offset 0) join no group. The clearance engine never
+   * measures them (its pole exclusion, docs/clearance.md), and through them the pieces of the
+   * wires tied to the pole would join the pole into one group that is no wire.
    *
    * @param lengthM the span's length, m (the second structure's station)
    * @param poleRadiusM plan radius kept out of the groups around each structure, m, or NaN for
    *     none (lattice towers: their exclusion is wider and their members are no wire)
    */
-  static void setAside(SpanPoints p, boolean[] on, boolean[] linear, SetAside wires,
-      double floorM, double lengthM, double poleRadiusM, SetAside out) {
+  static void setAside(SpanPoints p, boolean[] on, boolean[] linear, boolean[] crossing,
+      SetAside wires, double floorM, double lengthM, double poleRadiusM, SetAside out) {
     int n = p.size();
     boolean[] wire = new boolean[n];
     for (int i = 0; i < n; i++) {
-      wire[i] = on[i] || p.labelled(i) || wires.reason(p.key(i)) == SetAside.Reason.WIRE
+      wire[i] = on[i] || crossing[i] || p.labelled(i)
+          || wires.reason(p.key(i)) == SetAside.Reason.WIRE
           || Math.hypot(p.s(i), p.e(i)) < poleRadiusM
           || Math.hypot(p.s(i) - lengthM, p.e(i)) < poleRadiusM;
     }
@@ -215,12 +218,16 @@ final class PointEvidence {
     }
     IntList near = new IntList();
     for (int i = 0; i < n; i++) {
-      if (!on[i]) {
+      if (!on[i] && !(crossing[i] && !p.labelled(i))) {
         continue;
       }
-      boolean touched = touched(grid, i, vegetation, near);
-      if (!touched) {
+      if (touched(grid, i, vegetation, near)) {
+        continue;
+      }
+      if (on[i]) {
         out.addWire(p.key(i));
+      } else {
+        out.addCrossing(p.key(i));
       }
     }
   }

@@ -1,118 +1,143 @@
 package org.clearance.wire;
 
-import java.util.Arrays;
 import java.util.function.DoubleUnaryOperator;
 
 /**
  * The common sag shape of a span's closely spaced wires, as a reference profile for clustering
- * (package-private; issue 15). The wires of one distribution span hang nearly parallel (same
- * span, similar tension): a parabola in station fitted to all seed points through the middle of
- * the framing follows each of them up to a constant. Taking elevations relative to it keeps the
- * steep ends of stacked conductors from linking diagonally to the conductor below, which a
- * station-stretched metric otherwise does where a wire drops by the stack spacing within the
- * along-span reach.
+ * and growth (package-private; issue 15). The wires of one distribution span hang nearly
+ * parallel (same span, similar tension): one parabola z = z0 + d t + 4 f (t^2 - t) in t = s / L,
+ * with d the rise from one structure to the other and f the mid-span sag, follows each of them
+ * up to a constant. Taken relative to it, each wire is a nearly level line, so a short piece's
+ * straight extension stays on its own wire instead of reaching the one below at a steep end.
  *
- * <p>Least squares (a parabola is the catenary to second order; methods.md 1.2), refitted
- * {@link #PASSES} times without the points beyond {@link #TRIM_SIGMAS} robust standard
- * deviations (1.4826 MAD) of the residuals, at least {@link #MIN_CUT_M}: stray vegetation seeds
- * do not bend it. A fit that does not sag (curvature below zero) or has too few points leaves
- * elevations as they are.
+ * <p>The shape is the one under which the seeds' elevations gather most tightly: a vote over
+ * (d, f) (the Hough transform's idea applied to the shape's two parameters, methods.md 1.4)
+ * scoring each shape by the sum of squared counts of a linearly binned histogram of z minus the
+ * shape (a sharper histogram scores higher; every wire of a stack becomes one peak under the
+ * right shape, and vegetation spreads whatever the shape). A coarse grid over the range the
+ * seeds allow, then a fine grid around the best. A least-squares parabola through all seeds, as
+ * used before, is pulled by vegetation and crossing wires (seed 35, vertical framing: 2.6 m of
+ * sag for a true 1.4 m).
  */
 final class SagReference {
 
-  /** Refits after trimming. */
-  static final int PASSES = 3;
-  /** Residual cut in robust standard deviations. */
-  static final double TRIM_SIGMAS = 3.0;
-  /** Smallest residual cut, m: the height of a distribution framing with its neutral and
-   * secondaries (common practice, no source). */
-  static final double MIN_CUT_M = 2.5;
-  /** Fewest seeds for a fit. */
+  /** Fewest seeds for a shape. */
   static final int MIN_POINTS = 20;
+  /** Coarse grid step and histogram bin, m: half of the closest stacks' 0.6 m spacing. */
+  static final double COARSE_STEP_M = 0.25;
+  /** Fine grid step, m, and its histogram bin, m: about the 2-4 cm noise of a wire point. */
+  static final double FINE_STEP_M = 0.02;
+  static final double FINE_BIN_M = 0.05;
+  /** Half width of the fine search around the coarse best, m: a little over one coarse step. */
+  static final double FINE_REACH_M = 0.3;
+  /** Most sag and rise considered, m: a 200 m span at c = 250 m sags 20 m (common practice, no
+   * source); keeps the grid bounded when stray seeds stand far apart in elevation. */
+  static final double MAX_EXTENT_M = 25;
+  /** Share of the span at either end whose seeds bound the rise. */
+  static final double END_SHARE = 0.15;
 
   private SagReference() {}
 
-  /** The reference profile of the seeds, or zero when none can be fitted. */
+  /** The reference profile of the seeds (elevation at a station, m), or zero when too few. */
   static DoubleUnaryOperator of(SpanPoints p, int[] seeds, double lengthM) {
     if (seeds.length < MIN_POINTS || !(lengthM > 0)) {
       return s -> 0;
     }
-    boolean[] use = new boolean[seeds.length];
-    Arrays.fill(use, true);
-    double[] coef = null;
-    for (int pass = 0; pass <= PASSES; pass++) {
-      double[] c = fit(p, seeds, use, lengthM);
-      if (c == null) {
-        break;
-      }
-      coef = c;
-      double[] res = new double[seeds.length];
-      for (int k = 0; k < seeds.length; k++) {
-        res[k] = Math.abs(p.z(seeds[k]) - eval(c, p.s(seeds[k]) / lengthM));
-      }
-      double[] sorted = res.clone();
-      Arrays.sort(sorted);
-      double cut = Math.max(MIN_CUT_M, TRIM_SIGMAS * 1.4826 * sorted[sorted.length / 2]);
-      for (int k = 0; k < seeds.length; k++) {
-        use[k] = res[k] <= cut;
-      }
+    int n = seeds.length;
+    double[] t = new double[n];
+    double[] z = new double[n];
+    double zLo = Double.POSITIVE_INFINITY;
+    double zHi = Double.NEGATIVE_INFINITY;
+    for (int k = 0; k < n; k++) {
+      t[k] = p.s(seeds[k]) / lengthM;
+      z[k] = p.z(seeds[k]);
+      zLo = Math.min(zLo, z[k]);
+      zHi = Math.max(zHi, z[k]);
     }
-    if (coef == null || coef[2] < 0) {
-      return s -> 0;
-    }
-    double[] c = coef;
-    return s -> eval(c, s / lengthM);
+    double range = Math.min(MAX_EXTENT_M, zHi - zLo);
+    double[] rise = riseBounds(t, z, range);
+    double[] best = search(t, z, rise[0], rise[1], 0, range + COARSE_STEP_M, COARSE_STEP_M,
+        COARSE_STEP_M);
+    best = search(t, z, best[0] - FINE_REACH_M, best[0] + FINE_REACH_M,
+        Math.max(0, best[1] - FINE_REACH_M), best[1] + FINE_REACH_M, FINE_STEP_M, FINE_BIN_M);
+    double d = best[0];
+    double f = best[1];
+    return s -> shape(d, f, s / lengthM);
   }
 
-  private static double eval(double[] c, double t) {
-    return c[0] + t * (c[1] + t * c[2]);
+  /** The shape's elevation at t, up to a constant, m. */
+  static double shape(double rise, double sag, double t) {
+    return rise * t + 4 * sag * (t * t - t);
   }
 
-  /** Least squares z = c0 + c1 t + c2 t^2 over the used seeds, t = s / L; null if singular. */
-  private static double[] fit(SpanPoints p, int[] seeds, boolean[] use, double lengthM) {
-    double[][] a = new double[3][4];
-    int n = 0;
-    for (int k = 0; k < seeds.length; k++) {
-      if (!use[k]) {
-        continue;
-      }
-      double t = p.s(seeds[k]) / lengthM;
-      double[] row = {1, t, t * t};
-      double z = p.z(seeds[k]);
-      for (int i = 0; i < 3; i++) {
-        for (int j = 0; j < 3; j++) {
-          a[i][j] += row[i] * row[j];
-        }
-        a[i][3] += row[i] * z;
-      }
-      n++;
-    }
-    if (n < MIN_POINTS) {
-      return null;
-    }
-    // Gauss-Jordan with partial pivoting on the 3 x 3 normal equations
-    for (int col = 0; col < 3; col++) {
-      int piv = col;
-      for (int r = col + 1; r < 3; r++) {
-        if (Math.abs(a[r][col]) > Math.abs(a[piv][col])) {
-          piv = r;
-        }
-      }
-      double[] tmp = a[col];
-      a[col] = a[piv];
-      a[piv] = tmp;
-      if (Math.abs(a[col][col]) < 1e-12) {
-        return null;
-      }
-      for (int r = 0; r < 3; r++) {
-        if (r != col) {
-          double f = a[r][col] / a[col][col];
-          for (int j = col; j < 4; j++) {
-            a[r][j] -= f * a[col][j];
-          }
-        }
+  /** Bounds of the rise from the seeds near either end; the full range when an end has none. */
+  private static double[] riseBounds(double[] t, double[] z, double range) {
+    double aLo = Double.POSITIVE_INFINITY;
+    double aHi = Double.NEGATIVE_INFINITY;
+    double bLo = Double.POSITIVE_INFINITY;
+    double bHi = Double.NEGATIVE_INFINITY;
+    for (int k = 0; k < t.length; k++) {
+      if (t[k] <= END_SHARE) {
+        aLo = Math.min(aLo, z[k]);
+        aHi = Math.max(aHi, z[k]);
+      } else if (t[k] >= 1 - END_SHARE) {
+        bLo = Math.min(bLo, z[k]);
+        bHi = Math.max(bHi, z[k]);
       }
     }
-    return new double[] {a[0][3] / a[0][0], a[1][3] / a[1][1], a[2][3] / a[2][2]};
+    if (!(aHi >= aLo && bHi >= bLo)) {
+      return new double[] {-range, range};
+    }
+    return new double[] {Math.max(-MAX_EXTENT_M, bLo - aHi - COARSE_STEP_M),
+        Math.min(MAX_EXTENT_M, bHi - aLo + COARSE_STEP_M)};
+  }
+
+  /** The (rise, sag) on the grid whose residual histogram is sharpest. */
+  private static double[] search(double[] t, double[] z, double dLo, double dHi, double fLo,
+      double fHi, double step, double bin) {
+    int nd = (int) Math.ceil((dHi - dLo) / step) + 1;
+    int nf = (int) Math.ceil((fHi - fLo) / step) + 1;
+    double[] r = new double[t.length];
+    double bestScore = -1;
+    double[] best = {0, 0};
+    for (int i = 0; i < nd; i++) {
+      double d = dLo + i * step;
+      for (int j = 0; j < nf; j++) {
+        double f = fLo + j * step;
+        for (int k = 0; k < t.length; k++) {
+          r[k] = z[k] - shape(d, f, t[k]);
+        }
+        double score = sharpness(r, bin);
+        if (score > bestScore) {
+          bestScore = score;
+          best = new double[] {d, f};
+        }
+      }
+    }
+    return best;
+  }
+
+  /** Sum of squared counts of the linearly binned histogram of r (bin width in m). */
+  static double sharpness(double[] r, double bin) {
+    double lo = Double.POSITIVE_INFINITY;
+    double hi = Double.NEGATIVE_INFINITY;
+    for (double v : r) {
+      lo = Math.min(lo, v);
+      hi = Math.max(hi, v);
+    }
+    int bins = (int) ((hi - lo) / bin) + 2;
+    double[] h = new double[bins];
+    for (double v : r) {
+      double x = (v - lo) / bin;
+      int b = (int) x;
+      double w = x - b;
+      h[b] += 1 - w;
+      h[b + 1] += w;
+    }
+    double sum = 0;
+    for (double c : h) {
+      sum += c * c;
+    }
+    return sum;
   }
 }

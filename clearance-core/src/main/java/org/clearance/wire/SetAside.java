@@ -27,12 +27,16 @@ public final class SetAside {
     AIRBORNE,
     /** A point of a man-made object (building, crane, mast, fence, vehicle) shown by the
      * labelling step's evidence ({@code org.clearance.label.ObjectLabeller}). */
-    OBJECT
+    OBJECT,
+    /** A point of a wire crossing the span (a service drop, a line crossing under or over it;
+     * {@link Crossing}). */
+    CROSSING
   }
 
   private final LongHashSet wire = new LongHashSet();
   private final LongHashSet airborne = new LongHashSet();
   private final LongHashSet object = new LongHashSet();
+  private final LongHashSet crossing = new LongHashSet();
 
   /** An empty set: nothing is set aside. */
   public static SetAside none() {
@@ -51,7 +55,15 @@ public final class SetAside {
 
   /** A set of the given keys ({@link #key}): wire points, then isolated airborne points. */
   public static SetAside of(long[] wireKeys, long[] airborneKeys) {
+    return of(wireKeys, airborneKeys, new long[0]);
+  }
+
+  /** A set of the given keys: wire points, isolated airborne points, crossing wires' points. */
+  public static SetAside of(long[] wireKeys, long[] airborneKeys, long[] crossingKeys) {
     SetAside s = new SetAside();
+    for (long k : crossingKeys) {
+      s.addCrossing(k);
+    }
     for (long k : wireKeys) {
       s.addWire(k);
     }
@@ -69,6 +81,10 @@ public final class SetAside {
     airborne.add(key);
   }
 
+  synchronized void addCrossing(long key) {
+    crossing.add(key);
+  }
+
   /** Adds a point of a man-made object: called by the labelling step before the engine reads
    * the set. */
   public synchronized void addObject(long key) {
@@ -83,6 +99,9 @@ public final class SetAside {
     if (airborne.contains(key)) {
       return Reason.AIRBORNE;
     }
+    if (crossing.contains(key)) {
+      return Reason.CROSSING;
+    }
     return object.contains(key) ? Reason.OBJECT : Reason.NONE;
   }
 
@@ -94,6 +113,16 @@ public final class SetAside {
   /** The keys of the isolated airborne points, in no particular order. */
   public synchronized long[] airborneKeys() {
     return airborne.toArray();
+  }
+
+  /** The keys of the points of crossing wires, in no particular order. */
+  public synchronized long[] crossingKeys() {
+    return crossing.toArray();
+  }
+
+  /** Points set aside as points of crossing wires. */
+  public long crossingCount() {
+    return crossing.size();
   }
 
   /** Points set aside as wire. */

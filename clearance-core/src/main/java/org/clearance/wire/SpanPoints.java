@@ -128,6 +128,29 @@ final class SpanPoints {
     k = k2;
   }
 
+  /**
+   * A copy whose elevations are taken relative to a profile along the span: z - reference(s),
+   * m. Same points in the same order (indices carry over), same keys; its standing grid is
+   * empty. Used to grow closely spaced wires with their common sag shape taken out
+   * ({@link SagReference}).
+   *
+   * @param reference elevation of the profile at a station, m (station in m)
+   */
+  SpanPoints relativeTo(java.util.function.DoubleUnaryOperator reference) {
+    SpanPoints out = new SpanPoints(0);
+    out.grow(Math.max(INITIAL, n));
+    for (int i = 0; i < n; i++) {
+      out.s[i] = s[i];
+      out.e[i] = e[i];
+      out.z[i] = (float) (z(i) - reference.applyAsDouble(s[i]));
+      out.h[i] = h[i];
+      out.c[i] = c[i];
+      out.k[i] = k[i];
+    }
+    out.n = n;
+    return out;
+  }
+
   /** The highest non-ground point that is not a candidate, per plan cell (mutable). */
   StandingGrid standing() {
     return standing;

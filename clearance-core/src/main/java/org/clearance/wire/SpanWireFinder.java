@@ -5,6 +5,7 @@ import java.util.Comparator;
 import java.util.List;
 import java.util.Locale;
 import java.util.Optional;
+import java.util.function.DoubleUnaryOperator;
 import org.clearance.line.ConductorPosition;
 import org.clearance.line.LineSpec;
 import org.clearance.line.Span;
@@ -27,6 +28,13 @@ final class SpanWireFinder {
   /** Least share of the span a conductor must span between its strain assemblies; a shorter
    * one means the strain length does not fit this span, and the structures are used. */
   static final double MIN_CONDUCTOR_SHARE = 0.5;
+
+  /**
+   * Closely spaced wires: a piece running along less than this share of the span is placed in
+   * the stack by its level under the span's common sag shape, not by its own curve's ends (issue
+   * 15: a 24 m piece of C in a 118 m vertical-stack span, extrapolated, took B's position).
+   */
+  static final double SHORT_PIECE_SHARE = 0.5;
 
   private final WireFinderOptions options;
 
@@ -53,8 +61,15 @@ final class SpanWireFinder {
    * @param wires the span's conductors
    * @param onWire per candidate, true when it lies on a wire ({@link PointEvidence#onCurve})
    * @param linear per candidate, linear evidence
+   * @param crossing per candidate, true when it is a point of a wire crossing the span
    */
-  record Found(SpanWires wires, boolean[] onWire, boolean[] linear) {}
+  record Found(SpanWires wires, boolean[] onWire, boolean[] linear, boolean[] crossing) {
+
+    /** Without crossing wires. */
+    Found(SpanWires wires, boolean[] onWire, boolean[] linear) {
+      this(wires, onWire, linear, new boolean[onWire.length]);
+    }
+  }
 
   /** As {@link #find}, with the evidence of which candidates are wire points. */
   Found findWithEvidence(SpanPoints p, long seen, Span span, LineSpec spec, double groundA,
@@ -86,13 +101,18 @@ final class SpanWireFinder {
       }
     }
     WireFinderOptions.Growth g = options.growth();
+    // closely spaced wires are clustered and grown with the span's common sag shape taken out
+    DoubleUnaryOperator shape = close == null ? null : SagReference.of(p, seeds.toArray(),
+        length);
+    SpanPoints q = close == null ? p : p.relativeTo(shape);
     List<int[]> clusters = close == null
         ? WireClusters.of(p, seeds.toArray(), g.stationStretch(), g.clusterRadiusM(),
             g.clusterMinPoints())
-        : WireClusters.of(p, seeds.toArray(), close.stationStretch(), close.clusterRadiusM(),
-            g.clusterMinPoints(), SagReference.of(p, seeds.toArray(), length));
+        : WireClusters.of(q, seeds.toArray(), close.stationStretch(), close.clusterRadiusM(),
+            g.clusterMinPoints());
     double[] tube = close == null ? tube(spec) : new double[] {close.tubeM(), close.tubeM()};
-    List<int[]> wires = WireGrowth.grow(p, clusters, 0, length, g, tube[0], tube[1]);
+    List<int[]> wires = WireGrowth.grow(q, clusters, 0, length, g, tube[0], tube[1],
+        close != null);
     List<ConductorFit.Result> fits = new ArrayList<>();
     List<ConductorFit.Result> failed = new ArrayList<>();
     for (int[] w : wires) {
@@ -105,7 +125,7 @@ final class SpanWireFinder {
         .toList();
     List<PositionMatcher.Wire> summaries = new ArrayList<>();
     for (ConductorFit.Result r : fits) {
-      summaries.add(summary(p, r, span));
+      summaries.add(summary(p, r, span, shape));
     }
     int[] slotOf = PositionMatcher.match(summaries, slots, groundA, groundB);
     List<ConductorFit.Result> finals = new ArrayList<>(failed);
@@ -141,8 +161,17 @@ final class SpanWireFinder {
     for (ConductorFit.Result r : failed) {
       naming.addFailedExtra(roleHint(p, r.members()).orElse(ConductorPosition.Role.PHASE), r);
     }
-    return new Found(naming.spanWires(p.size(), labelled), PointEvidence.onCurve(p, finals,
-        linear), linear);
+    boolean[] onWire = PointEvidence.onCurve(p, finals, linear);
+    boolean[] taken = onWire.clone();
+    for (int[] w : wires) {
+      for (int i : w) {
+        taken[i] = true;
+      }
+    }
+    SpanWires found = naming.spanWires(p.size(), labelled);
+    CrossingFinder.Found crossing = CrossingFinder.find(p, taken, span, found.conductors());
+    return new Found(found.withCrossings(crossing.crossings()), onWire, linear,
+        crossing.member());
   }
 
   /**
@@ -189,16 +218,37 @@ final class SpanWireFinder {
     return b.toString();
   }
 
-  private static PositionMatcher.Wire summary(SpanPoints p, ConductorFit.Result r, Span span) {
+  /**
+   * The wire as the matcher sees it.
+   *
+   * @param shape the span's common sag shape ({@link SagReference}), or null (wide spacing)
+   */
+  private static PositionMatcher.Wire summary(SpanPoints p, ConductorFit.Result r, Span span,
+      DoubleUnaryOperator shape) {
     ConductorCurve c = r.curve().orElseThrow();
     double eA = span.frame().offset(c.x(0), c.y(0));
     double eB = span.frame().offset(c.x(c.length()), c.y(c.length()));
     int[] m = r.members();
-    double reach = NEAR_END_SHARE * span.lengthM();
+    double length = span.lengthM();
+    double reach = NEAR_END_SHARE * length;
     boolean nearA = p.s(m[0]) <= reach;
-    boolean nearB = p.s(m[m.length - 1]) >= span.lengthM() - reach;
-    return new PositionMatcher.Wire(eA, eB, c.zA(), c.zB(), roleHint(p, m),
-        nearA || !nearB, nearB || !nearA);
+    boolean nearB = p.s(m[m.length - 1]) >= length - reach;
+    double zA = c.zA();
+    double zB = c.zB();
+    if (shape != null && p.s(m[m.length - 1]) - p.s(m[0]) < SHORT_PIECE_SHARE * length) {
+      // a short piece's own curve extrapolates its sag poorly: carry its level in the stack
+      // to the structures along the span's common sag shape instead
+      double[] level = new double[m.length];
+      for (int k = 0; k < m.length; k++) {
+        level[k] = p.z(m[k]) - shape.applyAsDouble(p.s(m[k]));
+      }
+      java.util.Arrays.sort(level);
+      double median = level[m.length / 2];
+      zA = shape.applyAsDouble(0) + median;
+      zB = shape.applyAsDouble(length) + median;
+    }
+    return new PositionMatcher.Wire(eA, eB, zA, zB, roleHint(p, m), nearA || !nearB,
+        nearB || !nearA);
   }
 
   /** The role the members' labels show, when at least half of them carry one. */

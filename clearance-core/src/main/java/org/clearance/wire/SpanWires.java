@@ -20,6 +20,8 @@ import org.clearance.line.Span;
  * @param candidatePoints survey points kept in the span's corridor as wire candidates
  * @param labelled true when the span's wires were seeded from ASPRS class 13/14 labels, false
  *     when found from geometric evidence alone
+ * @param crossings wires crossing the span (service drops, lines crossing under or over it),
+ *     by station: not conductors of the span
  */
 public record SpanWires(
     Span span,
@@ -27,9 +29,17 @@ public record SpanWires(
     Optional<String> reason,
     List<FittedConductor> conductors,
     int candidatePoints,
-    boolean labelled) {
+    boolean labelled,
+    List<Crossing> crossings) {
+
+  /** A span without crossing wires. */
+  public SpanWires(Span span, WireStatus status, Optional<String> reason,
+      List<FittedConductor> conductors, int candidatePoints, boolean labelled) {
+    this(span, status, reason, conductors, candidatePoints, labelled, List.of());
+  }
 
   public SpanWires {
+    crossings = List.copyOf(crossings);
     Objects.requireNonNull(span, "span");
     Objects.requireNonNull(status, "status");
     Objects.requireNonNull(reason, "reason");
@@ -38,6 +48,11 @@ public record SpanWires(
       throw new IllegalArgumentException("a reason is given exactly when not assessed: "
           + span.id());
     }
+  }
+
+  /** The same span with these crossing wires. */
+  public SpanWires withCrossings(List<Crossing> found) {
+    return new SpanWires(span, status, reason, conductors, candidatePoints, labelled, found);
   }
 
   /** The conductors with status fitted. */

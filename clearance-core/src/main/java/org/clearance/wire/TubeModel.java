@@ -76,6 +76,16 @@ final class TubeModel {
    * @param tolLateral tube half-width across, m; tolVertical tube half-height, m
    */
   static TubeModel fit(SpanPoints p, IntList members, double tolLateral, double tolVertical) {
+    return fit(p, members, tolLateral, tolVertical, false);
+  }
+
+  /**
+   * As {@link #fit(SpanPoints, IntList, double, double)}; with {@code relative} the elevations
+   * are taken relative to the span's common sag shape ({@link SagReference}), so what is left
+   * of a wire's curvature may bend either way and a parabola of either sign is accepted.
+   */
+  static TubeModel fit(SpanPoints p, IntList members, double tolLateral, double tolVertical,
+      boolean relative) {
     int n = members.size();
     if (n < 2) {
       return null;
@@ -99,12 +109,13 @@ final class TubeModel {
     TubeModel m = null;
     for (int round = 0; round <= CLIP_ROUNDS; round++) {
       double[] b = wantCurve ? polyFit(p, members, use, sc, 2, false) : null;
-      boolean curved = b != null && b[2] > 0 && 1 / (2 * b[2]) >= MIN_C;
+      boolean curved = b != null && (relative || b[2] > 0)
+          && 1 / (2 * Math.abs(b[2])) >= MIN_C;
       if (!curved) {
         b = polyFit(p, members, use, sc, 1, false);
       }
       double[] a = curved ? polyFit(p, members, use, sc, 2, true) : null;
-      if (a == null || !(Math.abs(a[2]) <= b[2])) {
+      if (a == null || !(Math.abs(a[2]) <= Math.abs(b[2]))) {
         a = polyFit(p, members, use, sc, 1, true);
       }
       if (a == null || b == null) {

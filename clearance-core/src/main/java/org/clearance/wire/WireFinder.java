@@ -135,6 +135,7 @@ public final class WireFinder {
     private final SpanPoints points;
     private final boolean[] onWire;
     private final boolean[] linear;
+    private final boolean[] crossing;
     private final double floorM;
     private final double poleRadiusM;
 
@@ -143,6 +144,7 @@ public final class WireFinder {
       this.points = points;
       this.onWire = found.onWire();
       this.linear = found.linear();
+      this.crossing = found.crossing();
       this.floorM = floorM;
       this.poleRadiusM = poleRadiusM;
     }
@@ -177,8 +179,8 @@ public final class WireFinder {
      */
     public void setAside(SetAside wires, SetAside out) {
       if (onWire.length == points.size()) {
-        PointEvidence.setAside(points, onWire, linear, wires, floorM, wires().span().lengthM(),
-            poleRadiusM, out);
+        PointEvidence.setAside(points, onWire, linear, crossing, wires, floorM,
+            wires().span().lengthM(), poleRadiusM, out);
       }
     }
   }

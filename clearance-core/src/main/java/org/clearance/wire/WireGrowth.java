@@ -31,6 +31,10 @@ final class WireGrowth {
    */
   static final double SPREAD_SHARE = 0.5;
 
+  /** Longest break between neighbouring points that still counts as one stretch of wire, m:
+   * the break the coverage figure allows (docs/wire-finder.md, conductors.csv). */
+  static final double LINK_GAP_M = 5;
+
   private WireGrowth() {}
 
   /**
@@ -45,6 +49,18 @@ final class WireGrowth {
    */
   static List<int[]> grow(SpanPoints p, List<int[]> clusters, double sLo, double sHi,
       WireFinderOptions.Growth growth, double tolLateral, double tolVertical) {
+    return grow(p, clusters, sLo, sHi, growth, tolLateral, tolVertical, false);
+  }
+
+  /**
+   * As {@link #grow(SpanPoints, List, double, double, WireFinderOptions.Growth, double,
+   * double)}; with {@code relative} the points' elevations are relative to the span's common
+   * sag shape ({@link SagReference}, {@link SpanPoints#relativeTo}) and the local models may
+   * bend either way ({@link TubeModel#fit(SpanPoints, IntList, double, double, boolean)}).
+   */
+  static List<int[]> grow(SpanPoints p, List<int[]> clusters, double sLo, double sHi,
+      WireFinderOptions.Growth growth, double tolLateral, double tolVertical,
+      boolean relative) {
     int n = p.size();
     int[] owner = new int[n];
     java.util.Arrays.fill(owner, -1);
@@ -63,8 +79,8 @@ final class WireGrowth {
       if (members.size() < growth.clusterMinPoints()) {
         continue;
       }
-      extend(p, members, in, owner, sLo, sHi, growth, tolLateral, tolVertical);
-      int[] wire = verify(p, members, growth, maxSlope, tolLateral, tolVertical);
+      extend(p, members, in, owner, sLo, sHi, growth, tolLateral, tolVertical, relative);
+      int[] wire = verify(p, members, growth, maxSlope, tolLateral, tolVertical, relative);
       if (wire != null) {
         for (int i : wire) {
           owner[i] = wires.size();
@@ -77,11 +93,11 @@ final class WireGrowth {
 
   private static void extend(SpanPoints p, IntList members, boolean[] in, int[] owner,
       double sLo, double sHi, WireFinderOptions.Growth growth, double tolLateral,
-      double tolVertical) {
+      double tolVertical, boolean relative) {
     double step = growth.stepM();
     boolean swept = false;
     for (int round = 0; round < MAX_ROUNDS; round++) {
-      TubeModel m = TubeModel.fit(p, members, tolLateral, tolVertical);
+      TubeModel m = TubeModel.fit(p, members, tolLateral, tolVertical, relative);
       if (m == null) {
         return;
       }
@@ -122,10 +138,26 @@ final class WireGrowth {
     return added;
   }
 
+  /** Length along the span covered by the points without a break longer than
+   * {@link #LINK_GAP_M}, m (points in any order). */
+  static double linkedLength(SpanPoints p, IntList members) {
+    double[] st = new double[members.size()];
+    for (int k = 0; k < st.length; k++) {
+      st[k] = p.s(members.get(k));
+    }
+    java.util.Arrays.sort(st);
+    double sum = 0;
+    for (int k = 1; k < st.length; k++) {
+      double d = st[k] - st[k - 1];
+      sum += d <= LINK_GAP_M ? d : 0;
+    }
+    return sum;
+  }
+
   /** The members inside the final tube, or null when they do not make a wire. */
   private static int[] verify(SpanPoints p, IntList members, WireFinderOptions.Growth growth,
-      double maxSlope, double tolLateral, double tolVertical) {
-    TubeModel m = TubeModel.fit(p, members, tolLateral, tolVertical);
+      double maxSlope, double tolLateral, double tolVertical, boolean relative) {
+    TubeModel m = TubeModel.fit(p, members, tolLateral, tolVertical, relative);
     if (m == null || m.hi - m.lo < growth.minLengthM() || Math.abs(m.planSlope()) > maxSlope) {
       return null;
     }
@@ -141,6 +173,12 @@ final class WireGrowth {
       }
     }
     if (kept.size() < 2 * growth.clusterMinPoints() || hi - lo < growth.minLengthM()) {
+      return null;
+    }
+    if (relative && linkedLength(p, kept) < growth.minLengthM()) {
+      // closely spaced wires: clumps of a few crowns strung along a straight extension over
+      // long gaps are no wire (issue 15, vertical framing, seed 34 ground-only: 14 points of
+      // three crowns over 54 m took the neutral's position)
       return null;
     }
     double[] lat = new double[kept.size()];

@@ -28,7 +28,7 @@ class PointEvidenceTest {
     p.sort();
     boolean[] none = new boolean[p.size()];
     SetAside out = SetAside.none();
-    PointEvidence.setAside(p, none, none, SetAside.none(), FLOOR_M, out);
+    PointEvidence.setAside(p, none, none, none, SetAside.none(), FLOOR_M, out);
     return out;
   }
 

@@ -47,8 +47,6 @@ class FeederAccuracyTest {
   static final double SAG_TOL_M = 0.05;
   static final double SAG_SHARE = 0.95;
   static final double FIND_COVERAGE = 0.30;
-  /** Floor for the framings that do not yet meet the targets (see below). */
-  static final double FLOOR_SHARE = 0.90;
   /** Truth coverage from which a conductor must also pass every quality threshold: a margin
    * over the 30 % threshold for the difference between the truth's gap-free share and the
    * finder's measured coverage, as in WireAccuracyTest (common practice, no source). */
@@ -79,17 +77,28 @@ class FeederAccuracyTest {
   }
 
   /**
-   * Single runs of the vertical and triangular framings without wire labels may fall below the
-   * issue's targets (docs/wire-finder.md: summed over the 12-span runs of seeds 31-36 every
-   * framing and mode meets them, but single runs reach 42 of 44, and an 8-span vertical
-   * ground-only run of seed 31 25 of 29); these floors pin what is reached (90 % found and
-   * matched, 90 % of the sags within 5 cm) against regressions.
+   * Vertical (stacked) framing in every classification mode, 12 spans, metres and US survey
+   * feet: single runs meet the issue's targets (docs/wire-finder.md, "Distribution feeder").
+   * Regressions pinned (issue 15): seed 35, classified, span P202-P203: a 24 m piece of C
+   * extrapolated by its own curve took B's position (B "covers 15 %"); seed 34, ground-only,
+   * span P205-P206: 14 points of three crowns strung over 54 m became a wire and took C's
+   * position; seeds 31-36 before the common sag shape was found by a vote (a least-squares
+   * parabola through all seeds gave 2.6 m of sag for a true 1.4 m): ground-only runs matched
+   * 43-44 of 44.
    */
   @ParameterizedTest(name = "seed {0}, {1}, {2}")
+  @CsvSource({"35, FULL, METRE", "34, GROUND_ONLY, METRE", "31, WIRES_UNLABELLED, METRE",
+      "33, UNCLASSIFIED, US_SURVEY_FOOT"})
+  void verticalStacksMeetTheTargets(long seed, ClassificationMode mode, LinearUnit unit) {
+    check(FeederOptions.defaults().withSeed(seed).withSpanCount(12)
+        .withFraming(Framing.VERTICAL).withMode(mode).withUnit(unit), FOUND_SHARE, SAG_SHARE);
+  }
+
+  @ParameterizedTest(name = "seed {0}, {1}, {2}")
   @CsvSource({"12, VERTICAL, WIRES_UNLABELLED", "13, TRIANGULAR, UNCLASSIFIED"})
-  void closeFramingsReachTheFloors(long seed, Framing framing, ClassificationMode mode) {
+  void closeFramingsMeetTheTargets(long seed, Framing framing, ClassificationMode mode) {
     check(FeederOptions.defaults().withSeed(seed).withSpanCount(8).withFraming(framing)
-        .withMode(mode), FLOOR_SHARE, FLOOR_SHARE);
+        .withMode(mode), FOUND_SHARE, SAG_SHARE);
   }
 
   @Tag("slow")
@@ -98,14 +107,15 @@ class FeederAccuracyTest {
     "21, HORIZONTAL, FULL, METRE", "21, HORIZONTAL, WIRES_UNLABELLED, METRE",
     "21, HORIZONTAL, UNCLASSIFIED, US_SURVEY_FOOT",
     "22, VERTICAL, FULL, METRE", "22, VERTICAL, WIRES_UNLABELLED, US_SURVEY_FOOT",
+    "22, VERTICAL, GROUND_ONLY, METRE", "22, VERTICAL, UNCLASSIFIED, US_SURVEY_FOOT",
     "23, TRIANGULAR, FULL, US_SURVEY_FOOT", "23, TRIANGULAR, WIRES_UNLABELLED, METRE",
     "23, TRIANGULAR, UNCLASSIFIED, METRE"
   })
-  void feederSweepReachesTheFloors(long seed, Framing framing, ClassificationMode mode,
+  void feederSweepMeetsTheTargets(long seed, Framing framing, ClassificationMode mode,
       LinearUnit unit) {
     FeederOptions o = FeederOptions.defaults().withSeed(seed).withSpanCount(12)
         .withFraming(framing).withMode(mode).withUnit(unit);
-    check(o, FLOOR_SHARE, FLOOR_SHARE);
+    check(o, FOUND_SHARE, SAG_SHARE);
   }
 
   private void check(FeederOptions options, double foundShare, double sagShare) {

@@ -12,14 +12,16 @@ import java.io.Serializable;
  * @param span the sending span's key in the job
  * @param wire keys of wire points
  * @param airborne keys of isolated airborne points (empty for the wire points' message)
- * @param failure null; else why the sending span could not set its points aside (both key
+ * @param crossing keys of points of wires crossing the span (empty for the wire points'
+ *     message)
+ * @param failure null; else why the sending span could not set its points aside (the key
  *     lists are then null, and the span is reported NOT ASSESSED)
  */
-record PointKeys(int span, long[] wire, long[] airborne, String failure)
+record PointKeys(int span, long[] wire, long[] airborne, long[] crossing, String failure)
     implements Serializable {
 
   /** Keys without failure. */
-  PointKeys(int span, long[] wire, long[] airborne) {
-    this(span, wire, airborne, null);
+  PointKeys(int span, long[] wire, long[] airborne, long[] crossing) {
+    this(span, wire, airborne, crossing, null);
   }
 }

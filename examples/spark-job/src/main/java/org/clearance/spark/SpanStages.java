@@ -161,7 +161,7 @@ final class SpanStages {
   /** The keys of the span's wire points, for the spans near it ({@link #setAside}). */
   static PointKeys wireKeys(SpanFit fit) {
     return new PointKeys(fit.key(), fit.found() == null ? new long[0] : fit.found().wireKeys(),
-        new long[0]);
+        new long[0], new long[0]);
   }
 
   /**
@@ -174,32 +174,37 @@ final class SpanStages {
    */
   static PointKeys setAside(SpanFit fit, Iterable<PointKeys> wires) {
     if (fit.found() == null) {
-      return new PointKeys(fit.key(), new long[0], new long[0]);
+      return new PointKeys(fit.key(), new long[0], new long[0], new long[0]);
     }
     try {
       SetAside out = SetAside.none();
       fit.found().setAside(union(wires, false), out);
-      return new PointKeys(fit.key(), out.wireKeys(), out.airborneKeys());
+      return new PointKeys(fit.key(), out.wireKeys(), out.airborneKeys(), out.crossingKeys());
     } catch (RuntimeException e) {
-      return new PointKeys(fit.key(), null, null, describe(e));
+      return new PointKeys(fit.key(), null, null, null, describe(e));
     }
   }
 
-  /** One set of the keys of every message ({@code withAirborne}: the airborne keys too). */
+  /** One set of the keys of every message ({@code withAirborne}: the airborne and crossing
+   * wires' keys too). */
   static SetAside union(Iterable<PointKeys> messages, boolean withAirborne) {
     int nw = 0;
     int na = 0;
+    int nc = 0;
     for (PointKeys m : messages) {
       if (m.wire() == null) {
         continue;
       }
       nw += m.wire().length;
       na += withAirborne ? m.airborne().length : 0;
+      nc += withAirborne ? m.crossing().length : 0;
     }
     long[] w = new long[nw];
     long[] a = new long[na];
+    long[] c = new long[nc];
     nw = 0;
     na = 0;
+    nc = 0;
     for (PointKeys m : messages) {
       if (m.wire() == null) {
         continue;
@@ -209,9 +214,11 @@ final class SpanStages {
       if (withAirborne) {
         System.arraycopy(m.airborne(), 0, a, na, m.airborne().length);
         na += m.airborne().length;
+        System.arraycopy(m.crossing(), 0, c, nc, m.crossing().length);
+        nc += m.crossing().length;
       }
     }
-    return SetAside.of(w, a);
+    return SetAside.of(w, a, c);
   }
 
   /** The span's fitted conductors and flight time for its section's tasks. */
