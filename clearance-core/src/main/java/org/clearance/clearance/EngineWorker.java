@@ -160,7 +160,8 @@ final class EngineWorker implements Consumer<PointChunk> {
         }
       }
       inTreeRegion = true;
-      if (vegetation.inferred() && (nearStructure(p, x, y) || onCrossArm(p, s, e, z))) {
+      if (vegetation.inferred() && (nearStructure(p, x, y) || onCrossArm(p, s, e, z)
+          || nearOtherLinesStructure(candidates, p, x, y))) {
         if (p.inBox(s, e, z)) {
           excludedStructure[sp]++;
         }
@@ -336,6 +337,22 @@ final class EngineWorker implements Consumer<PointChunk> {
           details.get(Role.PHASE.ordinal()), details.get(Role.NEUTRAL.ordinal()),
           details.get(Role.SHIELD.ordinal())));
     }
+  }
+
+  /**
+   * Whether a point stands at a structure of another line's span among the candidates: where a
+   * feeder is built under a transmission line (docs/clearance.md, "Two lines in one run"), the
+   * tower is a structure of both lines and its steel is no vegetation for either, whatever
+   * exclusion radius the feeder's own poles need.
+   */
+  private boolean nearOtherLinesStructure(int[] candidates, PreparedSpan p, double x, double y) {
+    for (int sp : candidates) {
+      PreparedSpan q = spans.get(sp);
+      if (!q.model.span().lineId().equals(p.model.span().lineId()) && nearStructure(q, x, y)) {
+        return true;
+      }
+    }
+    return false;
   }
 
   private boolean nearStructure(PreparedSpan p, double x, double y) {

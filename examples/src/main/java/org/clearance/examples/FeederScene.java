@@ -1,12 +1,14 @@
 package org.clearance.examples;
 
 import java.util.ArrayList;
+import java.util.EnumMap;
 import java.util.List;
 import java.util.Locale;
 import java.util.Objects;
 import java.util.Optional;
 import java.util.OptionalInt;
 import java.util.SplittableRandom;
+import java.util.function.DoubleBinaryOperator;
 import org.clearance.line.ConductorLibrary;
 import org.clearance.line.ConductorType;
 import org.clearance.line.SpanFrame;
@@ -44,6 +46,12 @@ public final class FeederScene {
   static final double TRIM_CLEARANCE_M = 2.0;
   /** Surveyed half width either side of the line, m. */
   static final double HALF_WIDTH_M = 30;
+  /** Height of the cross-arm conductors below the pole top (horizontal and triangular), m. */
+  static final double ARM_BELOW_TOP_M = 0.45;
+  /** Plan distance by which the service line of the joint demo is moved away from the
+   * transmission line, so that it crosses the feeder but stays out of the transmission line's
+   * wire corridor, m. */
+  static final double SERVICE_SHIFT_M = 15;
 
   /** A conductor position: offset m (left positive), height below the pole top m. */
   record Position(String name, boolean neutral, ConductorType type, double offsetM,
@@ -74,8 +82,15 @@ public final class FeederScene {
   private final FeederOptions options;
   private final double[] waves;
   private final double baseZ;
+  /** The host corridor's ground for a feeder built into the demo corridor, or null. */
+  private final DoubleBinaryOperator hostGround;
+  /** For a feeder built into the demo corridor: the plan and the survey's first flight strip. */
+  private final UnderbuildPlan plan;
+  private final FlightStrip hostStrip;
   private final List<FeederPole> poles = new ArrayList<>();
+  /** The positions of the line specification (the framing of the options, or horizontal). */
   private final List<Position> positions = new ArrayList<>();
+  private final EnumMap<Framing, List<Position>> framed = new EnumMap<>(Framing.class);
   private final List<Span> spans = new ArrayList<>();
   private final List<Tree> trees = new ArrayList<>();
   private final double surveyTemperatureC;
@@ -83,6 +98,9 @@ public final class FeederScene {
 
   private FeederScene(FeederOptions options) {
     this.options = Objects.requireNonNull(options, "options");
+    hostGround = null;
+    plan = null;
+    hostStrip = null;
     SplittableRandom rng = new SplittableRandom(options.seed() * 7919 + 17);
     baseZ = rng.nextDouble(80, 160);
     waves = new double[12];
@@ -100,9 +118,74 @@ public final class FeederScene {
     pointSeed = rng.nextLong();
   }
 
+  /** The feeder built into a demo corridor along the plan (docs/demo-corridor.md). */
+  private FeederScene(FeederOptions options, DemoScene host, UnderbuildPlan plan) {
+    this.options = options;
+    this.plan = plan;
+    hostGround = host::groundZ;
+    hostStrip = host.strips().get(0);
+    baseZ = Double.NaN;
+    waves = new double[0];
+    SplittableRandom rng = new SplittableRandom(options.seed() * 7919 + 29);
+    surveyTemperatureC = host.surveyTemperatureC();
+    List<UnderbuildPlan.Structure> st = plan.structures;
+    int n = st.size() - 1;
+    double[] x = new double[n + 1];
+    double[] y = new double[n + 1];
+    for (int i = 0; i <= n; i++) {
+      x[i] = st.get(i).x();
+      y[i] = st.get(i).y();
+    }
+    for (int i = 0; i <= n; i++) {
+      UnderbuildPlan.Structure t = st.get(i);
+      double[] along = bisector(x, y, i, n);
+      double height = t.joint() ? t.jointTopZ() + ARM_BELOW_TOP_M - t.groundZ()
+          : rng.nextDouble(10, 14);
+      double radius = rng.nextDouble(0.13, 0.2);
+      poles.add(new FeederPole(t.id(), i + 1, t.x(), t.y(), t.groundZ(), height, radius,
+          t.deadEnd(), along[0], along[1]));
+    }
+    ConductorType primary = type(new String[] {"Sparrow", "Raven", "Quail"}[rng.nextInt(3)]);
+    ConductorType neutral = type(rng.nextBoolean() ? "Sparrow" : "Raven");
+    for (Framing f : Framing.values()) {
+      framed.put(f, positionsFor(f, rng, primary, neutral));
+    }
+    positions.addAll(framed.get(Framing.HORIZONTAL));
+    conductors(rng);
+    pointSeed = rng.nextLong();
+  }
+
   /** Builds the scene (the truth) for the options. */
   public static FeederScene create(FeederOptions options) {
     return new FeederScene(options);
+  }
+
+  /**
+   * The demo's feeder built into a demo corridor (docs/demo-corridor.md, "The demo's two
+   * lines"): poles beside the transmission line, then under it on its towers, then poles again;
+   * classified as the corridor, sampled at the corridor's density. Its ground, vegetation and
+   * flight strips are the corridor's: it adds only its own conductors, poles, frames and service
+   * line. Empty when the corridor has no room for it (a ravine among too few spans).
+   */
+  public static Optional<FeederScene> underbuilt(DemoScene host) {
+    UnderbuildPlan plan = UnderbuildPlan.in(host);
+    if (plan == null) {
+      return Optional.empty();
+    }
+    DemoOptions o = host.options();
+    double density = Math.max(FeederOptions.MIN_DENSITY, Math.min(FeederOptions.MAX_DENSITY,
+        FeederOptions.DEFAULT_DENSITY * o.pointDensity() / DemoOptions.DEFAULT_DENSITY));
+    FeederOptions fo = new FeederOptions(o.seed(), plan.structures.size() - 1, density,
+        o.mode(), Framing.HORIZONTAL, true, true, LinearUnit.METRE);
+    return Optional.of(new FeederScene(fo, host, plan));
+  }
+
+  /** Unit plan vector along the line at pole i of n + 1 (bisector of its spans). */
+  private static double[] bisector(double[] x, double[] y, int i, int n) {
+    double ax = (i > 0 ? unit(x, y, i - 1)[0] : 0) + (i < n ? unit(x, y, i)[0] : 0);
+    double ay = (i > 0 ? unit(x, y, i - 1)[1] : 0) + (i < n ? unit(x, y, i)[1] : 0);
+    double l = Math.hypot(ax, ay);
+    return new double[] {ax / l, ay / l};
   }
 
   private void route(SplittableRandom rng) {
@@ -122,12 +205,10 @@ public final class FeederScene {
       y[i + 1] = y[i] + len * Math.cos(az);
     }
     for (int i = 0; i <= n; i++) {
-      double ax = (i > 0 ? unit(x, y, i - 1)[0] : 0) + (i < n ? unit(x, y, i)[0] : 0);
-      double ay = (i > 0 ? unit(x, y, i - 1)[1] : 0) + (i < n ? unit(x, y, i)[1] : 0);
-      double l = Math.hypot(ax, ay);
+      double[] along = bisector(x, y, i, n);
       poles.add(new FeederPole(String.format(Locale.ROOT, "P%03d", 201 + i), i + 1, x[i], y[i],
           groundZ(x[i], y[i]), rng.nextDouble(10, 14), rng.nextDouble(0.13, 0.2),
-          i == 0 || i == n, ax / l, ay / l));
+          i == 0 || i == n, along[0], along[1]));
     }
   }
 
@@ -140,16 +221,24 @@ public final class FeederScene {
     String[] codes = {"Sparrow", "Raven", "Quail"};
     ConductorType primary = type(codes[rng.nextInt(codes.length)]);
     ConductorType neutral = type(rng.nextBoolean() ? "Sparrow" : "Raven");
+    positions.addAll(positionsFor(options.framing(), rng, primary, neutral));
+    framed.put(options.framing(), List.copyOf(positions));
+  }
+
+  /** The positions of one framing, drawn from {@code rng} (Framing, FeederScene class note). */
+  private List<Position> positionsFor(Framing framing, SplittableRandom rng,
+      ConductorType primary, ConductorType neutral) {
+    List<Position> positions = new ArrayList<>();
     double lowest;
-    switch (options.framing()) {
+    switch (framing) {
       case HORIZONTAL: {
         double d1 = rng.nextDouble(0.35, 0.4);
         double s = rng.nextDouble(0.5, 0.9);
         double far = rng.nextDouble(0.9, 1.2);
-        positions.add(new Position("A", false, primary, far, 0.45));
-        positions.add(new Position("B", false, primary, -d1, 0.45));
-        positions.add(new Position("C", false, primary, -d1 - s, 0.45));
-        lowest = 0.45;
+        positions.add(new Position("A", false, primary, far, ARM_BELOW_TOP_M));
+        positions.add(new Position("B", false, primary, -d1, ARM_BELOW_TOP_M));
+        positions.add(new Position("C", false, primary, -d1 - s, ARM_BELOW_TOP_M));
+        lowest = ARM_BELOW_TOP_M;
         break;
       }
       case VERTICAL: {
@@ -163,19 +252,20 @@ public final class FeederScene {
       case TRIANGULAR: {
         double d = rng.nextDouble(0.5, 0.9);
         double up = rng.nextDouble(0.5, 0.7);
-        positions.add(new Position("A", false, primary, d, 0.45));
-        positions.add(new Position("B", false, primary, 0.0, 0.45 - up));
-        positions.add(new Position("C", false, primary, -d, 0.45));
-        lowest = 0.45;
+        positions.add(new Position("A", false, primary, d, ARM_BELOW_TOP_M));
+        positions.add(new Position("B", false, primary, 0.0, ARM_BELOW_TOP_M - up));
+        positions.add(new Position("C", false, primary, -d, ARM_BELOW_TOP_M));
+        lowest = ARM_BELOW_TOP_M;
         break;
       }
       default:
-        throw new AssertionError(options.framing());
+        throw new AssertionError(framing);
     }
     if (options.neutral()) {
-      double off = options.framing() == Framing.VERTICAL ? 0.3 : -0.2;
+      double off = framing == Framing.VERTICAL ? 0.3 : -0.2;
       positions.add(new Position("N", true, neutral, off, lowest + rng.nextDouble(1.0, 1.8)));
     }
+    return List.copyOf(positions);
   }
 
   private static ConductorType type(String code) {
@@ -188,24 +278,40 @@ public final class FeederScene {
     double cPrimary = rng.nextDouble(MIN_TENSION_SHARE, MAX_TENSION_SHARE)
         * first.type().ratedStrength() / first.type().weightPerLength();
     double cNeutral = cPrimary * rng.nextDouble(1.0, 1.12); // neutral sag 90-100 % of primary
+    double jointScale = 1;
+    if (plan != null) {
+      double longest = 0;
+      for (int i = plan.firstJointSpan; i < plan.firstJointSpan + plan.jointSpans; i++) {
+        FeederPole a = poles.get(i);
+        FeederPole b = poles.get(i + 1);
+        longest = Math.max(longest, Math.hypot(b.x() - a.x(), b.y() - a.y()));
+      }
+      // c = L^2 / (8 sag) for the aimed sag, at most the highest tension share
+      double c = Math.min(longest * longest / (8 * UnderbuildPlan.JOINT_SAG_M),
+          UnderbuildPlan.MAX_JOINT_TENSION_SHARE * first.type().ratedStrength()
+              / first.type().weightPerLength());
+      jointScale = Math.max(1, c / cPrimary);
+    }
     int n = options.spanCount();
     int pairs = n * positions.size();
     boolean[] low = new boolean[pairs];
     for (int k = 0; k < Math.max(1, (int) Math.round(LOW_COVERAGE_SHARE * pairs)); k++) {
       low[rng.nextInt(pairs)] = true;
     }
-    int serviceSpan = options.crossing() ? n / 2 : -1;
+    int serviceSpan = !options.crossing() ? -1 : plan == null ? n / 2
+        : Math.min(n - 1, plan.firstJointSpan + plan.jointSpans + 1);
     for (int i = 0; i < n; i++) {
       FeederPole a = poles.get(i);
       FeederPole b = poles.get(i + 1);
+      double scale = isJointSpan(i) ? jointScale : 1;
       List<FeederWire> wires = new ArrayList<>();
       for (int p = 0; p < positions.size(); p++) {
         Position pos = positions.get(p);
-        double[] ea = attachment(a, b, pos, true);
-        double[] eb = attachment(b, a, pos, false);
-        SpanFrame plan = SpanFrame.between(ea[0], ea[1], eb[0], eb[1]);
-        ConductorCurve curve = new ConductorCurve(plan, Catenary.through(0, ea[2],
-            plan.length(), eb[2], pos.neutral() ? cNeutral : cPrimary));
+        double[] ea = attachment(a, b, positionsAt(i).get(p), true);
+        double[] eb = attachment(b, a, positionsAt(i + 1).get(p), false);
+        SpanFrame frame = SpanFrame.between(ea[0], ea[1], eb[0], eb[1]);
+        ConductorCurve curve = new ConductorCurve(frame, Catenary.through(0, ea[2],
+            frame.length(), eb[2], scale * (pos.neutral() ? cNeutral : cPrimary)));
         double perMetre = (pos.neutral() ? rng.nextDouble(1, 2.5) : rng.nextDouble(1, 3))
             * Math.sqrt(options.pointDensity() / FeederOptions.DEFAULT_DENSITY);
         wires.add(new FeederWire(pos.name(), pos.neutral(), pos.type().code(), curve, perMetre,
@@ -258,12 +364,18 @@ public final class FeederScene {
     double cy = low.y(s);
     double az = low.plan().azimuth() + Math.toRadians(rng.nextDouble(50, 90))
         * (rng.nextBoolean() ? 1 : -1);
-    double z = Math.max(low.z(s) - 1.5, groundZ(cx, cy) + 4.5);
     double ux = Math.sin(az);
     double uy = Math.cos(az);
-    SpanFrame plan = SpanFrame.between(cx - 20 * ux, cy - 20 * uy, cx + 20 * ux, cy + 20 * uy);
+    if (plan != null) {
+      // away from the transmission line: to the right of the feeder (UnderbuildPlan side)
+      double away = Math.signum(ux * low.plan().uy() - uy * low.plan().ux());
+      cx += away * SERVICE_SHIFT_M * ux;
+      cy += away * SERVICE_SHIFT_M * uy;
+    }
+    double z = Math.max(low.z(s) - 1.5, groundZ(cx, cy) + 4.5);
+    SpanFrame frame = SpanFrame.between(cx - 20 * ux, cy - 20 * uy, cx + 20 * ux, cy + 20 * uy);
     // sag 0.3 m over 40 m: c = L^2 / (8 sag)
-    return new ConductorCurve(plan, Catenary.through(0, z + 0.3, 40, z + 0.3, 1600 / 2.4));
+    return new ConductorCurve(frame, Catenary.through(0, z + 0.3, 40, z + 0.3, 1600 / 2.4));
   }
 
   /**
@@ -301,6 +413,9 @@ public final class FeederScene {
 
   /** True ground elevation, m. */
   public double groundZ(double x, double y) {
+    if (hostGround != null) {
+      return hostGround.applyAsDouble(x, y);
+    }
     double z = baseZ + 0.004 * (x - RoutePlan.START_X) - 0.003 * (y - RoutePlan.START_Y);
     for (int k = 0; k < 4; k++) {
       z += (k == 0 ? 2.5 : 1.0) * Math.sin(waves[3 * k] * x + waves[3 * k + 1] * y
@@ -330,6 +445,48 @@ public final class FeederScene {
 
   List<Position> positions() {
     return List.copyOf(positions);
+  }
+
+  /** The positions as framed on pole i (the same names in the same order on every pole). */
+  List<Position> positionsAt(int pole) {
+    return framed.get(framingAt(pole));
+  }
+
+  /** How the conductors sit on pole i. */
+  public Framing framingAt(int pole) {
+    return plan == null ? options.framing() : plan.structures.get(pole).framing();
+  }
+
+  /** True when pole i is a transmission tower carrying the feeder (joint use). */
+  public boolean jointUse(int pole) {
+    return plan != null && plan.structures.get(pole).joint();
+  }
+
+  /** True when span i hangs from two joint-use towers. */
+  public boolean isJointSpan(int span) {
+    return jointUse(span) && jointUse(span + 1);
+  }
+
+  /** True when the feeder is built into the demo corridor (its survey is the corridor's). */
+  public boolean builtIn() {
+    return plan != null;
+  }
+
+  /** The flight strip the feeder's points are given, or null for the feeder's own. */
+  FlightStrip hostStrip() {
+    return hostStrip;
+  }
+
+  /** Chainage of pole i along the flight strip of its points, m. */
+  double chainageAt(int pole) {
+    if (plan != null) {
+      return plan.structures.get(pole).chainage();
+    }
+    double c = 0;
+    for (int i = 0; i < pole; i++) {
+      c += spans.get(i).lengthM();
+    }
+    return c;
   }
 
   public List<Span> spans() {
