@@ -13,10 +13,13 @@ import java.util.Optional;
  * wire all the same: the evidence of which points lie on a wire is shared by every span of every
  * line ({@link PointEvidence}).
  *
- * <p>An extra is another line's conductor when, at {@value #SAMPLES} stations spread over its
- * fitted curve, at least {@value #SHARE} of those that lie within a fitted conductor of another
- * line's span (matched to a position of that line's specification) are within
- * {@value #SAME_WIRE_M} m of its curve, and there are at least {@value #MIN_SAMPLES} such.
+ * <p>An extra is another line's conductor (matched to a position of that line's specification)
+ * when, at {@value #SAMPLES} stations spread over its fitted curve, at least {@value #SHARE} of
+ * those that lie within the other conductor's fitted curve are within {@value #SAME_WIRE_M} m of
+ * it, and there are at least {@value #MIN_SAMPLES} such; an extra without a curve (too few points
+ * to fit, as a wire with a long gap) is one when its first, last and lowest points lie within
+ * {@value #SAME_WIRE_M} m of the other conductor's curve, or, when that has none either, of its
+ * first, last and lowest points.
  */
 final class OtherLineWires {
   /** Stations sampled along an extra's curve. */
@@ -44,8 +47,7 @@ final class OtherLineWires {
     for (SpanWires sw : spans) {
       List<FittedConductor> kept = new ArrayList<>();
       for (FittedConductor c : sw.conductors()) {
-        if (c.position().isEmpty() && c.curve().isPresent()
-            && onOtherLine(c.curve().get(), sw.span().lineId(), spans)) {
+        if (c.position().isEmpty() && onOtherLine(c, sw.span().lineId(), spans)) {
           continue;
         }
         kept.add(c);
@@ -65,21 +67,57 @@ final class OtherLineWires {
     return n;
   }
 
-  private static boolean onOtherLine(ConductorCurve extra, String lineId,
+  private static boolean onOtherLine(FittedConductor extra, String lineId,
       List<SpanWires> spans) {
     for (SpanWires other : spans) {
       if (other.span().lineId().equals(lineId)) {
         continue;
       }
       for (FittedConductor c : other.conductors()) {
-        Optional<ConductorCurve> curve = c.curve();
-        if (c.isFitted() && c.position().isPresent() && curve.isPresent()
-            && sameWire(extra, curve.get())) {
+        if (c.position().isPresent() && sameWire(extra, c)) {
           return true;
         }
       }
     }
     return false;
+  }
+
+  /** Whether an extra and another line's conductor are one wire. */
+  static boolean sameWire(FittedConductor extra, FittedConductor other) {
+    Optional<ConductorCurve> a = extra.curve();
+    Optional<ConductorCurve> b = other.curve();
+    if (a.isPresent()) {
+      return b.isPresent() && sameWire(a.get(), b.get());
+    }
+    if (extra.points().isEmpty()) {
+      return false;
+    }
+    WireExtent e = extra.points().get();
+    double[][] ends = {{e.firstX(), e.firstY(), e.firstZ()}, {e.lastX(), e.lastY(), e.lastZ()},
+        {e.lowX(), e.lowY(), e.lowZ()}};
+    for (double[] p : ends) {
+      double d;
+      if (b.isPresent()) {
+        ConductorCurve c = b.get();
+        double s = c.plan().station(p[0], p[1]);
+        d = s < 0 || s > c.length() ? Double.POSITIVE_INFINITY
+            : Math.hypot(c.plan().offset(p[0], p[1]), p[2] - c.z(s));
+      } else if (other.points().isPresent()) {
+        WireExtent o = other.points().get();
+        d = Math.min(Math.min(dist(p, o.firstX(), o.firstY(), o.firstZ()),
+            dist(p, o.lastX(), o.lastY(), o.lastZ())), dist(p, o.lowX(), o.lowY(), o.lowZ()));
+      } else {
+        return false;
+      }
+      if (!(d <= SAME_WIRE_M)) {
+        return false;
+      }
+    }
+    return true;
+  }
+
+  private static double dist(double[] p, double x, double y, double z) {
+    return Math.sqrt((p[0] - x) * (p[0] - x) + (p[1] - y) * (p[1] - y) + (p[2] - z) * (p[2] - z));
   }
 
   /** Whether the two curves are one wire where they overlap in plan. */

@@ -315,7 +315,8 @@ public final class FeederScene {
         double perMetre = (pos.neutral() ? rng.nextDouble(1, 2.5) : rng.nextDouble(1, 3))
             * Math.sqrt(options.pointDensity() / FeederOptions.DEFAULT_DENSITY);
         wires.add(new FeederWire(pos.name(), pos.neutral(), pos.type().code(), curve, perMetre,
-            rng.nextDouble(0.02, 0.04), gaps(rng, curve.length(), low[i * positions.size() + p])));
+            rng.nextDouble(0.02, 0.04), gaps(rng, curve.length(),
+            low[i * positions.size() + p] && plan == null)));
       }
       Optional<ConductorCurve> service = i == serviceSpan ? Optional.of(service(rng, i, wires))
           : Optional.empty();
