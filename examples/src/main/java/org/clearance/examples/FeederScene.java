@@ -315,7 +315,7 @@ public final class FeederScene {
         double perMetre = (pos.neutral() ? rng.nextDouble(1, 2.5) : rng.nextDouble(1, 3))
             * Math.sqrt(options.pointDensity() / FeederOptions.DEFAULT_DENSITY);
         wires.add(new FeederWire(pos.name(), pos.neutral(), pos.type().code(), curve, perMetre,
-            rng.nextDouble(0.02, 0.04), gaps(rng, curve.length(),
+            rng.nextDouble(0.02, 0.04), WireGap.feederGaps(rng, curve.length(),
             low[i * positions.size() + p] && plan == null)));
       }
       Optional<ConductorCurve> service = i == serviceSpan ? Optional.of(service(rng, i, wires))
@@ -335,23 +335,6 @@ public final class FeederScene {
       y += STRAIN_LENGTH_M * (o.y() - t.y()) / l;
     }
     return new double[] {x, y, t.topZ() - pos.belowTopM()};
-  }
-
-  private static List<WireGap> gaps(SplittableRandom rng, double len, boolean low) {
-    List<WireGap> gaps = new ArrayList<>();
-    if (low) {
-      double keep = rng.nextDouble(0.08, 0.28) * len;
-      double start = rng.nextDouble(0, len - keep);
-      if (start > 0) {
-        gaps.add(new WireGap(0, start));
-      }
-      gaps.add(new WireGap(start + keep, len));
-    } else if (rng.nextDouble() < 0.5) {
-      double g = rng.nextDouble(2, Math.min(15, 0.2 * len));
-      double s = rng.nextDouble(0, len - g);
-      gaps.add(new WireGap(s, s + g));
-    }
-    return gaps;
   }
 
   /**
