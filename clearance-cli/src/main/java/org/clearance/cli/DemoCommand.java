@@ -42,7 +42,8 @@ public final class DemoCommand implements Callable<Integer> {
   @Option(names = "--seed", paramLabel = "N", description = "Scenario seed (default: the demo's).")
   Long seed;
 
-  @Option(names = "--spans", paramLabel = "N", description = "Number of spans (default 12).")
+  @Option(names = "--spans", paramLabel = "N", description = "Number of spans of the 230 kV line (default 12); the feeder fits "
+          + "itself in.")
   Integer spans;
 
   @Option(names = "--density", paramLabel = "PTS_PER_M2",

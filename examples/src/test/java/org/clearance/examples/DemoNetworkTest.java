@@ -87,7 +87,7 @@ class DemoNetworkTest {
   }
 
   /** The outcome of one run. */
-  record Run(RunModel model, List<Site> sites) {}
+  record Run(RunModel model, List<Site> sites, Path dir) {}
 
   @Test
   void classifiedDemoChecksTheFeederToTheTruth() throws IOException {
@@ -158,6 +158,37 @@ class DemoNetworkTest {
       }
     }
     assertNotVegetationShare(net, run, ClassificationMode.FULL, true);
+    outputsCoverBothLines(run, feeder);
+  }
+
+  /** The report, spans.csv, the GeoPackage and the GeoJSON hold both lines. */
+  private static void outputsCoverBothLines(Run run, FeederScene feeder) throws IOException {
+    String html = Files.readString(run.dir().resolve("report.html"), StandardCharsets.UTF_8);
+    String title = html.substring(html.indexOf("<h1"), html.indexOf("</h1>"));
+    assertTrue(title.contains(DemoScene.LINE_ID) && title.contains(FeederScene.LINE_ID), title);
+    String spans = Files.readString(run.dir().resolve("spans.csv"), StandardCharsets.UTF_8);
+    for (FeederScene.Span ts : feeder.spans()) {
+      assertTrue(spans.contains(ts.id() + "," + FeederScene.LINE_ID + ","), ts.id());
+    }
+    String geojson = Files.readString(run.dir().resolve("sites.geojson"),
+        StandardCharsets.UTF_8);
+    assertTrue(geojson.contains("\"" + FeederScene.LINE_ID + "/")
+        && geojson.contains("\"" + DemoScene.LINE_ID + "/"), "sites.geojson");
+    try (java.sql.Connection c = java.sql.DriverManager.getConnection("jdbc:sqlite:"
+        + run.dir().resolve("sites.gpkg"));
+        java.sql.ResultSet r = c.createStatement().executeQuery("SELECT line_id, count(*)"
+            + " FROM structures GROUP BY line_id ORDER BY line_id")) {
+      Map<String, Integer> count = new HashMap<>();
+      while (r.next()) {
+        count.put(r.getString(1), r.getInt(2));
+      }
+      // a joint-use tower is a structure of each line (regression: once, under the first)
+      assertEquals(feeder.poles().size(), count.get(FeederScene.LINE_ID), count.toString());
+      assertEquals(DemoOptions.defaults().spanCount() + 1, count.get(DemoScene.LINE_ID),
+          count.toString());
+    } catch (java.sql.SQLException e) {
+      throw new IOException(e);
+    }
   }
 
   /**
@@ -285,7 +316,7 @@ class DemoNetworkTest {
           Double.parseDouble(f[header.indexOf("y_m")]),
           Double.parseDouble(f[header.indexOf("z_m")])));
     }
-    return new Run(model, sites);
+    return new Run(model, sites, out);
   }
 
   /**
