@@ -159,6 +159,42 @@ class DemoNetworkTest {
     }
     assertNotVegetationShare(net, run, ClassificationMode.FULL, true);
     outputsCoverBothLines(run, feeder);
+    treesBetweenTheLinesAreMeasuredToBoth(run);
+  }
+
+  /**
+   * Regression (issue 15, demo): a tree's base was measured to the nearest span of all lines,
+   * so trees beside the feeder that can reach the 230 kV line were checked for the feeder only
+   * (FW231/T102-T103's fall-in sites went from 7 to 4). Now each tree near both lines is a tree
+   * of each, and one able to reach the 230 kV line in the survey state is a fall-in site there.
+   */
+  private static void treesBetweenTheLinesAreMeasuredToBoth(Run run) {
+    Map<String, List<org.clearance.run.TreeRecord>> byPlace = new HashMap<>();
+    for (org.clearance.run.TreeRecord t : run.model().trees()) {
+      byPlace.computeIfAbsent(String.format(Locale.ROOT, "%.3f,%.3f", t.x(), t.y()),
+          k -> new ArrayList<>()).add(t);
+    }
+    int both = 0;
+    int reaching = 0;
+    for (List<org.clearance.run.TreeRecord> at : byPlace.values()) {
+      if (at.stream().map(t -> t.spanId().substring(0, t.spanId().indexOf('/'))).distinct()
+          .count() < 2) {
+        continue;
+      }
+      both++;
+      for (org.clearance.run.TreeRecord t : at) {
+        if (t.spanId().startsWith(DemoScene.LINE_ID + "/")
+            && t.heightM() >= t.baseDistances().get(0)) {
+          reaching++;
+          assertTrue(run.sites().stream().anyMatch(s -> s.fallIn()
+              && s.span().equals(t.spanId()) && Math.hypot(s.x() - t.x(), s.y() - t.y()) < 1),
+              t.id() + " can reach " + t.spanId() + " but is no fall-in site there");
+        }
+      }
+    }
+    System.out.println("demo trees measured to both lines: " + both + ", of them able to reach"
+        + " the 230 kV line: " + reaching);
+    assertTrue(both > 0, "no tree measured to both lines");
   }
 
   /** The report, spans.csv, the GeoPackage and the GeoJSON hold both lines. */
