@@ -11,7 +11,7 @@ import org.clearance.CheckInputs;
 import org.clearance.ClearanceCheck;
 import org.clearance.OutFolder;
 import org.clearance.examples.ClassificationMode;
-import org.clearance.examples.DemoCorridor;
+import org.clearance.examples.DemoNetwork;
 import org.clearance.examples.DemoOptions;
 import org.clearance.survey.UnitsChoice;
 import picocli.CommandLine;
@@ -25,8 +25,9 @@ import picocli.CommandLine.Option;
 @Command(
     name = "demo",
     description = {
-      "Writes the bundled demo corridor (an invented line with its survey, structures and line "
-          + "specification) into DIR/input and runs the whole check into DIR/run.",
+      "Writes the bundled demo corridor (an invented 230 kV line and a distribution feeder "
+          + "built partly under it, with their survey, structures and line specifications) into "
+          + "DIR/input and runs the whole check on both lines into DIR/run.",
     },
     mixinStandardHelpOptions = true)
 public final class DemoCommand implements Callable<Integer> {
@@ -41,7 +42,8 @@ public final class DemoCommand implements Callable<Integer> {
   @Option(names = "--seed", paramLabel = "N", description = "Scenario seed (default: the demo's).")
   Long seed;
 
-  @Option(names = "--spans", paramLabel = "N", description = "Number of spans (default 12).")
+  @Option(names = "--spans", paramLabel = "N", description = "Number of spans of the 230 kV line (default 12); the feeder fits "
+          + "itself in.")
   Integer spans;
 
   @Option(names = "--density", paramLabel = "PTS_PER_M2",
@@ -80,7 +82,7 @@ public final class DemoCommand implements Callable<Integer> {
     options = options.withMode(mode());
     OutFolder.check(out, "--out");
     Path input = out.resolve("input");
-    DemoCorridor.DemoFiles files = DemoCorridor.write(input, options);
+    DemoNetwork.Files files = DemoNetwork.write(input, options);
     console.printf(Locale.ROOT, "demo corridor written to %s (%,d points)%n",
         input.toAbsolutePath().normalize(), files.pointCount());
     if (generateOnly) {
@@ -89,7 +91,7 @@ public final class DemoCommand implements Callable<Integer> {
     }
     Path run = out.resolve("run");
     CheckInputs inputs = new CheckInputs(List.of(files.survey()), UnitsChoice.fromFile(),
-        files.structures(), List.of(files.lineSpec()), Optional.empty(), Optional.of(rules),
+        files.structures(), files.lineSpecs(), Optional.empty(), Optional.of(rules),
         run);
     new ClearanceCheck(settings.options(spec), console).run(inputs, ClearanceCommand.version());
     console.println("report: " + run.resolve("report.html").toAbsolutePath().normalize());

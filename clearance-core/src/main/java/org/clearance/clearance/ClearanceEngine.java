@@ -353,42 +353,50 @@ public final class ClearanceEngine {
     }
     List<TreeClearance> out = new ArrayList<>();
     for (Tree tree : all.findTrees(ground)) {
-      TreeClearance t = measureTree(tree);
-      if (t != null) {
-        out.add(t);
-      }
+      out.addAll(measureTree(tree));
     }
     out.sort((a, b) -> Double.compare(a.baseDistances().get(0), b.baseDistances().get(0)));
     return out;
   }
 
-  /** The tree's base distances to the spans near it; null when no span is near. */
-  private TreeClearance measureTree(Tree tree) {
-    PreparedSpan nearest = null;
-    double nearestDistance = Double.POSITIVE_INFINITY;
-    String nearestConductor = "";
+  /**
+   * The tree's base distances to the span nearest it, one per line among the spans near it (a
+   * tree between two lines of one corridor may fall into either: docs/clearance.md, "Two lines
+   * in one run"); empty when no span is near. Lines in the order of their first span.
+   */
+  private List<TreeClearance> measureTree(Tree tree) {
+    java.util.Map<String, PreparedSpan> nearest = new java.util.LinkedHashMap<>();
+    java.util.Map<String, Double> nearestDistance = new java.util.HashMap<>();
+    java.util.Map<String, String> nearestConductor = new java.util.HashMap<>();
     for (int sp : index.spansAt(tree.x(), tree.y())) {
       PreparedSpan p = spans.get(sp);
       if (!p.inTreeRegion(p.frame.station(tree.x(), tree.y()),
           p.frame.offset(tree.x(), tree.y()))) {
         continue;
       }
+      String line = p.model.span().lineId();
       CatenaryDistance[] row = p.kernels[0];
       for (int j = 0; j < row.length; j++) {
         if (row[j] == null) {
           continue;
         }
         double d = row[j].distance(tree.x(), tree.y(), tree.baseZ());
-        if (d < nearestDistance) {
-          nearestDistance = d;
-          nearest = p;
-          nearestConductor = p.names[j];
+        if (d < nearestDistance.getOrDefault(line, Double.POSITIVE_INFINITY)) {
+          nearestDistance.put(line, d);
+          nearest.put(line, p);
+          nearestConductor.put(line, p.names[j]);
         }
       }
     }
-    if (nearest == null) {
-      return null;
+    List<TreeClearance> out = new ArrayList<>();
+    for (java.util.Map.Entry<String, PreparedSpan> e : nearest.entrySet()) {
+      out.add(measureTree(tree, e.getValue(), nearestConductor.get(e.getKey())));
     }
+    return out;
+  }
+
+  /** The tree's base distances to one span's conductors in every condition. */
+  private TreeClearance measureTree(Tree tree, PreparedSpan nearest, String nearestConductor) {
     List<Double> ds = new ArrayList<>();
     for (int k = 0; k < conditions.size(); k++) {
       double best = Double.NaN;

@@ -173,7 +173,8 @@ final class EngineWorker implements Consumer<PointChunk> {
         }
       }
       inTreeRegion = true;
-      if (inferredPoint && (nearStructure(p, x, y) || onCrossArm(p, s, e, z))) {
+      if (inferredPoint && (nearStructure(p, x, y) || onCrossArm(p, s, e, z)
+          || nearOtherLinesStructure(candidates, p, x, y))) {
         if (p.inBox(s, e, z)) {
           excludedStructure[sp]++;
         }
@@ -399,6 +400,22 @@ final class EngineWorker implements Consumer<PointChunk> {
       out.add(new PointClearance.VoltageDistances(kv, list));
     }
     return out;
+  }
+
+  /**
+   * Whether a point stands at a structure of another line's span among the candidates: where a
+   * feeder is built under a transmission line (docs/clearance.md, "Two lines in one run"), the
+   * tower is a structure of both lines and its steel is no vegetation for either, whatever
+   * exclusion radius the feeder's own poles need.
+   */
+  private boolean nearOtherLinesStructure(int[] candidates, PreparedSpan p, double x, double y) {
+    for (int sp : candidates) {
+      PreparedSpan q = spans.get(sp);
+      if (!q.model.span().lineId().equals(p.model.span().lineId()) && nearStructure(q, x, y)) {
+        return true;
+      }
+    }
+    return false;
   }
 
   private boolean nearStructure(PreparedSpan p, double x, double y) {

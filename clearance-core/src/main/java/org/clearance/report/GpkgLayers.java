@@ -53,11 +53,13 @@ final class GpkgLayers {
       for (StructureRecord s : List.of(span.from(), span.to())) {
         double x = h.fromMetres(s.x());
         double y = h.fromMetres(s.y());
-        if (byId.containsKey(s.id()) || !(Double.isFinite(x) && Double.isFinite(y))) {
+        // ids are unique within a line: a tower carrying two lines is a structure of each
+        String key = span.context().lineId() + "/" + s.id();
+        if (byId.containsKey(key) || !(Double.isFinite(x) && Double.isFinite(y))) {
           continue;
         }
         e.add(x, y);
-        byId.put(s.id(), new Feature(GpkgGeometry.point(srs, x, y), values(s.id(), s.type(),
+        byId.put(key, new Feature(GpkgGeometry.point(srs, x, y), values(s.id(), s.type(),
             span.context().lineId(), v.fromMetres(s.groundZ()), s.equipment())));
       }
     }

@@ -87,7 +87,9 @@ public final class WireFinder {
     }
     CandidateCollector all = collect(source, corridors, heights);
     Processed done = processSpans(spans, specs, arms, corridors, all, heights);
-    return new WireResult(used, done.spans(), changes, done.setAside());
+    // two lines in one run: another line's conductors are not this line's extras
+    return new WireResult(used, OtherLineWires.withoutOtherLinesWires(done.spans()), changes,
+        done.setAside());
   }
 
   /**

@@ -128,6 +128,10 @@ public final class FeederFiles {
     w.write("conditions:\n");
     w.write("  - name: hot\n    kind: temperature\n");
     w.write(f("    temperature_c: %.1f\n", LineFiles.HOT_TEMPERATURE_C));
+    if (scene.builtIn()) {
+      // the demo's feeder: the transmission line's conditions, so one profile's zones apply
+      LineFiles.writeWindAndIce(w);
+    }
   }
 
   /** truth.json: poles, positions and every conductor curve, in metres. */
@@ -154,16 +158,18 @@ public final class FeederFiles {
     j.endArray();
     j.name("poles").beginArray(false);
     for (FeederPole p : scene.poles()) {
+      int i = p.sequence() - 1;
       j.beginObject(true).member("id", p.id()).member("sequence", p.sequence())
           .member("x", p.x()).member("y", p.y()).member("ground_z", p.groundZ())
           .member("height_m", p.heightM()).member("radius_m", p.radiusM())
-          .member("dead_end", p.deadEnd()).endObject();
+          .member("dead_end", p.deadEnd()).member("framing", scene.framingAt(i).name())
+          .member("joint_use", scene.jointUse(i)).endObject();
     }
     j.endArray();
     j.name("spans").beginArray(false);
     for (FeederScene.Span s : scene.spans()) {
       j.beginObject(false).member("index", s.index()).member("id", s.id())
-          .member("length_m", s.lengthM());
+          .member("length_m", s.lengthM()).member("joint_use", scene.isJointSpan(s.index()));
       j.name("wires").beginArray(false);
       for (FeederWire w : s.wires()) {
         j.beginObject(true).member("position", w.position())

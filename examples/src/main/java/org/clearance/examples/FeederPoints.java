@@ -43,16 +43,17 @@ final class FeederPoints {
     for (FeederScene.Span s : scene.spans()) {
       total += s.lengthM();
     }
-    strip = new FlightStrip(1, 0, 300, -10, total + 10, true, 3.2e8, 40, 300);
+    strip = scene.hostStrip() != null ? scene.hostStrip()
+        : new FlightStrip(1, 0, 300, -10, total + 10, true, 3.2e8, 40, 300);
   }
 
   void generate(PointSink sink) {
     ChunkEmitter out = new ChunkEmitter(sink, scene.options().mode());
     SplittableRandom root = new SplittableRandom(scene.pointSeed());
-    double chainage = 0;
     List<FeederScene.Tree> trees = scene.trees();
     for (FeederScene.Span sp : scene.spans()) {
       SplittableRandom rng = root.split();
+      double chainage = scene.chainageAt(sp.from());
       FeederPole a = scene.poles().get(sp.from());
       FeederPole b = scene.poles().get(sp.to());
       List<FeederScene.Tree> near = new ArrayList<>();
@@ -62,7 +63,9 @@ final class FeederPoints {
           near.add(t);
         }
       }
-      surface(sp, a, b, near, chainage, rng, out);
+      if (!scene.builtIn()) {
+        surface(sp, a, b, near, chainage, rng, out);
+      }
       for (int k = 0; k < sp.wires().size(); k++) {
         FeederWire w = sp.wires().get(k);
         wire(w.curve(), w.pointsPerMetre(), w.noiseSigmaM(), TruthId.wire(sp.index(), k), w,
@@ -76,7 +79,6 @@ final class FeederPoints {
       if (sp.to() == scene.poles().size() - 1) {
         pole(sp.to(), chainage + sp.lengthM(), rng, out);
       }
-      chainage += sp.lengthM();
     }
     out.flush();
   }
@@ -180,35 +182,38 @@ final class FeederPoints {
     FeederPole p = scene.poles().get(index);
     out.pulse(strip, chainage, 0, 0);
     int id = TruthId.of(TruthId.Kind.TOWER, index);
-    long side = (long) Math.floor(POLE_PER_METRE * scale * p.heightM() + rng.nextDouble());
+    // a joint-use tower's own steel is the corridor's: here only the feeder's frame on it
+    long side = scene.jointUse(index) ? 0
+        : (long) Math.floor(POLE_PER_METRE * scale * p.heightM() + rng.nextDouble());
     for (long k = 0; k < side; k++) {
       double a = rng.nextDouble(0, 2 * Math.PI);
       double z = p.groundZ() + p.heightM() * Math.sqrt(rng.nextDouble());
       out.emit(p.x() + p.radiusM() * Math.cos(a), p.y() + p.radiusM() * Math.sin(a), z, POLE,
           id, 2000 + rng.nextInt(3000), 1, 2);
     }
-    for (int k = 0; k < 2; k++) {
+    for (int k = 0; k < (scene.jointUse(index) ? 0 : 2); k++) {
       out.emit(p.x() + p.radiusM() * rng.nextDouble(-0.7, 0.7),
           p.y() + p.radiusM() * rng.nextDouble(-0.7, 0.7), p.topZ(), POLE, id, 3000, 1, 2);
     }
     double maxOff = 0;
     double minOff = 0;
-    for (FeederScene.Position pos : scene.positions()) {
+    Framing framing = scene.framingAt(index);
+    for (FeederScene.Position pos : scene.positionsAt(index)) {
       if (!pos.neutral()) {
         maxOff = Math.max(maxOff, pos.offsetM());
         minOff = Math.min(minOff, pos.offsetM());
       }
     }
-    if (scene.options().framing() != Framing.VERTICAL) {
+    if (framing != Framing.VERTICAL) {
       double z = p.topZ() - 0.6;
       segment(p, minOff - 0.15, z, maxOff + 0.15, z, ARM_PER_METRE * scale, POLE, id, rng, out);
     }
     int ins = TruthId.of(TruthId.Kind.INSULATOR, index);
-    for (FeederScene.Position pos : scene.positions()) {
+    for (FeederScene.Position pos : scene.positionsAt(index)) {
       double z = p.topZ() - pos.belowTopM();
       segment(p, pos.offsetM(), z - 0.25, pos.offsetM(), z - 0.05, 10 * scale, INSULATOR, ins,
           rng, out);
-      if (scene.options().framing() == Framing.VERTICAL || pos.neutral()) {
+      if (framing == Framing.VERTICAL || pos.neutral()) {
         segment(p, 0, z - 0.1, pos.offsetM(), z - 0.1, 6 * scale, POLE, id, rng, out);
       }
     }

@@ -70,6 +70,11 @@ final class LineFiles {
     w.write("  - name: hot\n    kind: temperature\n");
     w.write(f("    temperature_c: %.1f\n", HOT_TEMPERATURE_C));
     w.write(f("    creep_allowance_c: %.1f\n", HOT_CREEP_ALLOWANCE_C));
+    writeWindAndIce(w);
+  }
+
+  /** The blowout and ice conditions of the demo line's specification. */
+  static void writeWindAndIce(Writer w) throws IOException {
     w.write("  - name: blowout\n    kind: wind\n");
     w.write(f("    temperature_c: %.1f\n", WIND_TEMPERATURE_C));
     w.write(f("    wind_pressure_pa: %.1f\n", WIND_PRESSURE_PA));
