@@ -61,7 +61,7 @@ class WirePieceTest {
     boolean[] lin = new boolean[p.size()];
     java.util.Arrays.fill(lin, linear);
     SetAside out = SetAside.none();
-    PointEvidence.setAside(p, none, lin, SetAside.none(), FLOOR_M, out);
+    PointEvidence.setAside(p, none, lin, none, SetAside.none(), FLOOR_M, out);
     return out;
   }
 
@@ -148,10 +148,10 @@ class WirePieceTest {
     p.sort();
     boolean[] none = new boolean[p.size()];
     SetAside towerLine = SetAside.none();
-    PointEvidence.setAside(p, none, none, SetAside.none(), FLOOR_M, towerLine);
+    PointEvidence.setAside(p, none, none, none, SetAside.none(), FLOOR_M, towerLine);
     assertEquals(0, reasons(towerLine, 1, 17, SetAside.Reason.WIRE), "no pole radius");
     SetAside poleLine = SetAside.none();
-    PointEvidence.setAside(p, none, none, SetAside.none(), FLOOR_M, 80,
+    PointEvidence.setAside(p, none, none, none, SetAside.none(), FLOOR_M, 80,
         PointEvidence.POLE_RADIUS_M, poleLine);
     assertEquals(6, reasons(poleLine, 1, 7, SetAside.Reason.WIRE), "the piece");
     assertEquals(0, reasons(poleLine, 7, 17, SetAside.Reason.WIRE)
