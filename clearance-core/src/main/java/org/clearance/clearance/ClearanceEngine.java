@@ -256,7 +256,7 @@ public final class ClearanceEngine {
       all.absorb(workers.get(i).canopy);
     }
     List<TreeClearance> out = new ArrayList<>();
-    for (Tree tree : all.findTrees(ground)) {
+    for (Tree tree : all.findTrees(ground, options.threads())) {
       TreeClearance t = measureTree(tree);
       if (t != null) {
         out.add(t);
