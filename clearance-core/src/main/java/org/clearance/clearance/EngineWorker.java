@@ -74,6 +74,8 @@ final class EngineWorker implements Consumer<PointChunk> {
   private final int[][] bestConductor;
   private final double[][] bestAngle;
   private final double[][] bestStation;
+  /** Per condition and conductor, the lower bounds of the point being measured, m. */
+  private final double[][] bounds;
 
   EngineWorker(List<PreparedSpan> spans, SpanIndex index, ConditionSet conditions,
       HeightModel heights, VegetationSelector vegetation, ClearanceEngine.Options options,
@@ -107,6 +109,7 @@ final class EngineWorker implements Consumer<PointChunk> {
     bestConductor = new int[nc][ROLES.length];
     bestAngle = new double[nc][ROLES.length];
     bestStation = new double[nc][ROLES.length];
+    bounds = new double[nc][0];
   }
 
   @Override
@@ -253,9 +256,11 @@ final class EngineWorker implements Consumer<PointChunk> {
     double lowest = Double.POSITIVE_INFINITY;
     for (int k = 0; k < nc; k++) {
       CatenaryDistance[] row = p.kernels[k];
+      double[] b = bounds(k, row.length);
       for (int j = 0; j < row.length; j++) {
         if (row[j] != null) {
-          lowest = Math.min(lowest, p.lowerBound(k, j, x, y, z));
+          b[j] = p.lowerBound(k, j, x, y, z);
+          lowest = Math.min(lowest, b[j]);
         }
       }
     }
@@ -273,7 +278,7 @@ final class EngineWorker implements Consumer<PointChunk> {
         if (kernel == null || !mayKeep && g != PHASE) {
           continue;
         }
-        double bound = p.lowerBound(k, j, x, y, z);
+        double bound = bounds[k][j];
         if (bound >= best[k][g] || bound >= cutoff) {
           continue;
         }
@@ -294,12 +299,17 @@ final class EngineWorker implements Consumer<PointChunk> {
     }
     measured[sp]++;
     boolean keep = nearest <= options.keepRadius();
-    List<List<ConditionDistance>> details = new ArrayList<>();
+    List<List<ConditionDistance>> details = keep ? new ArrayList<>(ROLES.length) : null;
     for (Role role : ROLES) {
       int g = role.ordinal();
+      if (!keep && g != PHASE) {
+        continue; // nothing to store, and only energised conductors set span minima
+      }
       boolean present = role == Role.PHASE || p.has(role);
       List<ConditionDistance> list = keep && present ? new ArrayList<>(nc) : null;
-      details.add(list == null ? List.of() : list);
+      if (keep) {
+        details.add(list == null ? List.of() : list);
+      }
       for (int k = 0; k < nc; k++) {
         int j = bestConductor[k][g];
         String name = conditions.names().get(k);
@@ -336,6 +346,14 @@ final class EngineWorker implements Consumer<PointChunk> {
           details.get(Role.PHASE.ordinal()), details.get(Role.NEUTRAL.ordinal()),
           details.get(Role.SHIELD.ordinal())));
     }
+  }
+
+  /** This worker's row of lower bounds for condition {@code k}, at least {@code n} long. */
+  private double[] bounds(int k, int n) {
+    if (bounds[k].length < n) {
+      bounds[k] = new double[n];
+    }
+    return bounds[k];
   }
 
   private boolean nearStructure(PreparedSpan p, double x, double y) {

@@ -43,6 +43,8 @@ final class PreparedSpan {
   final String[] names;
   /** Role of each conductor: a wire of no known role counts as energised (issue 15). */
   final Role[] roles;
+  /** Per role ordinal, whether a conductor of the span has it. */
+  private final boolean[] present = new boolean[Role.values().length];
   /**
    * Cross-arm boxes at the span's two structures, in the span frame: per end (0 at the first
    * structure, 1 at the second) the least and largest offset, the lowest elevation and the
@@ -84,6 +86,7 @@ final class PreparedSpan {
       ConductorModel conductor = model.conductors().get(j);
       names[j] = conductor.name();
       roles[j] = Role.ofName(conductor.role());
+      present[roles[j].ordinal()] = true;
       for (int k = 0; k < conditions; k++) {
         Optional<ConductorState> state = k < conductor.states().size()
             ? conductor.states().get(k) : Optional.empty();
@@ -179,12 +182,7 @@ final class PreparedSpan {
 
   /** Whether the span has a conductor of this role. */
   boolean has(Role role) {
-    for (Role r : roles) {
-      if (r == role) {
-        return true;
-      }
-    }
-    return false;
+    return present[role.ordinal()];
   }
 
   /** Whether a point lies in the measuring box. */

@@ -17,10 +17,13 @@ import org.clearance.survey.Survey;
 import org.clearance.survey.UnitsChoice;
 
 /**
- * The speed and memory benchmark (issue 6): generates a large synthetic corridor, times a raw
- * scan of its LAS file (every byte read, nothing decoded), a plain decoding pass, and every stage
- * of a whole check, and prints each as points per second, as a ratio to the raw scan, and with
- * the peak heap seen while it ran (sampled every {@link #SAMPLE_MS} ms).
+ * The speed and memory benchmark (issues 6 and 12): generates a large synthetic corridor in each
+ * asked classification mode, times a cold read of its LAS file (page cache bypassed), a raw scan
+ * (every byte read from the page cache, nothing decoded), a plain decoding pass ({@code read})
+ * and every stage of a whole check, and prints each as points per second, as a ratio to the
+ * {@code read} of the same mode, and with the peak heap seen while it ran (sampled every
+ * {@link #SAMPLE_MS} ms); then the goal ratios (whole check over read; each mode's whole check
+ * over the classified one's) and, when asked, the profile's top frames per stage.
  */
 public final class Benchmark {
 
@@ -39,105 +42,234 @@ public final class Benchmark {
    * @param dir working folder (the corridor and the run go here)
    * @param threads worker threads
    * @param rules rule profile of the check
+   * @param modes classification modes to run, in order (the first is the base of the mode
+   *     ratios; {@link ClassificationMode#FULL} is "classified")
+   * @param profile record JFR method samples and print the top frames per stage
    */
-  public record Options(long points, Path dir, int threads, String rules) {}
+  public record Options(long points, Path dir, int threads, String rules,
+      List<ClassificationMode> modes, boolean profile) {
+
+    /** The classified survey only, no profile. */
+    public Options(long points, Path dir, int threads, String rules) {
+      this(points, dir, threads, rules, List.of(ClassificationMode.FULL), false);
+    }
+
+    public Options {
+      modes = List.copyOf(modes);
+      if (modes.isEmpty()) {
+        throw new IllegalArgumentException("no classification mode to run");
+      }
+    }
+  }
 
   /**
    * One timed step.
    *
+   * @param mode classification mode of the survey ({@link #modeName})
    * @param stage name
    * @param seconds wall time, s
    * @param pointsPerSecond survey points (or vegetation points for the clearance stage) per s
-   * @param ratioToScan seconds over the raw scan's seconds
+   * @param ratioToRead seconds over the plain decoding pass's seconds of the same mode
    * @param peakHeapBytes largest heap in use seen while the step ran, bytes
    */
-  public record Row(String stage, double seconds, double pointsPerSecond, double ratioToScan,
-      long peakHeapBytes) {}
+  public record Row(String mode, String stage, double seconds, double pointsPerSecond,
+      double ratioToRead, long peakHeapBytes) {}
 
   private Benchmark() {}
 
-  /** Runs the benchmark and prints its table; returns the rows. */
+  /** The benchmark's name of a classification mode. */
+  public static String modeName(ClassificationMode mode) {
+    return switch (mode) {
+      case FULL -> "classified";
+      case WIRES_UNLABELLED -> "wires-unlabelled";
+      case GROUND_ONLY -> "ground-only";
+      case UNCLASSIFIED -> "unclassified";
+    };
+  }
+
+  /** The mode of a benchmark name ({@link #modeName}); empty when none has it. */
+  public static Optional<ClassificationMode> mode(String name) {
+    for (ClassificationMode m : ClassificationMode.values()) {
+      if (modeName(m).equals(name)) {
+        return Optional.of(m);
+      }
+    }
+    return Optional.empty();
+  }
+
+  /** Runs the benchmark and prints its tables; returns the rows. */
   public static List<Row> run(Options o, PrintWriter out) throws IOException {
     Files.createDirectories(o.dir());
+    out.printf(Locale.ROOT, "machine: %d cores, max heap %d MiB, Java %s; %d threads%n",
+        Runtime.getRuntime().availableProcessors(), Runtime.getRuntime().maxMemory() >> 20,
+        System.getProperty("java.version"), o.threads());
+    out.flush();
+    List<Row> rows = new ArrayList<>();
+    HeapSampler heap = new HeapSampler();
+    heap.start();
+    StageProfile profile = o.profile() ? new StageProfile(o.dir()) : null;
+    try {
+      for (ClassificationMode mode : o.modes()) {
+        rows.addAll(runMode(o, mode, heap, profile, out));
+      }
+      printRatios(rows, o.modes(), out);
+      if (profile != null) {
+        profile.print(out);
+      }
+    } finally {
+      heap.stop();
+      if (profile != null) {
+        profile.close();
+      }
+    }
+    return rows;
+  }
+
+  private static List<Row> runMode(Options o, ClassificationMode mode, HeapSampler heap,
+      StageProfile profile, PrintWriter out) throws IOException {
+    String name = modeName(mode);
     int spans = (int) Math.max(DemoOptions.MIN_SPANS, Math.min(DemoOptions.MAX_SPANS,
         Math.round(o.points() / (POINTS_PER_SPAN_AND_DENSITY * DENSITY))));
-    DemoOptions demo = DemoOptions.defaults().withSpanCount(spans).withPointDensity(DENSITY);
+    DemoOptions demo = DemoOptions.defaults().withSpanCount(spans).withPointDensity(DENSITY)
+        .withMode(mode);
+    Path dir = o.dir().resolve(name);
     long t0 = System.nanoTime();
-    DemoCorridor.DemoFiles files = DemoCorridor.write(o.dir().resolve("input"), demo);
-    out.printf(Locale.ROOT, "generated %,d points (%d spans, %.0f points/m2) in %.1f s: %s%n",
-        files.pointCount(), spans, DENSITY, (System.nanoTime() - t0) / 1e9, files.survey());
-    out.printf(Locale.ROOT, "machine: %d cores, max heap %d MiB, Java %s%n",
-        Runtime.getRuntime().availableProcessors(), Runtime.getRuntime().maxMemory() >> 20,
-        System.getProperty("java.version"));
+    DemoCorridor.DemoFiles files = DemoCorridor.write(dir.resolve("input"), demo);
+    out.printf(Locale.ROOT, "%n%s: generated %,d points (%d spans, %.0f points/m2) in %.1f s: "
+        + "%s%n", name, files.pointCount(), spans, DENSITY, (System.nanoTime() - t0) / 1e9,
+        files.survey());
     out.flush();
 
     Survey survey = Survey.open(List.of(files.survey()), UnitsChoice.fromFile());
     long n = survey.pointCount();
-    survey.rawScan(); // warm the page cache, as the check's passes find it
-    HeapSampler heap = new HeapSampler();
-    heap.start();
     List<Row> rows = new ArrayList<>();
-    try {
-      heap.reset();
-      long s0 = System.nanoTime();
-      long bytes = survey.rawScan();
-      double scan = (System.nanoTime() - s0) / 1e9;
-      rows.add(new Row("raw scan", scan, n / scan, 1.0, heap.peak()));
-      out.printf(Locale.ROOT, "raw scan: %,d bytes in %.3f s%n", bytes, scan);
+    heap.reset();
+    Optional<ColdRead.Result> cold = ColdRead.read(files.survey());
+    long coldHeap = heap.peak();
+    survey.rawScan(); // warm the page cache, as the check's passes find it
+    heap.reset();
+    long s0 = System.nanoTime();
+    survey.rawScan();
+    double scan = (System.nanoTime() - s0) / 1e9;
+    long scanHeap = heap.peak();
 
-      heap.reset();
-      AtomicLong vegetation = new AtomicLong();
-      long r0 = System.nanoTime();
-      survey.readParallel(o.threads(), () -> chunk -> {
-        long v = 0;
-        short[] cls = chunk.classification();
-        for (int i = 0; i < chunk.size(); i++) {
-          if (cls[i] >= 3 && cls[i] <= 5) {
-            v++;
-          }
-        }
-        vegetation.addAndGet(v);
-      });
-      double read = (System.nanoTime() - r0) / 1e9;
-      rows.add(new Row("read", read, n / read, read / scan, heap.peak()));
+    AtomicLong vegetation = new AtomicLong();
+    countVegetation(survey, o.threads(), vegetation); // warms the decoder up (JIT)
+    heap.reset();
+    mark(profile);
+    long r0 = System.nanoTime();
+    countVegetation(survey, o.threads(), vegetation);
+    double read = (System.nanoTime() - r0) / 1e9;
+    ended(profile, name, "read");
+    cold.ifPresent(c -> rows.add(new Row(name, "cold read", c.seconds(), n / c.seconds(),
+        c.seconds() / read, coldHeap)));
+    rows.add(new Row(name, "raw scan", scan, n / scan, scan / read, scanHeap));
+    rows.add(new Row(name, "read", read, n / read, 1.0, heap.peak()));
+    out.printf(Locale.ROOT, "%s: cold read %s; raw scan (page cache) %.3f s%n", name,
+        cold.map(ColdRead.Result::describe).orElse(ColdRead.UNAVAILABLE), scan);
 
-      heap.reset();
-      Path run = o.dir().resolve("run");
-      CheckInputs inputs = new CheckInputs(List.of(files.survey()), UnitsChoice.fromFile(),
-          files.structures(), List.of(files.lineSpec()), Optional.empty(),
-          Optional.ofNullable(o.rules()), run);
-      new ClearanceCheck(CheckOptions.defaults(o.threads()), new PrintWriter(new StringWriter()),
-          (stage, seconds) -> {
-            long count = stage.equals("clearance") ? vegetation.get() : n;
-            rows.add(new Row(stage, seconds, count / seconds, seconds / scan, heap.peak()));
-            heap.reset();
-          }).run(inputs, "bench");
-    } finally {
-      heap.stop();
-    }
-    print(rows, n, out);
+    heap.reset();
+    Path run = dir.resolve("run");
+    CheckInputs inputs = new CheckInputs(List.of(files.survey()), UnitsChoice.fromFile(),
+        files.structures(), List.of(files.lineSpec()), Optional.empty(),
+        Optional.ofNullable(o.rules()), run);
+    mark(profile);
+    new ClearanceCheck(CheckOptions.defaults(o.threads()), new PrintWriter(new StringWriter()),
+        (stage, seconds) -> {
+          // Vegetation is counted by class; an inferred survey's vegetation is all of its
+          // unclassified points, so its clearance rate is given in survey points.
+          long count = stage.equals("clearance") && vegetation.get() > 0 ? vegetation.get() : n;
+          rows.add(new Row(name, stage, seconds, count / seconds, seconds / read,
+              heap.peak()));
+          ended(profile, name, stage);
+          heap.reset();
+        }).run(inputs, "bench");
+    print(rows, n, vegetation.get() > 0, out);
     return rows;
   }
 
-  private static void print(List<Row> rows, long points, PrintWriter out) {
+  /** The plain decoding pass: every point decoded on all threads, vegetation counted. */
+  private static void countVegetation(Survey survey, int threads, AtomicLong vegetation) {
+    vegetation.set(0);
+    survey.readParallel(threads, () -> chunk -> {
+      long v = 0;
+      short[] cls = chunk.classification();
+      for (int i = 0; i < chunk.size(); i++) {
+        if (cls[i] >= 3 && cls[i] <= 5) {
+          v++;
+        }
+      }
+      vegetation.addAndGet(v);
+    });
+  }
+
+  private static void mark(StageProfile profile) {
+    if (profile != null) {
+      profile.mark();
+    }
+  }
+
+  private static void ended(StageProfile profile, String mode, String stage) {
+    if (profile != null) {
+      profile.ended(mode + " " + stage);
+    }
+  }
+
+  /** Stages that are not part of the check. */
+  private static boolean outsideCheck(Row r) {
+    return r.stage().equals("cold read") || r.stage().equals("raw scan")
+        || r.stage().equals("read");
+  }
+
+  /** Seconds of the whole check of one mode. */
+  private static double checkSeconds(List<Row> rows, String mode) {
+    return rows.stream().filter(r -> r.mode().equals(mode) && !outsideCheck(r))
+        .mapToDouble(Row::seconds).sum();
+  }
+
+  private static void print(List<Row> rows, long points, boolean classifiedVegetation,
+      PrintWriter out) {
     out.printf(Locale.ROOT, "%n%-12s %9s %14s %9s %10s%n", "stage", "seconds", "points/s",
-        "x scan", "peak MiB");
-    double check = 0;
+        "x read", "peak MiB");
+    double read = 0;
     long peak = 0;
-    double scan = rows.get(0).seconds();
     for (Row r : rows) {
       out.printf(Locale.ROOT, "%-12s %9.3f %14s %9.1f %10d%n", r.stage(), r.seconds(),
-          String.format(Locale.ROOT, "%,.0f", r.pointsPerSecond()), r.ratioToScan(),
+          String.format(Locale.ROOT, "%,.0f", r.pointsPerSecond()), r.ratioToRead(),
           r.peakHeapBytes() >> 20);
-      if (!r.stage().equals("raw scan") && !r.stage().equals("read")) {
-        check += r.seconds();
+      if (r.stage().equals("read")) {
+        read = r.seconds();
+      } else if (!outsideCheck(r)) {
         peak = Math.max(peak, r.peakHeapBytes());
       }
     }
+    double check = checkSeconds(rows, rows.get(0).mode());
     out.printf(Locale.ROOT, "%-12s %9.3f %14s %9.1f %10d%n", "whole check", check,
-        String.format(Locale.ROOT, "%,.0f", points / check), check / scan, peak >> 20);
-    out.println("(clearance: vegetation points per second; other stages: survey points per "
-        + "second; peak heap sampled every " + SAMPLE_MS + " ms)");
+        String.format(Locale.ROOT, "%,.0f", points / check), check / read, peak >> 20);
+    out.println("(clearance: " + (classifiedVegetation ? "vegetation" : "survey")
+        + " points per second; other stages: survey points per second; x read: seconds over "
+        + "the read's; peak heap sampled every " + SAMPLE_MS + " ms)");
+    out.flush();
+  }
+
+  private static void printRatios(List<Row> rows, List<ClassificationMode> modes,
+      PrintWriter out) {
+    String base = modeName(modes.get(0));
+    double baseCheck = checkSeconds(rows, base);
+    out.printf(Locale.ROOT, "%ngoal ratios (issue 12: whole check <= 10 x read; other modes "
+        + "<= 2 x %s)%n", base);
+    for (ClassificationMode m : modes) {
+      String name = modeName(m);
+      double check = checkSeconds(rows, name);
+      double read = rows.stream().filter(r -> r.mode().equals(name)
+          && r.stage().equals("read")).findFirst().orElseThrow().seconds();
+      out.printf(Locale.ROOT, "  %-16s whole check %8.3f s = %6.1f x read", name, check,
+          check / read);
+      if (!name.equals(base)) {
+        out.printf(Locale.ROOT, " = %5.2f x %s", check / baseCheck, base);
+      }
+      out.println();
+    }
     out.flush();
   }
 
