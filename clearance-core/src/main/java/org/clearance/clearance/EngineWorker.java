@@ -74,6 +74,8 @@ final class EngineWorker implements Consumer<PointChunk> {
   private final int[][] bestConductor;
   private final double[][] bestAngle;
   private final double[][] bestStation;
+  /** Per span, whether {@link #minimaWithinReach} has held. */
+  private final boolean[] screened;
   /** Per condition and conductor, the lower bounds of the point being measured, m. */
   private final double[][] bounds;
 
@@ -110,6 +112,7 @@ final class EngineWorker implements Consumer<PointChunk> {
     bestAngle = new double[nc][ROLES.length];
     bestStation = new double[nc][ROLES.length];
     bounds = new double[nc][0];
+    screened = new boolean[n];
   }
 
   @Override
@@ -187,7 +190,7 @@ final class EngineWorker implements Consumer<PointChunk> {
         }
       }
       if (p.inBox(s, e, z)) {
-        measure(p, x, y, z, cls, hag);
+        measure(p, s, x, y, z, cls, hag);
       }
     }
     if (canopy != null && inTreeRegion && !notVegetation && hag >= CANOPY_MIN_HEIGHT_M) {
@@ -248,9 +251,16 @@ final class EngineWorker implements Consumer<PointChunk> {
    * shield; issue 15). The span minima count energised conductors only; the point is kept when
    * within the keep radius of any conductor, so a zone that names another role can be checked.
    */
-  private void measure(PreparedSpan p, double x, double y, double z, int cls, double hag) {
+  private void measure(PreparedSpan p, double s, double x, double y, double z, int cls,
+      double hag) {
     int sp = p.index;
     int nc = conditions.size();
+    if (p.belowFloor(s, z) && minimaWithinReach(p)) {
+      // Farther than the keep radius from every conductor, so not stored, and every span
+      // minimum is already nearer than that: nothing to compute (issue 12's one comparison).
+      measured[sp]++;
+      return;
+    }
     // Lower bounds first: a point that cannot be stored (farther than the keep radius in every
     // condition) only needs exact distances where it may set a new span minimum.
     double lowest = Double.POSITIVE_INFINITY;
@@ -346,6 +356,26 @@ final class EngineWorker implements Consumer<PointChunk> {
           details.get(Role.PHASE.ordinal()), details.get(Role.NEUTRAL.ordinal()),
           details.get(Role.SHIELD.ordinal())));
     }
+  }
+
+  /**
+   * Whether every condition of the span with an energised conductor already has a minimum within
+   * the keep radius in this worker (then a point farther than that cannot lower it). Once true it
+   * stays true: minima only fall.
+   */
+  private boolean minimaWithinReach(PreparedSpan p) {
+    int sp = p.index;
+    if (screened[sp]) {
+      return true;
+    }
+    for (int k = 0; k < conditions.size(); k++) {
+      ConditionMinimum m = minimum[sp][k];
+      if (p.phaseIn[k] && (m == null || !(m.distance() <= options.keepRadius()))) {
+        return false;
+      }
+    }
+    screened[sp] = true;
+    return true;
   }
 
   /** This worker's row of lower bounds for condition {@code k}, at least {@code n} long. */

@@ -3,6 +3,7 @@ package org.clearance.examples;
 import java.io.IOException;
 import java.io.PrintWriter;
 import java.io.StringWriter;
+import java.lang.management.ManagementFactory;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
@@ -71,9 +72,13 @@ public final class Benchmark {
    * @param pointsPerSecond survey points (or vegetation points for the clearance stage) per s
    * @param ratioToRead seconds over the plain decoding pass's seconds of the same mode
    * @param peakHeapBytes largest heap in use seen while the step ran, bytes
+   * @param cpuSeconds processor time of the whole process while the step ran (all threads,
+   *     garbage collection and compilation included), s; NaN where not measured. Over the wall
+   *     time it gives the cores kept busy, and it is the figure to compare when other jobs share
+   *     the machine
    */
   public record Row(String mode, String stage, double seconds, double pointsPerSecond,
-      double ratioToRead, long peakHeapBytes) {}
+      double ratioToRead, long peakHeapBytes, double cpuSeconds) {}
 
   private Benchmark() {}
 
@@ -148,23 +153,27 @@ public final class Benchmark {
     long coldHeap = heap.peak();
     survey.rawScan(); // warm the page cache, as the check's passes find it
     heap.reset();
+    double c0 = cpuSeconds();
     long s0 = System.nanoTime();
     survey.rawScan();
     double scan = (System.nanoTime() - s0) / 1e9;
+    double scanCpu = cpuSeconds() - c0;
     long scanHeap = heap.peak();
 
     AtomicLong vegetation = new AtomicLong();
     countVegetation(survey, o.threads(), vegetation); // warms the decoder up (JIT)
     heap.reset();
     mark(profile);
+    double c1 = cpuSeconds();
     long r0 = System.nanoTime();
     countVegetation(survey, o.threads(), vegetation);
     double read = (System.nanoTime() - r0) / 1e9;
+    double readCpu = cpuSeconds() - c1;
     ended(profile, name, "read");
     cold.ifPresent(c -> rows.add(new Row(name, "cold read", c.seconds(), n / c.seconds(),
-        c.seconds() / read, coldHeap)));
-    rows.add(new Row(name, "raw scan", scan, n / scan, scan / read, scanHeap));
-    rows.add(new Row(name, "read", read, n / read, 1.0, heap.peak()));
+        c.seconds() / read, coldHeap, Double.NaN)));
+    rows.add(new Row(name, "raw scan", scan, n / scan, scan / read, scanHeap, scanCpu));
+    rows.add(new Row(name, "read", read, n / read, 1.0, heap.peak(), readCpu));
     out.printf(Locale.ROOT, "%s: cold read %s; raw scan (page cache) %.3f s%n", name,
         cold.map(ColdRead.Result::describe).orElse(ColdRead.UNAVAILABLE), scan);
 
@@ -174,13 +183,16 @@ public final class Benchmark {
         files.structures(), List.of(files.lineSpec()), Optional.empty(),
         Optional.ofNullable(o.rules()), run);
     mark(profile);
+    double[] cpuAt = {cpuSeconds()};
     new ClearanceCheck(CheckOptions.defaults(o.threads()), new PrintWriter(new StringWriter()),
         (stage, seconds) -> {
           // Vegetation is counted by class; an inferred survey's vegetation is all of its
           // unclassified points, so its clearance rate is given in survey points.
           long count = stage.equals("clearance") && vegetation.get() > 0 ? vegetation.get() : n;
+          double cpu = cpuSeconds();
           rows.add(new Row(name, stage, seconds, count / seconds, seconds / read,
-              heap.peak()));
+              heap.peak(), cpu - cpuAt[0]));
+          cpuAt[0] = cpu;
           ended(profile, name, stage);
           heap.reset();
         }).run(inputs, "bench");
@@ -203,6 +215,16 @@ public final class Benchmark {
     });
   }
 
+  /** Processor time of this process so far, s (NaN where the JVM does not tell). */
+  private static double cpuSeconds() {
+    if (ManagementFactory.getOperatingSystemMXBean()
+        instanceof com.sun.management.OperatingSystemMXBean os) {
+      long ns = os.getProcessCpuTime();
+      return ns < 0 ? Double.NaN : ns / 1e9;
+    }
+    return Double.NaN;
+  }
+
   private static void mark(StageProfile profile) {
     if (profile != null) {
       profile.mark();
@@ -221,52 +243,66 @@ public final class Benchmark {
         || r.stage().equals("read");
   }
 
-  /** Seconds of the whole check of one mode. */
-  private static double checkSeconds(List<Row> rows, String mode) {
+  /** Wall seconds (or processor seconds with {@code cpu}) of the whole check of one mode. */
+  private static double checkSeconds(List<Row> rows, String mode, boolean cpu) {
     return rows.stream().filter(r -> r.mode().equals(mode) && !outsideCheck(r))
-        .mapToDouble(Row::seconds).sum();
+        .mapToDouble(r -> cpu ? r.cpuSeconds() : r.seconds()).sum();
+  }
+
+  /** The read row of a mode. */
+  private static Row readRow(List<Row> rows, String mode) {
+    return rows.stream().filter(r -> r.mode().equals(mode) && r.stage().equals("read"))
+        .findFirst().orElseThrow();
   }
 
   private static void print(List<Row> rows, long points, boolean classifiedVegetation,
       PrintWriter out) {
-    out.printf(Locale.ROOT, "%n%-12s %9s %14s %9s %10s%n", "stage", "seconds", "points/s",
-        "x read", "peak MiB");
-    double read = 0;
+    out.printf(Locale.ROOT, "%n%-12s %9s %14s %9s %9s %9s %7s %10s%n", "stage", "seconds",
+        "points/s", "x read", "cpu s", "cpu x rd", "cores", "peak MiB");
+    String mode = rows.get(0).mode();
+    Row read = readRow(rows, mode);
     long peak = 0;
     for (Row r : rows) {
-      out.printf(Locale.ROOT, "%-12s %9.3f %14s %9.1f %10d%n", r.stage(), r.seconds(),
-          String.format(Locale.ROOT, "%,.0f", r.pointsPerSecond()), r.ratioToRead(),
-          r.peakHeapBytes() >> 20);
-      if (r.stage().equals("read")) {
-        read = r.seconds();
-      } else if (!outsideCheck(r)) {
+      line(out, r.stage(), r.seconds(), r.pointsPerSecond(), r.ratioToRead(), r.cpuSeconds(),
+          read.cpuSeconds(), r.peakHeapBytes());
+      if (!outsideCheck(r)) {
         peak = Math.max(peak, r.peakHeapBytes());
       }
     }
-    double check = checkSeconds(rows, rows.get(0).mode());
-    out.printf(Locale.ROOT, "%-12s %9.3f %14s %9.1f %10d%n", "whole check", check,
-        String.format(Locale.ROOT, "%,.0f", points / check), check / read, peak >> 20);
+    double check = checkSeconds(rows, mode, false);
+    line(out, "whole check", check, points / check, check / read.seconds(),
+        checkSeconds(rows, mode, true), read.cpuSeconds(), peak);
     out.println("(clearance: " + (classifiedVegetation ? "vegetation" : "survey")
         + " points per second; other stages: survey points per second; x read: seconds over "
-        + "the read's; peak heap sampled every " + SAMPLE_MS + " ms)");
+        + "the read's; cpu s: processor seconds of the process, cpu x rd: over the read's, "
+        + "cores: cpu s over seconds; peak heap sampled every " + SAMPLE_MS + " ms)");
     out.flush();
+  }
+
+  private static void line(PrintWriter out, String stage, double seconds, double rate,
+      double ratio, double cpu, double readCpu, long heapBytes) {
+    out.printf(Locale.ROOT, "%-12s %9.3f %14s %9.1f %9.3f %9.1f %7.2f %10d%n", stage, seconds,
+        String.format(Locale.ROOT, "%,.0f", rate), ratio, cpu, cpu / readCpu, cpu / seconds,
+        heapBytes >> 20);
   }
 
   private static void printRatios(List<Row> rows, List<ClassificationMode> modes,
       PrintWriter out) {
     String base = modeName(modes.get(0));
-    double baseCheck = checkSeconds(rows, base);
+    double baseCheck = checkSeconds(rows, base, false);
+    double baseCpu = checkSeconds(rows, base, true);
     out.printf(Locale.ROOT, "%ngoal ratios (issue 12: whole check <= 10 x read; other modes "
-        + "<= 2 x %s)%n", base);
+        + "<= 2 x %s); wall time, and processor time in brackets%n", base);
     for (ClassificationMode m : modes) {
       String name = modeName(m);
-      double check = checkSeconds(rows, name);
-      double read = rows.stream().filter(r -> r.mode().equals(name)
-          && r.stage().equals("read")).findFirst().orElseThrow().seconds();
-      out.printf(Locale.ROOT, "  %-16s whole check %8.3f s = %6.1f x read", name, check,
-          check / read);
+      double check = checkSeconds(rows, name, false);
+      double cpu = checkSeconds(rows, name, true);
+      Row read = readRow(rows, name);
+      out.printf(Locale.ROOT, "  %-16s whole check %8.3f s = %6.1f x read (%6.1f)", name,
+          check, check / read.seconds(), cpu / read.cpuSeconds());
       if (!name.equals(base)) {
-        out.printf(Locale.ROOT, " = %5.2f x %s", check / baseCheck, base);
+        out.printf(Locale.ROOT, " = %5.2f x %s (%5.2f)", check / baseCheck, base,
+            cpu / baseCpu);
       }
       out.println();
     }
