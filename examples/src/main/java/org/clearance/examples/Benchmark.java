@@ -116,11 +116,11 @@ public final class Benchmark {
     try {
       for (ClassificationMode mode : o.modes()) {
         rows.addAll(runMode(o, mode, heap, profile, out));
+        if (profile != null) {
+          profile.print(out);
+        }
       }
       printRatios(rows, o.modes(), out);
-      if (profile != null) {
-        profile.print(out);
-      }
     } finally {
       heap.stop();
       if (profile != null) {

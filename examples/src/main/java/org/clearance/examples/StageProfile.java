@@ -63,9 +63,11 @@ final class StageProfile implements AutoCloseable {
     last = now;
   }
 
-  /** Stops recording and prints each stage's top innermost frames with their sample share. */
+  /**
+   * Prints the top innermost frames of each stage ended since the last print, with their sample
+   * share (printed per mode, so that a later failure does not lose them); recording goes on.
+   */
   void print(PrintWriter out) throws IOException {
-    recording.stop();
     recording.dump(file);
     Map<String, Map<String, Integer>> byStage = new LinkedHashMap<>();
     Map<String, Integer> totals = new HashMap<>();
@@ -99,6 +101,7 @@ final class StageProfile implements AutoCloseable {
               100.0 * en.getValue() / total, en.getKey()));
     });
     out.flush();
+    windows.clear();
   }
 
   /**
@@ -126,6 +129,7 @@ final class StageProfile implements AutoCloseable {
 
   @Override
   public void close() throws IOException {
+    recording.stop();
     recording.close();
     Files.deleteIfExists(file);
   }
