@@ -35,7 +35,7 @@ public final class BenchCommand implements Callable<Integer> {
       description = "Worker threads (default: cores, at most 4).")
   Integer threads;
 
-  @Option(names = "--modes", paramLabel = "MODE[,MODE...]", split = ",",
+  @Option(names = "--modes", paramLabel = "MODE", split = ",",
       defaultValue = "classified,ground-only,unclassified",
       description = "Classification modes of the generated survey, each generated and checked in "
           + "turn; the first is the base of the mode ratios: classified, wires-unlabelled, "
