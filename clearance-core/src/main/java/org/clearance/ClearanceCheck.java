@@ -379,7 +379,7 @@ public final class ClearanceCheck {
         total[c] += counts.get(i)[c];
       }
     }
-    return new SurveyScan(first.build(), total, gpsMin, gpsMax);
+    return new SurveyScan(first.build(options.threads()), total, gpsMin, gpsMax);
   }
 
   private void start() {

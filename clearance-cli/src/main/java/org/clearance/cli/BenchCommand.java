@@ -2,7 +2,10 @@ package org.clearance.cli;
 
 import java.io.IOException;
 import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
 import java.util.concurrent.Callable;
+import org.clearance.examples.ClassificationMode;
 import org.clearance.examples.Benchmark;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
@@ -12,9 +15,10 @@ import picocli.CommandLine.Option;
 @Command(
     name = "bench",
     description = {
-      "Generates a large synthetic corridor and times a raw scan of its file, a decoding pass "
-          + "and every stage of a whole check: points per second, ratio to the raw scan, peak "
-          + "heap. See docs/benchmark.md."
+      "Generates a large synthetic corridor in each classification mode and times a cold read "
+          + "of its file, a raw scan, a decoding pass (read) and every stage of a whole check: "
+          + "points per second, ratio to the read, peak heap; then the goal ratios of issue 12. "
+          + "See docs/benchmark.md."
     },
     mixinStandardHelpOptions = true)
 public final class BenchCommand implements Callable<Integer> {
@@ -31,6 +35,17 @@ public final class BenchCommand implements Callable<Integer> {
       description = "Worker threads (default: cores, at most 4).")
   Integer threads;
 
+  @Option(names = "--modes", paramLabel = "MODE", split = ",",
+      defaultValue = "classified,ground-only,unclassified",
+      description = "Classification modes of the generated survey, each generated and checked in "
+          + "turn; the first is the base of the mode ratios: classified, wires-unlabelled, "
+          + "ground-only, unclassified (default: ${DEFAULT-VALUE}).")
+  List<String> modes;
+
+  @Option(names = "--profile",
+      description = "Record JFR method samples and print the top frames of every stage.")
+  boolean profile;
+
   @Option(names = "--rules", paramLabel = "NAME|FILE", defaultValue = "example-utility",
       description = "Rule profile of the timed check (default: ${DEFAULT-VALUE}).")
   String rules;
@@ -45,7 +60,14 @@ public final class BenchCommand implements Callable<Integer> {
     }
     int n = threads != null ? threads
         : Math.min(CheckSettings.DEFAULT_MAX_THREADS, Runtime.getRuntime().availableProcessors());
-    Benchmark.run(new Benchmark.Options(points, dir, n, rules), spec.commandLine().getOut());
+    List<ClassificationMode> chosen = new ArrayList<>();
+    for (String m : modes) {
+      chosen.add(Benchmark.mode(m.strip()).orElseThrow(() -> new CommandLine.ParameterException(
+          spec.commandLine(), "--modes: unknown classification mode '" + m + "' (classified, "
+              + "wires-unlabelled, ground-only, unclassified)")));
+    }
+    Benchmark.run(new Benchmark.Options(points, dir, n, rules, chosen, profile),
+        spec.commandLine().getOut());
     return ClearanceCommand.EXIT_OK;
   }
 }

@@ -352,7 +352,7 @@ public final class ClearanceEngine {
       all.absorb(workers.get(i).canopy);
     }
     List<TreeClearance> out = new ArrayList<>();
-    for (Tree tree : all.findTrees(ground)) {
+    for (Tree tree : all.findTrees(ground, options.threads())) {
       out.addAll(measureTree(tree));
     }
     out.sort((a, b) -> Double.compare(a.baseDistances().get(0), b.baseDistances().get(0)));

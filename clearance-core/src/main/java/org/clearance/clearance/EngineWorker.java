@@ -79,6 +79,10 @@ final class EngineWorker implements Consumer<PointChunk> {
    * (slot {@code ROLES.length + index}). */
   private final List<Double> voltages;
   private final int[][][] voltageGroups;
+  /** Per span, whether {@link #minimaWithinReach} has held. */
+  private final boolean[] screened;
+  /** Per condition and conductor, the lower bounds of the point being measured, m. */
+  private final double[][] bounds;
 
   EngineWorker(List<PreparedSpan> spans, SpanIndex index, ConditionSet conditions,
       HeightModel heights, VegetationSelector vegetation, ClearanceEngine.Options options,
@@ -117,6 +121,8 @@ final class EngineWorker implements Consumer<PointChunk> {
     bestConductor = new int[nc][slots];
     bestAngle = new double[nc][slots];
     bestStation = new double[nc][slots];
+    bounds = new double[nc][0];
+    screened = new boolean[n];
   }
 
   @Override
@@ -199,7 +205,7 @@ final class EngineWorker implements Consumer<PointChunk> {
         }
       }
       if (p.inBox(s, e, z)) {
-        measure(p, x, y, z, cls, hag);
+        measure(p, s, x, y, z, cls, hag);
       }
     }
     if (canopy != null && inTreeRegion && !notVegetation && hag >= CANOPY_MIN_HEIGHT_M) {
@@ -260,17 +266,26 @@ final class EngineWorker implements Consumer<PointChunk> {
    * shield; issue 15). The span minima count energised conductors only; the point is kept when
    * within the keep radius of any conductor, so a zone that names another role can be checked.
    */
-  private void measure(PreparedSpan p, double x, double y, double z, int cls, double hag) {
+  private void measure(PreparedSpan p, double s, double x, double y, double z, int cls,
+      double hag) {
     int sp = p.index;
     int nc = conditions.size();
+    if (p.belowFloor(s, z) && minimaWithinReach(p)) {
+      // Farther than the keep radius from every conductor, so not stored, and every span
+      // minimum is already nearer than that: nothing to compute (issue 12's one comparison).
+      measured[sp]++;
+      return;
+    }
     // Lower bounds first: a point that cannot be stored (farther than the keep radius in every
     // condition) only needs exact distances where it may set a new span minimum.
     double lowest = Double.POSITIVE_INFINITY;
     for (int k = 0; k < nc; k++) {
       CatenaryDistance[] row = p.kernels[k];
+      double[] b = bounds(k, row.length);
       for (int j = 0; j < row.length; j++) {
         if (row[j] != null) {
-          lowest = Math.min(lowest, p.lowerBound(k, j, x, y, z));
+          b[j] = p.lowerBound(k, j, x, y, z);
+          lowest = Math.min(lowest, b[j]);
         }
       }
     }
@@ -293,7 +308,7 @@ final class EngineWorker implements Consumer<PointChunk> {
         for (int q : own) {
           need = Math.max(need, best[k][ROLES.length + q]);
         }
-        double bound = p.lowerBound(k, j, x, y, z);
+        double bound = bounds[k][j];
         if (bound >= need || bound >= cutoff) {
           continue;
         }
@@ -323,12 +338,17 @@ final class EngineWorker implements Consumer<PointChunk> {
     }
     measured[sp]++;
     boolean keep = nearest <= options.keepRadius();
-    List<List<ConditionDistance>> details = new ArrayList<>();
+    List<List<ConditionDistance>> details = keep ? new ArrayList<>(ROLES.length) : null;
     for (Role role : ROLES) {
       int g = role.ordinal();
+      if (!keep && g != PHASE) {
+        continue; // nothing to store, and only energised conductors set span minima
+      }
       boolean present = role == Role.PHASE || p.has(role);
       List<ConditionDistance> list = keep && present ? new ArrayList<>(nc) : null;
-      details.add(list == null ? List.of() : list);
+      if (keep) {
+        details.add(list == null ? List.of() : list);
+      }
       for (int k = 0; k < nc; k++) {
         int j = bestConductor[k][g];
         String name = conditions.names().get(k);
@@ -416,6 +436,34 @@ final class EngineWorker implements Consumer<PointChunk> {
       }
     }
     return false;
+  }
+
+  /**
+   * Whether every condition of the span with an energised conductor already has a minimum within
+   * the keep radius in this worker (then a point farther than that cannot lower it). Once true it
+   * stays true: minima only fall.
+   */
+  private boolean minimaWithinReach(PreparedSpan p) {
+    int sp = p.index;
+    if (screened[sp]) {
+      return true;
+    }
+    for (int k = 0; k < conditions.size(); k++) {
+      ConditionMinimum m = minimum[sp][k];
+      if (p.phaseIn[k] && (m == null || !(m.distance() <= options.keepRadius()))) {
+        return false;
+      }
+    }
+    screened[sp] = true;
+    return true;
+  }
+
+  /** This worker's row of lower bounds for condition {@code k}, at least {@code n} long. */
+  private double[] bounds(int k, int n) {
+    if (bounds[k].length < n) {
+      bounds[k] = new double[n];
+    }
+    return bounds[k];
   }
 
   private boolean nearStructure(PreparedSpan p, double x, double y) {

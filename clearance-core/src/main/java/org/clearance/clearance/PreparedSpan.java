@@ -43,6 +43,8 @@ final class PreparedSpan {
   final String[] names;
   /** Role of each conductor: a wire of no known role counts as energised (issue 15). */
   final Role[] roles;
+  /** Per role ordinal, whether a conductor of the span has it. */
+  private final boolean[] present = new boolean[Role.values().length];
   /**
    * Cross-arm boxes at the span's two structures, in the span frame: per end (0 at the first
    * structure, 1 at the second) the least and largest offset, the lowest elevation and the
@@ -53,6 +55,22 @@ final class PreparedSpan {
   final double[] armELo = {Double.NaN, Double.NaN};
   final double[] armEHi = {Double.NaN, Double.NaN};
   final double[] armZLo = {Double.NaN, Double.NaN};
+
+  /** Station bin of the conductor floor, m: a fraction of a span, a few tree crowns long. */
+  static final double FLOOR_BIN_M = 5.0;
+  /** Rounding allowance of the floor, m: far above double rounding, far below any clearance. */
+  static final double FLOOR_MARGIN_M = 1e-3;
+
+  /** The measuring box margin, m. */
+  private final double reach;
+  /**
+   * Per {@link #FLOOR_BIN_M} bin of span station from {@link #sMin}: the lowest elevation of any
+   * conductor, in any condition and any swing, whose span station lies within the reach of the
+   * bin, less {@link #FLOOR_MARGIN_M} (m; +infinity where no conductor is that near).
+   */
+  private final double[] floor;
+  /** Per condition, whether a phase (energised) conductor has a state in it. */
+  final boolean[] phaseIn;
 
   /**
    * @param reach measuring box margin around the conductors in every condition, m
@@ -74,6 +92,7 @@ final class PreparedSpan {
     constant = new double[conditions][n];
     names = new String[n];
     roles = new Role[n];
+    phaseIn = new boolean[conditions];
     double lo = Double.POSITIVE_INFINITY;
     double hi = Double.NEGATIVE_INFINITY;
     double zLo = Double.POSITIVE_INFINITY;
@@ -84,6 +103,7 @@ final class PreparedSpan {
       ConductorModel conductor = model.conductors().get(j);
       names[j] = conductor.name();
       roles[j] = Role.ofName(conductor.role());
+      present[roles[j].ordinal()] = true;
       for (int k = 0; k < conditions; k++) {
         Optional<ConductorState> state = k < conductor.states().size()
             ? conductor.states().get(k) : Optional.empty();
@@ -93,6 +113,7 @@ final class PreparedSpan {
         ConductorState st = state.get();
         ConductorCurve curve = st.curve();
         kernels[k][j] = new CatenaryDistance(curve);
+        phaseIn[k] |= roles[j] == Role.PHASE;
         swingMin[k][j] = st.swingMin();
         swingMax[k][j] = st.swingMax();
         double sag = maxSag(curve);
@@ -139,6 +160,65 @@ final class PreparedSpan {
     zMin = zLo - reach;
     zMax = zHi + reach;
     treePad = Math.max(0, treeReach - reach);
+    this.reach = reach;
+    floor = floors();
+  }
+
+  /**
+   * True when a point at span station {@code s} and elevation {@code z} is farther than the
+   * reach from every conductor in every condition: more than the reach below every conductor
+   * point within the reach along the span (a point's distance is at least its station
+   * difference along the span and at least its height difference; a catenary lies below its
+   * chord, so swinging about the chord only raises it). One comparison; a screen before the
+   * lower bounds of {@link #lowerBound}.
+   */
+  boolean belowFloor(double s, double z) {
+    int b = (int) ((s - sMin) / FLOOR_BIN_M);
+    return b >= 0 && b < floor.length && z < floor[b] - reach;
+  }
+
+  private double[] floors() {
+    if (!(sMax > sMin)) {
+      return new double[0];
+    }
+    double[] out = new double[(int) Math.ceil((sMax - sMin) / FLOOR_BIN_M)];
+    java.util.Arrays.fill(out, Double.POSITIVE_INFINITY);
+    for (CatenaryDistance[] row : kernels) {
+      for (CatenaryDistance kernel : row) {
+        if (kernel == null) {
+          continue;
+        }
+        ConductorCurve curve = kernel.conductor();
+        double length = curve.length();
+        double t0 = frame.station(curve.x(0), curve.y(0));
+        double t1 = frame.station(curve.x(length), curve.y(length));
+        if (!(Math.abs(t1 - t0) > 0)) {
+          java.util.Arrays.fill(out, Double.NEGATIVE_INFINITY); // no screen for this span
+          return out;
+        }
+        for (int b = 0; b < out.length; b++) {
+          // The conductor's own stations whose span stations lie within the reach of the bin;
+          // span station is affine in the conductor's station (both straight in plan).
+          double lo = sMin + b * FLOOR_BIN_M - reach;
+          double hi = sMin + (b + 1) * FLOOR_BIN_M + reach;
+          double u0 = length * (lo - t0) / (t1 - t0);
+          double u1 = length * (hi - t0) / (t1 - t0);
+          double from = Math.max(0, Math.min(u0, u1));
+          double to = Math.min(length, Math.max(u0, u1));
+          if (from > to) {
+            continue;
+          }
+          // A catenary is convex: its least value on [from, to] is at an end or the vertex.
+          double low = Math.min(curve.z(from), curve.z(to));
+          double vertex = curve.curve().s0();
+          if (vertex > from && vertex < to) {
+            low = Math.min(low, curve.z(vertex));
+          }
+          out[b] = Math.min(out[b], low - FLOOR_MARGIN_M);
+        }
+      }
+    }
+    return out;
   }
 
   /** True when the span has at least one conductor to measure to. */
@@ -179,12 +259,7 @@ final class PreparedSpan {
 
   /** Whether the span has a conductor of this role. */
   boolean has(Role role) {
-    for (Role r : roles) {
-      if (r == role) {
-        return true;
-      }
-    }
-    return false;
+    return present[role.ordinal()];
   }
 
   /** Whether a point lies in the measuring box. */

@@ -73,7 +73,7 @@ public final class CanopyBuilder implements Consumer<PointChunk> {
         first.absorb(b);
       }
     }
-    return first.findTrees(ground);
+    return first.findTrees(ground, threads);
   }
 
   /**
@@ -120,7 +120,17 @@ public final class CanopyBuilder implements Consumer<PointChunk> {
    * @return the trees, in no particular order
    */
   public List<Tree> findTrees(GroundModel ground) {
-    return TreeFinder.find(surface, ground, options);
+    return findTrees(ground, 1);
+  }
+
+  /**
+   * As {@link #findTrees(GroundModel)}, the blocks on {@code threads} threads (same trees in the
+   * same order for any thread count).
+   *
+   * @param threads worker threads, &gt;= 1
+   */
+  public List<Tree> findTrees(GroundModel ground, int threads) {
+    return TreeFinder.find(surface, ground, options, threads);
   }
 
   /** Approximate heap bytes of the canopy raster. */

@@ -6,6 +6,7 @@ import java.util.Objects;
 import java.util.Optional;
 import java.util.function.Consumer;
 import org.clearance.InputException;
+import org.clearance.io.OrderedParallel;
 import org.clearance.survey.PointChunk;
 import org.clearance.survey.Survey;
 
@@ -86,7 +87,7 @@ public final class GroundModelBuilder implements Consumer<PointChunk> {
     for (GroundModelBuilder b : all) {
       first.absorb(b);
     }
-    return first.build();
+    return first.build(threads);
   }
 
   /**
@@ -166,6 +167,19 @@ public final class GroundModelBuilder implements Consumer<PointChunk> {
    * @throws IllegalStateException when called twice
    */
   public GroundModel build() {
+    return build(1);
+  }
+
+  /**
+   * Makes the terrain, its blocks on {@code threads} threads. Each block's terrain depends only
+   * on the collected rasters, and the blocks are written in their fixed order, so the result is
+   * the same for every thread count. The builder cannot be used afterwards.
+   *
+   * @param threads worker threads, &gt;= 1
+   * @throws InputException when the options demand class-2 points and the survey has none
+   * @throws IllegalStateException when called twice
+   */
+  public GroundModel build(int threads) {
     if (surface == null) {
       throw new IllegalStateException("builder already built");
     }
@@ -181,30 +195,27 @@ public final class GroundModelBuilder implements Consumer<PointChunk> {
     SmrfOptions smrf = options.smrf();
     SparseGrid terrain = new SparseGrid(smrf.cellSize());
     int margin = (int) Math.ceil(options.coverageMargin() / smrf.cellSize());
-    long surfaceCells = 0;
-    long groundCells = 0;
-    long filledCells = 0;
-    for (BlockTiling.Block b : BlockTiling.cover(surface.elevations(), options.blockCells(),
-        options.overlapCells())) {
-      BlockTerrain t = blockTerrain(b, useClassified, margin);
-      int side = b.readSize();
-      for (int r = b.overlap(); r < b.overlap() + b.size(); r++) {
-        for (int c = b.overlap(); c < b.overlap() + b.size(); c++) {
-          int i = r * side + c;
-          if (!Float.isNaN(t.lowest()[i])) {
-            surfaceCells++;
-          }
-          if (t.covered()[i] && !Float.isNaN(t.dem()[i])) {
-            terrain.set(b.readCol0() + c, b.readRow0() + r, t.dem()[i]);
-            if (t.ground()[i]) {
-              groundCells++;
-            } else {
-              filledCells++;
+    long[] cells = new long[3]; // surface, ground, filled
+    OrderedParallel.forEach(BlockTiling.cover(surface.elevations(), options.blockCells(),
+        options.overlapCells()), threads, b -> blockTerrain(b, useClassified, margin), t -> {
+          BlockTiling.Block b = t.block();
+          int side = b.readSize();
+          for (int r = b.overlap(); r < b.overlap() + b.size(); r++) {
+            for (int c = b.overlap(); c < b.overlap() + b.size(); c++) {
+              int i = r * side + c;
+              if (!Float.isNaN(t.lowest()[i])) {
+                cells[0]++;
+              }
+              if (t.covered()[i] && !Float.isNaN(t.dem()[i])) {
+                terrain.set(b.readCol0() + c, b.readRow0() + r, t.dem()[i]);
+                cells[t.ground()[i] ? 1 : 2]++;
+              }
             }
           }
-        }
-      }
-    }
+        });
+    long surfaceCells = cells[0];
+    long groundCells = cells[1];
+    long filledCells = cells[2];
     GroundSource source = new GroundSource(
         useClassified ? GroundSource.Kind.CLASSIFIED : GroundSource.Kind.FILTERED,
         useClassified ? Optional.empty() : Optional.of(smrf),
@@ -217,12 +228,13 @@ public final class GroundModelBuilder implements Consumer<PointChunk> {
   /**
    * Terrain of one block (read raster, row-major).
    *
+   * @param block the block
    * @param lowest lowest point per cell of all considered points, metres, NaN where empty
    * @param covered cells within the coverage margin of a cell with points
    * @param ground cells whose value comes from ground points
    * @param dem terrain, metres; NaN when the block has no ground at all
    */
-  private record BlockTerrain(float[] lowest, boolean[] covered, boolean[] ground, float[] dem) {}
+  private record BlockTerrain(BlockTiling.Block block, float[] lowest, boolean[] covered, boolean[] ground, float[] dem) {}
 
   private BlockTerrain blockTerrain(BlockTiling.Block b, boolean useClassified, int margin) {
     int side = b.readSize();
@@ -253,7 +265,7 @@ public final class GroundModelBuilder implements Consumer<PointChunk> {
       }
       dem = Inpainter.fill(centred, side, side);
     }
-    return new BlockTerrain(all, coverage(all, side, margin), ground, dem);
+    return new BlockTerrain(b, all, coverage(all, side, margin), ground, dem);
   }
 
   /** Cells with data, grown by {@code margin} cells in x and y (a square neighbourhood). */

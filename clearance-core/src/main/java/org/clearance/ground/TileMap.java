@@ -18,6 +18,9 @@ final class TileMap {
   private long[] keys = new long[INITIAL_SLOTS];
   private float[][] tiles = new float[INITIAL_SLOTS][];
   private int size;
+  /** The tile {@link #getOrCreate} returned last and its key (null before the first). */
+  private long lastKey;
+  private float[] lastTile;
 
   /** The tile for {@code key}, or null when there is none. */
   float[] get(long key) {
@@ -37,8 +40,15 @@ final class TileMap {
 
   /** The tile for {@code key}; a new tile of {@code length} NaN cells is stored when absent. */
   float[] getOrCreate(long key, int length) {
+    // Survey points arrive in scan lines, so most fall in the tile of the point before: one
+    // comparison instead of a hash probe. Only the writing thread (there is one) touches these.
+    if (lastTile != null && key == lastKey) {
+      return lastTile;
+    }
     float[] tile = get(key);
     if (tile != null) {
+      lastKey = key;
+      lastTile = tile;
       return tile;
     }
     if (size + 1 > keys.length * MAX_LOAD) {
@@ -48,6 +58,8 @@ final class TileMap {
     Arrays.fill(tile, Float.NaN);
     insert(key, tile);
     size++;
+    lastKey = key;
+    lastTile = tile;
     return tile;
   }
 

@@ -3,6 +3,7 @@ package org.clearance.ground;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
+import org.clearance.io.OrderedParallel;
 
 /**
  * Finds individual trees in a canopy surface, one block at a time.
@@ -116,14 +117,20 @@ final class TreeFinder {
     return false;
   }
 
-  static List<Tree> find(SparseGrid dsm, GroundModel ground, TreeOptions options) {
+  /**
+   * The trees of the canopy raster {@code dsm}, block by block on {@code threads} threads; the
+   * blocks' trees are concatenated in block order, so the list is the same for any thread count.
+   */
+  static List<Tree> find(SparseGrid dsm, GroundModel ground, TreeOptions options, int threads) {
     int window = options.maxWindowCells();
     int overlap = (int) Math.ceil(2 * CROWN_REACH * window) + 1;
     Offsets offsets = new Offsets(window);
     List<Tree> trees = new ArrayList<>();
-    for (BlockTiling.Block b : BlockTiling.cover(dsm, options.blockCells(), overlap)) {
-      findInBlock(dsm, ground, options, b, offsets, trees);
-    }
+    OrderedParallel.forEach(BlockTiling.cover(dsm, options.blockCells(), overlap), threads, b -> {
+      List<Tree> inBlock = new ArrayList<>();
+      findInBlock(dsm, ground, options, b, offsets, inBlock);
+      return inBlock;
+    }, trees::addAll);
     return trees;
   }
 

@@ -3,10 +3,10 @@ package org.clearance.label;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.Collections;
-import java.util.Comparator;
 import java.util.List;
 import org.clearance.ground.GroundModel;
 import org.clearance.io.DisjointSets;
+import org.clearance.io.IntOrder;
 import org.clearance.line.SpanFrame;
 import org.clearance.survey.LongHashSet;
 import org.clearance.wire.PointSource;
@@ -159,12 +159,14 @@ public final class ObjectLabeller {
 
   /** Sorts the points by coordinates, so the result does not depend on the reading order. */
   private static void sort(LabelPoints p) {
-    Integer[] idx = new Integer[p.size];
-    for (int i = 0; i < p.size; i++) {
-      idx[i] = i;
-    }
-    Arrays.sort(idx, Comparator.<Integer>comparingDouble(i -> p.x[i])
-        .thenComparingDouble(i -> p.y[i]).thenComparingDouble(i -> p.z[i]));
+    double[] px = p.x;
+    double[] py = p.y;
+    double[] pz = p.z;
+    int[] idx = IntOrder.sorted(p.size, (a, b) -> {
+      int c = Double.compare(px[a], px[b]);
+      c = c != 0 ? c : Double.compare(py[a], py[b]);
+      return c != 0 ? c : Double.compare(pz[a], pz[b]);
+    });
     double[] x = new double[p.size];
     double[] y = new double[p.size];
     double[] z = new double[p.size];

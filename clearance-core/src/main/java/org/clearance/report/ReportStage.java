@@ -6,6 +6,8 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Objects;
+import java.util.concurrent.ExecutionException;
+import java.util.concurrent.FutureTask;
 import org.clearance.assess.RunAssessment;
 import org.clearance.assess.RunAssessor;
 import org.clearance.clearance.NearPointFile;
@@ -86,24 +88,76 @@ public final class ReportStage {
     long t0 = System.nanoTime();
     List<String> written = new ArrayList<>();
     List<String> notes = new ArrayList<>();
-    CsvOutputs.write(runDir, run, options);
+    // The GeoPackage (most of the stage's time, in SQLite) is written on a second thread while
+    // the text outputs are written here; each writer reads the assessment only and writes its
+    // own file through a temporary file, so the files are the same as one after the other.
+    FutureTask<Void> geoPackage = new FutureTask<>(() -> {
+      GeoPackageWriter.write(runDir, run, options);
+      return null;
+    });
+    Thread writer = new Thread(geoPackage, "clearance-geopackage");
+    writer.setDaemon(true);
+    writer.start();
+    boolean geoJson;
+    try {
+      CsvOutputs.write(runDir, run, options);
+      geoJson = GeoJsonSites.write(runDir, run, options);
+      HtmlReport.write(runDir, run, options);
+    } catch (IOException | RuntimeException | Error e) {
+      try {
+        await(geoPackage);
+      } catch (IOException | RuntimeException | Error also) {
+        e.addSuppressed(also);
+      }
+      throw e;
+    }
+    await(geoPackage);
     written.add(CsvOutputs.WORKLIST);
     written.add(CsvOutputs.SITES);
     written.add(CsvOutputs.SPANS);
-    GeoPackageWriter.write(runDir, run, options);
     written.add(GeoPackageWriter.FILE_NAME);
-    if (GeoJsonSites.write(runDir, run, options)) {
+    if (geoJson) {
       written.add(GeoJsonSites.FILE_NAME);
     } else {
       notes.add(GeoJsonSites.FILE_NAME + " not written: RFC 7946 asks for longitude and "
           + "latitude, and " + run.lonLatNote());
     }
-    HtmlReport.write(runDir, run, options);
     written.add(HtmlReport.FILE_NAME);
     if (console != null) {
       console.print(ConsoleSummary.text(run, options, written, notes));
       console.flush();
     }
     return new Outcome(run, written, notes, (System.nanoTime() - t0) / 1e9);
+  }
+
+  /** Waits for a writer and rethrows its failure as it was thrown. */
+  private static void await(FutureTask<Void> task) throws IOException {
+    boolean interrupted = false;
+    try {
+      while (true) {
+        try {
+          task.get();
+          return;
+        } catch (InterruptedException e) {
+          interrupted = true; // the writer must finish before its file may be touched
+        }
+      }
+    } catch (ExecutionException e) {
+      Throwable cause = e.getCause();
+      if (cause instanceof IOException io) {
+        throw io;
+      }
+      if (cause instanceof RuntimeException r) {
+        throw r;
+      }
+      if (cause instanceof Error err) {
+        throw err;
+      }
+      throw new IllegalStateException(cause);
+    } finally {
+      if (interrupted) {
+        Thread.currentThread().interrupt();
+      }
+    }
   }
 }

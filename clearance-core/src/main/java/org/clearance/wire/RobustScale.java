@@ -26,8 +26,71 @@ final class RobustScale {
       return Double.NaN;
     }
     double[] a = Arrays.copyOf(v, n);
-    Arrays.sort(a);
-    return n % 2 == 1 ? a[n / 2] : 0.5 * (a[n / 2 - 1] + a[n / 2]);
+    double upper = select(a, 0, n - 1, n / 2);
+    if (n % 2 == 1) {
+      return upper;
+    }
+    // After the selection every value left of n/2 is at most a[n/2]: the lower middle value is
+    // their largest.
+    double lower = a[0];
+    for (int i = 1; i < n / 2; i++) {
+      if (Double.compare(a[i], lower) > 0) {
+        lower = a[i];
+      }
+    }
+    return 0.5 * (lower + upper);
+  }
+
+  /**
+   * The value a sort of {@code a[lo..hi]} would put at {@code k}, found by Hoare's selection
+   * (Hoare 1961, Comm. ACM 4(7):321, "FIND"; linear time on average) in the order of
+   * {@link Double#compare} (the order of {@link Arrays#sort(double[])}), so the result equals
+   * the sorted array's element; leaves {@code a[lo..k-1] <= a[k] <= a[k+1..hi]}.
+   */
+  private static double select(double[] a, int lo, int hi, int k) {
+    while (lo < hi) {
+      // Median of three as the pivot: sorted or constant runs stay linear.
+      int mid = (lo + hi) >>> 1;
+      if (Double.compare(a[mid], a[lo]) < 0) {
+        swap(a, mid, lo);
+      }
+      if (Double.compare(a[hi], a[lo]) < 0) {
+        swap(a, hi, lo);
+      }
+      if (Double.compare(a[hi], a[mid]) < 0) {
+        swap(a, hi, mid);
+      }
+      double pivot = a[mid];
+      int i = lo;
+      int j = hi;
+      while (i <= j) {
+        while (Double.compare(a[i], pivot) < 0) {
+          i++;
+        }
+        while (Double.compare(a[j], pivot) > 0) {
+          j--;
+        }
+        if (i <= j) {
+          swap(a, i, j);
+          i++;
+          j--;
+        }
+      }
+      if (k <= j) {
+        hi = j;
+      } else if (k >= i) {
+        lo = i;
+      } else {
+        return a[k];
+      }
+    }
+    return a[k];
+  }
+
+  private static void swap(double[] a, int i, int j) {
+    double t = a[i];
+    a[i] = a[j];
+    a[j] = t;
   }
 
   /** 1.4826 times the median absolute deviation from the median of the first n values. */

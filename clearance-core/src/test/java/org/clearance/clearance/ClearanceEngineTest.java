@@ -275,6 +275,48 @@ class ClearanceEngineTest {
   }
 
   @Test
+  void pointsBelowTheConductorFloorAreBeyondTheReachInEveryCondition() {
+    // Issue 12: a point the one-comparison screen passes over must be farther than the reach
+    // from the conductor in every condition and swing (else a stored point would be lost).
+    // Exact kernel on random points under a level, an inclined (60 m rise) and a swinging one.
+    ConditionSet set = new ConditionSet(List.of("survey", "steep", "wind"),
+        List.of("survey", "hot", "blowout"));
+    SpanFrame plan = SpanFrame.between(0, 3, L, 4);
+    ConductorCurve steep = new ConductorCurve(plan, Catenary.through(0, 10, plan.length(), 70,
+        600));
+    double phi = Math.toRadians(40);
+    ConductorModel m = new ConductorModel("A", "phase",
+        List.of(Optional.of(ConductorState.hanging(conductor(0))),
+            Optional.of(ConductorState.hanging(steep)),
+            Optional.of(new ConductorState(conductor(0), -phi, phi))),
+        List.of(Optional.empty(), Optional.empty(), Optional.empty()));
+    double reach = 10;
+    PreparedSpan p = new PreparedSpan(0, span(set, List.of(m)), 3, reach, reach);
+    java.util.Random r = new java.util.Random(12);
+    int screened = 0;
+    for (int i = 0; i < 40_000; i++) {
+      double x = -15 + (L + 30) * r.nextDouble();
+      double y = -20 + 40 * r.nextDouble();
+      double z = -5 + 60 * r.nextDouble();
+      double s = p.frame.station(x, y);
+      if (!p.belowFloor(s, z)) {
+        continue;
+      }
+      screened++;
+      for (int k = 0; k < 3; k++) {
+        CatenaryDistance kernel = p.kernels[k][0];
+        double exact = kernel.distance(x, y, z, kernel.closestSwingAngle(x, y, z,
+            p.swingMin[k][0], p.swingMax[k][0]));
+        assertTrue(exact > reach, "screened point within the reach at " + x + ", " + y + ", "
+            + z + " in condition " + k + ": " + exact);
+      }
+    }
+    // The screen must also do its job: the level span's lowest point is about 23.6 m up
+    // (30 m - L^2 / 8C), so most points below 13 m pass it.
+    assertTrue(screened > 5_000, "points screened: " + screened);
+  }
+
+  @Test
   void conditionSetSplitsWindOnlyWhenStringsAreGiven() {
     LineCondition hot = new LineCondition("hot", LineCondition.Kind.TEMPERATURE, 100, 10,
         Double.NaN, Double.NaN, Double.NaN, Double.NaN, Double.NaN);

@@ -148,4 +148,46 @@ class SparseGridTest {
     assertThrows(IllegalArgumentException.class, () -> g.accumulateMin(Double.NaN, 0, 1));
     assertThrows(IllegalArgumentException.class, () -> g.accumulateMax(0, 1e12, 1));
   }
+  @Test
+  void valueReadsTheSameCellsInsideATileAsAcrossTiles() {
+    // Issue 12: value() reads the four cells of a point from one tile lookup when they share a
+    // tile; the result must be the four-lookup one bit for bit (holes, negative indices, tile
+    // borders of 8-cell tiles).
+    SparseGrid g = new SparseGrid(0.5, 8);
+    java.util.Random r = new java.util.Random(12);
+    for (int i = 0; i < 3000; i++) {
+      g.set(r.nextInt(80) - 40, r.nextInt(80) - 40, 100 * r.nextDouble());
+    }
+    for (int i = 0; i < 100_000; i++) {
+      double x = -22 + 44 * r.nextDouble();
+      double y = -22 + 44 * r.nextDouble();
+      assertEquals(Double.doubleToLongBits(fourLookups(g, x, y)),
+          Double.doubleToLongBits(g.value(x, y)), x + ", " + y);
+    }
+  }
+
+  /** value() as it was before issue 12: four cell lookups. */
+  private static double fourLookups(SparseGrid g, double x, double y) {
+    double fx = x / g.cellSize() - 0.5;
+    double fy = y / g.cellSize() - 0.5;
+    int c0 = (int) Math.floor(fx);
+    int r0 = (int) Math.floor(fy);
+    double tx = fx - c0;
+    double ty = fy - r0;
+    double[] z = {g.get(c0, r0), g.get(c0 + 1, r0), g.get(c0, r0 + 1), g.get(c0 + 1, r0 + 1)};
+    if (!Double.isNaN(z[0] + z[1] + z[2] + z[3])) {
+      return (1 - ty) * ((1 - tx) * z[0] + tx * z[1]) + ty * ((1 - tx) * z[2] + tx * z[3]);
+    }
+    double[] d = {tx * tx + ty * ty, (1 - tx) * (1 - tx) + ty * ty, tx * tx + (1 - ty) * (1 - ty),
+        (1 - tx) * (1 - tx) + (1 - ty) * (1 - ty)};
+    double best = Double.NaN;
+    double bestD = Double.POSITIVE_INFINITY;
+    for (int k = 0; k < 4; k++) {
+      if (!Double.isNaN(z[k]) && d[k] < bestD) {
+        best = z[k];
+        bestD = d[k];
+      }
+    }
+    return best;
+  }
 }

@@ -18,6 +18,33 @@ class RobustScaleTest {
   }
 
   @Test
+  void medianIsTheSortedArraysMiddleBitForBit() {
+    // Issue 12: the median is found by selection, not by a full sort; it must be the very value
+    // the sort gave (ties, signed zeros, sorted and reversed runs, a tail of the array unused).
+    Random r = new Random(12);
+    for (int trial = 0; trial < 2000; trial++) {
+      int n = 1 + r.nextInt(trial % 10 == 0 ? 3000 : 40);
+      double[] v = new double[n + r.nextInt(3)];
+      int kind = trial % 4;
+      for (int i = 0; i < v.length; i++) {
+        v[i] = switch (kind) {
+          case 0 -> r.nextGaussian();
+          case 1 -> r.nextInt(5) - 2 + (r.nextBoolean() ? 0.0 : -0.0);
+          case 2 -> i;
+          default -> -i * 0.5;
+        };
+      }
+      double[] sorted = java.util.Arrays.copyOf(v, n);
+      java.util.Arrays.sort(sorted);
+      double expected = n % 2 == 1 ? sorted[n / 2] : 0.5 * (sorted[n / 2 - 1] + sorted[n / 2]);
+      double[] before = v.clone();
+      assertEquals(Double.doubleToRawLongBits(expected),
+          Double.doubleToRawLongBits(RobustScale.median(v, n)), "trial " + trial + " n " + n);
+      org.junit.jupiter.api.Assertions.assertArrayEquals(before, v);
+    }
+  }
+
+  @Test
   void medianMatchesReferenceLibrary() {
     // Reference library: commons-math3 Median (average of the middle two for even n)
     Random r = new Random(4);
