@@ -89,6 +89,7 @@ public final class Benchmark {
       case WIRES_UNLABELLED -> "wires-unlabelled";
       case GROUND_ONLY -> "ground-only";
       case UNCLASSIFIED -> "unclassified";
+      case PARTLY_LABELLED -> "partly-labelled";
     };
   }
 
