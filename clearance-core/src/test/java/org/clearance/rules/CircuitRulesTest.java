@@ -22,7 +22,9 @@ class CircuitRulesTest {
 
   private static final double FOOT = 0.3048;
   private static final SpanContext SPAN = new SpanContext("L/1-2", "L", 230, 0, 250,
-      Map.of("A", 230.0, "B", 230.0, "C", 230.0, "D", 12.47, "E", 12.47, "F", 12.47));
+      // in position order, as the line specification gives them (Map.of has no fixed order)
+      new java.util.TreeMap<>(
+          Map.of("A", 230.0, "B", 230.0, "C", 230.0, "D", 12.47, "E", 12.47, "F", 12.47)));
 
   private static ConditionDistance at(double d, String conductor) {
     return new ConditionDistance("survey", "survey", d, d, 0, conductor, 125);
