@@ -14,11 +14,12 @@ import org.clearance.wire.SetAside;
 /**
  * One worker's share of {@code pole-points.bin}: every vegetation point within the keep radius
  * in plan of a structure centre and at most the keep height above ground, with its plan
- * distance from the centre, for pole-clearing zones (docs/rules.md). In a survey without
- * vegetation labels, a point counts as vegetation as the clearance engine counts it (at least
- * {@link VegetationSelector#UNCLASSIFIED_MIN_HEIGHT} above ground, not set aside as wire, object
- * or airborne); points within the pole column radius of the centre are the pole itself and are
- * only counted.
+ * distance from the centre, for pole-clearing zones (docs/rules.md). A point counts as
+ * vegetation as the clearance engine counts it: a labelled one by its label; one of an inferred
+ * class (class 0/1 where vegetation is inferred, a class-2 label not believed: docs/labelling.md)
+ * at least {@link VegetationSelector#UNCLASSIFIED_MIN_HEIGHT} above ground; in either, not set
+ * aside by the labelling step. Inferred points within the pole column radius of the centre are the
+ * pole itself and are only counted.
  */
 final class PoleCollector implements Consumer<PointChunk> {
 
@@ -96,6 +97,7 @@ final class PoleCollector implements Consumer<PointChunk> {
     double r2 = r * r;
     double hag = Double.NaN;
     boolean hagDone = false;
+    boolean inferred = vegetation.inferredClass(cls);
     for (long dx = 0; dx != 2 * sx; dx += sx) {
       for (long dy = 0; dy != 2 * sy; dy += sy) {
         int[] in = cells.get(key(cx + dx, cy + dy));
@@ -113,14 +115,19 @@ final class PoleCollector implements Consumer<PointChunk> {
           if (!hagDone) {
             hag = heights.heightAboveGround(x, y, z);
             hagDone = true;
-            if (hag > layout.keepHeightM() || vegetation.inferred()
-                && !(hag >= VegetationSelector.UNCLASSIFIED_MIN_HEIGHT
-                && setAside.reason(SetAside.key(x, y, z)) == SetAside.Reason.NONE)) {
+            // as the clearance engine counts vegetation: an inferred point (class 0/1, or a
+            // class-2 label not believed) at least the least height above ground; a labelled
+            // one as labelled; in either, nothing the labelling step set aside
+            if (hag > layout.keepHeightM() || inferred && !(cls == VegetationSelector.GROUND
+                ? vegetation.groundLabelDoubted(hag)
+                : hag >= VegetationSelector.UNCLASSIFIED_MIN_HEIGHT)
+                || vegetation.inferred()
+                && setAside.reason(SetAside.key(x, y, z)) != SetAside.Reason.NONE) {
               return;
             }
           }
           double plan = Math.sqrt(d2);
-          if (vegetation.inferred() && plan < layout.columnRadiusM()) {
+          if (inferred && plan < layout.columnRadiusM()) {
             column[s]++;
             continue;
           }
