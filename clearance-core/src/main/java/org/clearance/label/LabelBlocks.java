@@ -5,6 +5,7 @@ import java.util.Arrays;
 import java.util.Collections;
 import java.util.List;
 import org.clearance.ground.GroundModel;
+import org.clearance.io.OrderedParallel;
 import org.clearance.line.SpanFrame;
 import org.clearance.wire.PointSource;
 import org.clearance.wire.SetAside;
@@ -40,7 +41,7 @@ final class LabelBlocks {
   private LabelBlocks() {}
 
   static ObjectLabels label(PointSource source, List<SpanFrame> frames, double regionM,
-      GroundModel ground, SetAside setAside, boolean judgeVegetationLabels) {
+      GroundModel ground, SetAside setAside, boolean judgeVegetationLabels, int threads) {
     List<LabelPoints> counters = Collections.synchronizedList(new ArrayList<>());
     source.stream(() -> {
       LabelPoints c = new LabelPoints(frames, regionM, ground, setAside, judgeVegetationLabels,
@@ -55,61 +56,91 @@ final class LabelBlocks {
     }
     boolean echoes = later >= ObjectLabeller.ECHO_INFORMATIVE_SHARE * n;
     List<LabelledObject> objects = new ArrayList<>();
+    List<long[]> manMade = new ArrayList<>();
+    long[] counts = new long[4];
+    OrderedParallel.forEach(blocks(frames), threads, block -> labelBlock(source, frames,
+        regionM, ground, setAside, judgeVegetationLabels, echoes, block), r -> {
+          objects.addAll(r.objects());
+          manMade.add(r.manMade());
+          for (int k = 0; k < counts.length; k++) {
+            counts[k] += r.counts()[k];
+          }
+        });
+    long manMadeCount = 0;
+    for (long[] keys : manMade) {
+      for (long key : keys) {
+        setAside.addObject(key);
+      }
+      manMadeCount += keys.length;
+    }
+    return new ObjectLabels(ObjectLabeller.sortedObjects(objects), counts[0], manMadeCount,
+        echoes, new ObjectLabels.Doubted(counts[1], counts[2], counts[3]));
+  }
+
+  /**
+   * What one block found for its own points.
+   *
+   * @param objects the objects it lists
+   * @param manMade keys of its points of man-made objects
+   * @param counts its points looked at, labelled vegetation, labelled vegetation and set aside,
+   *     labelled ground and doubted
+   */
+  private record BlockResult(List<LabelledObject> objects, long[] manMade, long[] counts) {}
+
+  private static BlockResult labelBlock(PointSource source, List<SpanFrame> frames,
+      double regionM, GroundModel ground, SetAside setAside, boolean judgeVegetationLabels,
+      boolean echoes, int[] block) {
+    List<LabelledObject> objects = new ArrayList<>();
     long[] manMade = new long[1024];
     int manMadeCount = 0;
     long looked = 0;
     long vegetationLabels = 0;
     long vegetationLabelsDoubted = 0;
     long groundDoubted = 0;
-    for (int[] block : blocks(frames)) {
-      LabelWindow window = new LabelWindow(frames, block[0], block[1], regionM, OVERLAP_M);
-      LabelPoints p = ObjectLabeller.gather(source, () -> new LabelPoints(frames, regionM,
-          ground, setAside, judgeVegetationLabels, window, false));
-      if (p.size == 0) {
+    LabelWindow window = new LabelWindow(frames, block[0], block[1], regionM, OVERLAP_M);
+    LabelPoints p = ObjectLabeller.gather(source, () -> new LabelPoints(frames, regionM,
+        ground, setAside, judgeVegetationLabels, window, false));
+    if (p.size == 0) {
+      return new BlockResult(List.of(), new long[0], new long[4]);
+    }
+    ObjectLabeller.Judged j = ObjectLabeller.judge(p, echoes);
+    int[] root = j.root();
+    boolean[] cut = new boolean[p.size];
+    // An object is listed by the block that holds its first point (in coordinate order,
+    // the same in every window that sees it whole) as a core point.
+    byte[] firstZone = new byte[p.size];
+    boolean[] seen = new boolean[p.size];
+    for (int i = 0; i < p.size; i++) {
+      cut[root[i]] |= p.zone[i] == LabelWindow.EDGE;
+      if (!seen[root[i]]) {
+        seen[root[i]] = true;
+        firstZone[root[i]] = p.zone[i];
+      }
+    }
+    for (int i = 0; i < p.size; i++) {
+      if (p.zone[i] != LabelWindow.CORE) {
         continue;
       }
-      ObjectLabeller.Judged j = ObjectLabeller.judge(p, echoes);
-      int[] root = j.root();
-      boolean[] cut = new boolean[p.size];
-      // An object is listed by the block that holds its first point (in coordinate order,
-      // the same in every window that sees it whole) as a core point.
-      byte[] firstZone = new byte[p.size];
-      boolean[] seen = new boolean[p.size];
-      for (int i = 0; i < p.size; i++) {
-        cut[root[i]] |= p.zone[i] == LabelWindow.EDGE;
-        if (!seen[root[i]]) {
-          seen[root[i]] = true;
-          firstZone[root[i]] = p.zone[i];
+      looked++;
+      ObjectKind k = cut[root[i]] ? null : j.kindOf()[root[i]];
+      vegetationLabels += p.label[i] == LabelPoints.VEGETATION_LABEL ? 1 : 0;
+      groundDoubted += p.label[i] == LabelPoints.GROUND_DOUBTED ? 1 : 0;
+      if (k != null && k != ObjectKind.VEGETATION) {
+        if (manMadeCount == manMade.length) {
+          manMade = Arrays.copyOf(manMade, manMadeCount * 2);
         }
-      }
-      for (int i = 0; i < p.size; i++) {
-        if (p.zone[i] != LabelWindow.CORE) {
-          continue;
-        }
-        looked++;
-        ObjectKind k = cut[root[i]] ? null : j.kindOf()[root[i]];
-        vegetationLabels += p.label[i] == LabelPoints.VEGETATION_LABEL ? 1 : 0;
-        groundDoubted += p.label[i] == LabelPoints.GROUND_DOUBTED ? 1 : 0;
-        if (k != null && k != ObjectKind.VEGETATION) {
-          if (manMadeCount == manMade.length) {
-            manMade = Arrays.copyOf(manMade, manMadeCount * 2);
-          }
-          manMade[manMadeCount++] = SetAside.key(p.x[i], p.y[i], p.z[i]);
-          vegetationLabelsDoubted += p.label[i] == LabelPoints.VEGETATION_LABEL ? 1 : 0;
-        }
-      }
-      for (int o = 0; o < j.objects().size(); o++) {
-        int r = j.objectRoots().get(o);
-        if (!cut[r] && firstZone[r] == LabelWindow.CORE) {
-          objects.add(j.objects().get(o));
-        }
+        manMade[manMadeCount++] = SetAside.key(p.x[i], p.y[i], p.z[i]);
+        vegetationLabelsDoubted += p.label[i] == LabelPoints.VEGETATION_LABEL ? 1 : 0;
       }
     }
-    for (int i = 0; i < manMadeCount; i++) {
-      setAside.addObject(manMade[i]);
+    for (int o = 0; o < j.objects().size(); o++) {
+      int r = j.objectRoots().get(o);
+      if (!cut[r] && firstZone[r] == LabelWindow.CORE) {
+        objects.add(j.objects().get(o));
+      }
     }
-    return new ObjectLabels(ObjectLabeller.sortedObjects(objects), looked, manMadeCount, echoes,
-        new ObjectLabels.Doubted(vegetationLabels, vegetationLabelsDoubted, groundDoubted));
+    return new BlockResult(objects, Arrays.copyOf(manMade, manMadeCount),
+        new long[] {looked, vegetationLabels, vegetationLabelsDoubted, groundDoubted});
   }
 
   /** The blocks as {from, to} span indices: consecutive spans, at least {@link #BLOCK_M} of

@@ -131,7 +131,9 @@ public final class ObjectLabeller {
 
   /**
    * Labels the unclassified points near the spans and adds the man-made ones to
-   * {@code setAside}.
+   * {@code setAside}, block by block along the line ({@link LabelBlocks}): the points held at
+   * once are those of a block's window, not of the survey; the survey is read once per block
+   * and once more to count.
    *
    * @param source the survey
    * @param frames the spans' plan frames
@@ -141,11 +143,20 @@ public final class ObjectLabeller {
    * @param judgeVegetationLabels true in a partly labelled survey: points labelled vegetation
    *     (3-5) are clustered with the rest, and those of an object the evidence shows man-made
    *     or linear are not trusted (set aside, counted)
+   * @param threads blocks labelled at once (each reads the survey through {@code source})
    * @return the objects and counts
    */
   public static ObjectLabels label(PointSource source, List<SpanFrame> frames, double regionM,
+      GroundModel ground, SetAside setAside, boolean judgeVegetationLabels, int threads) {
+    return LabelBlocks.label(source, frames, regionM, ground, setAside, judgeVegetationLabels,
+        threads);
+  }
+
+  /** {@link #label(PointSource, List, double, GroundModel, SetAside, boolean, int)} one block
+   * at a time. */
+  public static ObjectLabels label(PointSource source, List<SpanFrame> frames, double regionM,
       GroundModel ground, SetAside setAside, boolean judgeVegetationLabels) {
-    return LabelBlocks.label(source, frames, regionM, ground, setAside, judgeVegetationLabels);
+    return label(source, frames, regionM, ground, setAside, judgeVegetationLabels, 1);
   }
 
   /** The labelling of the whole line at once (all its points held): the reference of the

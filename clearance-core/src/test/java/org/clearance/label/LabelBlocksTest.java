@@ -68,7 +68,8 @@ class LabelBlocksTest {
     SetAside whole = SetAside.none();
     ObjectLabels a = ObjectLabeller.labelWhole(source(), FRAMES, REGION_M, ground, whole, false);
     SetAside blocked = SetAside.none();
-    ObjectLabels b = ObjectLabeller.label(source(), FRAMES, REGION_M, ground, blocked, false);
+    ObjectLabels b = ObjectLabeller.label(source(), FRAMES, REGION_M, ground, blocked, false,
+        2);
     assertEquals(a.pointsLooked(), b.pointsLooked());
     assertEquals(a.pointsSetAside(), b.pointsSetAside());
     assertEquals(a.echoesInformative(), b.echoesInformative());
