@@ -89,6 +89,10 @@ class LabelBlocksTest {
     assertEquals(5, roofs, b.describe());
     assertTrue(b.objects().stream().filter(o -> o.kind() == ObjectKind.VEGETATION).count() > 300,
         b.describe());
+    // one block at a time gives the same as two at once
+    ObjectLabels one = ObjectLabeller.label(source(), FRAMES, REGION_M, ground, SetAside.none(),
+        false, 1);
+    assertEquals(b, one);
   }
 
   /** Chunks handed out to two consumers in turn, as two reading threads would. */
