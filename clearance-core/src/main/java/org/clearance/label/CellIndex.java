@@ -31,17 +31,11 @@ final class CellIndex {
     this.y = y;
     this.z = z;
     this.cell = cell;
-    double ax = Double.POSITIVE_INFINITY;
-    double ay = Double.POSITIVE_INFINITY;
-    double az = Double.POSITIVE_INFINITY;
-    for (int i = 0; i < n; i++) {
-      ax = Math.min(ax, x[i]);
-      ay = Math.min(ay, y[i]);
-      az = Math.min(az, z[i]);
-    }
-    x0 = ax - cell;
-    y0 = ay - cell;
-    z0 = az - cell;
+    // Cells from a fixed origin, so a point's neighbours come in the same order in a block
+    // window as on the whole line (the features' sums are then the same to the last bit).
+    x0 = 0;
+    y0 = 0;
+    z0 = 0;
     long[] packed = new long[n];
     for (int i = 0; i < n; i++) {
       packed[i] = (key(x[i], y[i], z[i]) << 24) | i;

@@ -37,8 +37,14 @@ final class LabelPoints implements Consumer<PointChunk> {
   private final GroundModel ground;
   private final SetAside setAside;
   private final boolean judgeVegetationLabels;
+  /** The block window the points are gathered for, or null for the whole line. */
+  private final LabelWindow window;
+  /** True to count the points (and their later returns) without holding them. */
+  private final boolean countOnly;
 
   int size;
+  /** Later returns (return number 2 or more) among the points added. */
+  long later;
   double[] x = new double[1024];
   double[] y = new double[1024];
   double[] z = new double[1024];
@@ -48,9 +54,22 @@ final class LabelPoints implements Consumer<PointChunk> {
   /** What each point was labelled ({@link #OPEN}, {@link #VEGETATION_LABEL},
    * {@link #GROUND_DOUBTED}). */
   byte[] label = new byte[1024];
+  /** Where each point lies in the block window ({@link LabelWindow#CORE} for the whole line). */
+  byte[] zone = new byte[1024];
 
   LabelPoints(List<SpanFrame> frames, double regionM, GroundModel ground, SetAside setAside,
       boolean judgeVegetationLabels) {
+    this(frames, regionM, ground, setAside, judgeVegetationLabels, null, false);
+  }
+
+  /**
+   * A collector for one block window ({@code window} not null) or a counter of the points
+   * looked at on the whole line ({@code countOnly}).
+   */
+  LabelPoints(List<SpanFrame> frames, double regionM, GroundModel ground, SetAside setAside,
+      boolean judgeVegetationLabels, LabelWindow window, boolean countOnly) {
+    this.window = window;
+    this.countOnly = countOnly;
     this.frames = frames;
     this.regionM = regionM;
     this.ground = ground;
@@ -72,7 +91,9 @@ final class LabelPoints implements Consumer<PointChunk> {
       double px = chunk.x()[i];
       double py = chunk.y()[i];
       double pz = chunk.z()[i];
-      if (!inRegion(px, py)) {
+      byte where = window != null ? window.zone(px, py)
+          : inRegion(px, py) ? LabelWindow.CORE : LabelWindow.OUTSIDE;
+      if (where == LabelWindow.OUTSIDE) {
         continue;
       }
       double h = ground.heightAboveGround(px, py, pz);
@@ -80,8 +101,25 @@ final class LabelPoints implements Consumer<PointChunk> {
       if (!high || setAside.reason(SetAside.key(px, py, pz)) != SetAside.Reason.NONE) {
         continue;
       }
-      add(px, py, pz, h, chunk.returnNumber()[i], kind);
+      add(px, py, pz, h, chunk.returnNumber()[i], kind, where);
     }
+  }
+
+  /** Whether a plan point lies within {@code regionM} of a span's chord (the region looked at). */
+  static boolean inRegion(List<SpanFrame> frames, double regionM, double px, double py) {
+    return owner(frames, regionM, px, py) >= 0;
+  }
+
+  /** The first span (index in {@code frames}) whose region holds the plan point, or -1. */
+  static int owner(List<SpanFrame> frames, double regionM, double px, double py) {
+    for (int k = 0; k < frames.size(); k++) {
+      SpanFrame f = frames.get(k);
+      double s = f.station(px, py);
+      if (s >= -regionM && s <= f.length() + regionM && Math.abs(f.offset(px, py)) <= regionM) {
+        return k;
+      }
+    }
+    return -1;
   }
 
   private boolean inRegion(double px, double py) {
@@ -95,6 +133,15 @@ final class LabelPoints implements Consumer<PointChunk> {
   }
 
   void add(double px, double py, double pz, double h, byte n, byte kind) {
+    add(px, py, pz, h, n, kind, LabelWindow.CORE);
+  }
+
+  void add(double px, double py, double pz, double h, byte n, byte kind, byte where) {
+    later += n >= 2 ? 1 : 0;
+    if (countOnly) {
+      size++;
+      return;
+    }
     if (size == x.length) {
       int cap = size * 2;
       x = Arrays.copyOf(x, cap);
@@ -103,6 +150,7 @@ final class LabelPoints implements Consumer<PointChunk> {
       hag = Arrays.copyOf(hag, cap);
       returnNumber = Arrays.copyOf(returnNumber, cap);
       label = Arrays.copyOf(label, cap);
+      zone = Arrays.copyOf(zone, cap);
     }
     x[size] = px;
     y[size] = py;
@@ -110,13 +158,14 @@ final class LabelPoints implements Consumer<PointChunk> {
     hag[size] = (float) h;
     returnNumber[size] = n;
     label[size] = kind;
+    zone[size] = where;
     size++;
   }
 
   /** Adds another collector's points. */
   void absorb(LabelPoints o) {
     for (int i = 0; i < o.size; i++) {
-      add(o.x[i], o.y[i], o.z[i], o.hag[i], o.returnNumber[i], o.label[i]);
+      add(o.x[i], o.y[i], o.z[i], o.hag[i], o.returnNumber[i], o.label[i], o.zone[i]);
     }
   }
 }

@@ -131,7 +131,9 @@ public final class ObjectLabeller {
 
   /**
    * Labels the unclassified points near the spans and adds the man-made ones to
-   * {@code setAside}.
+   * {@code setAside}, block by block along the line ({@link LabelBlocks}): the points held at
+   * once are those of a block's window, not of the survey; the survey is read once per block
+   * and once more to count.
    *
    * @param source the survey
    * @param frames the spans' plan frames
@@ -141,20 +143,43 @@ public final class ObjectLabeller {
    * @param judgeVegetationLabels true in a partly labelled survey: points labelled vegetation
    *     (3-5) are clustered with the rest, and those of an object the evidence shows man-made
    *     or linear are not trusted (set aside, counted)
+   * @param threads blocks labelled at once (each reads the survey through {@code source})
    * @return the objects and counts
    */
   public static ObjectLabels label(PointSource source, List<SpanFrame> frames, double regionM,
+      GroundModel ground, SetAside setAside, boolean judgeVegetationLabels, int threads) {
+    return LabelBlocks.label(source, frames, regionM, ground, setAside, judgeVegetationLabels,
+        threads);
+  }
+
+  /** {@link #label(PointSource, List, double, GroundModel, SetAside, boolean, int)} one block
+   * at a time. */
+  public static ObjectLabels label(PointSource source, List<SpanFrame> frames, double regionM,
       GroundModel ground, SetAside setAside, boolean judgeVegetationLabels) {
+    return label(source, frames, regionM, ground, setAside, judgeVegetationLabels, 1);
+  }
+
+  /** The labelling of the whole line at once (all its points held): the reference of the
+   * block-by-block path ({@link LabelBlocks}). */
+  static ObjectLabels labelWhole(PointSource source, List<SpanFrame> frames, double regionM,
+      GroundModel ground, SetAside setAside, boolean judgeVegetationLabels) {
+    LabelPoints all = gather(source, () -> new LabelPoints(frames, regionM, ground, setAside,
+        judgeVegetationLabels));
+    return label(all, setAside);
+  }
+
+  /** The points of one pass, merged from the reading threads and sorted. */
+  static LabelPoints gather(PointSource source, java.util.function.Supplier<LabelPoints> make) {
     List<LabelPoints> parts = Collections.synchronizedList(new ArrayList<>());
     source.stream(() -> {
-      LabelPoints p = new LabelPoints(frames, regionM, ground, setAside, judgeVegetationLabels);
+      LabelPoints p = make.get();
       parts.add(p);
       return p;
     });
-    LabelPoints all = new LabelPoints(frames, regionM, ground, setAside, judgeVegetationLabels);
+    LabelPoints all = make.get();
     parts.forEach(all::absorb);
     sort(all);
-    return label(all, setAside);
+    return all;
   }
 
   /** Sorts the points by coordinates, so the result does not depend on the reading order. */
@@ -173,6 +198,7 @@ public final class ObjectLabeller {
     float[] h = new float[p.size];
     byte[] r = new byte[p.size];
     byte[] l = new byte[p.size];
+    byte[] w = new byte[p.size];
     for (int k = 0; k < p.size; k++) {
       int i = idx[k];
       x[k] = p.x[i];
@@ -181,7 +207,9 @@ public final class ObjectLabeller {
       h[k] = p.hag[i];
       r[k] = p.returnNumber[i];
       l[k] = p.label[i];
+      w[k] = p.zone[i];
     }
+    p.zone = w;
     p.x = x;
     p.y = y;
     p.z = z;
@@ -195,6 +223,54 @@ public final class ObjectLabeller {
     if (n == 0) {
       return ObjectLabels.NONE;
     }
+    Judged j = judge(p, p.later >= ECHO_INFORMATIVE_SHARE * n);
+    int[] parent = j.root();
+    ObjectKind[] kindOf = j.kindOf();
+    boolean echoes = j.echoes();
+    List<LabelledObject> objects = sortedObjects(j.objects());
+    long setAsideCount = 0;
+    long vegetationLabels = 0;
+    long vegetationLabelsDoubted = 0;
+    long groundDoubted = 0;
+    for (int i = 0; i < n; i++) {
+      ObjectKind k = kindOf[parent[i]];
+      boolean manMade = k != null && k != ObjectKind.VEGETATION;
+      vegetationLabels += p.label[i] == LabelPoints.VEGETATION_LABEL ? 1 : 0;
+      groundDoubted += p.label[i] == LabelPoints.GROUND_DOUBTED ? 1 : 0;
+      if (manMade) {
+        setAside.addObject(SetAside.key(p.x[i], p.y[i], p.z[i]));
+        setAsideCount++;
+        vegetationLabelsDoubted += p.label[i] == LabelPoints.VEGETATION_LABEL ? 1 : 0;
+      }
+    }
+    return new ObjectLabels(objects, n, setAsideCount, echoes,
+        new ObjectLabels.Doubted(vegetationLabels, vegetationLabelsDoubted, groundDoubted));
+  }
+
+  /**
+   * What steps 2-6 found for a set of points.
+   *
+   * @param root each point's object (the index of its root point)
+   * @param kindOf the kind at each object's root (null for an unjudged fragment)
+   * @param objects the judged objects
+   * @param objectRoots the root of each judged object, in the order of {@code objects}
+   * @param echoes whether the return numbers were read
+   */
+  record Judged(int[] root, ObjectKind[] kindOf, List<LabelledObject> objects,
+      List<Integer> objectRoots, boolean echoes) {}
+
+  /** The objects in a fixed order (by plan position of the top, then height), whatever the
+   * reading or the blocks. */
+  static List<LabelledObject> sortedObjects(List<LabelledObject> objects) {
+    List<LabelledObject> out = new ArrayList<>(objects);
+    out.sort(java.util.Comparator.comparingDouble(LabelledObject::x)
+        .thenComparingDouble(LabelledObject::y).thenComparingDouble(LabelledObject::heightM));
+    return out;
+  }
+
+  /** Steps 2-6 on sorted points, with the survey's echoes read or not. */
+  static Judged judge(LabelPoints p, boolean echoes) {
+    int n = p.size;
     CellIndex index = new CellIndex(p.x, p.y, p.z, n, Math.max(RADIUS_M, LINK_M));
     LocalShape[] shape = new LocalShape[n];
     int[] parent = new int[n];
@@ -230,37 +306,19 @@ public final class ObjectLabeller {
             s[9]);
       }
     }
-    long multi = 0;
     for (int i = 0; i < n; i++) {
       parent[i] = DisjointSets.root(parent, i);
-      multi += p.returnNumber[i] >= 2 ? 1 : 0;
     }
-    boolean echoes = multi >= ECHO_INFORMATIVE_SHARE * n;
     ObjectKind[] kindOf = new ObjectKind[n];
-    List<LabelledObject> objects = objects(p, parent, shape, echoes, kindOf);
+    List<Integer> roots = new ArrayList<>();
+    List<LabelledObject> objects = objects(p, parent, shape, echoes, kindOf, roots);
     attachFragments(p, parent, kindOf);
-    long setAsideCount = 0;
-    long vegetationLabels = 0;
-    long vegetationLabelsDoubted = 0;
-    long groundDoubted = 0;
-    for (int i = 0; i < n; i++) {
-      ObjectKind k = kindOf[parent[i]];
-      boolean manMade = k != null && k != ObjectKind.VEGETATION;
-      vegetationLabels += p.label[i] == LabelPoints.VEGETATION_LABEL ? 1 : 0;
-      groundDoubted += p.label[i] == LabelPoints.GROUND_DOUBTED ? 1 : 0;
-      if (manMade) {
-        setAside.addObject(SetAside.key(p.x[i], p.y[i], p.z[i]));
-        setAsideCount++;
-        vegetationLabelsDoubted += p.label[i] == LabelPoints.VEGETATION_LABEL ? 1 : 0;
-      }
-    }
-    return new ObjectLabels(objects, n, setAsideCount, echoes,
-        new ObjectLabels.Doubted(vegetationLabels, vegetationLabelsDoubted, groundDoubted));
+    return new Judged(parent, kindOf, objects, roots, echoes);
   }
 
   /** The objects' evidence and kinds; {@code kindOf} receives the kind at each object's root. */
   private static List<LabelledObject> objects(LabelPoints p, int[] root, LocalShape[] shape,
-      boolean echoes, ObjectKind[] kindOf) {
+      boolean echoes, ObjectKind[] kindOf, List<Integer> roots) {
     int n = p.size;
     int[] count = new int[n];
     int[] withShape = new int[n];
@@ -344,6 +402,7 @@ public final class ObjectLabeller {
         kind = ObjectKind.LINEAR;
       }
       kindOf[r] = kind;
+      roots.add(r);
       out.add(new LabelledObject(kind, count[r], p.x[top[r]], p.y[top[r]], height, linearity,
           planarity, scattering, planarShare, spread, baseShare, multiShare));
     }
