@@ -36,6 +36,15 @@ final class PoleFinder {
   static final double COLUMN_R_M = 0.33;
   /** Outer radius of the ring around a column that must stay nearly empty below the wires, m. */
   static final double RING_M = 1.0;
+  /** Largest pole radius, m: a 0.45 m pole (issue 15). */
+  static final double POLE_R_M = 0.23;
+  /** Distance of a side return from the pole's circle, m: survey noise (common practice, no
+   * source). */
+  static final double SIDE_TOL_M = 0.04;
+  /** Fewest side returns on the pole's circle. */
+  static final int SIDE_LEAST = 4;
+  /** Most side returns tried for the circle (every three of them propose one). */
+  static final int MAX_SIDE = 40;
   /** Fewest returns on a column. */
   static final int MIN_POINTS = 5;
   /** Fewest one-metre slices a column occupies. */
@@ -208,9 +217,9 @@ final class PoleFinder {
           || Math.hypot(x[i] - s.s().x(), y[i] - s.s().y()) > SEARCH_M + COLUMN_R_M) {
         continue;
       }
-      double[] c = column(x, y, h, n, x[i], y[i], top);
-      for (int it = 0; it < 2 && c != null; it++) {
-        c = column(x, y, h, n, c[0], c[1], top);
+      double[] c = column(x, y, h, n, x[i], y[i], top, bandTop);
+      for (int it = 0; it < 3 && c != null; it++) {
+        c = column(x, y, h, n, c[0], c[1], top, bandTop);
       }
       if (c == null || Math.hypot(c[0] - s.s().x(), c[1] - s.s().y()) > SEARCH_M
           || !isolated(x, y, h, n, c, bandTop) || !wired(s, x, y, h, n, c, bandTop, top)) {
@@ -239,23 +248,35 @@ final class PoleFinder {
               accepted.size(), SEARCH_M));
     }
     double[] c = accepted.get(0);
+    if (System.getProperty("pf.debug") != null) {
+      for (int i = 0; i < n; i++) {
+        if (Math.hypot(x[i] - c[0], y[i] - c[1]) <= 0.6) {
+          double dx = x[i] - c[0];
+          double dy = y[i] - c[1];
+          System.out.printf(Locale.ROOT, "DBG %s a=%.2f o=%.2f h=%.2f%n", s.s().id(),
+              dx * s.ax() + dy * s.ay(), -dx * s.ay() + dy * s.ax(), h[i]);
+        }
+      }
+    }
     return new Result(Outcome.FOUND, c[0], c[1],
         Math.hypot(c[0] - s.s().x(), c[1] - s.s().y()), (int) c[2],
         "wood pole column of survey points with the line's wires converging on it");
   }
 
   /**
-   * The column around (cx, cy): plan median of its returns up to {@code top}, m, the count, or
-   * null when it is not a column (too few returns or slices, no foot).
+   * The column around (cx, cy): its centre, m, and count of returns up to {@code top}, or null
+   * when it is not a column (too few returns or slices, no foot). The centre is the circle
+   * through the pole's side returns below {@code bandTop}, m above ground (under the wires) (Kasa's algebraic circle fit, {@link Circle}), else their mean, else the plan median
+   * of all its returns.
    */
   private static double[] column(double[] x, double[] y, double[] h, int n, double cx,
-      double cy, double top) {
+      double cy, double top, double bandTop) {
     List<double[]> in = new ArrayList<>();
     long slices = 0;
     double low = Double.POSITIVE_INFINITY;
     for (int i = 0; i < n; i++) {
       if (h[i] <= top && Math.hypot(x[i] - cx, y[i] - cy) <= COLUMN_R_M) {
-        in.add(new double[] {x[i], y[i]});
+        in.add(new double[] {x[i], y[i], h[i]});
         slices |= 1L << Math.min(63, (int) h[i]);
         low = Math.min(low, h[i]);
       }
@@ -266,7 +287,20 @@ final class PoleFinder {
     }
     double[] mx = in.stream().mapToDouble(p -> p[0]).sorted().toArray();
     double[] my = in.stream().mapToDouble(p -> p[1]).sorted().toArray();
-    return new double[] {median(mx), median(my), in.size()};
+    double[] c = {median(mx), median(my), in.size()};
+    // the pole's own side, below its equipment and wires (arm, brackets, insulators and the
+    // conductors of a stacked framing run within the column's radius)
+    List<double[]> side = in.stream().filter(p -> p[2] <= bandTop).toList();
+    double[] circle = side.size() > MAX_SIDE ? null
+        : Circle.robust(side, POLE_R_M, SIDE_TOL_M, SIDE_LEAST);
+    if (circle != null && Math.hypot(circle[0] - c[0], circle[1] - c[1]) <= COLUMN_R_M) {
+      c[0] = circle[0];
+      c[1] = circle[1];
+    } else if (side.size() >= 3) {
+      c[0] = side.stream().mapToDouble(p -> p[0]).average().orElseThrow();
+      c[1] = side.stream().mapToDouble(p -> p[1]).average().orElseThrow();
+    }
+    return c;
   }
 
   private static double median(double[] v) {
