@@ -217,9 +217,9 @@ final class PoleFinder {
           || Math.hypot(x[i] - s.s().x(), y[i] - s.s().y()) > SEARCH_M + COLUMN_R_M) {
         continue;
       }
-      double[] c = column(x, y, h, n, x[i], y[i], top, bandTop);
+      double[] c = column(x, y, h, n, x[i], y[i], top, bandTop, s.ax(), s.ay());
       for (int it = 0; it < 3 && c != null; it++) {
-        c = column(x, y, h, n, c[0], c[1], top, bandTop);
+        c = column(x, y, h, n, c[0], c[1], top, bandTop, s.ax(), s.ay());
       }
       if (c == null || Math.hypot(c[0] - s.s().x(), c[1] - s.s().y()) > SEARCH_M
           || !isolated(x, y, h, n, c, bandTop) || !wired(s, x, y, h, n, c, bandTop, top)) {
@@ -248,16 +248,6 @@ final class PoleFinder {
               accepted.size(), SEARCH_M));
     }
     double[] c = accepted.get(0);
-    if (System.getProperty("pf.debug") != null) {
-      for (int i = 0; i < n; i++) {
-        if (Math.hypot(x[i] - c[0], y[i] - c[1]) <= 0.6) {
-          double dx = x[i] - c[0];
-          double dy = y[i] - c[1];
-          System.out.printf(Locale.ROOT, "DBG %s a=%.2f o=%.2f h=%.2f%n", s.s().id(),
-              dx * s.ax() + dy * s.ay(), -dx * s.ay() + dy * s.ax(), h[i]);
-        }
-      }
-    }
     return new Result(Outcome.FOUND, c[0], c[1],
         Math.hypot(c[0] - s.s().x(), c[1] - s.s().y()), (int) c[2],
         "wood pole column of survey points with the line's wires converging on it");
@@ -270,7 +260,7 @@ final class PoleFinder {
    * of all its returns.
    */
   private static double[] column(double[] x, double[] y, double[] h, int n, double cx,
-      double cy, double top, double bandTop) {
+      double cy, double top, double bandTop, double ax, double ay) {
     List<double[]> in = new ArrayList<>();
     long slices = 0;
     double low = Double.POSITIVE_INFINITY;
@@ -288,9 +278,10 @@ final class PoleFinder {
     double[] mx = in.stream().mapToDouble(p -> p[0]).sorted().toArray();
     double[] my = in.stream().mapToDouble(p -> p[1]).sorted().toArray();
     double[] c = {median(mx), median(my), in.size()};
-    // the pole's own side, below its equipment and wires (arm, brackets, insulators and the
-    // conductors of a stacked framing run within the column's radius)
-    List<double[]> side = in.stream().filter(p -> p[2] <= bandTop).toList();
+    // the pole's own side: not on a wire (the conductors of a stacked framing run within the
+    // column's radius); the arm and insulators are left out by the circle's consensus
+    List<double[]> side = in.stream().filter(p -> p[2] <= bandTop
+        || !onWire(x, y, h, n, p, ax, ay)).toList();
     double[] circle = side.size() > MAX_SIDE ? null
         : Circle.robust(side, POLE_R_M, SIDE_TOL_M, SIDE_LEAST);
     if (circle != null && Math.hypot(circle[0] - c[0], circle[1] - c[1]) <= COLUMN_R_M) {
@@ -301,6 +292,25 @@ final class PoleFinder {
       c[1] = side.stream().mapToDouble(p -> p[1]).average().orElseThrow();
     }
     return c;
+  }
+
+  /**
+   * Whether return p (x, y, height) lies on a wire running along the line (unit plan vector
+   * ax, ay): another return lies {@link #WIRE_FROM_M} to 2 m from it along the line, within
+   * 0.15 m across and 0.3 m in height (a conductor's slope near its pole is small).
+   */
+  private static boolean onWire(double[] x, double[] y, double[] h, int n, double[] p,
+      double ax, double ay) {
+    for (int i = 0; i < n; i++) {
+      double dx = x[i] - p[0];
+      double dy = y[i] - p[1];
+      double a = Math.abs(dx * ax + dy * ay);
+      if (a >= WIRE_FROM_M && a <= 2.0 && Math.abs(-dx * ay + dy * ax) <= 0.15
+          && Math.abs(h[i] - p[2]) <= 0.3) {
+        return true;
+      }
+    }
+    return false;
   }
 
   private static double median(double[] v) {
