@@ -255,9 +255,11 @@ final class PoleFinder {
 
   /**
    * The column around (cx, cy): its centre, m, and count of returns up to {@code top}, or null
-   * when it is not a column (too few returns or slices, no foot). The centre is the circle
-   * through the pole's side returns below {@code bandTop}, m above ground (under the wires) (Kasa's algebraic circle fit, {@link Circle}), else their mean, else the plan median
-   * of all its returns.
+   * when it is not a column (too few returns or slices, no foot). The centre is that of the
+   * circle most of the pole's side returns lie on ({@link Circle#robust}: the arm, insulators
+   * or a shrub at the foot are left out by the consensus); side returns are those below
+   * {@code bandTop}, m above ground, or higher ones not on a wire along the line (unit plan
+   * vector ax, ay). Else the mean of the side returns, else the plan median of all.
    */
   private static double[] column(double[] x, double[] y, double[] h, int n, double cx,
       double cy, double top, double bandTop, double ax, double ay) {

@@ -94,7 +94,8 @@ public final class FeederFiles {
         dy = d * Math.sin(a);
       }
       w.write(String.format(Locale.ROOT, "%s,%.3f,%.3f,%s,%d,%s,%.3f,%s\n", p.id(),
-          (p.x() + dx) / u, (p.y() + dy) / u, FeederScene.LINE_ID, p.sequence(), p.deadEnd() ? "dead_end" : "suspension",
+          (p.x() + dx) / u, (p.y() + dy) / u, FeederScene.LINE_ID, p.sequence(),
+          p.deadEnd() ? "dead_end" : "suspension",
           p.groundZ() / u, equipment(p)));
     }
   }
