@@ -212,9 +212,13 @@ final class PoleFinder {
     double bandTop = s.minAttach() - WIRE_BELOW_M;
     double top = s.maxAttach() + 2.0;
     List<double[]> accepted = new ArrayList<>();
+    // one seed per plan cell of the column's radius: the work stays bounded in dense vegetation
+    java.util.Set<Long> seeded = new java.util.HashSet<>();
     for (int i = 0; i < n; i++) {
       if (h[i] > FOOT_SHARE * s.maxAttach()
-          || Math.hypot(x[i] - s.s().x(), y[i] - s.s().y()) > SEARCH_M + COLUMN_R_M) {
+          || Math.hypot(x[i] - s.s().x(), y[i] - s.s().y()) > SEARCH_M + COLUMN_R_M
+          || !seeded.add((long) Math.floor(x[i] / COLUMN_R_M) * 1_000_003L
+              + (long) Math.floor(y[i] / COLUMN_R_M))) {
         continue;
       }
       double[] c = column(x, y, h, n, x[i], y[i], top, bandTop, s.ax(), s.ay());
