@@ -230,7 +230,13 @@ public final class RunModels {
       notes.add(temperatureNote(temperature));
     }
     for (StructureChange ch : changes) {
-      if (ch.structureId().equals(span.from().id()) || ch.structureId().equals(span.to().id())) {
+      boolean end = ch.structureId().equals(span.from().id())
+          || ch.structureId().equals(span.to().id());
+      if (end && !ch.changesLayout()) {
+        notes.add("structure " + ch.structureId() + (ch.kind() == StructureChange.Kind.CONFIRMED
+            ? " pole found at the structures file's position: " : " pole not located: ")
+            + ch.evidence());
+      } else if (end) {
         notes.add("structure " + ch.structureId() + " " + ch.kind().name().toLowerCase(Locale.ROOT)
             + String.format(Locale.ROOT, " from (%.2f, %.2f) to (%.2f, %.2f) m: %s",
             ch.fromX(), ch.fromY(), ch.toX(), ch.toY(), ch.evidence()));

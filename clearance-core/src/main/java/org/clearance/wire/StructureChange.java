@@ -4,7 +4,7 @@ import java.util.Objects;
 
 /**
  * One change the wire finder made to the structures file's positions, from tower points in the
- * survey.
+ * survey, or, on a pole line, the outcome of looking for each pole (confirmed or not found).
  *
  * @param lineId line of the structure
  * @param structureId id of the structure (for an added one, the automatic id given to it)
@@ -24,7 +24,18 @@ public record StructureChange(String lineId, String structureId, Kind kind, doub
     /** The structures file's position was more than the tolerance away from the tower. */
     MOVED,
     /** A tower stands between two consecutive structures of the file and was added. */
-    ADDED
+    ADDED,
+    /** A pole line's pole was found within 0.2 m of the file's position, which is kept: from
+     * and to are the file's position. */
+    CONFIRMED,
+    /** A pole line's pole was not found near the file's position, or two candidates were: the
+     * position is kept (from and to are the file's position), see the evidence text. */
+    NOT_FOUND
+  }
+
+  /** Whether the change moved or added a structure (else it only reports a pole check). */
+  public boolean changesLayout() {
+    return kind == Kind.MOVED || kind == Kind.ADDED;
   }
 
   public StructureChange {

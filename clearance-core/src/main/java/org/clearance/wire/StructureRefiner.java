@@ -87,14 +87,25 @@ final class StructureRefiner {
     }
     List<Tower> towers = TowerFinder.towers(all.cells(), options.minTowerPoints(),
         topMin(layout));
-    return apply(layout, towers);
+    List<PoleFinder.Site> sites = new ArrayList<>();
+    for (LineLayout line : layout.lines()) {
+      if (isPoleLine(line.spec())) {
+        sites.addAll(PoleFinder.sites(line));
+      }
+    }
+    List<PoleFinder.Result> found = PoleFinder.locate(source, sites, heights);
+    Map<Structure, PoleFinder.Result> poles = new java.util.HashMap<>();
+    for (int k = 0; k < sites.size(); k++) {
+      poles.put(sites.get(k).s(), found.get(k));
+    }
+    return apply(layout, towers, poles);
   }
 
   /**
    * Whether a line hangs its conductors closer than {@link CloseSpacing#ACTIVE_BELOW_M}: a pole
-   * line (distribution). Its structures are refined from class-15 towers only: a wood pole gives
-   * too few returns to stand out as a column of unclassified points, and a tree beside the line
-   * stands just like one.
+   * line (distribution). Its structures are located as wood poles ({@link PoleFinder}) in any
+   * classification mode; class-15 towers are used only where no pole is found, and the
+   * lattice-tower column test is not used: a tree beside the line stands just like a tower.
    */
   static boolean isPoleLine(LineSpec spec) {
     return CloseSpacing.of(spec, WireFinderOptions.Growth.defaults()) != null;
@@ -108,6 +119,16 @@ final class StructureRefiner {
    * place), the layout is left as given.
    */
   Refined apply(SpanLayout layout, List<Tower> towers) {
+    return apply(layout, towers, Map.of());
+  }
+
+  /**
+   * As {@link #apply(SpanLayout, List)}, with the poles located on pole lines: a pole found
+   * more than {@link PoleFinder#MOVE_M} from its file position moves it (else it is confirmed);
+   * a pole not found, or ambiguous, leaves the position (or a class-15 tower's move) and is
+   * reported.
+   */
+  Refined apply(SpanLayout layout, List<Tower> towers, Map<Structure, PoleFinder.Result> poles) {
     List<StructureChange> changes = new ArrayList<>();
     List<Structure> structures = new ArrayList<>();
     List<LineSpec> specs = new ArrayList<>();
@@ -122,6 +143,24 @@ final class StructureRefiner {
       for (int k = 0; k < given.size(); k++) {
         Structure s = given.get(k);
         Tower tw = towerOf[k] < 0 ? null : usable.get(towerOf[k]);
+        PoleFinder.Result pole = poles.get(s);
+        if (pole != null && pole.outcome() == PoleFinder.Outcome.FOUND) {
+          boolean move = pole.shiftM() > PoleFinder.MOVE_M;
+          refined.add(!move ? s : new Structure(s.id(), s.lineId(), s.sequence(), s.type(),
+              pole.x(), pole.y(), s.groundZ(), s.attachZ(), s.sourceFile(), s.sourceLine()));
+          changes.add(new StructureChange(line.spec().lineId(), s.id(),
+              move ? StructureChange.Kind.MOVED : StructureChange.Kind.CONFIRMED, s.x(), s.y(),
+              move ? pole.x() : s.x(), move ? pole.y() : s.y(), pole.points(),
+              pole.why() + String.format(Locale.ROOT, ", %.2f m from the file's position",
+                  pole.shiftM())));
+          continue;
+        }
+        if (pole != null) {
+          changes.add(new StructureChange(line.spec().lineId(), s.id(),
+              StructureChange.Kind.NOT_FOUND, s.x(), s.y(), s.x(), s.y(), 0,
+              pole.why() + (pole.outcome() == PoleFinder.Outcome.AMBIGUOUS
+                  ? ": ambiguous, position kept" : ": position kept")));
+        }
         if (tw == null || Math.hypot(tw.x() - s.x(), tw.y() - s.y()) <= options.toleranceM()) {
           refined.add(s);
           continue;
@@ -134,13 +173,13 @@ final class StructureRefiner {
       }
       structures.addAll(added(line, refined, usable, used, changes));
     }
-    if (changes.isEmpty()) {
-      return new Refined(layout, List.of());
+    if (changes.stream().noneMatch(StructureChange::changesLayout)) {
+      return new Refined(layout, changes);
     }
     try {
       return new Refined(SpanLayout.build(structures, specs), changes);
     } catch (InputException e) {
-      return new Refined(layout, List.of());
+      return new Refined(layout, changes.stream().filter(c -> !c.changesLayout()).toList());
     }
   }
 

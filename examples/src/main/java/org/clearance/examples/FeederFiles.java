@@ -73,16 +73,29 @@ public final class FeederFiles {
     }
   }
 
-  /** structures.csv in the options' unit. */
+  /** structures.csv in the options' unit, displaced as the options ask. */
   static void writeStructures(Writer w, FeederScene scene) throws IOException {
     double u = scene.options().unit().metres();
     w.write("# Poles of feeder " + FeederScene.LINE_ID + " (" + FeederScene.LINE_NAME + "), "
         + DemoScene.UTILITY + ". Invented demo data; x, y, ground_z in "
         + scene.options().unit().symbol() + ".\n");
     w.write("structure_id,x,y,line_id,sequence,type,ground_z,equipment\n");
+    double most = scene.options().displaceM();
+    // a stream of its own, so that the points and the default file stay as they were
+    java.util.SplittableRandom rng = new java.util.SplittableRandom(scene.options().seed() + 15);
     for (FeederPole p : scene.poles()) {
-      w.write(String.format(Locale.ROOT, "%s,%.3f,%.3f,%s,%d,%s,%.3f,%s\n", p.id(), p.x() / u,
-          p.y() / u, FeederScene.LINE_ID, p.sequence(), p.deadEnd() ? "dead_end" : "suspension",
+      double dx = 0;
+      double dy = 0;
+      if (most > 0) {
+        double least = Math.min(FeederOptions.LEAST_DISPLACE_M, most);
+        double d = least == most ? most : rng.nextDouble(least, most);
+        double a = rng.nextDouble(0, 2 * Math.PI);
+        dx = d * Math.cos(a);
+        dy = d * Math.sin(a);
+      }
+      w.write(String.format(Locale.ROOT, "%s,%.3f,%.3f,%s,%d,%s,%.3f,%s\n", p.id(),
+          (p.x() + dx) / u, (p.y() + dy) / u, FeederScene.LINE_ID, p.sequence(),
+          p.deadEnd() ? "dead_end" : "suspension",
           p.groundZ() / u, equipment(p)));
     }
   }

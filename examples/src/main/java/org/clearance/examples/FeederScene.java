@@ -178,7 +178,7 @@ public final class FeederScene {
     double density = Math.max(FeederOptions.MIN_DENSITY, Math.min(FeederOptions.MAX_DENSITY,
         FeederOptions.DEFAULT_DENSITY * o.pointDensity() / DemoOptions.DEFAULT_DENSITY));
     FeederOptions fo = new FeederOptions(o.seed(), plan.structures.size() - 1, density,
-        o.mode(), Framing.HORIZONTAL, true, true, LinearUnit.METRE);
+        o.mode(), Framing.HORIZONTAL, true, true, LinearUnit.METRE, 0);
     return Optional.of(new FeederScene(fo, host, plan));
   }
 
