@@ -171,7 +171,7 @@ public final class ClearanceCheck {
     long fittedCount = wires.spans().stream().mapToLong(s -> s.fitted().size()).sum();
     say("wires: %d conductors fitted in %d spans; %d structure change(s)", fittedCount,
         wires.spans().size(), wires.structureChanges().size());
-    wires.structureChanges().forEach(c -> say("  structure: %s", c));
+    wires.structureChanges().forEach(c -> say("  %s", c.describe()));
     ConductorTable.write(dir.resolve(ConductorTable.FILE_NAME), wires, survey.units());
     stop("wires");
 

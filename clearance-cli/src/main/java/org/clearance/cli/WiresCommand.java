@@ -99,22 +99,7 @@ public final class WiresCommand implements Callable<Integer> {
   static String summary(WireResult result, Path file) {
     StringBuilder b = new StringBuilder();
     for (StructureChange c : result.structureChanges()) {
-      if (c.kind() == StructureChange.Kind.MOVED) {
-        b.append(String.format(Locale.ROOT, "structure %s (line %s) moved %.1f m to %.3f, %.3f"
-            + " (%d survey points: %s)%n", c.structureId(), c.lineId(), c.shiftM(), c.toX(),
-            c.toY(), c.evidencePoints(), c.evidence()));
-      } else if (c.kind() == StructureChange.Kind.CONFIRMED) {
-        b.append(String.format(Locale.ROOT, "structure %s (line %s) pole found, position kept"
-            + " (%d survey points: %s)%n", c.structureId(), c.lineId(), c.evidencePoints(),
-            c.evidence()));
-      } else if (c.kind() == StructureChange.Kind.NOT_FOUND) {
-        b.append(String.format(Locale.ROOT, "structure %s (line %s) pole not found in the points,"
-            + " position kept: %s%n", c.structureId(), c.lineId(), c.evidence()));
-      } else {
-        b.append(String.format(Locale.ROOT, "structure %s (line %s) added at %.3f, %.3f: the"
-            + " structures file has none there (%d survey points: %s)%n", c.structureId(),
-            c.lineId(), c.toX(), c.toY(), c.evidencePoints(), c.evidence()));
-      }
+      b.append(c.describe()).append(System.lineSeparator());
     }
     int rows = 0;
     for (SpanWires sw : result.spans()) {

@@ -1,5 +1,6 @@
 package org.clearance.wire;
 
+import java.util.Locale;
 import java.util.Objects;
 
 /**
@@ -31,6 +32,22 @@ public record StructureChange(String lineId, String structureId, Kind kind, doub
     /** A pole line's pole was not found near the file's position, or two candidates were: the
      * position is kept (from and to are the file's position), see the evidence text. */
     NOT_FOUND
+  }
+
+  /** One console line for people (the same in `check` and `wires`). */
+  public String describe() {
+    return switch (kind) {
+      case MOVED -> String.format(Locale.ROOT, "structure %s (line %s) moved %.1f m to %.3f, %.3f"
+          + " (%d survey points: %s)", structureId, lineId, shiftM(), toX, toY, evidencePoints,
+          evidence);
+      case CONFIRMED -> String.format(Locale.ROOT, "structure %s (line %s) pole found, position"
+          + " kept (%d survey points: %s)", structureId, lineId, evidencePoints, evidence);
+      case NOT_FOUND -> String.format(Locale.ROOT, "structure %s (line %s) pole not found in the"
+          + " points, position kept: %s", structureId, lineId, evidence);
+      case ADDED -> String.format(Locale.ROOT, "structure %s (line %s) added at %.3f, %.3f: the"
+          + " structures file has none there (%d survey points: %s)", structureId, lineId, toX,
+          toY, evidencePoints, evidence);
+    };
   }
 
   /** Whether the change moved or added a structure (else it only reports a pole check). */
