@@ -45,17 +45,18 @@ import org.junit.jupiter.params.provider.EnumSource;
  * 5 cm of the exact truth (the generator's curves of the fitted phases measured to the true
  * vegetation points, as FeederClearanceTest), no feeder span without a site while a true
  * vegetation point is inside its innermost zone, and at most 2 % of either line's zone sites on
- * points that are not vegetation (issue 9). The other classification modes are measured by the
- * slow test below.
+ * points that are not vegetation (issue 9). The other classification modes are held to the same
+ * 2 % by the slow test below (measured: 0 of 74-75 and 0 of 40-41 zone sites in every mode).
  *
- * <p>Known gap (issue 15, wire finder, not closed here): in the default demo the finder finds
+ * <p>Former gap (issue 15, wire finder; closed by the stacked-framing growth, measured: no feeder
+ * span INCOMPLETE): in the default demo the finder found
  * the raised centre phase B and the neutral of the triangular span P205-P206 each in two
  * interleaved pieces; one piece of each is matched, the other listed as an extra ({@code extra1}
  * fitted on B's curve, {@code extra2} too short to fit), and an extra has no conductor data for
  * the line conditions, so the span is INCOMPLETE (never clear). Such a span is held to: every
  * extra with a curve is a piece of one of the span's own conductors (its curve within
  * {@link #PIECE_M} of that conductor's truth at mid-span, its sag within 5 cm), its minimum is
- * not above the truth's, and at most {@link #MAX_SPLIT_SPANS} span is so.
+ * not above the truth's, and at most {@link #MAX_SPLIT_SPANS} spans are so.
  */
 class DemoNetworkTest {
   /** Issue 15: sag and per-span minimum within 5 cm of the truth. */
@@ -72,8 +73,10 @@ class DemoNetworkTest {
   /** An extra is a piece of a conductor whose truth passes this near its curve at mid-span, m
    * (FeederAccuracyTest's right-position distance). */
   static final double PIECE_M = 0.15;
-  /** Feeder spans INCOMPLETE only for a conductor found in pieces (the known gap above). */
-  static final int MAX_SPLIT_SPANS = 1;
+  /** Feeder spans INCOMPLETE only for a conductor found in pieces: none since the stacked-framing
+   * growth of issue 15 (the known gap above is kept as the test's description of what it would
+   * accept). */
+  static final int MAX_SPLIT_SPANS = 0;
   /** The demo command's rule profile. */
   static final String PROFILE = "example-utility-95";
 
@@ -240,8 +243,7 @@ class DemoNetworkTest {
     DemoOptions options = DemoOptions.defaults().withMode(mode);
     DemoNetwork net = DemoNetwork.create(options);
     Run run = run(options, mode.name());
-    assertNotVegetationShare(net, run, mode, mode != ClassificationMode.UNCLASSIFIED
-        && mode != ClassificationMode.GROUND_ONLY);
+    assertNotVegetationShare(net, run, mode, true);
   }
 
   /**
