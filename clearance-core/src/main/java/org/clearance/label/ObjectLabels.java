@@ -43,7 +43,7 @@ public record ObjectLabels(List<LabelledObject> objects, long pointsLooked, long
     long mast = objects.stream().filter(o -> o.kind() == ObjectKind.MAST).count();
     long planar = objects.stream().filter(o -> o.kind() == ObjectKind.PLANAR).count();
     long linear = objects.stream().filter(o -> o.kind() == ObjectKind.LINEAR).count();
-    String text = String.format(java.util.Locale.ROOT, "%,d unclassified points in %d objects"
+    String text = String.format(java.util.Locale.ROOT, "%,d points in %d objects"
         + " looked at; %d mast-like, %d planar and %d linear objects (%,d points) set aside as"
         + " man-made; echoes %s", pointsLooked, objects.size(), mast, planar, linear,
         pointsSetAside, echoesInformative ? "used" : "not recorded, geometry only");
