@@ -63,11 +63,19 @@ public final class BenchCommand implements Callable<Integer> {
     List<ClassificationMode> chosen = new ArrayList<>();
     for (String m : modes) {
       chosen.add(Benchmark.mode(m.strip()).orElseThrow(() -> new CommandLine.ParameterException(
-          spec.commandLine(), "--modes: unknown classification mode '" + m + "' (classified, "
-              + "wires-unlabelled, ground-only, unclassified)")));
+          spec.commandLine(), "--modes: unknown classification mode '" + m + "' ("
+              + java.util.Arrays.stream(ClassificationMode.values()).map(Benchmark::modeName)
+                  .collect(java.util.stream.Collectors.joining(", ")) + ")")));
     }
-    Benchmark.run(new Benchmark.Options(points, dir, n, rules, chosen, profile),
-        spec.commandLine().getOut());
+    try {
+      Benchmark.run(new Benchmark.Options(points, dir, n, rules, chosen, profile),
+          spec.commandLine().getOut());
+    } catch (OutOfMemoryError e) {
+      spec.commandLine().getErr().println("bench: out of memory with a "
+          + Runtime.getRuntime().maxMemory() / (1024 * 1024) + " MiB heap at " + points
+          + " points: give the JVM more heap (-Xmx) or fewer --points");
+      return ClearanceCommand.EXIT_FAILURE;
+    }
     return ClearanceCommand.EXIT_OK;
   }
 }
