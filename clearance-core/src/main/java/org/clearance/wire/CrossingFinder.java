@@ -153,37 +153,11 @@ final class CrossingFinder {
   private static Crossing crossing(SpanPoints p, IntList g, Span span,
       List<FittedConductor> conductors) {
     int n = g.size();
-    double ms = 0;
-    double me = 0;
-    double mz = 0;
-    for (int k = 0; k < n; k++) {
-      int i = g.get(k);
-      ms += p.s(i);
-      me += p.e(i);
-      mz += p.z(i);
-    }
-    ms /= n;
-    me /= n;
-    mz /= n;
-    double ss = 0;
-    double se = 0;
-    double sz = 0;
-    double ee = 0;
-    double ez = 0;
-    double zz = 0;
-    for (int k = 0; k < n; k++) {
-      int i = g.get(k);
-      double ds = p.s(i) - ms;
-      double de = p.e(i) - me;
-      double dz = p.z(i) - mz;
-      ss += ds * ds;
-      se += ds * de;
-      sz += ds * dz;
-      ee += de * de;
-      ez += de * dz;
-      zz += dz * dz;
-    }
-    Eigen3.Result r = Eigen3.symmetric(ss / n, se / n, sz / n, ee / n, ez / n, zz / n);
+    PointSpread spread = PointSpread.of(p, g);
+    double ms = spread.meanS();
+    double me = spread.meanE();
+    double mz = spread.meanZ();
+    Eigen3.Result r = spread.axes();
     double plan = Math.hypot(r.v1x(), r.v1y());
     double angle = Math.toDegrees(Math.atan2(Math.abs(r.v1y()), Math.abs(r.v1x())));
     double steep = Math.toDegrees(Math.atan2(Math.abs(r.v1z()), plan));

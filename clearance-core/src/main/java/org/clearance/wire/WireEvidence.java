@@ -54,38 +54,7 @@ final class WireEvidence {
   }
 
   private boolean isLinear(SpanPoints p, IntList nb, double maxPlan, double maxIncl) {
-    int m = nb.size();
-    double ms = 0;
-    double me = 0;
-    double mz = 0;
-    for (int k = 0; k < m; k++) {
-      int j = nb.get(k);
-      ms += p.s(j);
-      me += p.e(j);
-      mz += p.z(j);
-    }
-    ms /= m;
-    me /= m;
-    mz /= m;
-    double ss = 0;
-    double se = 0;
-    double sz = 0;
-    double ee = 0;
-    double ez = 0;
-    double zz = 0;
-    for (int k = 0; k < m; k++) {
-      int j = nb.get(k);
-      double ds = p.s(j) - ms;
-      double de = p.e(j) - me;
-      double dz = p.z(j) - mz;
-      ss += ds * ds;
-      se += ds * de;
-      sz += ds * dz;
-      ee += de * de;
-      ez += de * dz;
-      zz += dz * dz;
-    }
-    Eigen3.Result eig = Eigen3.symmetric(ss / m, se / m, sz / m, ee / m, ez / m, zz / m);
+    Eigen3.Result eig = PointSpread.of(p, nb).axes();
     if (!(eig.l1() > 0)) {
       return false;
     }
