@@ -27,7 +27,7 @@ import org.clearance.line.ConductorPosition.Role;
  * role; then the same per voltage entry: the nearest energised conductor of that voltage. Float32 keeps distances to well under a
  * millimetre at the ranges stored (below a few hundred metres). Records are sorted by span index,
  * then x, y and z, then their remaining bytes, so the same survey gives the same file whatever
- * the order the reading threads met the points in. Trailer: the 8 ASCII bytes {@code CLRNEND2},
+ * the order the reading threads met the points in. Trailer: the 8 ASCII bytes {@code CLRNEND3},
  * int64 number of records, and the CRC-32C (Castagnoli; RFC 3720 appendix B.4) of every byte
  * before the trailer, so a truncated or damaged file is recognised before it is used.
  *
@@ -53,8 +53,6 @@ public record NearPointFile(
   static final byte[] MAGIC = {'C', 'L', 'R', 'N', 'E', 'A', 'R', '3'};
   /** Magic bytes of the trailer. */
   static final byte[] END = {'C', 'L', 'R', 'N', 'E', 'N', 'D', '3'};
-  /** Bytes of the trailer: magic, int64 count, int32 CRC-32C. */
-  static final int TRAILER_BYTES = 8 + 8 + 4;
   /** Byte offsets of the span index and of x, y, z in a record. */
   private static final int[] KEY_DOUBLES = {4, 12, 20};
   /** Bytes of a record before the per-condition part. */

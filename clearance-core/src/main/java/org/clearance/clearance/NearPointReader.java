@@ -12,7 +12,6 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
-import java.util.Locale;
 import java.util.function.Consumer;
 import java.util.zip.CRC32C;
 import java.util.zip.CheckedInputStream;
@@ -28,9 +27,9 @@ import org.clearance.line.ConductorPosition.Role;
 public final class NearPointReader {
 
   /** Stream buffer. */
-  private static final int BUFFER_BYTES = 1 << 20;
+  private static final int BUFFER_BYTES = RecordFiles.BUFFER_BYTES;
   /** What a damaged file's message ends with. */
-  private static final String RERUN = "; the run folder is damaged: run the check again";
+  private static final String RERUN = RecordFiles.RERUN;
 
   private NearPointReader() {}
 
@@ -67,12 +66,7 @@ public final class NearPointReader {
       NearPointFile layout = h.layout;
       int n = layout.conditions().size();
       int rb = layout.recordBytes();
-      long data = size - h.bytes - NearPointFile.TRAILER_BYTES;
-      if (data < 0 || data % rb != 0) {
-        throw new InputException(file, null, null, "holds " + size + " bytes, not a whole "
-            + "number of " + rb + "-byte records after its header plus its trailer" + RERUN);
-      }
-      long records = data / rb;
+      long records = RecordFiles.records(file, size, h.bytes, rb);
       byte[] rec = new byte[rb];
       ByteBuffer buf = ByteBuffer.wrap(rec).order(ByteOrder.LITTLE_ENDIAN);
       for (long index = 0; index < records; index++) {
@@ -125,22 +119,7 @@ public final class NearPointReader {
             byRole.get(0), roleList(layout, byRole, Role.NEUTRAL),
             roleList(layout, byRole, Role.SHIELD), circuits));
       }
-      long expected = crc.getValue();
-      byte[] trailer = new byte[NearPointFile.TRAILER_BYTES];
-      in.readFully(trailer);
-      ByteBuffer t = ByteBuffer.wrap(trailer).order(ByteOrder.LITTLE_ENDIAN);
-      byte[] end = new byte[NearPointFile.END.length];
-      t.get(end);
-      long count = t.getLong();
-      long stored = Integer.toUnsignedLong(t.getInt());
-      if (!Arrays.equals(end, NearPointFile.END) || count != records) {
-        throw new InputException(file, "trailer", null, "missing or damaged end marker "
-            + "(the file was cut or extended)" + RERUN);
-      }
-      if (stored != expected) {
-        throw new InputException(file, "trailer", "checksum", String.format(Locale.ROOT,
-            "CRC-32C of the content is %08x, the file says %08x", expected, stored) + RERUN);
-      }
+      RecordFiles.checkTrailer(file, in, crc, NearPointFile.END, records);
       return layout;
     } catch (EOFException e) {
       throw new InputException(file, null, null, "ends early" + RERUN);
@@ -171,7 +150,7 @@ public final class NearPointReader {
       List<String> conditions = readStrings(file, in, size, bytes);
       List<String> groups = new ArrayList<>();
       for (int i = 0; i < conditions.size(); i++) {
-        groups.add(readString(file, in, bytes));
+        groups.add(RecordFiles.readString(in, bytes));
       }
       List<String> spans = readStrings(file, in, size, bytes);
       List<String> conductors = readStrings(file, in, size, bytes);
@@ -221,17 +200,8 @@ public final class NearPointReader {
     }
     List<String> out = new ArrayList<>(n);
     for (int i = 0; i < n; i++) {
-      out.add(readString(file, in, bytes));
+      out.add(RecordFiles.readString(in, bytes));
     }
     return out;
-  }
-
-  private static String readString(Path file, DataInputStream in, long[] bytes)
-      throws IOException {
-    int len = Short.reverseBytes(in.readShort()) & 0xFFFF;
-    byte[] b = new byte[len];
-    in.readFully(b);
-    bytes[0] += 2 + len;
-    return new String(b, StandardCharsets.UTF_8);
   }
 }

@@ -7,7 +7,6 @@ import java.io.IOException;
 import java.io.OutputStream;
 import java.nio.ByteBuffer;
 import java.nio.ByteOrder;
-import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.HashMap;
@@ -15,7 +14,6 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 import java.util.zip.CRC32C;
-import java.util.zip.CheckedOutputStream;
 import org.clearance.io.AtomicFiles;
 import org.clearance.io.RecordSort;
 import org.clearance.line.ConductorPosition.Role;
@@ -58,7 +56,7 @@ public final class NearPointWriter implements Closeable {
     b.writeBytes(NearPointFile.MAGIC);
     writeStrings(b, layout.conditions());
     for (String g : layout.groups()) {
-      writeString(b, g);
+      RecordFiles.writeString(b, g);
     }
     writeStrings(b, layout.spanIds());
     writeStrings(b, layout.conductors());
@@ -75,19 +73,10 @@ public final class NearPointWriter implements Closeable {
     b.writeBytes(ByteBuffer.allocate(4).order(ByteOrder.LITTLE_ENDIAN).putInt(list.size())
         .array());
     for (String s : list) {
-      writeString(b, s);
+      RecordFiles.writeString(b, s);
     }
   }
 
-  private static void writeString(ByteArrayOutputStream b, String s) {
-    byte[] bytes = s.getBytes(StandardCharsets.UTF_8);
-    if (bytes.length > Short.MAX_VALUE) {
-      throw new IllegalArgumentException("string too long: " + s.length());
-    }
-    b.writeBytes(ByteBuffer.allocate(2).order(ByteOrder.LITTLE_ENDIAN)
-        .putShort((short) bytes.length).array());
-    b.writeBytes(bytes);
-  }
 
   /** Appends the points; their conditions must be in the layout's order. */
   public void write(List<PointClearance> points) throws IOException {
@@ -166,21 +155,8 @@ public final class NearPointWriter implements Closeable {
     try {
       out.close();
       int rb = layout.recordBytes();
-      AtomicFiles.write(target, raw -> {
-        CRC32C crc = new CRC32C();
-        OutputStream o = new CheckedOutputStream(new BufferedOutputStream(raw, BUFFER_BYTES),
-            crc);
-        o.write(header());
-        long n = RecordSort.sort(unsorted, rb,
-            (a, ai, b, bi) -> NearPointFile.compareRecords(a, ai, b, bi, rb), o,
-            RecordSort.RUN_BYTES);
-        o.flush();
-        ByteBuffer trailer = ByteBuffer.allocate(NearPointFile.TRAILER_BYTES)
-            .order(ByteOrder.LITTLE_ENDIAN).put(NearPointFile.END).putLong(n)
-            .putInt((int) crc.getValue());
-        o.write(trailer.array());
-        o.flush();
-      });
+      RecordFiles.writeSorted(target, header(), unsorted, rb,
+          (a, ai, b, bi) -> NearPointFile.compareRecords(a, ai, b, bi, rb), NearPointFile.END);
     } finally {
       Files.deleteIfExists(unsorted);
     }

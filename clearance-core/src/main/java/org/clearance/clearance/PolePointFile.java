@@ -41,8 +41,6 @@ public record PolePointFile(double keepRadiusM, double keepHeightM, double colum
   static final byte[] MAGIC = {'C', 'L', 'R', 'P', 'O', 'L', 'E', '1'};
   /** Magic bytes of the trailer. */
   static final byte[] END = {'C', 'L', 'R', 'P', 'E', 'N', 'D', '1'};
-  /** Bytes of the trailer: magic, int64 count, int32 CRC-32C. */
-  static final int TRAILER_BYTES = 8 + 8 + 4;
   /** Bytes of a record. */
   static final int RECORD_BYTES = 4 + 3 * 8 + 2 + 4 + 4;
   /** Byte offsets of x, y, z in a record. */

@@ -12,7 +12,6 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
-import java.util.Locale;
 import java.util.function.Consumer;
 import java.util.zip.CRC32C;
 import java.util.zip.CheckedInputStream;
@@ -25,8 +24,7 @@ import org.clearance.InputException;
  */
 public final class PolePointReader {
 
-  private static final int BUFFER_BYTES = 1 << 20;
-  private static final String RERUN = "; the run folder is damaged: run the check again";
+  private static final String RERUN = RecordFiles.RERUN;
 
   private PolePointReader() {}
 
@@ -38,16 +36,11 @@ public final class PolePointReader {
     long size = Files.size(file);
     CRC32C crc = new CRC32C();
     try (DataInputStream in = new DataInputStream(new CheckedInputStream(
-        new BufferedInputStream(Files.newInputStream(file), BUFFER_BYTES), crc))) {
+        new BufferedInputStream(Files.newInputStream(file), RecordFiles.BUFFER_BYTES), crc))) {
       long[] bytes = {0};
       PolePointFile layout = header(file, in, size, bytes);
       int rb = PolePointFile.RECORD_BYTES;
-      long data = size - bytes[0] - PolePointFile.TRAILER_BYTES;
-      if (data < 0 || data % rb != 0) {
-        throw new InputException(file, null, null, "holds " + size + " bytes, not a whole "
-            + "number of " + rb + "-byte records after its header plus its trailer" + RERUN);
-      }
-      long records = data / rb;
+      long records = RecordFiles.records(file, size, bytes[0], rb);
       byte[] rec = new byte[rb];
       ByteBuffer buf = ByteBuffer.wrap(rec).order(ByteOrder.LITTLE_ENDIAN);
       for (long index = 0; index < records; index++) {
@@ -74,22 +67,7 @@ public final class PolePointReader {
         PolePointFile.Pole p = layout.structures().get(s);
         sink.accept(new PolePoint(p.lineId(), p.structureId(), x, y, z, cls, hag, plan));
       }
-      long expected = crc.getValue();
-      byte[] trailer = new byte[PolePointFile.TRAILER_BYTES];
-      in.readFully(trailer);
-      ByteBuffer t = ByteBuffer.wrap(trailer).order(ByteOrder.LITTLE_ENDIAN);
-      byte[] end = new byte[PolePointFile.END.length];
-      t.get(end);
-      long count = t.getLong();
-      long stored = Integer.toUnsignedLong(t.getInt());
-      if (!Arrays.equals(end, PolePointFile.END) || count != records) {
-        throw new InputException(file, "trailer", null, "missing or damaged end marker "
-            + "(the file was cut or extended)" + RERUN);
-      }
-      if (stored != expected) {
-        throw new InputException(file, "trailer", "checksum", String.format(Locale.ROOT,
-            "CRC-32C of the content is %08x, the file says %08x", expected, stored) + RERUN);
-      }
+      RecordFiles.checkTrailer(file, in, crc, PolePointFile.END, records);
       return layout;
     } catch (EOFException e) {
       throw new InputException(file, null, null, "ends early" + RERUN);
@@ -120,8 +98,8 @@ public final class PolePointReader {
     List<PolePointFile.Pole> poles = new ArrayList<>(n);
     try {
       for (int i = 0; i < n; i++) {
-        String line = readString(in, bytes);
-        String id = readString(in, bytes);
+        String line = RecordFiles.readString(in, bytes);
+        String id = RecordFiles.readString(in, bytes);
         double x = Double.longBitsToDouble(Long.reverseBytes(in.readLong()));
         double y = Double.longBitsToDouble(Long.reverseBytes(in.readLong()));
         long count = Long.reverseBytes(in.readLong());
@@ -134,13 +112,5 @@ public final class PolePointReader {
     } catch (EOFException e) {
       throw new InputException(file, "header", null, "file ends inside its header" + RERUN);
     }
-  }
-
-  private static String readString(DataInputStream in, long[] bytes) throws IOException {
-    int len = Short.reverseBytes(in.readShort()) & 0xFFFF;
-    byte[] b = new byte[len];
-    in.readFully(b);
-    bytes[0] += 2 + len;
-    return new String(b, StandardCharsets.UTF_8);
   }
 }

@@ -7,15 +7,12 @@ import java.io.IOException;
 import java.io.OutputStream;
 import java.nio.ByteBuffer;
 import java.nio.ByteOrder;
-import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.zip.CRC32C;
-import java.util.zip.CheckedOutputStream;
 import org.clearance.io.AtomicFiles;
-import org.clearance.io.RecordSort;
 
 /**
  * Writes {@link PolePointFile pole-points.bin}. Thread-safe: collectors append whole records to
@@ -24,9 +21,6 @@ import org.clearance.io.RecordSort;
  * into place; {@link #abort()} deletes what was written.
  */
 public final class PolePointWriter implements Closeable {
-
-  /** Records buffered before they go to the stream. */
-  private static final int BUFFER_BYTES = 1 << 20;
 
   private final PolePointFile layout;
   private final Path target;
@@ -40,7 +34,8 @@ public final class PolePointWriter implements Closeable {
     this.layout = layout;
     this.target = target;
     this.unsorted = AtomicFiles.tempFileBeside(target);
-    this.out = new BufferedOutputStream(Files.newOutputStream(unsorted), BUFFER_BYTES);
+    this.out = new BufferedOutputStream(Files.newOutputStream(unsorted),
+        RecordFiles.BUFFER_BYTES);
     this.column = new long[layout.structures().size()];
   }
 
@@ -103,22 +98,12 @@ public final class PolePointWriter implements Closeable {
     b.writeBytes(head.array());
     for (int i = 0; i < layout.structures().size(); i++) {
       PolePointFile.Pole p = layout.structures().get(i);
-      writeString(b, p.lineId());
-      writeString(b, p.structureId());
+      RecordFiles.writeString(b, p.lineId());
+      RecordFiles.writeString(b, p.structureId());
       b.writeBytes(ByteBuffer.allocate(3 * 8).order(ByteOrder.LITTLE_ENDIAN).putDouble(p.x())
           .putDouble(p.y()).putLong(column[i]).array());
     }
     return b.toByteArray();
-  }
-
-  private static void writeString(ByteArrayOutputStream b, String s) {
-    byte[] bytes = s.getBytes(StandardCharsets.UTF_8);
-    if (bytes.length > Short.MAX_VALUE) {
-      throw new IllegalArgumentException("string too long: " + s.length());
-    }
-    b.writeBytes(ByteBuffer.allocate(2).order(ByteOrder.LITTLE_ENDIAN)
-        .putShort((short) bytes.length).array());
-    b.writeBytes(bytes);
   }
 
   /** The file's layout with the column counts gathered. */
@@ -137,18 +122,8 @@ public final class PolePointWriter implements Closeable {
   public synchronized void close() throws IOException {
     try {
       out.close();
-      AtomicFiles.write(target, raw -> {
-        CRC32C crc = new CRC32C();
-        OutputStream o = new CheckedOutputStream(new BufferedOutputStream(raw, BUFFER_BYTES),
-            crc);
-        o.write(header());
-        long n = RecordSort.sort(unsorted, PolePointFile.RECORD_BYTES,
-            PolePointFile::compareRecords, o, RecordSort.RUN_BYTES);
-        o.flush();
-        o.write(ByteBuffer.allocate(PolePointFile.TRAILER_BYTES).order(ByteOrder.LITTLE_ENDIAN)
-            .put(PolePointFile.END).putLong(n).putInt((int) crc.getValue()).array());
-        o.flush();
-      });
+      RecordFiles.writeSorted(target, header(), unsorted, PolePointFile.RECORD_BYTES,
+          PolePointFile::compareRecords, PolePointFile.END);
     } finally {
       Files.deleteIfExists(unsorted);
     }
