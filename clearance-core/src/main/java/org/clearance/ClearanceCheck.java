@@ -338,18 +338,21 @@ public final class ClearanceCheck {
       double gpsMax) {}
 
   private SurveyScan scan(Survey survey, Progress progress) {
-    List<GroundModelBuilder> builders = new ArrayList<>();
+    // one builder for all readers: its rasters cover the whole corridor, and a builder per
+    // reader would hold them once per thread (the heap then ran out at 100 million points in
+    // 400 MiB); decoding stays parallel, only adding a decoded chunk takes the lock
+    GroundModelBuilder builder = new GroundModelBuilder(options.ground());
     List<long[]> counts = new ArrayList<>();
     List<double[]> times = new ArrayList<>();
     survey.readParallel(options.threads(), progress.wrap("ground", () -> {
-      GroundModelBuilder b = new GroundModelBuilder(options.ground());
       long[] c = new long[256];
       double[] t = {Double.NaN, Double.NaN};
-      builders.add(b);
       counts.add(c);
       times.add(t);
       Consumer<PointChunk> worker = chunk -> {
-        b.accept(chunk);
+        synchronized (builder) {
+          builder.accept(chunk);
+        }
         short[] cls = chunk.classification();
         double[] gps = chunk.gpsTime();
         for (int i = 0; i < chunk.size(); i++) {
@@ -363,7 +366,6 @@ public final class ClearanceCheck {
       };
       return worker;
     }));
-    GroundModelBuilder first = builders.get(0);
     long[] total = new long[256];
     double gpsMin = Double.NaN;
     double gpsMax = Double.NaN;
@@ -371,15 +373,12 @@ public final class ClearanceCheck {
       gpsMin = Double.isNaN(gpsMin) ? t[0] : Double.isNaN(t[0]) ? gpsMin : Math.min(gpsMin, t[0]);
       gpsMax = Double.isNaN(gpsMax) ? t[1] : Double.isNaN(t[1]) ? gpsMax : Math.max(gpsMax, t[1]);
     }
-    for (int i = 0; i < builders.size(); i++) {
-      if (i > 0) {
-        first.absorb(builders.get(i));
-      }
-      for (int c = 0; c < 256; c++) {
-        total[c] += counts.get(i)[c];
+    for (long[] c : counts) {
+      for (int k = 0; k < 256; k++) {
+        total[k] += c[k];
       }
     }
-    return new SurveyScan(first.build(options.threads()), total, gpsMin, gpsMax);
+    return new SurveyScan(builder.build(options.threads()), total, gpsMin, gpsMax);
   }
 
   private void start() {

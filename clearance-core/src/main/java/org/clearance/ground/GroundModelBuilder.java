@@ -66,28 +66,25 @@ public final class GroundModelBuilder implements Consumer<PointChunk> {
   }
 
   /**
-   * Shortcut: reads the survey on {@code threads} threads, one builder per thread, merges them
-   * and builds.
+   * Shortcut: reads the survey on {@code threads} threads into one builder (decoding in
+   * parallel, adding a decoded chunk under the builder's lock: a builder per thread would hold
+   * the corridor's rasters once per thread) and builds.
    *
    * @param threads reader threads, 1 to 256 (1 reads on the calling thread)
    * @throws InputException as {@link Survey#read} and {@link #build()}
    */
   public static GroundModel build(Survey survey, GroundOptions options, int threads) {
-    GroundModelBuilder first = new GroundModelBuilder(options);
+    GroundModelBuilder b = new GroundModelBuilder(options);
     if (threads == 1) {
-      survey.read(first);
-      return first.build();
+      survey.read(b);
+      return b.build();
     }
-    List<GroundModelBuilder> all = new ArrayList<>();
-    survey.readParallel(threads, () -> {
-      GroundModelBuilder b = new GroundModelBuilder(options);
-      all.add(b);
-      return b;
+    survey.readParallel(threads, () -> chunk -> {
+      synchronized (b) {
+        b.accept(chunk);
+      }
     });
-    for (GroundModelBuilder b : all) {
-      first.absorb(b);
-    }
-    return first.build(threads);
+    return b.build(threads);
   }
 
   /**
