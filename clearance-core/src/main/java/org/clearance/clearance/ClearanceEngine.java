@@ -270,11 +270,11 @@ public final class ClearanceEngine {
     List<EngineWorker> workers = Collections.synchronizedList(new ArrayList<>());
     List<PoleCollector> collectors = Collections.synchronizedList(new ArrayList<>());
     java.util.Map<Long, int[]> grid = poles == null ? null : PoleCollector.grid(poles.layout());
+    CanopyBuilder canopy = treeOptions == null ? null
+        : new CanopyBuilder(treeOptions, (x, y) -> true);
     source.readParallel(options.threads(), () -> {
-      CanopyBuilder canopy = treeOptions == null ? null
-          : new CanopyBuilder(treeOptions, (x, y) -> true);
       EngineWorker w = new EngineWorker(spans, index, conditions, heights, vegetation, options,
-          out, canopy, setAside, voltages, voltageGroups);
+          out, canopy == null ? null : canopy.batch(), setAside, voltages, voltageGroups);
       workers.add(w);
       if (poles == null) {
         return w;
@@ -292,7 +292,7 @@ public final class ClearanceEngine {
     for (PoleCollector c : collectors) {
       c.flush();
     }
-    return new Measurement(merge(workers), trees(workers));
+    return new Measurement(merge(workers), trees(canopy));
   }
 
   private List<SpanClearance> merge(List<EngineWorker> workers) {
@@ -343,13 +343,9 @@ public final class ClearanceEngine {
     return result;
   }
 
-  private List<TreeClearance> trees(List<EngineWorker> workers) {
-    if (treeOptions == null || workers.isEmpty()) {
+  private List<TreeClearance> trees(CanopyBuilder all) {
+    if (all == null) {
       return List.of();
-    }
-    CanopyBuilder all = workers.get(0).canopy;
-    for (int i = 1; i < workers.size(); i++) {
-      all.absorb(workers.get(i).canopy);
     }
     List<TreeClearance> out = new ArrayList<>();
     for (Tree tree : all.findTrees(ground, options.threads())) {

@@ -13,7 +13,8 @@ import org.clearance.wire.SetAside;
 
 /**
  * One worker thread of the {@link ClearanceEngine}: measures the chunks it is given and keeps its
- * own per-span minima, counts, near-point buffer and canopy, merged after the pass.
+ * own per-span minima, counts and near-point buffer, merged after the pass; its canopy points
+ * go to the engine's one canopy builder in batches.
  */
 final class EngineWorker implements Consumer<PointChunk> {
 
@@ -50,7 +51,7 @@ final class EngineWorker implements Consumer<PointChunk> {
   private final VegetationSelector vegetation;
   private final ClearanceEngine.Options options;
   private final NearPointWriter out;
-  final CanopyBuilder canopy;
+  private final CanopyBuilder.Batch canopy;
 
   private final List<PointClearance> buffer = new ArrayList<>();
   final ConditionMinimum[][] minimum;
@@ -86,7 +87,7 @@ final class EngineWorker implements Consumer<PointChunk> {
 
   EngineWorker(List<PreparedSpan> spans, SpanIndex index, ConditionSet conditions,
       HeightModel heights, VegetationSelector vegetation, ClearanceEngine.Options options,
-      NearPointWriter out, CanopyBuilder canopy, SetAside setAside, List<Double> voltages,
+      NearPointWriter out, CanopyBuilder.Batch canopy, SetAside setAside, List<Double> voltages,
       int[][][] voltageGroups) {
     this.setAside = setAside;
     this.voltages = voltages;
@@ -503,6 +504,9 @@ final class EngineWorker implements Consumer<PointChunk> {
   }
 
   void flush() {
+    if (canopy != null) {
+      canopy.flush();
+    }
     if (out != null && !buffer.isEmpty()) {
       try {
         out.write(buffer);

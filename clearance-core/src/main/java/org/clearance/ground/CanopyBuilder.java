@@ -29,6 +29,9 @@ public final class CanopyBuilder implements Consumer<PointChunk> {
     }
   }
 
+  /** Points a {@link Batch} buffers before it takes the builder's lock. */
+  static final int BATCH_POINTS = 4096;
+
   private final TreeOptions options;
   private final PlanPredicate region;
   private final SparseGrid surface;
@@ -52,28 +55,77 @@ public final class CanopyBuilder implements Consumer<PointChunk> {
   }
 
   /**
-   * Shortcut: reads the survey on {@code threads} threads (one builder each, merged) and finds
-   * the trees. The region is called from all reader threads at once.
+   * Shortcut: reads the survey on {@code threads} threads into one builder (each thread adds its
+   * points in batches under the builder's lock) and finds the trees. The region is called from
+   * all reader threads at once.
    *
    * @param threads reader threads, 1 to 256 (1 reads on the calling thread)
    */
   public static List<Tree> findTrees(Survey survey, GroundModel ground, TreeOptions options,
       PlanPredicate region, int threads) {
-    CanopyBuilder first = new CanopyBuilder(options, region);
+    CanopyBuilder b = new CanopyBuilder(options, region);
     if (threads == 1) {
-      survey.read(first);
+      survey.read(b);
     } else {
-      List<CanopyBuilder> all = new ArrayList<>();
+      List<Batch> batches = new ArrayList<>();
       survey.readParallel(threads, () -> {
-        CanopyBuilder b = new CanopyBuilder(options, region);
-        all.add(b);
-        return b;
+        Batch batch = b.batch();
+        batches.add(batch);
+        return chunk -> {
+          double[] x = chunk.x();
+          double[] y = chunk.y();
+          double[] z = chunk.z();
+          for (int i = 0, n = chunk.size(); i < n; i++) {
+            if (isCanopyPoint(chunk, i)) {
+              batch.add(x[i], y[i], z[i]);
+            }
+          }
+        };
       });
-      for (CanopyBuilder b : all) {
-        first.absorb(b);
+      batches.forEach(Batch::flush);
+    }
+    return b.findTrees(ground, threads);
+  }
+
+  /**
+   * A reader thread's buffer of canopy points, added to its builder under the builder's lock
+   * {@value #BATCH_POINTS} at a time: one raster for all threads (a raster per thread held the
+   * corridor's canopy once per thread). The highest point per cell does not depend on the order
+   * the points arrive in, so neither does the result. Call {@link #flush()} after the last point.
+   */
+  public final class Batch {
+    private final double[] xyz = new double[3 * BATCH_POINTS];
+    private int n;
+
+    private Batch() {}
+
+    /** As {@link CanopyBuilder#add} (the region tested here, outside the lock), buffered. */
+    public void add(double x, double y, double z) {
+      if (!region.test(x, y)) {
+        return;
+      }
+      xyz[3 * n] = x;
+      xyz[3 * n + 1] = y;
+      xyz[3 * n + 2] = z;
+      if (++n == BATCH_POINTS) {
+        flush();
       }
     }
-    return first.findTrees(ground, threads);
+
+    /** Adds the buffered points to the builder. */
+    public void flush() {
+      synchronized (CanopyBuilder.this) {
+        for (int i = 0; i < n; i++) {
+          surface.accumulateMax(xyz[3 * i], xyz[3 * i + 1], xyz[3 * i + 2]);
+        }
+      }
+      n = 0;
+    }
+  }
+
+  /** A buffer for one reader thread; see {@link Batch}. */
+  public Batch batch() {
+    return new Batch();
   }
 
   /**
@@ -84,11 +136,6 @@ public final class CanopyBuilder implements Consumer<PointChunk> {
     if (region.test(x, y)) {
       surface.accumulateMax(x, y, z);
     }
-  }
-
-  /** Adds everything another builder (same options) has collected. */
-  public void absorb(CanopyBuilder other) {
-    surface.mergeMax(other.surface);
   }
 
   /** True when a point of class {@code cls} can be part of the canopy. */
@@ -102,15 +149,17 @@ public final class CanopyBuilder implements Consumer<PointChunk> {
     double[] x = chunk.x();
     double[] y = chunk.y();
     double[] z = chunk.z();
-    short[] cls = chunk.classification();
-    byte[] flags = chunk.flags();
     for (int i = 0, n = chunk.size(); i < n; i++) {
-      if (NOT_VEGETATION[cls[i] & 0xff] || (flags[i] & PointChunk.FLAG_WITHHELD) != 0
-          || !region.test(x[i], y[i])) {
-        continue;
+      if (isCanopyPoint(chunk, i)) {
+        add(x[i], y[i], z[i]);
       }
-      surface.accumulateMax(x[i], y[i], z[i]);
     }
+  }
+
+  /** True when point {@code i} of the chunk can be canopy: a canopy class, not withheld. */
+  private static boolean isCanopyPoint(PointChunk chunk, int i) {
+    return !NOT_VEGETATION[chunk.classification()[i] & 0xff]
+        && (chunk.flags()[i] & PointChunk.FLAG_WITHHELD) == 0;
   }
 
   /**

@@ -95,8 +95,9 @@ class OpenFilesGroundTest {
 
   @Test
   void parallelReadingGivesTheSameTerrainAndTrees() {
-    // Two reader threads, each with its own builder, merged: the same lowest point per cell and
-    // highest canopy return per cell as one thread, so the same terrain and trees (exactly).
+    // Two reader threads adding to one builder in whatever order they meet the points: the same
+    // lowest point per cell and highest canopy return per cell as one thread, so the same
+    // terrain and trees (exactly).
     Survey survey = open("corridor_12AN2_20_thinned.las", "m");
     GroundModel one = GroundModelBuilder.build(survey, GroundOptions.defaults(), 1);
     GroundModel two = GroundModelBuilder.build(survey, GroundOptions.defaults(), 2);
