@@ -1,5 +1,7 @@
 package org.clearance.wire;
 
+import org.clearance.io.Hyperbolic;
+
 /**
  * A catenary family with k free parameters, in coordinates centred on the data (station and
  * elevation minus a reference), as the least-squares engine sees it. Package-private plumbing of
@@ -49,13 +51,13 @@ interface CurveModel {
 
     @Override
     public double slope(double[] p, double s) {
-      return Math.sinh((s - p[0]) / p[2]);
+      return Hyperbolic.sinh((s - p[0]) / p[2]);
     }
 
     @Override
     public double[] gradient(double[] p, double s) {
       double t = (s - p[0]) / p[2];
-      double sh = Math.sinh(t);
+      double sh = Hyperbolic.sinh(t);
       return new double[] {-sh, 1, Catenary.coshm1(t) - t * sh};
     }
 
@@ -105,15 +107,15 @@ interface CurveModel {
 
     @Override
     public double slope(double[] p, double s) {
-      return Math.sinh((s - p[0]) / p[1]);
+      return Hyperbolic.sinh((s - p[0]) / p[1]);
     }
 
     @Override
     public double[] gradient(double[] p, double s) {
       double t = (s - p[0]) / p[1];
       double ta = (sA - p[0]) / p[1];
-      double sh = Math.sinh(t);
-      double sha = Math.sinh(ta);
+      double sh = Hyperbolic.sinh(t);
+      double sha = Hyperbolic.sinh(ta);
       return new double[] {-sh + sha,
           (Catenary.coshm1(t) - t * sh) - (Catenary.coshm1(ta) - ta * sha)};
     }
@@ -132,7 +134,7 @@ interface CurveModel {
     @Override
     public double[][] fullJacobian(double[] p) {
       double ta = (sA - p[0]) / p[1];
-      double sha = Math.sinh(ta);
+      double sha = Hyperbolic.sinh(ta);
       // z0 = zA - c coshm1(tA): dz0/ds0 = sinh tA, dz0/dc = -(coshm1 tA - tA sinh tA)
       return new double[][] {{1, 0}, {sha, -(Catenary.coshm1(ta) - ta * sha)}, {0, 1}};
     }
