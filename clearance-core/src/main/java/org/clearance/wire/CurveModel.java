@@ -24,6 +24,13 @@ interface CurveModel {
   /** Gradient dz/dp at station s, length k (a new array). */
   double[] gradient(double[] p, double s);
 
+  /**
+   * Elevation at station s (centred), m, as {@link #z}, with the gradient dz/dp written into
+   * {@code g} (length k) as {@link #gradient} gives it: the same doubles, with the hyperbolic
+   * functions both share evaluated once.
+   */
+  double zAndGradient(double[] p, double s, double[] g);
+
   /** The catenary constant c of parameters p, m. */
   double c(double[] p);
 
@@ -59,6 +66,17 @@ interface CurveModel {
       double t = (s - p[0]) / p[2];
       double sh = Hyperbolic.sinh(t);
       return new double[] {-sh, 1, Catenary.coshm1(t) - t * sh};
+    }
+
+    @Override
+    public double zAndGradient(double[] p, double s, double[] g) {
+      double t = (s - p[0]) / p[2];
+      double cm1 = Catenary.coshm1(t);
+      double sh = Hyperbolic.sinh(t);
+      g[0] = -sh;
+      g[1] = 1;
+      g[2] = cm1 - t * sh;
+      return p[1] + p[2] * cm1;
     }
 
     @Override
@@ -118,6 +136,19 @@ interface CurveModel {
       double sha = Hyperbolic.sinh(ta);
       return new double[] {-sh + sha,
           (Catenary.coshm1(t) - t * sh) - (Catenary.coshm1(ta) - ta * sha)};
+    }
+
+    @Override
+    public double zAndGradient(double[] p, double s, double[] g) {
+      double t = (s - p[0]) / p[1];
+      double ta = (sA - p[0]) / p[1];
+      double cm1 = Catenary.coshm1(t);
+      double cm1a = Catenary.coshm1(ta);
+      double sh = Hyperbolic.sinh(t);
+      double sha = Hyperbolic.sinh(ta);
+      g[0] = -sh + sha;
+      g[1] = (cm1 - t * sh) - (cm1a - ta * sha);
+      return zA + p[1] * (cm1 - cm1a);
     }
 
     @Override

@@ -146,8 +146,8 @@ final class RobustLevenbergMarquardt {
       double[] v = new double[used];
       double[][] jac = new double[used][];
       for (int i = 0; i < used; i++) {
-        v[i] = sw[i] * model.z(p, ss[i]);
-        double[] g = model.gradient(p, ss[i]);
+        double[] g = new double[k];
+        v[i] = sw[i] * model.zAndGradient(p, ss[i], g);
         for (int j = 0; j < k; j++) {
           g[j] *= sw[i];
         }
@@ -197,13 +197,13 @@ final class RobustLevenbergMarquardt {
       }
       double sl = model.slope(p, s[i]);
       double w = robust[i] / (1 + sl * sl);
-      double[] g = model.gradient(p, s[i]);
+      double[] g = new double[k];
+      double res = z[i] - model.zAndGradient(p, s[i], g);
       for (int a = 0; a < k; a++) {
         for (int b = 0; b < k; b++) {
           nm[a][b] += w * g[a] * g[b];
         }
       }
-      double res = z[i] - model.z(p, s[i]);
       wrr += w * res * res;
       used++;
     }
