@@ -61,6 +61,7 @@ final class RobustLevenbergMarquardt {
     double[] p = start.clone();
     int iterations = 0;
     double[] r = new double[n];
+    double[] residual = new double[n];
     for (int round = 0; round < MAX_ROUNDS; round++) {
       int used = 0;
       for (double b : robust) {
@@ -92,10 +93,14 @@ final class RobustLevenbergMarquardt {
       // Scale from the points that currently keep weight: the plain MAD of all points in the
       // first round, a self-consistent trimmed scale once outliers (up to half or more after a
       // RANSAC start) carry weight 0.
+      // Each residual once per round (the scale and the weights use the same ones).
+      for (int i = 0; i < n; i++) {
+        residual[i] = orthogonalResidual(model, p, s[i], z[i]);
+      }
       int m = 0;
       for (int i = 0; i < n; i++) {
         if (robust[i] > 0) {
-          r[m++] = orthogonalResidual(model, p, s[i], z[i]);
+          r[m++] = residual[i];
         }
       }
       double sigma = Math.max(SIGMA_FLOOR, RobustScale.sigmaMad(r, m));
@@ -104,7 +109,7 @@ final class RobustLevenbergMarquardt {
         if (!(Double.isFinite(s[i]) && Double.isFinite(z[i]))) {
           continue;
         }
-        double b = RobustScale.tukey(orthogonalResidual(model, p, s[i], z[i]), sigma);
+        double b = RobustScale.tukey(residual[i], sigma);
         sameSet &= (b > 0) == (robust[i] > 0);
         robust[i] = b;
       }
