@@ -33,6 +33,12 @@ final class PoleCollector implements Consumer<PointChunk> {
   private final PlanCellIndex cells;
   private final double cell;
   private final long[] column;
+  /** The four cells of the last point looked at (see {@link #noStructureNear}). */
+  private long lastCx = Long.MIN_VALUE;
+  private long lastCy = Long.MIN_VALUE;
+  private long lastSx;
+  private long lastSy;
+  private boolean lastEmpty;
   private final ByteBuffer buffer = ByteBuffer.allocate(FLUSH_RECORDS * PolePointFile.RECORD_BYTES)
       .order(ByteOrder.LITTLE_ENDIAN);
 
@@ -85,6 +91,9 @@ final class PoleCollector implements Consumer<PointChunk> {
     long cy = (long) Math.floor(gy);
     long sx = gx - cx < 0.5 ? -1 : 1;
     long sy = gy - cy < 0.5 ? -1 : 1;
+    if (noStructureNear(cx, cy, sx, sy)) {
+      return;
+    }
     double r = layout.keepRadiusM();
     double r2 = r * r;
     double hag = Double.NaN;
@@ -128,6 +137,24 @@ final class PoleCollector implements Consumer<PointChunk> {
         }
       }
     }
+  }
+
+  /**
+   * Whether the four cells a point reaches, its own (cx, cy) and the neighbours towards (sx, sy),
+   * hold no structure: most points are far from every structure, and consecutive points (in
+   * flight order) mostly reach the same four cells, so the answer is kept for the last ones.
+   */
+  private boolean noStructureNear(long cx, long cy, long sx, long sy) {
+    if (cx == lastCx && cy == lastCy && sx == lastSx && sy == lastSy) {
+      return lastEmpty;
+    }
+    lastCx = cx;
+    lastCy = cy;
+    lastSx = sx;
+    lastSy = sy;
+    lastEmpty = cells.atCell(cx, cy).length == 0 && cells.atCell(cx + sx, cy).length == 0
+        && cells.atCell(cx, cy + sy).length == 0 && cells.atCell(cx + sx, cy + sy).length == 0;
+    return lastEmpty;
   }
 
   /** Hands the buffered records and column counts to the writer. */
