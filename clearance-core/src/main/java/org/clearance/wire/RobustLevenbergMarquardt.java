@@ -62,6 +62,8 @@ final class RobustLevenbergMarquardt {
     int iterations = 0;
     double[] r = new double[n];
     double[] residual = new double[n];
+    // slopes at the current parameters, for the next round's weights; null until computed
+    double[] slope = null;
     for (int round = 0; round < MAX_ROUNDS; round++) {
       int used = 0;
       for (double b : robust) {
@@ -73,7 +75,7 @@ final class RobustLevenbergMarquardt {
       }
       LeastSquaresOptimizer.Optimum opt;
       try {
-        opt = solve(model, s, z, robust, p, used, cMin, cMax);
+        opt = solve(model, s, z, robust, p, slope, used, cMin, cMax);
       } catch (MathIllegalStateException | MathArithmeticException e) {
         return new Outcome(p, robust, iterations,
             Optional.of("Levenberg-Marquardt did not converge: " + e.getMessage()));
@@ -92,10 +94,16 @@ final class RobustLevenbergMarquardt {
       p = q;
       // Scale from the points that currently keep weight: the plain MAD of all points in the
       // first round, a self-consistent trimmed scale once outliers (up to half or more after a
-      // RANSAC start) carry weight 0.
-      // Each residual once per round (the scale and the weights use the same ones).
+      // RANSAC start) carry weight 0. Each residual once per round (the scale and the weights
+      // use the same ones), as orthogonalResidual computes it, keeping the slope for the next
+      // round's weights.
+      if (slope == null) {
+        slope = new double[n];
+      }
       for (int i = 0; i < n; i++) {
-        residual[i] = orthogonalResidual(model, p, s[i], z[i]);
+        double k = model.slope(p, s[i]);
+        slope[i] = k;
+        residual[i] = (z[i] - model.z(p, s[i])) / Math.sqrt(1 + k * k);
       }
       int m = 0;
       for (int i = 0; i < n; i++) {
@@ -126,8 +134,9 @@ final class RobustLevenbergMarquardt {
     return (z - model.z(p, s)) / Math.sqrt(1 + k * k);
   }
 
+  /** One weighted solve from {@code start}; {@code slopes} are z' at start per point, or null. */
   private static LeastSquaresOptimizer.Optimum solve(CurveModel model, double[] s, double[] z,
-      double[] robust, double[] start, int used, double cMin, double cMax) {
+      double[] robust, double[] start, double[] slopes, int used, double cMin, double cMax) {
     double[] ss = new double[used];
     double[] sw = new double[used];
     double[] target = new double[used];
@@ -136,7 +145,7 @@ final class RobustLevenbergMarquardt {
     int m = 0;
     for (int i = 0; i < s.length; i++) {
       if (robust[i] > 0) {
-        double k = model.slope(start, s[i]);
+        double k = slopes != null ? slopes[i] : model.slope(start, s[i]);
         ss[m] = s[i];
         sw[m] = Math.sqrt(robust[i] / (1 + k * k));
         target[m] = sw[m] * z[i];
