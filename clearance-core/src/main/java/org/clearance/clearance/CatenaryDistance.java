@@ -1,6 +1,7 @@
 package org.clearance.clearance;
 
 import java.util.Objects;
+import org.clearance.io.Hyperbolic;
 import org.clearance.line.SpanFrame;
 import org.clearance.wire.Catenary;
 import org.clearance.wire.ConductorCurve;
@@ -71,7 +72,7 @@ public final class CatenaryDistance {
     ks = length / chord;
     kz = dz / chord;
     double tMin = Math.min(Math.max(0, -s0 / c), (length - s0) / c);
-    convexCeiling = z0 + c * (2 * Math.cosh(tMin) - 1);
+    convexCeiling = z0 + c * (2 * Hyperbolic.cosh(tMin) - 1);
   }
 
   /** Closest approach of point (x, y, z), m, to the hanging conductor (static shortcut). */
@@ -257,7 +258,7 @@ public final class CatenaryDistance {
   }
 
   private double curveZ(double s) {
-    return z0 + c * (Math.cosh((s - s0) / c) - 1);
+    return z0 + c * (Hyperbolic.cosh((s - s0) / c) - 1);
   }
 
   /** g(s) = (s - sq) + (z(s) - zq) z'(s). */

@@ -269,7 +269,8 @@ public final class ClearanceEngine {
     Objects.requireNonNull(setAside, "setAside");
     List<EngineWorker> workers = Collections.synchronizedList(new ArrayList<>());
     List<PoleCollector> collectors = Collections.synchronizedList(new ArrayList<>());
-    java.util.Map<Long, int[]> grid = poles == null ? null : PoleCollector.grid(poles.layout());
+    org.clearance.line.PlanCellIndex grid = poles == null ? null
+        : PoleCollector.grid(poles.layout());
     CanopyBuilder canopy = treeOptions == null ? null
         : new CanopyBuilder(treeOptions, (x, y) -> true);
     source.readParallel(options.threads(), () -> {

@@ -4,10 +4,9 @@ import java.io.IOException;
 import java.io.UncheckedIOException;
 import java.nio.ByteBuffer;
 import java.nio.ByteOrder;
-import java.util.HashMap;
-import java.util.Map;
 import java.util.function.Consumer;
 import org.clearance.ground.HeightModel;
+import org.clearance.line.PlanCellIndex;
 import org.clearance.survey.PointChunk;
 import org.clearance.wire.SetAside;
 
@@ -31,13 +30,19 @@ final class PoleCollector implements Consumer<PointChunk> {
   private final VegetationSelector vegetation;
   private final SetAside setAside;
   private final PolePointWriter out;
-  private final Map<Long, int[]> cells;
+  private final PlanCellIndex cells;
   private final double cell;
   private final long[] column;
+  /** The four cells of the last point looked at (see {@link #noStructureNear}). */
+  private long lastCx = Long.MIN_VALUE;
+  private long lastCy = Long.MIN_VALUE;
+  private long lastSx;
+  private long lastSy;
+  private boolean lastEmpty;
   private final ByteBuffer buffer = ByteBuffer.allocate(FLUSH_RECORDS * PolePointFile.RECORD_BYTES)
       .order(ByteOrder.LITTLE_ENDIAN);
 
-  PoleCollector(Map<Long, int[]> cells, HeightModel heights, VegetationSelector vegetation,
+  PoleCollector(PlanCellIndex cells, HeightModel heights, VegetationSelector vegetation,
       SetAside setAside, PolePointWriter out) {
     this.layout = out.layout();
     this.heights = heights;
@@ -51,24 +56,17 @@ final class PoleCollector implements Consumer<PointChunk> {
 
   /**
    * The plan grid of structure indices, cell size twice the keep radius: a point reaches only
-   * its own cell and the three neighbours towards the nearer cell edges, four lookups.
+   * its own cell and the three neighbours towards the nearer cell edges, four lookups (a
+   * primitive table: a boxed {@code Long} key per lookup was 5 % of the clearance stage).
    */
-  static Map<Long, int[]> grid(PolePointFile layout) {
-    Map<Long, int[]> cells = new HashMap<>();
+  static PlanCellIndex grid(PolePointFile layout) {
     double c = 2 * layout.keepRadiusM();
+    PlanCellIndex.Builder cells = new PlanCellIndex.Builder(c);
     for (int i = 0; i < layout.structures().size(); i++) {
       PolePointFile.Pole p = layout.structures().get(i);
-      long key = key((long) Math.floor(p.x() / c), (long) Math.floor(p.y() / c));
-      int[] old = cells.getOrDefault(key, new int[0]);
-      int[] grown = java.util.Arrays.copyOf(old, old.length + 1);
-      grown[old.length] = i;
-      cells.put(key, grown);
+      cells.add(PlanCellIndex.cellOf(p.x(), c), PlanCellIndex.cellOf(p.y(), c), i);
     }
-    return cells;
-  }
-
-  private static long key(long cx, long cy) {
-    return cx * 0x9E3779B97F4A7C15L ^ cy;
+    return cells.build();
   }
 
   @Override
@@ -93,6 +91,9 @@ final class PoleCollector implements Consumer<PointChunk> {
     long cy = (long) Math.floor(gy);
     long sx = gx - cx < 0.5 ? -1 : 1;
     long sy = gy - cy < 0.5 ? -1 : 1;
+    if (noStructureNear(cx, cy, sx, sy)) {
+      return;
+    }
     double r = layout.keepRadiusM();
     double r2 = r * r;
     double hag = Double.NaN;
@@ -100,10 +101,7 @@ final class PoleCollector implements Consumer<PointChunk> {
     boolean inferred = vegetation.inferredClass(cls);
     for (long dx = 0; dx != 2 * sx; dx += sx) {
       for (long dy = 0; dy != 2 * sy; dy += sy) {
-        int[] in = cells.get(key(cx + dx, cy + dy));
-        if (in == null) {
-          continue;
-        }
+        int[] in = cells.atCell(cx + dx, cy + dy);
         for (int s : in) {
           PolePointFile.Pole p = layout.structures().get(s);
           double ex = x - p.x();
@@ -139,6 +137,24 @@ final class PoleCollector implements Consumer<PointChunk> {
         }
       }
     }
+  }
+
+  /**
+   * Whether the four cells a point reaches, its own (cx, cy) and the neighbours towards (sx, sy),
+   * hold no structure: most points are far from every structure, and consecutive points (in
+   * flight order) mostly reach the same four cells, so the answer is kept for the last ones.
+   */
+  private boolean noStructureNear(long cx, long cy, long sx, long sy) {
+    if (cx == lastCx && cy == lastCy && sx == lastSx && sy == lastSy) {
+      return lastEmpty;
+    }
+    lastCx = cx;
+    lastCy = cy;
+    lastSx = sx;
+    lastSy = sy;
+    lastEmpty = cells.atCell(cx, cy).length == 0 && cells.atCell(cx + sx, cy).length == 0
+        && cells.atCell(cx, cy + sy).length == 0 && cells.atCell(cx + sx, cy + sy).length == 0;
+    return lastEmpty;
   }
 
   /** Hands the buffered records and column counts to the writer. */

@@ -93,7 +93,13 @@ public final class PlanCellIndex {
 
   /** The items of the cell holding plan point (x, y), m; never null, do not modify. */
   public int[] at(double x, double y) {
-    long key = key(cellOf(x, cell), cellOf(y, cell));
+    return atCell(cellOf(x, cell), cellOf(y, cell));
+  }
+
+  /** The items of cell (cx, cy) (cell coordinates, see {@link #cellOf}); never null, do not
+   * modify. */
+  public int[] atCell(long cx, long cy) {
+    long key = key(cx, cy);
     int slot = slot(key);
     while (true) {
       long k = keys[slot];

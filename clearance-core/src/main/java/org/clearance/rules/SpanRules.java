@@ -31,6 +31,10 @@ public final class SpanRules {
   private final Optional<ResolvedDistance> fallInAllowance;
   private final Optional<String> fallInFailure;
   private final List<Zone> poleZones;
+  /** Per zone of {@link #zones} (same index), its condition selector's answers remembered. */
+  private final SelectionMemo[] selections;
+  /** The reference zone's, or null when the span has none. */
+  private final SelectionMemo referenceSelection;
 
   SpanRules(RuleProfile profile, SpanContext span, Optional<String> notAssessedReason,
       List<ResolvedZone> zones, List<ZoneGap> gaps, List<Zone> outOfBand,
@@ -47,6 +51,15 @@ public final class SpanRules {
         .findFirst().orElse(null);
     this.fallInAllowance = fallInAllowance;
     this.fallInFailure = fallInFailure;
+    this.selections = new SelectionMemo[this.zones.size()];
+    SelectionMemo ref = null;
+    for (int i = 0; i < selections.length; i++) {
+      selections[i] = new SelectionMemo(this.zones.get(i).zone().conditions());
+      if (this.zones.get(i) == reference) {
+        ref = selections[i];
+      }
+    }
+    this.referenceSelection = ref;
   }
 
   static SpanRules notAssessed(RuleProfile profile, SpanContext span, String reason) {
@@ -135,7 +148,9 @@ public final class SpanRules {
     List<ZoneGap> pointGaps = gaps;
     boolean referenceChecked = false;
     boolean referenceViolated = false;
-    for (ResolvedZone z : zones) {
+    for (int zi = 0; zi < zones.size(); zi++) {
+      ResolvedZone z = zones.get(zi);
+      SelectionMemo selection = selections[zi];
       List<ConditionDistance> measured = point.distancesFor(z.zone().roles());
       if (measured.isEmpty() && !z.zone().roles().contains(Role.PHASE)) {
         continue; // a zone for neutrals or shield wires on a span without them
@@ -143,7 +158,7 @@ public final class SpanRules {
       boolean matched = false;
       ZoneViolation zoneWorst = null;
       for (ConditionDistance d : measured) {
-        if (!usable(z, d) || !z.zone().conditions().selects(d)) {
+        if (!usable(z, d) || !selection.selects(d)) {
           continue; // a distance not computed checks nothing
         }
         matched = true;
@@ -225,7 +240,7 @@ public final class SpanRules {
     GrowthRates.Rate rate = profile.growth().get().forClass(point.classification());
     double best = Double.POSITIVE_INFINITY;
     for (ConditionDistance d : point.distancesFor(reference.zone().roles())) {
-      if (!usable(reference, d) || !reference.zone().conditions().selects(d)) {
+      if (!usable(reference, d) || !referenceSelection.selects(d)) {
         continue;
       }
       Requirement req = reference.at(span.lengthM(), d.station());

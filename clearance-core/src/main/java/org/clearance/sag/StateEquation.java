@@ -4,6 +4,7 @@ import java.util.Locale;
 import org.apache.commons.math3.analysis.UnivariateFunction;
 import org.apache.commons.math3.analysis.solvers.BrentSolver;
 import org.apache.commons.math3.exception.TooManyEvaluationsException;
+import org.clearance.io.Hyperbolic;
 
 /**
  * The two change-of-state equations of a single-material conductor on a level ruling span, each
@@ -29,7 +30,7 @@ final class StateEquation {
 
   /** Sag-to-span ratio of a level catenary at S / c = MAX_SPAN_OVER_C (for messages). */
   private static final double MAX_SAG_RATIO =
-      (Math.cosh(MAX_SPAN_OVER_C / 2) - 1) / MAX_SPAN_OVER_C;
+      (Hyperbolic.cosh(MAX_SPAN_OVER_C / 2) - 1) / MAX_SPAN_OVER_C;
 
   /** Largest mean elastic strain searched: 5 %, far above the breaking strain of any conductor. */
   static final double MAX_STRAIN = 0.05;
@@ -80,13 +81,13 @@ final class StateEquation {
   /** Conductor length of a level span, m: 2c sinh(S / 2c). */
   static double length(double h, double w, double span) {
     double c = h / w;
-    return 2 * c * Math.sinh(span / (2 * c));
+    return 2 * c * Hyperbolic.sinh(span / (2 * c));
   }
 
   /** Elastic elongation integrated along a level catenary span, m: H (S + c sinh(S/c)) / 2EA. */
   static double elasticElongation(double h, double w, double span, double ea) {
     double c = h / w;
-    return h * (span + c * Math.sinh(span / c)) / (2 * ea);
+    return h * (span + c * Hyperbolic.sinh(span / c)) / (2 * ea);
   }
 
   private static double solve(UnivariateFunction f, double ea, double span, double weight,

@@ -1,5 +1,7 @@
 package org.clearance.sag;
 
+import org.clearance.io.Hyperbolic;
+
 /**
  * One mechanical state of a conductor on a ruling span: horizontal tension, conductor temperature
  * and load per length.
@@ -38,7 +40,7 @@ public record TensionState(double horizontalTension, double temperatureC, double
    */
   public double levelSag(double span) {
     double c = catenaryConstant();
-    double q = Math.sinh(span / (4 * c));
+    double q = Hyperbolic.sinh(span / (4 * c));
     return 2 * c * q * q;
   }
 }

@@ -1,5 +1,7 @@
 package org.clearance.wire;
 
+import org.clearance.io.Hyperbolic;
+
 /**
  * A catenary in a vertical plane: z(s) = z0 + c (cosh((s - s0) / c) - 1).
  *
@@ -36,7 +38,7 @@ public record Catenary(double s0, double z0, double c) {
     }
     double h = sB - sA;
     double v = zB - zA;
-    double s0 = 0.5 * (sA + sB) - c * asinh(v / (2 * c * Math.sinh(h / (2 * c))));
+    double s0 = 0.5 * (sA + sB) - c * asinh(v / (2 * c * Hyperbolic.sinh(h / (2 * c))));
     double z0 = zA - c * coshm1((sA - s0) / c);
     return new Catenary(s0, z0, c);
   }
@@ -76,12 +78,12 @@ public record Catenary(double s0, double z0, double c) {
 
   /** Slope dz/ds at station s (dimensionless) = sinh((s - s0) / c). */
   public double slope(double s) {
-    return Math.sinh((s - s0) / c);
+    return Hyperbolic.sinh((s - s0) / c);
   }
 
   /** Curve length between stations s1 and s2, m: c (sinh t2 - sinh t1). */
   public double arcLength(double s1, double s2) {
-    return c * (Math.sinh((s2 - s0) / c) - Math.sinh((s1 - s0) / c));
+    return c * (Hyperbolic.sinh((s2 - s0) / c) - Hyperbolic.sinh((s1 - s0) / c));
   }
 
   /** Vertical distance from the chord (sA, z(sA))-(sB, z(sB)) down to the curve at s, m. */
@@ -112,7 +114,7 @@ public record Catenary(double s0, double z0, double c) {
    * form would lose digits relative to c.
    */
   static double coshm1(double t) {
-    double h = Math.sinh(0.5 * t);
+    double h = Hyperbolic.sinh(0.5 * t);
     return 2 * h * h;
   }
 

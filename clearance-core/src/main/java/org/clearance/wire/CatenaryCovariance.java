@@ -1,5 +1,7 @@
 package org.clearance.wire;
 
+import org.clearance.io.Hyperbolic;
+
 /**
  * Covariance of the fitted catenary parameters (s0, z0, c), a symmetric 3x3 matrix stored as its
  * six distinct entries.
@@ -99,7 +101,7 @@ public record CatenaryCovariance(
   /** dz/d(s0, z0, c) of the curve at station s (methods.md section 2.3). */
   private static double[] gradient(Catenary curve, double s) {
     double t = (s - curve.s0()) / curve.c();
-    return new double[] {-Math.sinh(t), 1, Catenary.coshm1(t) - t * Math.sinh(t)};
+    return new double[] {-Hyperbolic.sinh(t), 1, Catenary.coshm1(t) - t * Hyperbolic.sinh(t)};
   }
 
   private double sigmaOf(double[] g) {

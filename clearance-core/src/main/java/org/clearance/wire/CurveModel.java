@@ -1,5 +1,7 @@
 package org.clearance.wire;
 
+import org.clearance.io.Hyperbolic;
+
 /**
  * A catenary family with k free parameters, in coordinates centred on the data (station and
  * elevation minus a reference), as the least-squares engine sees it. Package-private plumbing of
@@ -21,6 +23,13 @@ interface CurveModel {
 
   /** Gradient dz/dp at station s, length k (a new array). */
   double[] gradient(double[] p, double s);
+
+  /**
+   * Elevation at station s (centred), m, as {@link #z}, with the gradient dz/dp written into
+   * {@code g} (length k) as {@link #gradient} gives it: the same doubles, with the hyperbolic
+   * functions both share evaluated once.
+   */
+  double zAndGradient(double[] p, double s, double[] g);
 
   /** The catenary constant c of parameters p, m. */
   double c(double[] p);
@@ -49,14 +58,25 @@ interface CurveModel {
 
     @Override
     public double slope(double[] p, double s) {
-      return Math.sinh((s - p[0]) / p[2]);
+      return Hyperbolic.sinh((s - p[0]) / p[2]);
     }
 
     @Override
     public double[] gradient(double[] p, double s) {
       double t = (s - p[0]) / p[2];
-      double sh = Math.sinh(t);
+      double sh = Hyperbolic.sinh(t);
       return new double[] {-sh, 1, Catenary.coshm1(t) - t * sh};
+    }
+
+    @Override
+    public double zAndGradient(double[] p, double s, double[] g) {
+      double t = (s - p[0]) / p[2];
+      double cm1 = Catenary.coshm1(t);
+      double sh = Hyperbolic.sinh(t);
+      g[0] = -sh;
+      g[1] = 1;
+      g[2] = cm1 - t * sh;
+      return p[1] + p[2] * cm1;
     }
 
     @Override
@@ -105,17 +125,30 @@ interface CurveModel {
 
     @Override
     public double slope(double[] p, double s) {
-      return Math.sinh((s - p[0]) / p[1]);
+      return Hyperbolic.sinh((s - p[0]) / p[1]);
     }
 
     @Override
     public double[] gradient(double[] p, double s) {
       double t = (s - p[0]) / p[1];
       double ta = (sA - p[0]) / p[1];
-      double sh = Math.sinh(t);
-      double sha = Math.sinh(ta);
+      double sh = Hyperbolic.sinh(t);
+      double sha = Hyperbolic.sinh(ta);
       return new double[] {-sh + sha,
           (Catenary.coshm1(t) - t * sh) - (Catenary.coshm1(ta) - ta * sha)};
+    }
+
+    @Override
+    public double zAndGradient(double[] p, double s, double[] g) {
+      double t = (s - p[0]) / p[1];
+      double ta = (sA - p[0]) / p[1];
+      double cm1 = Catenary.coshm1(t);
+      double cm1a = Catenary.coshm1(ta);
+      double sh = Hyperbolic.sinh(t);
+      double sha = Hyperbolic.sinh(ta);
+      g[0] = -sh + sha;
+      g[1] = (cm1 - t * sh) - (cm1a - ta * sha);
+      return zA + p[1] * (cm1 - cm1a);
     }
 
     @Override
@@ -132,7 +165,7 @@ interface CurveModel {
     @Override
     public double[][] fullJacobian(double[] p) {
       double ta = (sA - p[0]) / p[1];
-      double sha = Math.sinh(ta);
+      double sha = Hyperbolic.sinh(ta);
       // z0 = zA - c coshm1(tA): dz0/ds0 = sinh tA, dz0/dc = -(coshm1 tA - tA sinh tA)
       return new double[][] {{1, 0}, {sha, -(Catenary.coshm1(ta) - ta * sha)}, {0, 1}};
     }

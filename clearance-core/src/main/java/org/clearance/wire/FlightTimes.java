@@ -94,11 +94,23 @@ public final class FlightTimes {
     double[] y = chunk.y();
     double[] t = chunk.gpsTime();
     short[] cls = chunk.classification();
+    // points come in flight order, so most share the previous point's cell: look it up again
+    // only when the cell changes
+    long lastCx = Long.MIN_VALUE;
+    long lastCy = Long.MIN_VALUE;
+    int[] inCell = null;
     for (int i = 0; i < chunk.size(); i++) {
       if (!Double.isFinite(t[i])) {
         continue;
       }
-      for (int k : index.at(x[i], y[i])) {
+      long cx = PlanCellIndex.cellOf(x[i], CELL_M);
+      long cy = PlanCellIndex.cellOf(y[i], CELL_M);
+      if (cx != lastCx || cy != lastCy || inCell == null) {
+        inCell = index.atCell(cx, cy);
+        lastCx = cx;
+        lastCy = cy;
+      }
+      for (int k : inCell) {
         SpanFrame f = spans.get(k).frame();
         double s = f.station(x[i], y[i]);
         if (s < 0 || s > f.length() || Math.abs(f.offset(x[i], y[i])) > HALF_WIDTH_M) {

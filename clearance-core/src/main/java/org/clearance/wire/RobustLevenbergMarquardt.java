@@ -61,6 +61,9 @@ final class RobustLevenbergMarquardt {
     double[] p = start.clone();
     int iterations = 0;
     double[] r = new double[n];
+    double[] residual = new double[n];
+    // slopes at the current parameters, for the next round's weights; null until computed
+    double[] slope = null;
     for (int round = 0; round < MAX_ROUNDS; round++) {
       int used = 0;
       for (double b : robust) {
@@ -72,7 +75,7 @@ final class RobustLevenbergMarquardt {
       }
       LeastSquaresOptimizer.Optimum opt;
       try {
-        opt = solve(model, s, z, robust, p, used, cMin, cMax);
+        opt = solve(model, s, z, robust, p, slope, used, cMin, cMax);
       } catch (MathIllegalStateException | MathArithmeticException e) {
         return new Outcome(p, robust, iterations,
             Optional.of("Levenberg-Marquardt did not converge: " + e.getMessage()));
@@ -91,11 +94,21 @@ final class RobustLevenbergMarquardt {
       p = q;
       // Scale from the points that currently keep weight: the plain MAD of all points in the
       // first round, a self-consistent trimmed scale once outliers (up to half or more after a
-      // RANSAC start) carry weight 0.
+      // RANSAC start) carry weight 0. Each residual once per round (the scale and the weights
+      // use the same ones), as orthogonalResidual computes it, keeping the slope for the next
+      // round's weights.
+      if (slope == null) {
+        slope = new double[n];
+      }
+      for (int i = 0; i < n; i++) {
+        double k = model.slope(p, s[i]);
+        slope[i] = k;
+        residual[i] = (z[i] - model.z(p, s[i])) / Math.sqrt(1 + k * k);
+      }
       int m = 0;
       for (int i = 0; i < n; i++) {
         if (robust[i] > 0) {
-          r[m++] = orthogonalResidual(model, p, s[i], z[i]);
+          r[m++] = residual[i];
         }
       }
       double sigma = Math.max(SIGMA_FLOOR, RobustScale.sigmaMad(r, m));
@@ -104,7 +117,7 @@ final class RobustLevenbergMarquardt {
         if (!(Double.isFinite(s[i]) && Double.isFinite(z[i]))) {
           continue;
         }
-        double b = RobustScale.tukey(orthogonalResidual(model, p, s[i], z[i]), sigma);
+        double b = RobustScale.tukey(residual[i], sigma);
         sameSet &= (b > 0) == (robust[i] > 0);
         robust[i] = b;
       }
@@ -121,8 +134,9 @@ final class RobustLevenbergMarquardt {
     return (z - model.z(p, s)) / Math.sqrt(1 + k * k);
   }
 
+  /** One weighted solve from {@code start}; {@code slopes} are z' at start per point, or null. */
   private static LeastSquaresOptimizer.Optimum solve(CurveModel model, double[] s, double[] z,
-      double[] robust, double[] start, int used, double cMin, double cMax) {
+      double[] robust, double[] start, double[] slopes, int used, double cMin, double cMax) {
     double[] ss = new double[used];
     double[] sw = new double[used];
     double[] target = new double[used];
@@ -131,7 +145,7 @@ final class RobustLevenbergMarquardt {
     int m = 0;
     for (int i = 0; i < s.length; i++) {
       if (robust[i] > 0) {
-        double k = model.slope(start, s[i]);
+        double k = slopes != null ? slopes[i] : model.slope(start, s[i]);
         ss[m] = s[i];
         sw[m] = Math.sqrt(robust[i] / (1 + k * k));
         target[m] = sw[m] * z[i];
@@ -146,8 +160,8 @@ final class RobustLevenbergMarquardt {
       double[] v = new double[used];
       double[][] jac = new double[used][];
       for (int i = 0; i < used; i++) {
-        v[i] = sw[i] * model.z(p, ss[i]);
-        double[] g = model.gradient(p, ss[i]);
+        double[] g = new double[k];
+        v[i] = sw[i] * model.zAndGradient(p, ss[i], g);
         for (int j = 0; j < k; j++) {
           g[j] *= sw[i];
         }
@@ -197,13 +211,13 @@ final class RobustLevenbergMarquardt {
       }
       double sl = model.slope(p, s[i]);
       double w = robust[i] / (1 + sl * sl);
-      double[] g = model.gradient(p, s[i]);
+      double[] g = new double[k];
+      double res = z[i] - model.zAndGradient(p, s[i], g);
       for (int a = 0; a < k; a++) {
         for (int b = 0; b < k; b++) {
           nm[a][b] += w * g[a] * g[b];
         }
       }
-      double res = z[i] - model.z(p, s[i]);
       wrr += w * res * res;
       used++;
     }

@@ -139,9 +139,16 @@ final class TubeModel {
   /** Least squares polynomial of degree 1 or 2 in u = s - sc of e (plan) or z; null if singular. */
   private static double[] polyFit(SpanPoints p, IntList members, boolean[] use, double sc,
       int degree, boolean plan) {
-    int k1 = degree + 1;
-    double[][] ata = new double[k1][k1];
-    double[] atb = new double[k1];
+    // Normal equations of the rows (1, u) or (1, u, u^2) summed in scalars: point by point the
+    // same products and sums as a row array per point gave (1 * u = u exactly), no allocation.
+    double n = 0;
+    double su = 0;
+    double suu = 0;
+    double suuu = 0;
+    double suuuu = 0;
+    double sw = 0;
+    double suw = 0;
+    double suuw = 0;
     double z0 = Double.NaN;
     for (int k = 0; k < members.size(); k++) {
       if (!use[k]) {
@@ -153,14 +160,23 @@ final class TubeModel {
       if (Double.isNaN(z0)) {
         z0 = v;
       }
-      double[] row = degree == 1 ? new double[] {1, u} : new double[] {1, u, u * u};
-      for (int r = 0; r < k1; r++) {
-        for (int c = 0; c < k1; c++) {
-          ata[r][c] += row[r] * row[c];
-        }
-        atb[r] += row[r] * (v - z0);
+      double w = v - z0;
+      n += 1;
+      su += u;
+      suu += u * u;
+      sw += w;
+      suw += u * w;
+      if (degree == 2) {
+        double u2 = u * u;
+        suuu += u * u2;
+        suuuu += u2 * u2;
+        suuw += u2 * w;
       }
     }
+    double[][] ata = degree == 1
+        ? new double[][] {{n, su}, {su, suu}}
+        : new double[][] {{n, su, suu}, {su, suu, suuu}, {suu, suuu, suuuu}};
+    double[] atb = degree == 1 ? new double[] {sw, suw} : new double[] {sw, suw, suuw};
     double[] x = solve(ata, atb);
     if (x != null) {
       x[0] += z0;
