@@ -315,7 +315,8 @@ public final class ObjectLabeller {
           s[8] += dy * dz;
           s[9] += dz * dz;
         }
-        if (j != me && dx * dx + dy * dy + dz * dz <= LINK_M * LINK_M) {
+        // each pair once (the link is symmetric; the root is the least index either way)
+        if (j < me && dx * dx + dy * dy + dz * dz <= LINK_M * LINK_M) {
           DisjointSets.union(parent, me, j);
         }
       });
