@@ -3,7 +3,10 @@ package org.clearance.label;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import java.nio.charset.StandardCharsets;
+import java.security.MessageDigest;
 import java.util.ArrayList;
+import java.util.HexFormat;
 import java.util.List;
 import java.util.SplittableRandom;
 import java.util.function.Consumer;
@@ -94,6 +97,36 @@ class LabelBlocksTest {
         false, 1);
     assertEquals(b, one);
   }
+
+  /**
+   * The one pass over the survey (issue 12) labels as the version before it, which read the
+   * survey once per block: SHA-256 of every object's fields (exact decimal form of each double),
+   * the counts and every point's set-aside reason, recorded with that version (commit 91706e0)
+   * running this method.
+   */
+  @Test
+  void sameLabelsAsTheVersionThatReadTheSurveyPerBlock() throws Exception {
+    SetAside set = SetAside.none();
+    ObjectLabels labels = ObjectLabeller.label(source(), FRAMES, REGION_M, ground, set, false,
+        2);
+    MessageDigest sha = MessageDigest.getInstance("SHA-256");
+    StringBuilder text = new StringBuilder();
+    text.append(labels.pointsLooked()).append(' ').append(labels.pointsSetAside()).append(' ')
+        .append(labels.echoesInformative()).append(' ').append(labels.doubted()).append('\n');
+    labels.objects().forEach(o -> text.append(o).append('\n'));
+    for (PointChunk c : CHUNKS) {
+      for (int i = 0; i < c.size(); i++) {
+        text.append(set.reason(SetAside.key(c.x()[i], c.y()[i], c.z()[i])).ordinal());
+      }
+    }
+    String digest = HexFormat.of().formatHex(
+        sha.digest(text.toString().getBytes(StandardCharsets.UTF_8)));
+    assertEquals(PREVIOUS_VERSION_SHA256, digest, labels.describe());
+  }
+
+  /** {@link #sameLabelsAsTheVersionThatReadTheSurveyPerBlock}'s digest of commit 91706e0. */
+  private static final String PREVIOUS_VERSION_SHA256 =
+      "907f6d443842791a22c426966da637d1bdc7e863eb287d773dec54be6fa19334";
 
   /** Chunks handed out to two consumers in turn, as two reading threads would. */
   private static PointSource source() {
