@@ -1,7 +1,6 @@
 package org.clearance.label;
 
 import java.util.Arrays;
-import java.util.function.IntConsumer;
 
 /**
  * A fixed-radius neighbour search over points in 3D: cubic cells of the search radius from a
@@ -112,9 +111,21 @@ final class CellIndex {
     return ((cx - minX) << (2 * AXIS_BITS)) | ((cy - minY) << AXIS_BITS) | (cz - minZ);
   }
 
+  /** What a query hands on for each neighbour. */
+  @FunctionalInterface
+  interface Neighbour {
+    /**
+     * @param j the neighbour's index
+     * @param dx its easting less the query point's, m (as {@code x[j] - x[i]})
+     * @param dy its northing less the query point's, m
+     * @param dz its height less the query point's, m
+     */
+    void accept(int j, double dx, double dy, double dz);
+  }
+
   /** Calls {@code action} with every point within {@code r} (at most the cell size) of i,
    * i itself included. */
-  void within(int i, double r, IntConsumer action) {
+  void within(int i, double r, Neighbour action) {
     double px = x[i];
     double py = y[i];
     double pz = z[i];
@@ -136,7 +147,7 @@ final class CellIndex {
           double dy = sy[t] - py;
           double dz = sz[t] - pz;
           if (dx * dx + dy * dy + dz * dz <= r2) {
-            action.accept(order[t]);
+            action.accept(order[t], dx, dy, dz);
           }
         }
       }

@@ -299,10 +299,8 @@ public final class ObjectLabeller {
     for (int i = 0; i < n; i++) {
       Arrays.fill(s, 0);
       final int me = i;
-      index.within(i, Math.max(RADIUS_M, LINK_M), j -> {
-        double dx = p.x[j] - p.x[me];
-        double dy = p.y[j] - p.y[me];
-        double dz = p.z[j] - p.z[me];
+      int[] myRoot = {i};
+      index.within(i, Math.max(RADIUS_M, LINK_M), (j, dx, dy, dz) -> {
         if (dx * dx + dy * dy + dz * dz <= RADIUS_M * RADIUS_M) {
           s[0]++;
           s[1] += dx;
@@ -317,7 +315,7 @@ public final class ObjectLabeller {
         }
         // each pair once (the link is symmetric; the root is the least index either way)
         if (j < me && dx * dx + dy * dy + dz * dz <= LINK_M * LINK_M) {
-          DisjointSets.union(parent, me, j);
+          myRoot[0] = DisjointSets.join(parent, myRoot[0], j);
         }
       });
       if (s[0] >= MIN_NEIGHBOURS) {
@@ -452,7 +450,7 @@ public final class ObjectLabeller {
       if (count[r] >= MIN_OBJECT_POINTS || lowest[r] < FLOAT_M || blocked[r]) {
         continue;
       }
-      wide.within(i, ATTACH_M, j -> {
+      wide.within(i, ATTACH_M, (j, dx, dy, dz) -> {
         ObjectKind k = kindOf[root[j]];
         if (k == ObjectKind.VEGETATION) {
           blocked[r] = true;

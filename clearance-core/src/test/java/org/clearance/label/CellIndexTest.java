@@ -38,7 +38,14 @@ class CellIndexTest {
     long visited = 0;
     for (int i = 0; i < n; i++) {
       List<Integer> got = new ArrayList<>();
-      index.within(i, r, got::add);
+      int me = i;
+      index.within(i, r, (j, dx, dy, dz) -> {
+        got.add(j);
+        // the offsets handed on are those of the coordinates, to the bit
+        assertEquals(x[j] - x[me], dx, 0.0);
+        assertEquals(y[j] - y[me], dy, 0.0);
+        assertEquals(z[j] - z[me], dz, 0.0);
+      });
       List<Integer> expected = new ArrayList<>();
       for (int j = 0; j < n; j++) {
         double dx = x[j] - x[i];
