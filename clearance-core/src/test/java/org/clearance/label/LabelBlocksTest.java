@@ -4,12 +4,15 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
 import java.security.MessageDigest;
 import java.util.ArrayList;
 import java.util.HexFormat;
 import java.util.List;
 import java.util.SplittableRandom;
 import java.util.function.Consumer;
+import java.util.stream.Stream;
 import org.clearance.ground.GroundModel;
 import org.clearance.ground.GroundModelBuilder;
 import org.clearance.ground.GroundOptions;
@@ -19,6 +22,7 @@ import org.clearance.wire.PointSource;
 import org.clearance.wire.SetAside;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
 
 /**
  * The block-by-block labelling gives the same objects and the same points set aside as the
@@ -66,13 +70,17 @@ class LabelBlocksTest {
   }
 
   @Test
-  void blocksGiveTheWholeLinesResult() {
+  void blocksGiveTheWholeLinesResult(@TempDir Path staging) throws Exception {
     assertEquals(3, LabelBlocks.blocks(FRAMES).size());
     SetAside whole = SetAside.none();
     ObjectLabels a = ObjectLabeller.labelWhole(source(), FRAMES, REGION_M, ground, whole, false);
     SetAside blocked = SetAside.none();
     ObjectLabels b = ObjectLabeller.label(source(), FRAMES, REGION_M, ground, blocked, false,
-        2);
+        2, staging);
+    // the blocks' store is gone from the staging folder when the step returns
+    try (Stream<Path> left = Files.list(staging)) {
+      assertEquals(List.of(), left.toList());
+    }
     assertEquals(a.pointsLooked(), b.pointsLooked());
     assertEquals(a.pointsSetAside(), b.pointsSetAside());
     assertEquals(a.echoesInformative(), b.echoesInformative());
