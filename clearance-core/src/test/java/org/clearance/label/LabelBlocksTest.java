@@ -115,8 +115,15 @@ class LabelBlocksTest {
   @Test
   void sameLabelsAsTheVersionThatReadTheSurveyPerBlock() throws Exception {
     SetAside set = SetAside.none();
-    ObjectLabels labels = ObjectLabeller.label(source(), FRAMES, REGION_M, ground, set, false,
+    int[] reads = {0};
+    PointSource counted = consumers -> {
+      reads[0]++;
+      source().stream(consumers);
+    };
+    ObjectLabels labels = ObjectLabeller.label(counted, FRAMES, REGION_M, ground, set, false,
         2);
+    // three blocks, one read of the survey (the version before read it four times)
+    assertEquals(1, reads[0]);
     MessageDigest sha = MessageDigest.getInstance("SHA-256");
     StringBuilder text = new StringBuilder();
     text.append(labels.pointsLooked()).append(' ').append(labels.pointsSetAside()).append(' ')
