@@ -8,8 +8,9 @@ import java.util.Arrays;
  * index, with their coordinates copied in that order. A query looks at the 27 cells around a
  * point as 9 columns of three cells, each column a contiguous run of points found by one binary
  * search, and visits the points in the same order as a cell-by-cell search would: cells in
- * (x, y, z) order, points of a cell by index. Memory: three doubles and three ints a point; at
- * most 2^21 - 3 cells along any axis.
+ * (x, y, z) order, points of a cell by index. Memory: three doubles, two ints and a long a
+ * point at most (two longs and an int more while it is built); at most 2^21 - 3 cells along any
+ * axis.
  */
 final class CellIndex {
 
