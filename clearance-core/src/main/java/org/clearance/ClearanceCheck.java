@@ -182,7 +182,7 @@ public final class ClearanceCheck {
           options.threads(), progress.wrap("labels", consumers)),
           wires.layout().spans().stream().map(Span::frame).toList(),
           options.engine().treeReach() + LABEL_REGION_MARGIN_M, scan.ground, wires.setAside(),
-          vegetation.mixed(), options.threads());
+          vegetation.mixed(), options.threads(), dir);
       say("labelling: %s", objects.describe());
       record.parameter("labelling", objects.describe());
       stop("labelling");

@@ -23,6 +23,19 @@ public final class DisjointSets {
     return r;
   }
 
+  /**
+   * {@link #union} of a group given by its root: joins {@code b}'s group to the group whose root
+   * is {@code rootA} and returns the root of the joined group (the smaller root), so a caller
+   * joining one element to many saves looking its root up each time.
+   */
+  public static int join(int[] parent, int rootA, int b) {
+    int rb = root(parent, b);
+    if (rb != rootA) {
+      parent[Math.max(rootA, rb)] = Math.min(rootA, rb);
+    }
+    return Math.min(rootA, rb);
+  }
+
   /** Joins the groups of {@code a} and {@code b}; the smaller root becomes the root. */
   public static void union(int[] parent, int a, int b) {
     int ra = root(parent, a);

@@ -1,30 +1,37 @@
 package org.clearance.label;
 
 import java.util.Arrays;
-import java.util.function.IntConsumer;
 
 /**
- * A fixed-radius neighbour search over points in 3D: cubic cells of the search radius, the points
- * sorted by a 40-bit hash of their cell, a cell found by binary search among the occupied hashes
- * (two cells sharing a hash only add points that the distance test then drops). Memory: two ints
- * and a long per point; at most 2^24 points.
+ * A fixed-radius neighbour search over points in 3D: cubic cells of the search radius from a
+ * fixed origin, the cells numbered in (x, y, z) order and the points sorted by cell, then by
+ * index, with their coordinates copied in that order. A query looks at the 27 cells around a
+ * point as 9 columns of three cells, each column a contiguous run of points found by one binary
+ * search, and visits the points in the same order as a cell-by-cell search would: cells in
+ * (x, y, z) order, points of a cell by index. Memory: three doubles, two ints and a long a
+ * point at most (two longs and an int more while it is built); at most 2^21 - 3 cells along any
+ * axis.
  */
 final class CellIndex {
 
-  /** Bits of the cell hash: with 24 bits of point index it fills a positive long. */
-  private static final long HASH_MASK = (1L << 39) - 1;
+  /** Bits of a cell's coordinate along one axis in its key. */
+  private static final int AXIS_BITS = 21;
 
   private final double[] x;
   private final double[] y;
   private final double[] z;
   private final double cell;
-  private final double x0;
-  private final double y0;
-  private final double z0;
+  private final long minX;
+  private final long minY;
+  private final long minZ;
   /** Occupied cell keys, ascending, and where each cell's points start in {@link #order}. */
   private final long[] keys;
   private final int[] start;
+  /** Point indices sorted by cell, then index; their coordinates in the same order. */
   private final int[] order;
+  private final double[] sx;
+  private final double[] sy;
+  private final double[] sz;
 
   CellIndex(double[] x, double[] y, double[] z, int n, double cell) {
     this.x = x;
@@ -33,70 +40,115 @@ final class CellIndex {
     this.cell = cell;
     // Cells from a fixed origin, so a point's neighbours come in the same order in a block
     // window as on the whole line (the features' sums are then the same to the last bit).
-    x0 = 0;
-    y0 = 0;
-    z0 = 0;
-    long[] packed = new long[n];
+    long ax = Long.MAX_VALUE;
+    long ay = Long.MAX_VALUE;
+    long az = Long.MAX_VALUE;
+    long bx = Long.MIN_VALUE;
+    long by = Long.MIN_VALUE;
+    long bz = Long.MIN_VALUE;
     for (int i = 0; i < n; i++) {
-      packed[i] = (key(x[i], y[i], z[i]) << 24) | i;
+      long cx = cellOf(x[i]);
+      long cy = cellOf(y[i]);
+      long cz = cellOf(z[i]);
+      ax = Math.min(ax, cx);
+      ay = Math.min(ay, cy);
+      az = Math.min(az, cz);
+      bx = Math.max(bx, cx);
+      by = Math.max(by, cy);
+      bz = Math.max(bz, cz);
     }
-    if (n >= (1 << 24)) {
-      throw new IllegalArgumentException("too many points to label at once: " + n);
+    long most = (1L << AXIS_BITS) - 3;
+    if (n > 0 && (bx - ax > most || by - ay > most || bz - az > most)) {
+      throw new IllegalArgumentException("points spread over too many cells to label at once");
     }
-    Arrays.sort(packed);
-    order = new int[n];
-    long[] k = new long[n];
-    int[] s = new int[n + 1];
+    // one cell of margin below, so a neighbour's key is never negative
+    minX = ax - 1;
+    minY = ay - 1;
+    minZ = az - 1;
+    long[] key = new long[n];
+    for (int i = 0; i < n; i++) {
+      key[i] = key(cellOf(x[i]), cellOf(y[i]), cellOf(z[i]));
+    }
+    long[] sorted = key.clone();
+    Arrays.sort(sorted);
     int m = 0;
     for (int i = 0; i < n; i++) {
-      long key = packed[i] >>> 24;
-      order[i] = (int) (packed[i] & 0xFFFFFF);
-      if (m == 0 || k[m - 1] != key) {
-        k[m] = key;
-        s[m] = i;
-        m++;
+      if (m == 0 || sorted[m - 1] != sorted[i]) {
+        sorted[m++] = sorted[i];
       }
     }
-    s[m] = n;
-    keys = Arrays.copyOf(k, m);
-    start = Arrays.copyOf(s, m + 1);
+    keys = Arrays.copyOf(sorted, m);
+    // counting sort of the points by cell rank: stable, so a cell's points stay in index order
+    int[] rank = new int[n];
+    start = new int[m + 1];
+    for (int i = 0; i < n; i++) {
+      rank[i] = Arrays.binarySearch(keys, key[i]);
+      start[rank[i] + 1]++;
+    }
+    for (int c = 0; c < m; c++) {
+      start[c + 1] += start[c];
+    }
+    int[] at = Arrays.copyOf(start, m);
+    order = new int[n];
+    sx = new double[n];
+    sy = new double[n];
+    sz = new double[n];
+    for (int i = 0; i < n; i++) {
+      int t = at[rank[i]]++;
+      order[t] = i;
+      sx[t] = x[i];
+      sy[t] = y[i];
+      sz[t] = z[i];
+    }
   }
 
-  private long key(double px, double py, double pz) {
-    return key((long) Math.floor((px - x0) / cell), (long) Math.floor((py - y0) / cell),
-        (long) Math.floor((pz - z0) / cell));
+  private long cellOf(double v) {
+    return (long) Math.floor(v / cell);
   }
 
-  private static long key(long cx, long cy, long cz) {
-    long h = cx * 0x9E3779B97F4A7C15L + cy;
-    h = h * 0xBF58476D1CE4E5B9L + cz;
-    h ^= h >>> 29;
-    h *= 0x94D049BB133111EBL;
-    return (h ^ (h >>> 32)) & HASH_MASK;
+  /** The key of a cell: its coordinates from the least occupied cell less one, in (x, y, z)
+   * order, so the cells of one column are consecutive keys. */
+  private long key(long cx, long cy, long cz) {
+    return ((cx - minX) << (2 * AXIS_BITS)) | ((cy - minY) << AXIS_BITS) | (cz - minZ);
+  }
+
+  /** What a query hands on for each neighbour. */
+  @FunctionalInterface
+  interface Neighbour {
+    /**
+     * @param j the neighbour's index
+     * @param dx its easting less the query point's, m (as {@code x[j] - x[i]})
+     * @param dy its northing less the query point's, m
+     * @param dz its height less the query point's, m
+     */
+    void accept(int j, double dx, double dy, double dz);
   }
 
   /** Calls {@code action} with every point within {@code r} (at most the cell size) of i,
    * i itself included. */
-  void within(int i, double r, IntConsumer action) {
-    long cx = (long) Math.floor((x[i] - x0) / cell);
-    long cy = (long) Math.floor((y[i] - y0) / cell);
-    long cz = (long) Math.floor((z[i] - z0) / cell);
+  void within(int i, double r, Neighbour action) {
+    double px = x[i];
+    double py = y[i];
+    double pz = z[i];
+    long cx = cellOf(px);
+    long cy = cellOf(py);
+    long cz = cellOf(pz);
     double r2 = r * r;
     for (long a = cx - 1; a <= cx + 1; a++) {
       for (long b = cy - 1; b <= cy + 1; b++) {
-        for (long c = cz - 1; c <= cz + 1; c++) {
-          int at = Arrays.binarySearch(keys, key(a, b, c));
-          if (at < 0) {
-            continue;
-          }
-          for (int t = start[at]; t < start[at + 1]; t++) {
-            int j = order[t];
-            double dx = x[j] - x[i];
-            double dy = y[j] - y[i];
-            double dz = z[j] - z[i];
-            if (dx * dx + dy * dy + dz * dz <= r2) {
-              action.accept(j);
-            }
+        long low = key(a, b, cz - 1);
+        int from = Arrays.binarySearch(keys, low);
+        from = from < 0 ? -from - 1 : from;
+        int to = from;
+        while (to < keys.length && keys[to] <= low + 2) {
+          to++;
+        }
+        for (int t = start[from]; t < start[to]; t++) {
+          double dx = sx[t] - px;
+          double dy = sy[t] - py;
+          double dz = sz[t] - pz;
+          if (dx * dx + dy * dy + dz * dz <= r2) {
+            action.accept(order[t], dx, dy, dz);
           }
         }
       }

@@ -1,5 +1,8 @@
 package org.clearance.label;
 
+import java.io.IOException;
+import java.io.UncheckedIOException;
+import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.Collections;
@@ -14,19 +17,21 @@ import org.clearance.wire.SetAside;
  * The labelling block by block along the line, so that the points held at once are those of
  * one block's window, never of the whole survey (docs/labelling.md, "Memory").
  *
- * <p>The spans are cut, in their order, into blocks of at least {@link #BLOCK_M} of line. For
- * each block the survey is read once and the points of its window are gathered: the points
- * looked at within the region of a block span widened by {@link #OVERLAP_M} ({@link
- * LabelWindow}). Each point looked at belongs to exactly one block (the block of the first span
- * whose region holds it) and takes the kind of its object as judged in that block's window. An
- * object with a point within {@link LabelWindow#EDGE_M} of the window's outer edge may reach
- * beyond the window: it is not judged on a piece and stays vegetation (measured), and is not
- * listed. Every object that stays clear of that band is seen whole, with the same points,
- * neighbours and fragment neighbours, and judged as on the whole line.
+ * <p>The spans are cut, in their order, into blocks of at least {@link #BLOCK_M} of line. The
+ * survey is read once: each point looked at goes to the store of every block whose window holds
+ * it ({@link LabelBins}, {@link LabelStore}): the points looked at within the region of a block
+ * span widened by {@link #OVERLAP_M} ({@link LabelWindow}). Each point looked at belongs to
+ * exactly one block (the block of the first span whose region holds it) and takes the kind of
+ * its object as judged in that block's window. An object with a point within {@link
+ * LabelWindow#EDGE_M} of the window's outer edge may reach beyond the window: it is not judged
+ * on a piece and stays vegetation (measured), and is not listed. Every object that stays clear
+ * of that band is seen whole, with the same points, neighbours and fragment neighbours, and
+ * judged as on the whole line.
  *
- * <p>A first pass counts the points looked at and their later returns, so that the echoes are
- * read or not for the whole survey as before. The man-made points are added to the
- * {@link SetAside} after the last block, so that every block sees the same points.
+ * <p>The same pass counts the points looked at and their later returns, so that the echoes are
+ * read or not for the whole survey as before. The blocks are then labelled from their stores on
+ * every thread, folded in block order. The man-made points are added to the {@link SetAside}
+ * after the last block, so that every block sees the same points.
  */
 final class LabelBlocks {
 
@@ -40,41 +45,79 @@ final class LabelBlocks {
 
   private LabelBlocks() {}
 
+  /**
+   * Labels the line block by block from one pass over {@code source}.
+   *
+   * @param spillFolder where the blocks' points wait on disk (a temporary file, deleted after)
+   * @throws IOException when the temporary file cannot be written or read
+   */
   static ObjectLabels label(PointSource source, List<SpanFrame> frames, double regionM,
-      GroundModel ground, SetAside setAside, boolean judgeVegetationLabels, int threads) {
-    List<LabelPoints> counters = Collections.synchronizedList(new ArrayList<>());
-    source.stream(() -> {
-      LabelPoints c = new LabelPoints(frames, regionM, ground, setAside, judgeVegetationLabels,
-          null, true);
-      counters.add(c);
-      return c;
-    });
-    long n = counters.stream().mapToLong(c -> c.size).sum();
-    long later = counters.stream().mapToLong(c -> c.later).sum();
-    if (n == 0) {
-      return ObjectLabels.NONE;
+      GroundModel ground, SetAside setAside, boolean judgeVegetationLabels, int threads,
+      Path spillFolder) throws IOException {
+    List<int[]> blocks = blocks(frames);
+    List<LabelWindow> windows = new ArrayList<>();
+    for (int[] block : blocks) {
+      windows.add(new LabelWindow(frames, block[0], block[1], regionM, OVERLAP_M));
     }
-    boolean echoes = later >= ObjectLabeller.ECHO_INFORMATIVE_SHARE * n;
-    List<LabelledObject> objects = new ArrayList<>();
-    List<long[]> manMade = new ArrayList<>();
-    long[] counts = new long[4];
-    OrderedParallel.forEach(blocks(frames), threads, block -> labelBlock(source, frames,
-        regionM, ground, setAside, judgeVegetationLabels, echoes, block), r -> {
+    PlanGrid grid = new PlanGrid(frames, regionM, windows);
+    try (LabelStore store = new LabelStore(spillFolder, blocks.size())) {
+      List<LabelBins> bins = Collections.synchronizedList(new ArrayList<>());
+      try {
+        source.stream(() -> {
+          LabelBins b = new LabelBins(frames, regionM, ground, setAside, judgeVegetationLabels,
+              grid, windows, store);
+          bins.add(b);
+          return b;
+        });
+        bins.forEach(LabelBins::flush);
+      } catch (UncheckedIOException e) {
+        throw e.getCause();
+      }
+      long n = bins.stream().mapToLong(b -> b.looked).sum();
+      long later = bins.stream().mapToLong(b -> b.later).sum();
+      if (n == 0) {
+        return ObjectLabels.NONE;
+      }
+      boolean echoes = later >= ObjectLabeller.ECHO_INFORMATIVE_SHARE * n;
+      List<LabelledObject> objects = new ArrayList<>();
+      List<long[]> manMade = new ArrayList<>();
+      long[] counts = new long[4];
+      List<Integer> order = new ArrayList<>();
+      for (int b = 0; b < blocks.size(); b++) {
+        order.add(b);
+      }
+      try {
+        OrderedParallel.forEach(order, threads, b -> labelBlock(read(store, b), echoes), r -> {
           objects.addAll(r.objects());
           manMade.add(r.manMade());
           for (int k = 0; k < counts.length; k++) {
             counts[k] += r.counts()[k];
           }
         });
-    long manMadeCount = 0;
-    for (long[] keys : manMade) {
-      for (long key : keys) {
-        setAside.addObject(key);
+      } catch (UncheckedIOException e) {
+        throw e.getCause();
       }
-      manMadeCount += keys.length;
+      long manMadeCount = 0;
+      for (long[] keys : manMade) {
+        for (long key : keys) {
+          setAside.addObject(key);
+        }
+        manMadeCount += keys.length;
+      }
+      return new ObjectLabels(ObjectLabeller.sortedObjects(objects), counts[0], manMadeCount,
+          echoes, new ObjectLabels.Doubted(counts[1], counts[2], counts[3]));
     }
-    return new ObjectLabels(ObjectLabeller.sortedObjects(objects), counts[0], manMadeCount,
-        echoes, new ObjectLabels.Doubted(counts[1], counts[2], counts[3]));
+  }
+
+  /** Block {@code b}'s points from the store, sorted by coordinates. */
+  private static LabelPoints read(LabelStore store, int b) {
+    try {
+      LabelPoints p = store.read(b);
+      ObjectLabeller.sort(p);
+      return p;
+    } catch (IOException e) {
+      throw new UncheckedIOException(e);
+    }
   }
 
   /**
@@ -87,9 +130,7 @@ final class LabelBlocks {
    */
   private record BlockResult(List<LabelledObject> objects, long[] manMade, long[] counts) {}
 
-  private static BlockResult labelBlock(PointSource source, List<SpanFrame> frames,
-      double regionM, GroundModel ground, SetAside setAside, boolean judgeVegetationLabels,
-      boolean echoes, int[] block) {
+  private static BlockResult labelBlock(LabelPoints p, boolean echoes) {
     List<LabelledObject> objects = new ArrayList<>();
     long[] manMade = new long[1024];
     int manMadeCount = 0;
@@ -97,9 +138,6 @@ final class LabelBlocks {
     long vegetationLabels = 0;
     long vegetationLabelsDoubted = 0;
     long groundDoubted = 0;
-    LabelWindow window = new LabelWindow(frames, block[0], block[1], regionM, OVERLAP_M);
-    LabelPoints p = ObjectLabeller.gather(source, () -> new LabelPoints(frames, regionM,
-        ground, setAside, judgeVegetationLabels, window, false));
     if (p.size == 0) {
       return new BlockResult(List.of(), new long[0], new long[4]);
     }

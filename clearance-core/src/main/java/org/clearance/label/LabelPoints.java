@@ -1,5 +1,6 @@
 package org.clearance.label;
 
+import java.nio.ByteBuffer;
 import java.util.Arrays;
 import java.util.List;
 import java.util.function.Consumer;
@@ -15,7 +16,8 @@ import org.clearance.wire.SetAside;
  * label not believed) and, in a partly labelled survey, the points labelled vegetation (3-5) at
  * least {@link #MIN_HAG_M} above ground, whose labels are trusted only as far as the objects
  * they belong to look like vegetation; all within the region of a span, not set aside by the
- * wire finder. About 40 bytes a point; only the line's region is held, never the whole survey.
+ * wire finder. About 40 bytes a point; only the line's region is held, never the whole survey
+ * (and one block window at a time, {@link LabelBlocks}).
  */
 final class LabelPoints implements Consumer<PointChunk> {
 
@@ -32,49 +34,56 @@ final class LabelPoints implements Consumer<PointChunk> {
   /** What a point was labelled: ground (2), standing above {@link #GROUND_LABEL_MAX_HEIGHT_M}. */
   static final byte GROUND_DOUBTED = 2;
 
+  /** Bytes a point takes in a block store ({@link #writeColumns}): x, y, z, height, return
+   * number, label, zone. */
+  static final int BYTES_PER_POINT = 3 * Double.BYTES + Float.BYTES + 3;
+
   private final List<SpanFrame> frames;
   private final double regionM;
   private final GroundModel ground;
   private final SetAside setAside;
   private final boolean judgeVegetationLabels;
-  /** The block window the points are gathered for, or null for the whole line. */
-  private final LabelWindow window;
-  /** True to count the points (and their later returns) without holding them. */
-  private final boolean countOnly;
 
   int size;
   /** Later returns (return number 2 or more) among the points added. */
   long later;
-  double[] x = new double[1024];
-  double[] y = new double[1024];
-  double[] z = new double[1024];
-  float[] hag = new float[1024];
+  double[] x;
+  double[] y;
+  double[] z;
+  float[] hag;
   /** Return number of the point within its pulse (0 when the file does not say). */
-  byte[] returnNumber = new byte[1024];
+  byte[] returnNumber;
   /** What each point was labelled ({@link #OPEN}, {@link #VEGETATION_LABEL},
    * {@link #GROUND_DOUBTED}). */
-  byte[] label = new byte[1024];
-  /** Where each point lies in the block window ({@link LabelWindow#CORE} for the whole line). */
-  byte[] zone = new byte[1024];
+  byte[] label;
+  /** Where each point lies in its block window ({@link LabelWindow#CORE} for the whole line). */
+  byte[] zone;
 
+  /** A collector of the points looked at on the whole line. */
   LabelPoints(List<SpanFrame> frames, double regionM, GroundModel ground, SetAside setAside,
       boolean judgeVegetationLabels) {
-    this(frames, regionM, ground, setAside, judgeVegetationLabels, null, false);
+    this(frames, regionM, ground, setAside, judgeVegetationLabels, 1024);
   }
 
-  /**
-   * A collector for one block window ({@code window} not null) or a counter of the points
-   * looked at on the whole line ({@code countOnly}).
-   */
-  LabelPoints(List<SpanFrame> frames, double regionM, GroundModel ground, SetAside setAside,
-      boolean judgeVegetationLabels, LabelWindow window, boolean countOnly) {
-    this.window = window;
-    this.countOnly = countOnly;
+  private LabelPoints(List<SpanFrame> frames, double regionM, GroundModel ground,
+      SetAside setAside, boolean judgeVegetationLabels, int capacity) {
     this.frames = frames;
     this.regionM = regionM;
     this.ground = ground;
     this.setAside = setAside;
     this.judgeVegetationLabels = judgeVegetationLabels;
+    x = new double[capacity];
+    y = new double[capacity];
+    z = new double[capacity];
+    hag = new float[capacity];
+    returnNumber = new byte[capacity];
+    label = new byte[capacity];
+    zone = new byte[capacity];
+  }
+
+  /** An empty holder of points (no collector) with room for {@code capacity} points. */
+  static LabelPoints holder(int capacity) {
+    return new LabelPoints(List.of(), 0, null, null, false, Math.max(1, capacity));
   }
 
   @Override
@@ -82,27 +91,41 @@ final class LabelPoints implements Consumer<PointChunk> {
     short[] cls = chunk.classification();
     byte[] flags = chunk.flags();
     for (int i = 0; i < chunk.size(); i++) {
-      int c = cls[i];
-      byte kind = c <= 1 ? OPEN : c == 2 ? GROUND_DOUBTED
-          : judgeVegetationLabels && c >= 3 && c <= 5 ? VEGETATION_LABEL : -1;
-      if (kind < 0 || (flags[i] & PointChunk.FLAG_WITHHELD) != 0) {
+      byte kind = kind(cls[i], flags[i], judgeVegetationLabels);
+      if (kind < 0) {
         continue;
       }
       double px = chunk.x()[i];
       double py = chunk.y()[i];
       double pz = chunk.z()[i];
-      byte where = window != null ? window.zone(px, py)
-          : inRegion(px, py) ? LabelWindow.CORE : LabelWindow.OUTSIDE;
-      if (where == LabelWindow.OUTSIDE) {
+      if (!inRegion(frames, regionM, px, py)) {
         continue;
       }
       double h = ground.heightAboveGround(px, py, pz);
-      boolean high = kind == GROUND_DOUBTED ? h > GROUND_LABEL_MAX_HEIGHT_M : h >= MIN_HAG_M;
-      if (!high || setAside.reason(SetAside.key(px, py, pz)) != SetAside.Reason.NONE) {
+      if (!looked(kind, h, setAside, px, py, pz)) {
         continue;
       }
-      add(px, py, pz, h, chunk.returnNumber()[i], kind, where);
+      add(px, py, pz, h, chunk.returnNumber()[i], kind, LabelWindow.CORE);
     }
+  }
+
+  /**
+   * What a point of class {@code cls} is labelled as for the labelling ({@link #OPEN},
+   * {@link #GROUND_DOUBTED}, {@link #VEGETATION_LABEL}), or -1 when it is not looked at (another
+   * class, or withheld).
+   */
+  static byte kind(int cls, byte flags, boolean judgeVegetationLabels) {
+    byte kind = cls <= 1 ? OPEN : cls == 2 ? GROUND_DOUBTED
+        : judgeVegetationLabels && cls >= 3 && cls <= 5 ? VEGETATION_LABEL : -1;
+    return (flags & PointChunk.FLAG_WITHHELD) != 0 ? -1 : kind;
+  }
+
+  /** Whether a point of {@code kind} at {@code h} m above ground, in the region, is looked at:
+   * high enough for its kind and not set aside by the wire finder. */
+  static boolean looked(byte kind, double h, SetAside setAside, double px, double py,
+      double pz) {
+    boolean high = kind == GROUND_DOUBTED ? h > GROUND_LABEL_MAX_HEIGHT_M : h >= MIN_HAG_M;
+    return high && setAside.reason(SetAside.key(px, py, pz)) == SetAside.Reason.NONE;
   }
 
   /** Whether a plan point lies within {@code regionM} of a span's chord (the region looked at). */
@@ -113,23 +136,18 @@ final class LabelPoints implements Consumer<PointChunk> {
   /** The first span (index in {@code frames}) whose region holds the plan point, or -1. */
   static int owner(List<SpanFrame> frames, double regionM, double px, double py) {
     for (int k = 0; k < frames.size(); k++) {
-      SpanFrame f = frames.get(k);
-      double s = f.station(px, py);
-      if (s >= -regionM && s <= f.length() + regionM && Math.abs(f.offset(px, py)) <= regionM) {
+      if (holds(frames.get(k), regionM, px, py)) {
         return k;
       }
     }
     return -1;
   }
 
-  private boolean inRegion(double px, double py) {
-    for (SpanFrame f : frames) {
-      double s = f.station(px, py);
-      if (s >= -regionM && s <= f.length() + regionM && Math.abs(f.offset(px, py)) <= regionM) {
-        return true;
-      }
-    }
-    return false;
+  /** Whether the region of the span of frame {@code f} (within {@code regionM} of its chord)
+   * holds the plan point. */
+  static boolean holds(SpanFrame f, double regionM, double px, double py) {
+    double s = f.station(px, py);
+    return s >= -regionM && s <= f.length() + regionM && Math.abs(f.offset(px, py)) <= regionM;
   }
 
   void add(double px, double py, double pz, double h, byte n, byte kind) {
@@ -138,10 +156,6 @@ final class LabelPoints implements Consumer<PointChunk> {
 
   void add(double px, double py, double pz, double h, byte n, byte kind, byte where) {
     later += n >= 2 ? 1 : 0;
-    if (countOnly) {
-      size++;
-      return;
-    }
     if (size == x.length) {
       int cap = size * 2;
       x = Arrays.copyOf(x, cap);
@@ -160,6 +174,45 @@ final class LabelPoints implements Consumer<PointChunk> {
     label[size] = kind;
     zone[size] = where;
     size++;
+  }
+
+  /** Writes the points' columns, one after the other ({@link #BYTES_PER_POINT} a point), into
+   * {@code out} (cleared first, flipped after; room for {@link #size} points). */
+  void writeColumns(ByteBuffer out) {
+    out.clear();
+    out.asDoubleBuffer().put(x, 0, size);
+    out.position(out.position() + size * Double.BYTES);
+    out.asDoubleBuffer().put(y, 0, size);
+    out.position(out.position() + size * Double.BYTES);
+    out.asDoubleBuffer().put(z, 0, size);
+    out.position(out.position() + size * Double.BYTES);
+    out.asFloatBuffer().put(hag, 0, size);
+    out.position(out.position() + size * Float.BYTES);
+    out.put(returnNumber, 0, size);
+    out.put(label, 0, size);
+    out.put(zone, 0, size);
+    out.flip();
+  }
+
+  /** Appends {@code n} points read from columns written by {@link #writeColumns} (the arrays
+   * must have room). */
+  void readColumns(ByteBuffer in, int n) {
+    int at = size;
+    in.asDoubleBuffer().get(x, at, n);
+    in.position(in.position() + n * Double.BYTES);
+    in.asDoubleBuffer().get(y, at, n);
+    in.position(in.position() + n * Double.BYTES);
+    in.asDoubleBuffer().get(z, at, n);
+    in.position(in.position() + n * Double.BYTES);
+    in.asFloatBuffer().get(hag, at, n);
+    in.position(in.position() + n * Float.BYTES);
+    in.get(returnNumber, at, n);
+    in.get(label, at, n);
+    in.get(zone, at, n);
+    for (int i = at; i < at + n; i++) {
+      later += returnNumber[i] >= 2 ? 1 : 0;
+    }
+    size += n;
   }
 
   /** Adds another collector's points. */

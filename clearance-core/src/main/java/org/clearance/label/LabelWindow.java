@@ -70,20 +70,40 @@ final class LabelWindow {
     maxY = by;
   }
 
-  /** Where a plan point lies ({@link #OUTSIDE} when the block does not look at it). */
-  byte zone(double px, double py) {
+  /**
+   * Where a plan point lies ({@link #OUTSIDE} when the block does not look at it).
+   *
+   * @param owner the first span whose region holds the point ({@link LabelPoints#owner}), &gt;= 0
+   */
+  byte zone(double px, double py, int owner) {
     if (px < minX || px > maxX || py < minY || py > maxY
         || !near(px, py, regionM + overlapM)) {
-      return OUTSIDE;
-    }
-    int owner = LabelPoints.owner(frames, regionM, px, py);
-    if (owner < 0) {
       return OUTSIDE;
     }
     if (owner >= from && owner < to) {
       return CORE;
     }
     return near(px, py, regionM + overlapM - EDGE_M) ? INNER : EDGE;
+  }
+
+  /** Least easting the window may hold, m. */
+  double minX() {
+    return minX;
+  }
+
+  /** Greatest easting the window may hold, m. */
+  double maxX() {
+    return maxX;
+  }
+
+  /** Least northing the window may hold, m. */
+  double minY() {
+    return minY;
+  }
+
+  /** Greatest northing the window may hold, m. */
+  double maxY() {
+    return maxY;
   }
 
   private boolean near(double px, double py, double reach) {

@@ -1,5 +1,8 @@
 package org.clearance.label;
 
+import java.io.IOException;
+import java.io.UncheckedIOException;
+import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.Collections;
@@ -131,9 +134,9 @@ public final class ObjectLabeller {
 
   /**
    * Labels the unclassified points near the spans and adds the man-made ones to
-   * {@code setAside}, block by block along the line ({@link LabelBlocks}): the points held at
-   * once are those of a block's window, not of the survey; the survey is read once per block
-   * and once more to count.
+   * {@code setAside}, block by block along the line ({@link LabelBlocks}): the survey is read
+   * once, the points of each block's window wait on disk in {@code spillFolder}, and the points
+   * held at once are those of a block's window per thread, not of the survey.
    *
    * @param source the survey
    * @param frames the spans' plan frames
@@ -143,13 +146,28 @@ public final class ObjectLabeller {
    * @param judgeVegetationLabels true in a partly labelled survey: points labelled vegetation
    *     (3-5) are clustered with the rest, and those of an object the evidence shows man-made
    *     or linear are not trusted (set aside, counted)
-   * @param threads blocks labelled at once (each reads the survey through {@code source})
+   * @param threads blocks labelled at once
+   * @param spillFolder where the blocks' points wait (a temporary file, deleted before return)
    * @return the objects and counts
+   * @throws IOException when the temporary file cannot be written or read
    */
   public static ObjectLabels label(PointSource source, List<SpanFrame> frames, double regionM,
-      GroundModel ground, SetAside setAside, boolean judgeVegetationLabels, int threads) {
+      GroundModel ground, SetAside setAside, boolean judgeVegetationLabels, int threads,
+      Path spillFolder) throws IOException {
     return LabelBlocks.label(source, frames, regionM, ground, setAside, judgeVegetationLabels,
-        threads);
+        threads, spillFolder);
+  }
+
+  /** {@link #label(PointSource, List, double, GroundModel, SetAside, boolean, int, Path)} with
+   * the blocks' points waiting in the system's temporary folder. */
+  public static ObjectLabels label(PointSource source, List<SpanFrame> frames, double regionM,
+      GroundModel ground, SetAside setAside, boolean judgeVegetationLabels, int threads) {
+    try {
+      return label(source, frames, regionM, ground, setAside, judgeVegetationLabels, threads,
+          Path.of(System.getProperty("java.io.tmpdir")));
+    } catch (IOException e) {
+      throw new UncheckedIOException(e);
+    }
   }
 
   /** {@link #label(PointSource, List, double, GroundModel, SetAside, boolean, int)} one block
@@ -183,7 +201,7 @@ public final class ObjectLabeller {
   }
 
   /** Sorts the points by coordinates, so the result does not depend on the reading order. */
-  private static void sort(LabelPoints p) {
+  static void sort(LabelPoints p) {
     double[] px = p.x;
     double[] py = p.y;
     double[] pz = p.z;
@@ -281,10 +299,8 @@ public final class ObjectLabeller {
     for (int i = 0; i < n; i++) {
       Arrays.fill(s, 0);
       final int me = i;
-      index.within(i, Math.max(RADIUS_M, LINK_M), j -> {
-        double dx = p.x[j] - p.x[me];
-        double dy = p.y[j] - p.y[me];
-        double dz = p.z[j] - p.z[me];
+      int[] myRoot = {i};
+      index.within(i, Math.max(RADIUS_M, LINK_M), (j, dx, dy, dz) -> {
         if (dx * dx + dy * dy + dz * dz <= RADIUS_M * RADIUS_M) {
           s[0]++;
           s[1] += dx;
@@ -297,8 +313,9 @@ public final class ObjectLabeller {
           s[8] += dy * dz;
           s[9] += dz * dz;
         }
-        if (j != me && dx * dx + dy * dy + dz * dz <= LINK_M * LINK_M) {
-          DisjointSets.union(parent, me, j);
+        // each pair once (the link is symmetric; the root is the least index either way)
+        if (j < me && dx * dx + dy * dy + dz * dz <= LINK_M * LINK_M) {
+          myRoot[0] = DisjointSets.join(parent, myRoot[0], j);
         }
       });
       if (s[0] >= MIN_NEIGHBOURS) {
@@ -433,7 +450,7 @@ public final class ObjectLabeller {
       if (count[r] >= MIN_OBJECT_POINTS || lowest[r] < FLOAT_M || blocked[r]) {
         continue;
       }
-      wide.within(i, ATTACH_M, j -> {
+      wide.within(i, ATTACH_M, (j, dx, dy, dz) -> {
         ObjectKind k = kindOf[root[j]];
         if (k == ObjectKind.VEGETATION) {
           blocked[r] = true;

@@ -3,10 +3,16 @@ package org.clearance.label;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.security.MessageDigest;
 import java.util.ArrayList;
+import java.util.HexFormat;
 import java.util.List;
 import java.util.SplittableRandom;
 import java.util.function.Consumer;
+import java.util.stream.Stream;
 import org.clearance.ground.GroundModel;
 import org.clearance.ground.GroundModelBuilder;
 import org.clearance.ground.GroundOptions;
@@ -16,6 +22,7 @@ import org.clearance.wire.PointSource;
 import org.clearance.wire.SetAside;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
 
 /**
  * The block-by-block labelling gives the same objects and the same points set aside as the
@@ -63,13 +70,17 @@ class LabelBlocksTest {
   }
 
   @Test
-  void blocksGiveTheWholeLinesResult() {
+  void blocksGiveTheWholeLinesResult(@TempDir Path staging) throws Exception {
     assertEquals(3, LabelBlocks.blocks(FRAMES).size());
     SetAside whole = SetAside.none();
     ObjectLabels a = ObjectLabeller.labelWhole(source(), FRAMES, REGION_M, ground, whole, false);
     SetAside blocked = SetAside.none();
     ObjectLabels b = ObjectLabeller.label(source(), FRAMES, REGION_M, ground, blocked, false,
-        2);
+        2, staging);
+    // the blocks' store is gone from the staging folder when the step returns
+    try (Stream<Path> left = Files.list(staging)) {
+      assertEquals(List.of(), left.toList());
+    }
     assertEquals(a.pointsLooked(), b.pointsLooked());
     assertEquals(a.pointsSetAside(), b.pointsSetAside());
     assertEquals(a.echoesInformative(), b.echoesInformative());
@@ -94,6 +105,43 @@ class LabelBlocksTest {
         false, 1);
     assertEquals(b, one);
   }
+
+  /**
+   * The one pass over the survey (issue 12) labels as the version before it, which read the
+   * survey once per block: SHA-256 of every object's fields (exact decimal form of each double),
+   * the counts and every point's set-aside reason, recorded with that version (commit 91706e0)
+   * running this method.
+   */
+  @Test
+  void sameLabelsAsTheVersionThatReadTheSurveyPerBlock() throws Exception {
+    SetAside set = SetAside.none();
+    int[] reads = {0};
+    PointSource counted = consumers -> {
+      reads[0]++;
+      source().stream(consumers);
+    };
+    ObjectLabels labels = ObjectLabeller.label(counted, FRAMES, REGION_M, ground, set, false,
+        2);
+    // three blocks, one read of the survey (the version before read it four times)
+    assertEquals(1, reads[0]);
+    MessageDigest sha = MessageDigest.getInstance("SHA-256");
+    StringBuilder text = new StringBuilder();
+    text.append(labels.pointsLooked()).append(' ').append(labels.pointsSetAside()).append(' ')
+        .append(labels.echoesInformative()).append(' ').append(labels.doubted()).append('\n');
+    labels.objects().forEach(o -> text.append(o).append('\n'));
+    for (PointChunk c : CHUNKS) {
+      for (int i = 0; i < c.size(); i++) {
+        text.append(set.reason(SetAside.key(c.x()[i], c.y()[i], c.z()[i])).ordinal());
+      }
+    }
+    String digest = HexFormat.of().formatHex(
+        sha.digest(text.toString().getBytes(StandardCharsets.UTF_8)));
+    assertEquals(PREVIOUS_VERSION_SHA256, digest, labels.describe());
+  }
+
+  /** {@link #sameLabelsAsTheVersionThatReadTheSurveyPerBlock}'s digest of commit 91706e0. */
+  private static final String PREVIOUS_VERSION_SHA256 =
+      "907f6d443842791a22c426966da637d1bdc7e863eb287d773dec54be6fa19334";
 
   /** Chunks handed out to two consumers in turn, as two reading threads would. */
   private static PointSource source() {

@@ -1,0 +1,68 @@
+package org.clearance.label;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.util.ArrayList;
+import java.util.Comparator;
+import java.util.List;
+import java.util.SplittableRandom;
+import org.junit.jupiter.api.Test;
+
+/**
+ * The neighbour search finds exactly the points a brute-force search finds (computed: every pair
+ * tested), and visits them in the order the labelling's sums depend on: cells (cubes of the cell
+ * size from the origin) in (x, y, z) order, then point index.
+ */
+class CellIndexTest {
+
+  @Test
+  void sameNeighboursInCellOrderAsBruteForce() {
+    SplittableRandom rng = new SplittableRandom(3);
+    int n = 3000;
+    double[] x = new double[n];
+    double[] y = new double[n];
+    double[] z = new double[n];
+    for (int i = 0; i < n; i++) {
+      // projected coordinates far from the origin, negative heights too, some duplicates
+      x[i] = 512_300 + rng.nextDouble(0, 12);
+      y[i] = i % 50 == 0 && i > 0 ? y[i - 1] : -4_100_200 + rng.nextDouble(0, 9);
+      z[i] = i % 50 == 0 && i > 0 ? z[i - 1] : rng.nextDouble(-3, 4);
+      if (i % 50 == 0 && i > 0) {
+        x[i] = x[i - 1];
+      }
+    }
+    double cell = 1.0;
+    double r = 1.0;
+    CellIndex index = new CellIndex(x, y, z, n, cell);
+    long visited = 0;
+    for (int i = 0; i < n; i++) {
+      List<Integer> got = new ArrayList<>();
+      int me = i;
+      index.within(i, r, (j, dx, dy, dz) -> {
+        got.add(j);
+        // the offsets handed on are those of the coordinates, to the bit
+        assertEquals(x[j] - x[me], dx, 0.0);
+        assertEquals(y[j] - y[me], dy, 0.0);
+        assertEquals(z[j] - z[me], dz, 0.0);
+      });
+      List<Integer> expected = new ArrayList<>();
+      for (int j = 0; j < n; j++) {
+        double dx = x[j] - x[i];
+        double dy = y[j] - y[i];
+        double dz = z[j] - z[i];
+        if (dx * dx + dy * dy + dz * dz <= r * r) {
+          expected.add(j);
+        }
+      }
+      expected.sort(Comparator.<Integer>comparingDouble(j -> Math.floor(x[j] / cell))
+          .thenComparingDouble(j -> Math.floor(y[j] / cell))
+          .thenComparingDouble(j -> Math.floor(z[j] / cell))
+          .thenComparingInt(j -> j));
+      assertEquals(expected, got, "point " + i);
+      visited += got.size();
+    }
+    // the test can fail: the points have neighbours (at 3000 points in 432 m^3, about 29 each)
+    assertTrue(visited > 10L * n, "neighbours visited " + visited);
+  }
+}
