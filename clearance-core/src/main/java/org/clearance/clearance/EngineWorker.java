@@ -61,6 +61,13 @@ final class EngineWorker implements Consumer<PointChunk> {
   final long[] excludedAirborne;
   final long[] excludedObject;
   final long[] excludedCrossing;
+  /** Per span: points on a wire touched by vegetation, measured ({@link SetAside#touchedWire}). */
+  final long[] wireTouched;
+  /** Per span: points whose label was not believed (a class-2 point high above the ground model
+   * measured as unclassified, a vegetation label on a man-made object set aside). */
+  final long[] labelsDistrusted;
+  /** Per span and condition: whether this worker's minimum stands on a touched wire point. */
+  final boolean[][] minimumOnWire;
   /** Per span: points of classes not read that may be vegetation within the keep radius, the
    * nearest of them (m) and their classes. */
   final long[] unreadCount;
@@ -109,6 +116,9 @@ final class EngineWorker implements Consumer<PointChunk> {
     excludedAirborne = new long[n];
     excludedObject = new long[n];
     excludedCrossing = new long[n];
+    wireTouched = new long[n];
+    labelsDistrusted = new long[n];
+    minimumOnWire = new boolean[n][nc];
     unreadCount = new long[n];
     unreadNearest = new double[n];
     java.util.Arrays.fill(unreadNearest, Double.POSITIVE_INFINITY);
@@ -161,6 +171,7 @@ final class EngineWorker implements Consumer<PointChunk> {
     boolean inTreeRegion = false;
     boolean notVegetation = false;
     SetAside.Reason reason = null;
+    boolean touched = false;
     boolean inferredPoint = vegetation.inferredClass(cls);
     for (int sp : candidates) {
       PreparedSpan p = spans.get(sp);
@@ -189,10 +200,16 @@ final class EngineWorker implements Consumer<PointChunk> {
       }
       if (vegetation.inferred()) {
         if (reason == null) {
-          reason = setAside.reason(SetAside.key(x, y, z));
+          long key = SetAside.key(x, y, z);
+          reason = setAside.reason(key);
+          touched = reason == SetAside.Reason.NONE && setAside.touchedWire(key);
         }
         if (reason != SetAside.Reason.NONE) {
           if (p.inBox(s, e, z)) {
+            if (reason == SetAside.Reason.OBJECT && VegetationSelector.DEFAULT_CLASSES
+                .contains(cls)) {
+              labelsDistrusted[sp]++;
+            }
             (switch (reason) {
               case WIRE -> excludedConductor;
               case OBJECT -> excludedObject;
@@ -205,10 +222,17 @@ final class EngineWorker implements Consumer<PointChunk> {
         }
       }
       if (p.inBox(s, e, z)) {
-        measure(p, s, x, y, z, cls, hag);
+        if (touched) {
+          wireTouched[sp]++;
+        }
+        if (inferredPoint && cls == VegetationSelector.GROUND) {
+          labelsDistrusted[sp]++;
+        }
+        measure(p, s, x, y, z, cls, hag, touched);
       }
     }
-    if (canopy != null && inTreeRegion && !notVegetation && hag >= CANOPY_MIN_HEIGHT_M) {
+    if (canopy != null && inTreeRegion && !notVegetation && !touched
+        && hag >= CANOPY_MIN_HEIGHT_M) {
       canopy.add(x, y, z);
     }
   }
@@ -267,7 +291,7 @@ final class EngineWorker implements Consumer<PointChunk> {
    * within the keep radius of any conductor, so a zone that names another role can be checked.
    */
   private void measure(PreparedSpan p, double s, double x, double y, double z, int cls,
-      double hag) {
+      double hag, boolean touched) {
     int sp = p.index;
     int nc = conditions.size();
     if (p.belowFloor(s, z) && minimaWithinReach(p)) {
@@ -371,6 +395,7 @@ final class EngineWorker implements Consumer<PointChunk> {
         if (newMinimum) {
           minimum[sp][k] = new ConditionMinimum(name, group, cd.distance(), cd.horizontal(),
               cd.vertical(), p.names[j], x, y, z);
+          minimumOnWire[sp][k] = touched;
         }
         if (list != null) {
           double station = p.frame.station(cd.closestX(), cd.closestY());
@@ -383,7 +408,7 @@ final class EngineWorker implements Consumer<PointChunk> {
       kept[sp]++;
       buffer.add(new PointClearance(p.model.span().id(), x, y, z, cls, hag,
           details.get(Role.PHASE.ordinal()), details.get(Role.NEUTRAL.ordinal()),
-          details.get(Role.SHIELD.ordinal()), byVoltage(p, nc, x, y, z)));
+          details.get(Role.SHIELD.ordinal()), byVoltage(p, nc, x, y, z), touched));
     }
   }
 
