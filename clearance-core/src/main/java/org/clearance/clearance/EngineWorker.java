@@ -7,6 +7,7 @@ import java.util.List;
 import java.util.function.Consumer;
 import org.clearance.ground.CanopyBuilder;
 import org.clearance.ground.HeightModel;
+import org.clearance.label.WireLabels;
 import org.clearance.line.ConductorPosition.Role;
 import org.clearance.survey.PointChunk;
 import org.clearance.wire.SetAside;
@@ -74,6 +75,9 @@ final class EngineWorker implements Consumer<PointChunk> {
   final double[] unreadNearest;
   final java.util.BitSet[] unreadClasses;
   private final SetAside setAside;
+  /** Whether some wire labels are not believed ({@link SetAside#labelDistrusted}): then class
+   * 13/14 points are looked up. */
+  private final boolean relabels;
   /** The conductor roles measured apart, indexed by ordinal. */
   private static final Role[] ROLES = Role.values();
   private static final int PHASE = Role.PHASE.ordinal();
@@ -96,6 +100,7 @@ final class EngineWorker implements Consumer<PointChunk> {
       NearPointWriter out, CanopyBuilder canopy, SetAside setAside, List<Double> voltages,
       int[][][] voltageGroups) {
     this.setAside = setAside;
+    this.relabels = vegetation.inferred() && setAside.distrustedCount() > 0;
     this.voltages = voltages;
     this.voltageGroups = voltageGroups;
     this.spans = spans;
@@ -147,15 +152,18 @@ final class EngineWorker implements Consumer<PointChunk> {
         continue;
       }
       boolean read = vegetation.candidateClass(cls[i]);
-      if (!read && !vegetation.mayBeUnread(cls[i])) {
+      // a crown a vendor labelled wire (issue 9): measured as an unclassified point
+      boolean relabelled = !read && relabels && WireLabels.wireClass(cls[i])
+          && setAside.labelDistrusted(SetAside.key(xs[i], ys[i], zs[i]));
+      if (!read && !relabelled && !vegetation.mayBeUnread(cls[i])) {
         continue;
       }
       int[] candidates = index.spansAt(xs[i], ys[i]);
       if (candidates.length == 0) {
         continue;
       }
-      if (read) {
-        point(candidates, xs[i], ys[i], zs[i], cls[i]);
+      if (read || relabelled) {
+        point(candidates, xs[i], ys[i], zs[i], cls[i], relabelled);
       } else {
         unreadPoint(candidates, xs[i], ys[i], zs[i], cls[i]);
       }
@@ -165,14 +173,15 @@ final class EngineWorker implements Consumer<PointChunk> {
     }
   }
 
-  private void point(int[] candidates, double x, double y, double z, int cls) {
+  private void point(int[] candidates, double x, double y, double z, int cls,
+      boolean relabelled) {
     double hag = Double.NaN;
     boolean hagDone = false;
     boolean inTreeRegion = false;
     boolean notVegetation = false;
     SetAside.Reason reason = null;
     boolean touched = false;
-    boolean inferredPoint = vegetation.inferredClass(cls);
+    boolean inferredPoint = relabelled || vegetation.inferredClass(cls);
     for (int sp : candidates) {
       PreparedSpan p = spans.get(sp);
       double s = p.frame.station(x, y);
@@ -225,7 +234,7 @@ final class EngineWorker implements Consumer<PointChunk> {
         if (touched) {
           wireTouched[sp]++;
         }
-        if (inferredPoint && cls == VegetationSelector.GROUND) {
+        if (relabelled || inferredPoint && cls == VegetationSelector.GROUND) {
           labelsDistrusted[sp]++;
         }
         measure(p, s, x, y, z, cls, hag, touched);

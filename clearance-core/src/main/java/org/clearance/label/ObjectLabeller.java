@@ -183,7 +183,7 @@ public final class ObjectLabeller {
   }
 
   /** Sorts the points by coordinates, so the result does not depend on the reading order. */
-  private static void sort(LabelPoints p) {
+  static void sort(LabelPoints p) {
     double[] px = p.x;
     double[] py = p.y;
     double[] pz = p.z;

@@ -39,6 +39,9 @@ public final class SetAside {
   private final LongHashSet crossing = new LongHashSet();
   /** Points on a wire that are measured all the same, because vegetation touches them. */
   private final LongHashSet touched = new LongHashSet();
+  /** Points of a class that rules out vegetation whose label the labelling step does not
+   * believe (a crown labelled wire): measured as unclassified. */
+  private final LongHashSet distrusted = new LongHashSet();
 
   /** An empty set: nothing is set aside. */
   public static SetAside none() {
@@ -112,6 +115,26 @@ public final class SetAside {
    */
   public boolean touchedWire(long key) {
     return touched.contains(key);
+  }
+
+  /**
+   * Adds a point whose label rules out vegetation but whose object the labelling step shows to
+   * be a crown (a crown labelled wire, {@code org.clearance.label.WireLabels}): called before
+   * the engine reads the set.
+   */
+  public synchronized void addDistrustedLabel(long key) {
+    distrusted.add(key);
+  }
+
+  /** Whether the point with this key is one of {@link #addDistrustedLabel}: the engine measures
+   * it as an unclassified point. */
+  public boolean labelDistrusted(long key) {
+    return distrusted.contains(key);
+  }
+
+  /** Points whose label is not believed ({@link #addDistrustedLabel}). */
+  public long distrustedCount() {
+    return distrusted.size();
   }
 
   /** The keys of the wire points touched by vegetation ({@link #touchedWire}), in no order. */

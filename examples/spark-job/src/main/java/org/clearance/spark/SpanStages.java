@@ -30,6 +30,8 @@ import org.clearance.clearance.VegetationSelector;
 import org.clearance.ground.GroundModel;
 import org.clearance.ground.GroundModelBuilder;
 import org.clearance.label.ObjectLabeller;
+import org.clearance.label.ObjectLabels;
+import org.clearance.label.WireLabels;
 import org.clearance.line.SpanLayout;
 import org.clearance.run.RunModel;
 import org.clearance.run.RunModelJson;
@@ -319,10 +321,16 @@ final class SpanStages {
       if (vegetation.inferred()) {
         // the command line's labelling step, over the spans this task measures: man-made
         // objects join the points set aside
-        ObjectLabeller.label(consumers -> feed(blocks, consumers.get()),
-            engineSpans.stream().map(m -> m.span().frame()).toList(),
-            options.engine().treeReach() + ClearanceCheck.LABEL_REGION_MARGIN_M, fit.ground(),
-            aside, vegetation.mixed());
+        List<org.clearance.line.SpanFrame> frames = engineSpans.stream()
+            .map(m -> m.span().frame()).toList();
+        double region = options.engine().treeReach() + ClearanceCheck.LABEL_REGION_MARGIN_M;
+        ObjectLabels objects = ObjectLabeller.label(consumers -> feed(blocks, consumers.get()),
+            frames, region, fit.ground(), aside, vegetation.mixed());
+        if (WireLabels.anyIn(classCounts)) {
+          // crowns labelled wire (issue 9): measured as unclassified, as on the command line
+          WireLabels.judge(consumers -> feed(blocks, consumers.get()), frames, region,
+              fit.ground(), aside, objects.echoesInformative());
+        }
       }
       Path near = temp.resolve(NearPointFile.FILE_NAME);
       Measurement all;
