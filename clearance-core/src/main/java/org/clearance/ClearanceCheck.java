@@ -30,6 +30,7 @@ import org.clearance.ground.GroundModel;
 import org.clearance.ground.GroundModelBuilder;
 import org.clearance.label.ObjectLabeller;
 import org.clearance.label.ObjectLabels;
+import org.clearance.label.WireLabels;
 import org.clearance.line.ConductorLibrary;
 import org.clearance.line.LineLayout;
 import org.clearance.line.LineSpec;
@@ -183,8 +184,16 @@ public final class ClearanceCheck {
           wires.layout().spans().stream().map(Span::frame).toList(),
           options.engine().treeReach() + LABEL_REGION_MARGIN_M, scan.ground, wires.setAside(),
           vegetation.mixed(), options.threads(), dir);
-      say("labelling: %s", objects.describe());
-      record.parameter("labelling", objects.describe());
+      String labelling = objects.describe();
+      if (WireLabels.anyIn(scan.classCounts)) {
+        labelling += "; " + WireLabels.judge(consumers -> survey.readParallel(options.threads(),
+            progress.wrap("wire labels", consumers)),
+            wires.layout().spans().stream().map(Span::frame).toList(),
+            options.engine().treeReach() + LABEL_REGION_MARGIN_M, scan.ground, wires.setAside(),
+            objects.echoesInformative()).describe();
+      }
+      say("labelling: %s", labelling);
+      record.parameter("labelling", labelling);
       stop("labelling");
     }
 

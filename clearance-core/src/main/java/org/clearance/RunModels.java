@@ -42,6 +42,7 @@ import org.clearance.wire.Crossing;
 import org.clearance.wire.FittedConductor;
 import org.clearance.wire.SpanWires;
 import org.clearance.wire.StructureChange;
+import org.clearance.wire.WireFinder;
 import org.clearance.wire.WireResult;
 
 /**
@@ -256,6 +257,9 @@ public final class RunModels {
           engine.structureExclusion(), clearance.excludedAsAirborne(),
           clearance.excludedAsObject(), clearance.excludedAsCrossing()));
     }
+    if (clearance != null) {
+      notes.addAll(measuredNotes(clearance));
+    }
     return new SpanRecord(model.context(), lineName, structure(span.from()), structure(span.to()),
         status, reason, conductors, clearance == null ? List.of() : clearance.minima(),
         clearance == null ? 0 : clearance.pointsMeasured(),
@@ -263,8 +267,33 @@ public final class RunModels {
             ? SpanRecord.SetAsideCounts.NONE : new SpanRecord.SetAsideCounts(
                 clearance.excludedAsConductor(), clearance.excludedAsStructure(),
                 clearance.excludedAsAirborne(), clearance.excludedAsObject(),
-                clearance.excludedAsCrossing()),
+                clearance.excludedAsCrossing(), clearance.wireTouched(),
+                clearance.labelsDistrusted()),
         temperatureRecord(temperature), sw.crossings());
+  }
+
+  /**
+   * The span notes on points measured though their evidence is mixed: wire points touched by
+   * vegetation (and the conditions whose minimum stands on one), labels not believed.
+   */
+  static List<String> measuredNotes(SpanClearance c) {
+    List<String> notes = new ArrayList<>();
+    if (c.wireTouched() > 0) {
+      notes.add(String.format(Locale.ROOT, "%d point%s on a wire touched by vegetation (within "
+          + "%.1f m) measured: a branch on the wire and the wire cannot be told apart; the cut "
+          + "sites stand on the vegetation beside them%s", c.wireTouched(),
+          c.wireTouched() == 1 ? "" : "s", WireFinder.TOUCH_M, c.minimumOnWire().isEmpty() ? ""
+              : String.format(Locale.ROOT, "; minimum set by a point on the wire touched by "
+              + "vegetation in %s (it may be the wire itself; the vegetation touching it lies "
+              + "within %.1f m of it)", String.join(", ", c.minimumOnWire()),
+              WireFinder.TOUCH_M)));
+    }
+    if (c.labelsDistrusted() > 0) {
+      notes.add(String.format(Locale.ROOT, "%d point%s whose label was not believed "
+          + "(docs/labelling.md): measured as unclassified, or set aside as a man-made object",
+          c.labelsDistrusted(), c.labelsDistrusted() == 1 ? "" : "s"));
+    }
+    return notes;
   }
 
   /** A crossing wire as the report's span notes give it (where: crossings.csv). */

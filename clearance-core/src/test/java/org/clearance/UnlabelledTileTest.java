@@ -38,8 +38,9 @@ import org.junit.jupiter.api.io.TempDir;
  * the truth. With the labels taken away: every span the labelled run finds vegetation inside a
  * zone in keeps a zone site, and every labelled zone site has one within {@link #SAME_SITE_M} of
  * it at least as urgent. The sites on points not labelled vegetation and the fall-in sites at no
- * labelled tree of that height are counted and printed (issue 9 asks for at most 2 % and none;
- * the tile's cranes still stand there, see the assertion).
+ * labelled tree of that height are counted and printed; at most 2 % of the zone sites may stand
+ * off vegetation (the class-1 sites with crown evidence counted as vegetation) and none of the
+ * fall-in sites at no labelled tree of that height (issue 9).
  */
 class UnlabelledTileTest {
 
@@ -83,7 +84,7 @@ class UnlabelledTileTest {
   private static final double CROWN_CLEAR_M = 1.0;
 
   private record Site(String span, int priority, String zone, double x, double y, double z,
-      double height) {}
+      double height, double clearance) {}
 
   private record Run(RunModel model, List<Site> sites, String console) {}
 
@@ -236,22 +237,50 @@ class UnlabelledTileTest {
               + "; nearest labelled tree " + near);
         }
       }
+      // Item 1 of the wire-site brief: a span minimum never above a zone site's clearance (a
+      // site standing on the vegetation beside a touched wire point must not raise it), and the
+      // touched wire points counted per span.
+      long touched = 0;
+      int minimaOnWire = 0;
+      int minimumAboveSite = 0;
+      for (SpanRecord span : r.model().spans()) {
+        touched += span.setAside().wireTouched();
+        minimaOnWire += span.notes().stream().anyMatch(n -> n.contains(
+            "minimum set by a point on the wire touched by vegetation")) ? 1 : 0;
+        double least = span.minima().stream().mapToDouble(m -> m.distance())
+            .filter(Double::isFinite).min().orElse(Double.POSITIVE_INFINITY);
+        for (Site s : r.sites()) {
+          if (s.span().equals(span.id()) && !s.zone().equals("fall-in")
+              && least > s.clearance() + 0.0005) {
+            minimumAboveSite++;
+            System.out.println("tile " + keep + ": span minimum " + least + " above site " + s);
+          }
+        }
+        if (span.setAside().wireTouched() > 0) {
+          System.out.println("tile " + keep + ": span " + span.id() + " minimum "
+              + String.format(Locale.ROOT, "%.3f", least) + " m, notes " + span.notes());
+        }
+      }
+      int strict = notVegetation - classOneCrown;
       String f = String.format(Locale.ROOT, "%s: zone sites %d (labelled run %d), not on"
           + " vegetation %d (of them with no labelled vegetation within 0.3 m %d: vendor class 1"
-          + " %d, of them in a crown %d, tower or crane 15/26 %d); spans with labelled zone"
+          + " %d, of them in a crown %d, tower or crane 15/26 %d; not vegetation when crowns"
+          + " count as vegetation %d = %.1f %%); spans with labelled zone"
           + " sites left without one %d;"
           + " labelled zone sites without a match %d; fall-in sites %d, at no labelled tree of"
-          + " that height %d", keep, zoneSites,
+          + " that height %d; wire points touched by vegetation measured %d, spans whose minimum"
+          + " stands on one %d", keep, zoneSites,
           labelled.sites().stream().filter(s -> !s.zone().equals("fall-in")).count(),
-          notVegetation, notAtVegetation, classOne, classOneCrown, manMade, spansFalseClear,
-          missed, fallIn, fallInWrong);
+          notVegetation, notAtVegetation, classOne, classOneCrown, manMade, strict,
+          zoneSites == 0 ? 0.0 : 100.0 * strict / zoneSites, spansFalseClear,
+          missed, fallIn, fallInWrong, touched, minimaOnWire);
       System.out.println("tile " + f);
       figures.append(f).append('\n');
       assertEquals(0, spansFalseClear, f);
       assertEquals(0, missed, f);
       // Issue 9: no site on a tower or a crane (the labelling step, docs/labelling.md) and every
-      // fall-in site at a labelled tree of that height. Sites on wire points with labelled
-      // vegetation within 0.3 m mark that vegetation (the wire finder measures such points);
+      // fall-in site at a labelled tree of that height. A wire point with vegetation within
+      // 0.3 m is measured but a site holding it stands on the vegetation (docs/clearance.md);
       // sites on vendor class 1 lie in a tree belt the vendor left unclassified (AHN's class 1
       // holds its vegetation; docs/labelling.md): each must show crown evidence of its own
       // (crownEvidence), so that no site stands on something shown not to be vegetation.
@@ -259,6 +288,10 @@ class UnlabelledTileTest {
       assertEquals(0, fallInWrong, f);
       assertEquals(notAtVegetation, classOne, f);
       assertEquals(classOne, classOneCrown, f);
+      // Issue 9's share: at most 2 % of zone sites not on vegetation, the class-1 sites with
+      // crown evidence counted as vegetation (the argument above).
+      assertTrue(strict <= 0.02 * zoneSites, f);
+      assertEquals(0, minimumAboveSite, f);
     }
     assertTrue(labelled.sites().size() >= 3, "labelled sites: " + labelled.sites().size());
   }
@@ -312,7 +345,8 @@ class UnlabelledTileTest {
           Integer.parseInt(f[header.indexOf("priority")]), f[header.indexOf("zone")],
           Double.parseDouble(f[coord(header, "x")]), Double.parseDouble(f[coord(header, "y")]),
           Double.parseDouble(f[coord(header, "z")]),
-          h.isEmpty() ? Double.NaN : Double.parseDouble(h)));
+          h.isEmpty() ? Double.NaN : Double.parseDouble(h),
+          Double.parseDouble(f[header.indexOf("min_clearance_m")])));
     }
     return out;
   }

@@ -18,10 +18,20 @@ import org.clearance.rules.ZoneViolation;
  * @param allowedTopNow highest elevation that clears the zone today (no growth), m
  * @param interval the distance interval and verdict at the profile's confidence level, or empty
  *     when the profile asks for none
+ * @param wireTouched a point on a wire touched by vegetation ({@code
+ *     PointClearance.wireTouched}): probably the wire itself; a site stands on the vegetation
+ *     beside it ({@link SiteBuilder})
  */
 record EncroachingPoint(double x, double y, double z, double heightAboveGround,
     ZoneViolation violation, double years, double allowedTop, double allowedTopNow,
-    Optional<FindingInterval> interval) {
+    Optional<FindingInterval> interval, boolean wireTouched) {
+
+  EncroachingPoint(double x, double y, double z, double heightAboveGround,
+      ZoneViolation violation, double years, double allowedTop, double allowedTopNow,
+      Optional<FindingInterval> interval) {
+    this(x, y, z, heightAboveGround, violation, years, allowedTop, allowedTopNow, interval,
+        false);
+  }
 
   EncroachingPoint(double x, double y, double z, double heightAboveGround,
       ZoneViolation violation, double years, double allowedTop, double allowedTopNow) {

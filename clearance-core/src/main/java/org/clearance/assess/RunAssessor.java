@@ -243,7 +243,7 @@ public final class RunAssessor {
       if (f.verdict() == PointFinding.Verdict.INSIDE_ZONE) {
         inside.add(new EncroachingPoint(p.x(), p.y(), p.z(), p.heightAboveGround(),
             f.violation().orElseThrow(), f.yearsToViolation(), allowedTop(p, true),
-            allowedTop(p, false), o.interval()));
+            allowedTop(p, false), o.interval(), p.wireTouched()));
       } else if (f.verdict() == PointFinding.Verdict.NOT_ASSESSED && notAssessed++ == 0) {
         firstNotAssessed = f.notAssessedReason().orElse("");
       }

@@ -19,6 +19,13 @@ import org.locationtech.jts.algorithm.ConvexHull;
  * site's tallest point above ground; the cut height is {@link CutHeight}'s; area is the plan area
  * of the convex hull of the site's points (JTS {@code ConvexHull}); years to violation the
  * smallest of its points'.
+ *
+ * <p>A point on a wire touched by vegetation ({@link EncroachingPoint#wireTouched}) is probably
+ * the wire itself: where a site holds vegetation points besides, it stands on them (position,
+ * heights, cut height, area, point count, and its clearance when they reach the same zone), so
+ * a crew is sent to the vegetation, never to the conductor. Its zone is never made less urgent
+ * by this: a zone reached only by the wire point keeps the site in it. The span's minimum is
+ * not computed here and keeps the measured value (docs/clearance.md).
  */
 final class SiteBuilder {
 
@@ -72,17 +79,19 @@ final class SiteBuilder {
   }
 
   private static CutSite site(String spanId, SpanFrame frame, List<EncroachingPoint> g) {
-    EncroachingPoint gov = null;
+    List<EncroachingPoint> vegetation = g.stream().filter(p -> !p.wireTouched()).toList();
+    List<EncroachingPoint> on = vegetation.isEmpty() ? g : vegetation;
+    EncroachingPoint deepest = governing(g);
+    EncroachingPoint stand = governing(on);
+    // A zone reached only by a wire point touched by vegetation keeps the site in that zone
+    // (never dropped nor made less urgent); the site still stands on the vegetation.
+    EncroachingPoint gov = stand.priority() == deepest.priority() ? stand : deepest;
     double tallest = Double.NaN;
     double years = Double.NaN;
     double cut = Double.POSITIVE_INFINITY;
     double cutNow = Double.POSITIVE_INFINITY;
     boolean cutKnown = true;
-    for (EncroachingPoint p : g) {
-      if (gov == null || p.priority() < gov.priority() || (p.priority() == gov.priority()
-          && p.violation().deficitM() > gov.violation().deficitM())) {
-        gov = p;
-      }
+    for (EncroachingPoint p : on) {
       if (Double.isFinite(p.heightAboveGround())) {
         tallest = Double.isNaN(tallest) ? p.heightAboveGround()
             : Math.max(tallest, p.heightAboveGround());
@@ -101,6 +110,9 @@ final class SiteBuilder {
       cut = Math.min(cut, p.allowedTop() - ground);
       cutNow = Math.min(cutNow, p.allowedTopNow() - ground);
     }
+    if (gov != stand && !Double.isNaN(gov.years())) {
+      years = Double.isNaN(years) ? gov.years() : Math.min(years, gov.years());
+    }
     double cutTo = !cutKnown || Double.isInfinite(cut) ? Double.NaN : Math.max(0, cut);
     double cutToNow = !cutKnown || Double.isInfinite(cutNow) || Double.isNaN(cutNow)
         ? Double.NaN : Math.max(0, cutNow);
@@ -108,17 +120,29 @@ final class SiteBuilder {
     double offset = Double.NaN;
     CutSite.Side side = CutSite.Side.CENTRE;
     if (frame != null) {
-      chainage = frame.station(gov.x(), gov.y());
-      double e = frame.offset(gov.x(), gov.y());
+      chainage = frame.station(stand.x(), stand.y());
+      double e = frame.offset(stand.x(), stand.y());
       offset = Math.abs(e);
       side = sideOf(e);
     }
     var v = gov.violation();
     return new CutSite("", spanId, CutSite.Kind.GROW_IN, v.zone().priority(), v.zone().name(),
         v.zone().violationReference(), v.condition(), v.actualM(), v.requiredM(), v.deficitM(),
-        gov.x(), gov.y(), gov.z(), Double.NaN, Double.NaN, chainage, side, offset, tallest,
-        cutTo, OptionalInt.of(g.size()), planArea(g), years, v.conductor(), cutToNow,
+        stand.x(), stand.y(), stand.z(), Double.NaN, Double.NaN, chainage, side, offset,
+        tallest, cutTo, OptionalInt.of(on.size()), planArea(on), years, v.conductor(), cutToNow,
         siteInterval(gov, g));
+  }
+
+  /** The point of the most urgent zone deepest inside it (largest deficit). */
+  private static EncroachingPoint governing(List<EncroachingPoint> g) {
+    EncroachingPoint gov = null;
+    for (EncroachingPoint p : g) {
+      if (gov == null || p.priority() < gov.priority() || (p.priority() == gov.priority()
+          && p.violation().deficitM() > gov.violation().deficitM())) {
+        gov = p;
+      }
+    }
+    return gov;
   }
 
   /** The governing point's interval, a violation when any point of the site is one. */

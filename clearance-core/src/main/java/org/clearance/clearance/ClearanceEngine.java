@@ -309,6 +309,8 @@ public final class ClearanceEngine {
       long exAirborne = 0;
       long exObject = 0;
       long exCrossing = 0;
+      long touched = 0;
+      long distrusted = 0;
       long unread = 0;
       double unreadNearest = Double.POSITIVE_INFINITY;
       java.util.BitSet unreadClasses = new java.util.BitSet(256);
@@ -316,6 +318,8 @@ public final class ClearanceEngine {
         exAirborne += w.excludedAirborne[i];
         exObject += w.excludedObject[i];
         exCrossing += w.excludedCrossing[i];
+        touched += w.wireTouched[i];
+        distrusted += w.labelsDistrusted[i];
         unread += w.unreadCount[i];
         unreadNearest = Math.min(unreadNearest, w.unreadNearest[i]);
         unreadClasses.or(w.unreadClasses[i]);
@@ -324,13 +328,19 @@ public final class ClearanceEngine {
         exConductor += w.excludedConductor[i];
         exStructure += w.excludedStructure[i];
       }
+      List<String> onWire = new ArrayList<>();
       for (int k = 0; k < nc; k++) {
         ConditionMinimum best = null;
+        boolean bestOnWire = false;
         for (EngineWorker w : workers) {
           ConditionMinimum m = w.minimum[i][k];
           if (m != null && (best == null || m.distance() < best.distance())) {
             best = m;
+            bestOnWire = w.minimumOnWire[i][k];
           }
+        }
+        if (bestOnWire) {
+          onWire.add(conditions.names().get(k));
         }
         minima.add(best != null ? best : new ConditionMinimum(conditions.names().get(k),
             conditions.groups().get(k), Double.NaN, Double.NaN, Double.NaN, "", Double.NaN,
@@ -339,7 +349,7 @@ public final class ClearanceEngine {
       result.add(new SpanClearance(p.model.span().id(), minima, measured, kept, exConductor,
           exStructure, exAirborne, new SpanClearance.Unread(unread,
               unread > 0 ? unreadNearest : Double.NaN, unreadClasses.stream().boxed().toList()),
-          exObject, exCrossing));
+          exObject, exCrossing, touched, distrusted, onWire));
     }
     return result;
   }

@@ -7,6 +7,7 @@ import java.util.List;
 import java.util.function.Consumer;
 import org.clearance.ground.CanopyBuilder;
 import org.clearance.ground.HeightModel;
+import org.clearance.label.WireLabels;
 import org.clearance.line.ConductorPosition.Role;
 import org.clearance.survey.PointChunk;
 import org.clearance.wire.SetAside;
@@ -62,12 +63,22 @@ final class EngineWorker implements Consumer<PointChunk> {
   final long[] excludedAirborne;
   final long[] excludedObject;
   final long[] excludedCrossing;
+  /** Per span: points on a wire touched by vegetation, measured ({@link SetAside#touchedWire}). */
+  final long[] wireTouched;
+  /** Per span: points whose label was not believed (a class-2 point high above the ground model
+   * measured as unclassified, a vegetation label on a man-made object set aside). */
+  final long[] labelsDistrusted;
+  /** Per span and condition: whether this worker's minimum stands on a touched wire point. */
+  final boolean[][] minimumOnWire;
   /** Per span: points of classes not read that may be vegetation within the keep radius, the
    * nearest of them (m) and their classes. */
   final long[] unreadCount;
   final double[] unreadNearest;
   final java.util.BitSet[] unreadClasses;
   private final SetAside setAside;
+  /** Whether some wire labels are not believed ({@link SetAside#labelDistrusted}): then class
+   * 13/14 points are looked up. */
+  private final boolean relabels;
   /** The conductor roles measured apart, indexed by ordinal. */
   private static final Role[] ROLES = Role.values();
   private static final int PHASE = Role.PHASE.ordinal();
@@ -90,6 +101,7 @@ final class EngineWorker implements Consumer<PointChunk> {
       NearPointWriter out, CanopyBuilder.Batch canopy, SetAside setAside, List<Double> voltages,
       int[][][] voltageGroups) {
     this.setAside = setAside;
+    this.relabels = vegetation.inferred() && setAside.distrustedCount() > 0;
     this.voltages = voltages;
     this.voltageGroups = voltageGroups;
     this.spans = spans;
@@ -110,6 +122,9 @@ final class EngineWorker implements Consumer<PointChunk> {
     excludedAirborne = new long[n];
     excludedObject = new long[n];
     excludedCrossing = new long[n];
+    wireTouched = new long[n];
+    labelsDistrusted = new long[n];
+    minimumOnWire = new boolean[n][nc];
     unreadCount = new long[n];
     unreadNearest = new double[n];
     java.util.Arrays.fill(unreadNearest, Double.POSITIVE_INFINITY);
@@ -138,15 +153,18 @@ final class EngineWorker implements Consumer<PointChunk> {
         continue;
       }
       boolean read = vegetation.candidateClass(cls[i]);
-      if (!read && !vegetation.mayBeUnread(cls[i])) {
+      // a crown a vendor labelled wire (issue 9): measured as an unclassified point
+      boolean relabelled = !read && relabels && WireLabels.wireClass(cls[i])
+          && setAside.labelDistrusted(SetAside.key(xs[i], ys[i], zs[i]));
+      if (!read && !relabelled && !vegetation.mayBeUnread(cls[i])) {
         continue;
       }
       int[] candidates = index.spansAt(xs[i], ys[i]);
       if (candidates.length == 0) {
         continue;
       }
-      if (read) {
-        point(candidates, xs[i], ys[i], zs[i], cls[i]);
+      if (read || relabelled) {
+        point(candidates, xs[i], ys[i], zs[i], cls[i], relabelled);
       } else {
         unreadPoint(candidates, xs[i], ys[i], zs[i], cls[i]);
       }
@@ -156,13 +174,15 @@ final class EngineWorker implements Consumer<PointChunk> {
     }
   }
 
-  private void point(int[] candidates, double x, double y, double z, int cls) {
+  private void point(int[] candidates, double x, double y, double z, int cls,
+      boolean relabelled) {
     double hag = Double.NaN;
     boolean hagDone = false;
     boolean inTreeRegion = false;
     boolean notVegetation = false;
     SetAside.Reason reason = null;
-    boolean inferredPoint = vegetation.inferredClass(cls);
+    boolean touched = false;
+    boolean inferredPoint = relabelled || vegetation.inferredClass(cls);
     for (int sp : candidates) {
       PreparedSpan p = spans.get(sp);
       double s = p.frame.station(x, y);
@@ -190,10 +210,16 @@ final class EngineWorker implements Consumer<PointChunk> {
       }
       if (vegetation.inferred()) {
         if (reason == null) {
-          reason = setAside.reason(SetAside.key(x, y, z));
+          long key = SetAside.key(x, y, z);
+          reason = setAside.reason(key);
+          touched = reason == SetAside.Reason.NONE && setAside.touchedWire(key);
         }
         if (reason != SetAside.Reason.NONE) {
           if (p.inBox(s, e, z)) {
+            if (reason == SetAside.Reason.OBJECT && VegetationSelector.DEFAULT_CLASSES
+                .contains(cls)) {
+              labelsDistrusted[sp]++;
+            }
             (switch (reason) {
               case WIRE -> excludedConductor;
               case OBJECT -> excludedObject;
@@ -206,10 +232,17 @@ final class EngineWorker implements Consumer<PointChunk> {
         }
       }
       if (p.inBox(s, e, z)) {
-        measure(p, s, x, y, z, cls, hag);
+        if (touched) {
+          wireTouched[sp]++;
+        }
+        if (relabelled || inferredPoint && cls == VegetationSelector.GROUND) {
+          labelsDistrusted[sp]++;
+        }
+        measure(p, s, x, y, z, cls, hag, touched);
       }
     }
-    if (canopy != null && inTreeRegion && !notVegetation && hag >= CANOPY_MIN_HEIGHT_M) {
+    if (canopy != null && inTreeRegion && !notVegetation && !touched
+        && hag >= CANOPY_MIN_HEIGHT_M) {
       canopy.add(x, y, z);
     }
   }
@@ -268,7 +301,7 @@ final class EngineWorker implements Consumer<PointChunk> {
    * within the keep radius of any conductor, so a zone that names another role can be checked.
    */
   private void measure(PreparedSpan p, double s, double x, double y, double z, int cls,
-      double hag) {
+      double hag, boolean touched) {
     int sp = p.index;
     int nc = conditions.size();
     if (p.belowFloor(s, z) && minimaWithinReach(p)) {
@@ -372,6 +405,7 @@ final class EngineWorker implements Consumer<PointChunk> {
         if (newMinimum) {
           minimum[sp][k] = new ConditionMinimum(name, group, cd.distance(), cd.horizontal(),
               cd.vertical(), p.names[j], x, y, z);
+          minimumOnWire[sp][k] = touched;
         }
         if (list != null) {
           double station = p.frame.station(cd.closestX(), cd.closestY());
@@ -384,7 +418,7 @@ final class EngineWorker implements Consumer<PointChunk> {
       kept[sp]++;
       buffer.add(new PointClearance(p.model.span().id(), x, y, z, cls, hag,
           details.get(Role.PHASE.ordinal()), details.get(Role.NEUTRAL.ordinal()),
-          details.get(Role.SHIELD.ordinal()), byVoltage(p, nc, x, y, z)));
+          details.get(Role.SHIELD.ordinal()), byVoltage(p, nc, x, y, z), touched));
     }
   }
 

@@ -21,7 +21,8 @@ import org.clearance.line.ConductorPosition.Role;
  * one entry {@code phase@<kV>} per voltage, e.g. {@code phase@12.47}; every string is an int16
  * byte length and UTF-8 bytes). Records follow to the end of
  * the file, each: int32 span index; float64 x, y, z (metres, survey CRS scaled to metres); int16
- * ASPRS class; float32 height above ground (m, NaN when unknown); then per role, in header
+ * ASPRS class in the low 8 bits, plus {@link #WIRE_TOUCHED_BIT} for a point on a wire touched by
+ * vegetation ({@code PointClearance.wireTouched}; files written before it never set it); float32 height above ground (m, NaN when unknown); then per role, in header
  * order, per condition, in header order: float32 distance, horizontal, vertical (m), int16
  * conductor index (-1: none of that role), float32 station (m): the nearest conductor of that
  * role; then the same per voltage entry: the nearest energised conductor of that voltage. Float32 keeps distances to well under a
@@ -50,6 +51,9 @@ public record NearPointFile(
   /** File name inside a run folder. */
   public static final String FILE_NAME = "near-points.bin";
   /** Magic bytes and format version. */
+  /** Bit of the class field marking a point on a wire touched by vegetation. */
+  static final int WIRE_TOUCHED_BIT = 0x100;
+
   static final byte[] MAGIC = {'C', 'L', 'R', 'N', 'E', 'A', 'R', '3'};
   /** Magic bytes of the trailer. */
   static final byte[] END = {'C', 'L', 'R', 'N', 'E', 'N', 'D', '3'};

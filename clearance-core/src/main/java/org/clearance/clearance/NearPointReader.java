@@ -81,7 +81,13 @@ public final class NearPointReader {
         double x = buf.getDouble();
         double y = buf.getDouble();
         double z = buf.getDouble();
-        int cls = buf.getShort();
+        int field = buf.getShort() & 0xFFFF;
+        if ((field & ~(0xFF | NearPointFile.WIRE_TOUCHED_BIT)) != 0) {
+          throw new InputException(file, where, "class", "class field " + field
+              + " is no ASPRS class (0-255) with the touched-wire mark" + RERUN);
+        }
+        int cls = field & 0xFF;
+        boolean touched = (field & NearPointFile.WIRE_TOUCHED_BIT) != 0;
         double hag = buf.getFloat();
         List<List<ConditionDistance>> byRole = new ArrayList<>();
         List<Role> entries = new ArrayList<>(layout.roles());
@@ -117,7 +123,7 @@ public final class NearPointReader {
         }
         sink.accept(new PointClearance(layout.spanIds().get(span), x, y, z, cls, hag,
             byRole.get(0), roleList(layout, byRole, Role.NEUTRAL),
-            roleList(layout, byRole, Role.SHIELD), circuits));
+            roleList(layout, byRole, Role.SHIELD), circuits, touched));
       }
       RecordFiles.checkTrailer(file, in, crc, NearPointFile.END, records);
       return layout;

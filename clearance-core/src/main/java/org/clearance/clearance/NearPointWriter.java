@@ -96,7 +96,8 @@ public final class NearPointWriter implements Closeable {
             + p.distances().size());
       }
       buf.putInt(span).putDouble(p.x()).putDouble(p.y()).putDouble(p.z())
-          .putShort((short) p.classification()).putFloat((float) p.heightAboveGround());
+          .putShort((short) (p.classification()
+              | (p.wireTouched() ? NearPointFile.WIRE_TOUCHED_BIT : 0))).putFloat((float) p.heightAboveGround());
       List<List<ConditionDistance>> groups = new java.util.ArrayList<>();
       for (Role role : layout.roles()) {
         groups.add(p.distances(role));

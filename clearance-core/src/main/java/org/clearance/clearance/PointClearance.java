@@ -33,6 +33,10 @@ import org.clearance.line.ConductorPosition.Role;
  * @param circuits when the span's energised conductors carry more than one voltage (issue 15:
  *     underbuild), per voltage the distances to the nearest energised conductor of that voltage
  *     (a wire of no known position counts at every voltage); empty otherwise
+ * @param wireTouched true when the point lies on a wire but vegetation lies within the wire
+ *     finder's touch distance of it ({@code SetAside.touchedWire}): probably the wire itself,
+ *     measured because a branch on the wire and the wire cannot be told apart. It may set the
+ *     span's minimum; a site stands on the vegetation beside it (docs/clearance.md)
  */
 public record PointClearance(
     String spanId,
@@ -44,7 +48,8 @@ public record PointClearance(
     List<ConditionDistance> distances,
     List<ConditionDistance> neutral,
     List<ConditionDistance> shield,
-    List<VoltageDistances> circuits) {
+    List<VoltageDistances> circuits,
+    boolean wireTouched) {
 
   /**
    * The distances to the nearest energised conductor of one voltage.
@@ -77,6 +82,15 @@ public record PointClearance(
     }
   }
 
+  /** A point that is not a wire point touched by vegetation. */
+  public PointClearance(String spanId, double x, double y, double z, int classification,
+      double heightAboveGround, List<ConditionDistance> distances,
+      List<ConditionDistance> neutral, List<ConditionDistance> shield,
+      List<VoltageDistances> circuits) {
+    this(spanId, x, y, z, classification, heightAboveGround, distances, neutral, shield,
+        circuits, false);
+  }
+
   /** A point whose energised conductors carry one voltage. */
   public PointClearance(String spanId, double x, double y, double z, int classification,
       double heightAboveGround, List<ConditionDistance> distances,
@@ -95,7 +109,7 @@ public record PointClearance(
     for (VoltageDistances v : circuits) {
       if (v.kv() == kv) {
         return new PointClearance(spanId, x, y, z, classification, heightAboveGround,
-            v.distances(), neutral, shield);
+            v.distances(), neutral, shield, List.of(), wireTouched);
       }
     }
     return this;
@@ -138,7 +152,7 @@ public record PointClearance(
     return new PointClearance(spanId, x, y, z, classification, heightAboveGround,
         distances.stream().map(f).toList(), neutral.stream().map(f).toList(),
         shield.stream().map(f).toList(), circuits.stream().map(v -> new VoltageDistances(v.kv(),
-            v.distances().stream().map(f).toList())).toList());
+            v.distances().stream().map(f).toList())).toList(), wireTouched);
   }
 
   /** The smallest distance to an energised conductor over all conditions. */

@@ -23,11 +23,28 @@ import java.util.Optional;
  *     as parts of man-made objects (the labelling step's evidence, docs/labelling.md)
  * @param excludedAsCrossing points of an unclassified survey inside the measuring box set aside
  *     as points of a wire crossing the span (docs/wire-finder.md, "Crossing wires")
+ * @param wireTouched points inside the measuring box on a wire but touched by vegetation
+ *     (within the wire finder's touch distance), measured: probably the wire itself
+ *     ({@code SetAside.touchedWire}; docs/clearance.md, "A wire touched by vegetation")
+ * @param labelsDistrusted points inside the measuring box whose label was not believed: a
+ *     class-2 point high above the ground model measured as unclassified, a vegetation label on
+ *     a man-made or linear object set aside (docs/labelling.md, "Partly labelled surveys")
+ * @param minimumOnWire the conditions (names, run order) whose minimum stands on a point of
+ *     {@code wireTouched}
  */
 public record SpanClearance(
     String spanId, List<ConditionMinimum> minima, long pointsMeasured, long pointsKept,
     long excludedAsConductor, long excludedAsStructure, long excludedAsAirborne, Unread unread,
-    long excludedAsObject, long excludedAsCrossing) {
+    long excludedAsObject, long excludedAsCrossing, long wireTouched, long labelsDistrusted,
+    List<String> minimumOnWire) {
+
+  /** A span's measurement without wire points touched by vegetation or labels distrusted. */
+  public SpanClearance(String spanId, List<ConditionMinimum> minima, long pointsMeasured,
+      long pointsKept, long excludedAsConductor, long excludedAsStructure,
+      long excludedAsAirborne, Unread unread, long excludedAsObject, long excludedAsCrossing) {
+    this(spanId, minima, pointsMeasured, pointsKept, excludedAsConductor, excludedAsStructure,
+        excludedAsAirborne, unread, excludedAsObject, excludedAsCrossing, 0, 0, List.of());
+  }
 
   /** A span's measurement without crossing wires set aside. */
   public SpanClearance(String spanId, List<ConditionMinimum> minima, long pointsMeasured,
@@ -80,6 +97,7 @@ public record SpanClearance(
     Objects.requireNonNull(spanId, "spanId");
     minima = List.copyOf(minima);
     Objects.requireNonNull(unread, "unread");
+    minimumOnWire = List.copyOf(minimumOnWire);
   }
 
   /** The smallest distance over the conditions of a group, or empty when none was measured. */

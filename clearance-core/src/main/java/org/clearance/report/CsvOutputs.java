@@ -63,7 +63,8 @@ public final class CsvOutputs {
     OutputUnit u = new OutputUnit(options.outputUnit());
     h.addAll(List.of("points_set_aside_crossing", "n_crossings", "crossing_x_" + hu,
         "crossing_y_" + hu, "crossing_z_" + su.vertical().symbol(),
-        u.column("crossing_separation")));
+        u.column("crossing_separation"), "points_wire_touched_measured",
+        "points_label_distrusted"));
     return h;
   }
 
@@ -178,6 +179,8 @@ public final class CsvOutputs {
       f.add(c == null ? "" : OutputUnit.fixed(su.vertical().fromMetres(c.z()),
           LENGTH_DECIMALS));
       f.add(u.lengthText(c == null ? Double.NaN : c.separationM()));
+      f.add(Long.toString(s.setAside().wireTouched()));
+      f.add(Long.toString(s.setAside().labelsDistrusted()));
       row(b, f);
     }
     return b.toString();

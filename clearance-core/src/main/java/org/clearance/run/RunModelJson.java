@@ -155,7 +155,9 @@ public final class RunModelJson {
         .put("points_set_aside_structure", s.setAside().structure())
         .put("points_set_aside_airborne", s.setAside().airborne())
         .put("points_set_aside_object", s.setAside().object())
-        .put("points_set_aside_crossing", s.setAside().crossing());
+        .put("points_set_aside_crossing", s.setAside().crossing())
+        .put("points_wire_touched_measured", s.setAside().wireTouched())
+        .put("points_label_distrusted", s.setAside().labelsDistrusted());
     ArrayNode crossings = o.putArray("crossings");
     for (Crossing k : s.crossings()) {
       ObjectNode n = crossings.addObject();
@@ -305,7 +307,8 @@ public final class RunModelJson {
           s.integer("points_kept", 0, Long.MAX_VALUE), s.strings("notes"),
           new SpanRecord.SetAsideCounts(count(s, "points_set_aside_wire"),
               count(s, "points_set_aside_structure"), count(s, "points_set_aside_airborne"),
-              count(s, "points_set_aside_object"), count(s, "points_set_aside_crossing")),
+              count(s, "points_set_aside_object"), count(s, "points_set_aside_crossing"),
+              count(s, "points_wire_touched_measured"), count(s, "points_label_distrusted")),
           temperature(s), crossings(s));
     } catch (IllegalArgumentException e) {
       throw s.error(null, e.getMessage() + RERUN);

@@ -80,11 +80,22 @@ public record SpanRecord(
    * @param airborne isolated airborne points (birds, high noise)
    * @param object parts of man-made objects (buildings, cranes, masts, fences, vehicles)
    * @param crossing points of wires crossing the span (service drops, lines crossing it)
+   * @param wireTouched points on a wire touched by vegetation: not set aside but measured, as a
+   *     branch on the wire and the wire cannot be told apart (docs/clearance.md, "A wire
+   *     touched by vegetation"); counted here with the points set aside so a reviewer sees them
+   * @param labelsDistrusted points whose vendor label was not believed (docs/labelling.md,
+   *     "Partly labelled surveys"): measured as unclassified, or set aside as a man-made object
+   *     (then in {@code object} too)
    */
   public record SetAsideCounts(long wire, long structure, long airborne, long object,
-      long crossing) {
+      long crossing, long wireTouched, long labelsDistrusted) {
     /** Nothing set aside. */
     public static final SetAsideCounts NONE = new SetAsideCounts(0, 0, 0, 0, 0);
+
+    /** Counts without touched wire points or distrusted labels. */
+    public SetAsideCounts(long wire, long structure, long airborne, long object, long crossing) {
+      this(wire, structure, airborne, object, crossing, 0, 0);
+    }
 
     /** Counts without crossing wires. */
     public SetAsideCounts(long wire, long structure, long airborne, long object) {

@@ -30,7 +30,8 @@ import org.clearance.io.DisjointSets;
  * points within {@value #POLE_RADIUS_M} m of a pole join no group. A wire point with a point of
  * another group (vegetation) within
  * {@value #TOUCH_M} m is not set aside: where a branch touches a wire the two cannot be told
- * apart, and the point is measured.
+ * apart, and the point is measured ({@link SetAside#touchedWire}: a site then stands on the
+ * vegetation beside it, docs/clearance.md).
  */
 final class PointEvidence {
 
@@ -222,6 +223,7 @@ final class PointEvidence {
         continue;
       }
       if (touched(grid, i, vegetation, near)) {
+        out.addTouched(p.key(i));
         continue;
       }
       if (on[i]) {

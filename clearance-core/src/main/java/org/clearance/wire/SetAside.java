@@ -37,6 +37,11 @@ public final class SetAside {
   private final LongHashSet airborne = new LongHashSet();
   private final LongHashSet object = new LongHashSet();
   private final LongHashSet crossing = new LongHashSet();
+  /** Points on a wire that are measured all the same, because vegetation touches them. */
+  private final LongHashSet touched = new LongHashSet();
+  /** Points of a class that rules out vegetation whose label the labelling step does not
+   * believe (a crown labelled wire): measured as unclassified. */
+  private final LongHashSet distrusted = new LongHashSet();
 
   /** An empty set: nothing is set aside. */
   public static SetAside none() {
@@ -60,7 +65,19 @@ public final class SetAside {
 
   /** A set of the given keys: wire points, isolated airborne points, crossing wires' points. */
   public static SetAside of(long[] wireKeys, long[] airborneKeys, long[] crossingKeys) {
+    return of(wireKeys, airborneKeys, crossingKeys, new long[0]);
+  }
+
+  /**
+   * A set of the given keys: wire points, isolated airborne points, crossing wires' points, and
+   * wire points touched by vegetation ({@link #touchedWire}).
+   */
+  public static SetAside of(long[] wireKeys, long[] airborneKeys, long[] crossingKeys,
+      long[] touchedKeys) {
     SetAside s = new SetAside();
+    for (long k : touchedKeys) {
+      s.addTouched(k);
+    }
     for (long k : crossingKeys) {
       s.addCrossing(k);
     }
@@ -83,6 +100,46 @@ public final class SetAside {
 
   synchronized void addCrossing(long key) {
     crossing.add(key);
+  }
+
+  synchronized void addTouched(long key) {
+    touched.add(key);
+  }
+
+  /**
+   * Whether the point with this key lies on a wire (on a fitted curve within its fit tolerance,
+   * or on a crossing wire) yet is not set aside because vegetation lies within the touch
+   * distance of it (docs/wire-finder.md, "Points set aside"): the point is probably the wire
+   * itself, but a branch on the wire and the wire cannot be told apart, so it is measured. Its
+   * {@link #reason} is {@link Reason#NONE} unless another span's evidence sets it aside.
+   */
+  public boolean touchedWire(long key) {
+    return touched.contains(key);
+  }
+
+  /**
+   * Adds a point whose label rules out vegetation but whose object the labelling step shows to
+   * be a crown (a crown labelled wire, {@code org.clearance.label.WireLabels}): called before
+   * the engine reads the set.
+   */
+  public synchronized void addDistrustedLabel(long key) {
+    distrusted.add(key);
+  }
+
+  /** Whether the point with this key is one of {@link #addDistrustedLabel}: the engine measures
+   * it as an unclassified point. */
+  public boolean labelDistrusted(long key) {
+    return distrusted.contains(key);
+  }
+
+  /** Points whose label is not believed ({@link #addDistrustedLabel}). */
+  public long distrustedCount() {
+    return distrusted.size();
+  }
+
+  /** The keys of the wire points touched by vegetation ({@link #touchedWire}), in no order. */
+  public synchronized long[] touchedKeys() {
+    return touched.toArray();
   }
 
   /** Adds a point of a man-made object: called by the labelling step before the engine reads

@@ -32,6 +32,10 @@ import org.clearance.survey.Survey;
  */
 public final class WireFinder {
 
+  /** A wire point with vegetation this near is measured, not set aside, m
+   * ({@link PointEvidence#TOUCH_M}; docs/wire-finder.md, "Points set aside"). */
+  public static final double TOUCH_M = PointEvidence.TOUCH_M;
+
   private final WireFinderOptions options;
 
   /** A finder with the given options. */

@@ -190,6 +190,36 @@ class ClearanceEngineTest {
   }
 
   @Test
+  void touchedWirePointsAndDistrustedLabelsAreMeasuredAndCounted() {
+    // Issue 9: a wire point touched by vegetation is measured (it may set the minimum) and
+    // counted; a crown labelled wire (14) the labelling step does not believe is measured and
+    // counted as a distrusted label; a class-14 point it believes is not measured.
+    ConditionSet set = new ConditionSet(List.of("survey"), List.of("survey"));
+    ConductorCurve a = conductor(0);
+    long[] counts = new long[256];
+    counts[5] = 1;
+    counts[14] = 3;
+    ClearanceEngine engine = new ClearanceEngine(List.of(span(set, List.of(hangingOnly("A", a,
+        1)))), set, (x, y, z) -> z, VegetationSelector.forSurvey(counts, null),
+        ClearanceEngine.Options.defaults(1));
+    double[][] pts = {
+      {150, 0.0, a.z(150) - 0.02, 1}, // on the wire, touched by the branch below
+      {150, 0.1, a.z(150) - 0.2, 5}, // the branch: 0.22 m from the wire
+      {120, 2, a.z(120) - 2, 14}, // a crown labelled wire: 2.83 m from it
+      {100, 0.0, a.z(100), 14}, // the wire itself, labelled: never measured
+    };
+    SetAside aside = SetAside.of(new long[0], new long[0], new long[0],
+        new long[] {SetAside.key(150, 0.0, a.z(150) - 0.02)});
+    aside.addDistrustedLabel(SetAside.key(120, 2, a.z(120) - 2));
+    SpanClearance r = engine.measure(points(pts), null, aside).spans().get(0);
+    assertEquals(3, r.pointsMeasured());
+    assertEquals(1, r.wireTouched());
+    assertEquals(1, r.labelsDistrusted());
+    assertEquals(0.02, r.minima().get(0).distance(), 2e-3);
+    assertEquals(List.of("survey"), r.minimumOnWire());
+  }
+
+  @Test
   void deadEndHardwareOutToTheFittedConductorEndIsTheStructure() {
     // Regression, issue 9 (demo seed 29, ground-only and unlabelled): at a dead-end on a 31
     // degree turn the outer phase's strain insulator and jumper end 5.2 m along the line from

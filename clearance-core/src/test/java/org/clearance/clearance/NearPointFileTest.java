@@ -57,6 +57,28 @@ class NearPointFileTest {
   }
 
   /**
+   * Issue 9 (wire sites): a point on a wire touched by vegetation keeps its mark through the
+   * file (bit 8 of the class field) and its ASPRS class; other points read back unmarked.
+   */
+  @Test
+  void wireTouchedMarkRoundTrips() throws IOException {
+    List<ConditionDistance> ds = List.of(
+        new ConditionDistance("survey", "survey", 0.02, 0.01, -0.01, "P1", 50),
+        new ConditionDistance("hot", "hot", 0.5, 0.3, -0.4, "P2", 50));
+    PointClearance wire = new PointClearance("L/A-B", 1, 2, 3, 1, 9.5, ds, List.of(), List.of(),
+        List.of(), true);
+    PointClearance branch = new PointClearance("L/A-B", 1.1, 2, 3, 5, 9.5, ds);
+    Path f = write("touched.bin", List.of(branch, wire), 2);
+    List<PointClearance> back = new ArrayList<>();
+    NearPointReader.forEach(f, back::add);
+    assertEquals(2, back.size());
+    assertTrue(back.get(0).wireTouched(), back.get(0).toString());
+    assertEquals(1, back.get(0).classification());
+    assertTrue(!back.get(1).wireTouched(), back.get(1).toString());
+    assertEquals(5, back.get(1).classification());
+  }
+
+  /**
    * Issue 15: a point keeps its distance to the nearest neutral and shield wire beside the one
    * to the nearest energised conductor; a span without such conductors reads back without them.
    */

@@ -96,4 +96,44 @@ class PointEvidenceTest {
     assertEquals(Double.NEGATIVE_INFINITY, a.highestIn(0.0, 50.0, -15.5, 15.0));
     assertEquals(1, a.cells());
   }
+
+  /**
+   * A wire point with a vegetation point within the touch distance (0.3 m) is not set aside but
+   * marked touched (measured; the site stands on the vegetation, issue 9); a wire point with
+   * no vegetation that near is set aside as wire. Made-up points: wire points 1 m apart along a
+   * conductor 12 m above ground, a 4-point branch 0.2 m below the wire at station 20.
+   */
+  @Test
+  void wirePointTouchedByVegetationIsMarkedNotSetAside() {
+    SpanPoints p = new SpanPoints(100.0);
+    int wires = 30;
+    for (int i = 0; i < wires; i++) {
+      p.add(10.0 + i, 0.0, 112.0, 12.0, CandidateCollector.UNCLASSIFIED, i + 1L);
+    }
+    double[][] branch = {{20.0, 0.1, 11.8}, {20.3, -0.2, 11.5}, {19.8, 0.3, 11.2},
+      {20.1, 0.0, 10.9}};
+    for (int i = 0; i < branch.length; i++) {
+      double[] b = branch[i];
+      p.add(b[0], b[1], 100.0 + b[2], b[2], CandidateCollector.UNCLASSIFIED, 100L + i);
+    }
+    p.standing().add(20.2, 0.2, 8.0); // the crown under the branch: no bird
+    p.sort();
+    boolean[] on = new boolean[p.size()];
+    boolean[] none = new boolean[p.size()];
+    for (int i = 0; i < p.size(); i++) {
+      on[i] = p.key(i) <= wires;
+    }
+    SetAside out = SetAside.none();
+    PointEvidence.setAside(p, on, none, none, SetAside.none(), FLOOR_M, out);
+    long touched = 11; // the wire point at station 20: the branch's top 0.22 m from it
+    assertEquals(SetAside.Reason.NONE, out.reason(touched));
+    assertEquals(true, out.touchedWire(touched));
+    assertEquals(SetAside.Reason.WIRE, out.reason(1));
+    assertEquals(false, out.touchedWire(1));
+    for (long k = 100; k < 100 + branch.length; k++) {
+      assertEquals(SetAside.Reason.NONE, out.reason(k));
+      assertEquals(false, out.touchedWire(k));
+    }
+    assertEquals(1, out.touchedKeys().length);
+  }
 }

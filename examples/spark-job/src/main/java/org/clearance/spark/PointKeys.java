@@ -14,14 +14,16 @@ import java.io.Serializable;
  * @param airborne keys of isolated airborne points (empty for the wire points' message)
  * @param crossing keys of points of wires crossing the span (empty for the wire points'
  *     message)
+ * @param touched keys of wire points touched by vegetation, measured ({@link
+ *     org.clearance.wire.SetAside#touchedWire}; empty for the wire points' message)
  * @param failure null; else why the sending span could not set its points aside (the key
  *     lists are then null, and the span is reported NOT ASSESSED)
  */
-record PointKeys(int span, long[] wire, long[] airborne, long[] crossing, String failure)
-    implements Serializable {
+record PointKeys(int span, long[] wire, long[] airborne, long[] crossing, long[] touched,
+    String failure) implements Serializable {
 
   /** Keys without failure. */
-  PointKeys(int span, long[] wire, long[] airborne, long[] crossing) {
-    this(span, wire, airborne, crossing, null);
+  PointKeys(int span, long[] wire, long[] airborne, long[] crossing, long[] touched) {
+    this(span, wire, airborne, crossing, touched, null);
   }
 }

@@ -30,6 +30,8 @@ import org.clearance.clearance.VegetationSelector;
 import org.clearance.ground.GroundModel;
 import org.clearance.ground.GroundModelBuilder;
 import org.clearance.label.ObjectLabeller;
+import org.clearance.label.ObjectLabels;
+import org.clearance.label.WireLabels;
 import org.clearance.line.SpanLayout;
 import org.clearance.run.RunModel;
 import org.clearance.run.RunModelJson;
@@ -161,7 +163,7 @@ final class SpanStages {
   /** The keys of the span's wire points, for the spans near it ({@link #setAside}). */
   static PointKeys wireKeys(SpanFit fit) {
     return new PointKeys(fit.key(), fit.found() == null ? new long[0] : fit.found().wireKeys(),
-        new long[0], new long[0]);
+        new long[0], new long[0], new long[0]);
   }
 
   /**
@@ -174,51 +176,48 @@ final class SpanStages {
    */
   static PointKeys setAside(SpanFit fit, Iterable<PointKeys> wires) {
     if (fit.found() == null) {
-      return new PointKeys(fit.key(), new long[0], new long[0], new long[0]);
+      return new PointKeys(fit.key(), new long[0], new long[0], new long[0], new long[0]);
     }
     try {
       SetAside out = SetAside.none();
       fit.found().setAside(union(wires, false), out);
-      return new PointKeys(fit.key(), out.wireKeys(), out.airborneKeys(), out.crossingKeys());
+      return new PointKeys(fit.key(), out.wireKeys(), out.airborneKeys(), out.crossingKeys(),
+          out.touchedKeys());
     } catch (RuntimeException e) {
-      return new PointKeys(fit.key(), null, null, null, describe(e));
+      return new PointKeys(fit.key(), null, null, null, null, describe(e));
     }
   }
 
-  /** One set of the keys of every message ({@code withAirborne}: the airborne and crossing
-   * wires' keys too). */
+  /** One set of the keys of every message ({@code withAirborne}: the airborne, crossing
+   * wires' and touched wire points' keys too). */
   static SetAside union(Iterable<PointKeys> messages, boolean withAirborne) {
-    int nw = 0;
-    int na = 0;
-    int nc = 0;
+    List<long[]> w = new ArrayList<>();
+    List<long[]> a = new ArrayList<>();
+    List<long[]> c = new ArrayList<>();
+    List<long[]> t = new ArrayList<>();
     for (PointKeys m : messages) {
       if (m.wire() == null) {
         continue;
       }
-      nw += m.wire().length;
-      na += withAirborne ? m.airborne().length : 0;
-      nc += withAirborne ? m.crossing().length : 0;
-    }
-    long[] w = new long[nw];
-    long[] a = new long[na];
-    long[] c = new long[nc];
-    nw = 0;
-    na = 0;
-    nc = 0;
-    for (PointKeys m : messages) {
-      if (m.wire() == null) {
-        continue;
-      }
-      System.arraycopy(m.wire(), 0, w, nw, m.wire().length);
-      nw += m.wire().length;
+      w.add(m.wire());
       if (withAirborne) {
-        System.arraycopy(m.airborne(), 0, a, na, m.airborne().length);
-        na += m.airborne().length;
-        System.arraycopy(m.crossing(), 0, c, nc, m.crossing().length);
-        nc += m.crossing().length;
+        a.add(m.airborne());
+        c.add(m.crossing());
+        t.add(m.touched());
       }
     }
-    return SetAside.of(w, a, c);
+    return SetAside.of(concat(w), concat(a), concat(c), concat(t));
+  }
+
+  /** The arrays one after the other. */
+  private static long[] concat(List<long[]> parts) {
+    long[] out = new long[parts.stream().mapToInt(p -> p.length).sum()];
+    int n = 0;
+    for (long[] p : parts) {
+      System.arraycopy(p, 0, out, n, p.length);
+      n += p.length;
+    }
+    return out;
   }
 
   /** The span's fitted conductors and flight time for its section's tasks. */
@@ -322,10 +321,16 @@ final class SpanStages {
       if (vegetation.inferred()) {
         // the command line's labelling step, over the spans this task measures: man-made
         // objects join the points set aside
-        ObjectLabeller.label(consumers -> feed(blocks, consumers.get()),
-            engineSpans.stream().map(m -> m.span().frame()).toList(),
-            options.engine().treeReach() + ClearanceCheck.LABEL_REGION_MARGIN_M, fit.ground(),
-            aside, vegetation.mixed());
+        List<org.clearance.line.SpanFrame> frames = engineSpans.stream()
+            .map(m -> m.span().frame()).toList();
+        double region = options.engine().treeReach() + ClearanceCheck.LABEL_REGION_MARGIN_M;
+        ObjectLabels objects = ObjectLabeller.label(consumers -> feed(blocks, consumers.get()),
+            frames, region, fit.ground(), aside, vegetation.mixed());
+        if (WireLabels.anyIn(classCounts)) {
+          // crowns labelled wire (issue 9): measured as unclassified, as on the command line
+          WireLabels.judge(consumers -> feed(blocks, consumers.get()), frames, region,
+              fit.ground(), aside, objects.echoesInformative());
+        }
       }
       Path near = temp.resolve(NearPointFile.FILE_NAME);
       Measurement all;

@@ -1,0 +1,174 @@
+package org.clearance;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.io.IOException;
+import java.io.PrintWriter;
+import java.io.StringWriter;
+import java.nio.ByteBuffer;
+import java.nio.ByteOrder;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.nio.file.Paths;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Optional;
+import org.clearance.run.RunModel;
+import org.clearance.run.RunModelJson;
+import org.clearance.run.SpanRecord;
+import org.clearance.survey.LinearUnit;
+import org.clearance.survey.SurveyTestFiles;
+import org.clearance.survey.UnitsChoice;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+/**
+ * Issue 9 (labels trusted only as far as they are consistent) on the real open corridor tile
+ * (shared/data/open/corridor_12AN2_20_thinned.las, AHN lidar, vendor labels: vegetation 5,
+ * wires 14): the crowns that give the delivered tile's zone sites are relabelled wire conductor
+ * (14), as a vendor's classifier that took them for wire would leave them. The engine does not
+ * read class 14, so before the labelling step judged wire labels those crowns were never
+ * measured. Held: on the delivered tile no wire label is distrusted (its real wires keep their
+ * label); with the crowns labelled 14 they are measured and counted per span as labels not
+ * trusted, and no span with a delivered zone site is reported clear. Measured, not yet solved:
+ * the crowns hang on a phase, and the wire finder, which takes class 14 as wire, then loses
+ * that phase, so the span is INCOMPLETE and the delivered sites near it have no match (printed).
+ */
+class CrownLabelledWireTileTest {
+
+  private static final Path LINE_DIR = Paths.get("src/test/resources/corridor-12AN2");
+  private static final String PROFILE = "example-utility";
+  /** Two runs' sites name the same vegetation when this near in plan, m (as in
+   * UnlabelledTileTest; common practice, no source). */
+  private static final double SAME_SITE_M = 5.0;
+  /** Vegetation (3-5) within this plan distance of a delivered zone site is relabelled 14, m:
+   * more than {@link #SAME_SITE_M}, so that no vegetation left in class 5 can give the match. */
+  private static final double RELABEL_M = 7.0;
+
+  @TempDir
+  static Path dir;
+
+  private record Site(String span, int priority, String zone, double x, double y) {}
+
+  private record Run(RunModel model, List<Site> sites, String console) {}
+
+  @Test
+  void crownsLabelledWireAreMeasured() throws IOException {
+    byte[] delivered = Files.readAllBytes(SurveyTestFiles.open("corridor_12AN2_20_thinned.las"));
+    Run asDelivered = run("delivered", delivered);
+    List<Site> zoneSites = asDelivered.sites().stream().filter(s -> !s.zone().equals("fall-in"))
+        .toList();
+    assertTrue(zoneSites.size() >= 3, "delivered zone sites " + zoneSites);
+    assertEquals(0, distrusted(asDelivered.model()), asDelivered.console());
+    assertTrue(asDelivered.console().contains("not trusted (crown-shaped, measured) 0"),
+        asDelivered.console());
+
+    byte[] relabelled = delivered.clone();
+    int moved = relabel(relabelled, zoneSites);
+    Run r = run("crowns-14", relabelled);
+    System.out.println("crowns labelled 14: " + moved + " vegetation points relabelled; "
+        + r.console().lines().filter(l -> l.contains("labelling")).findFirst().orElse(""));
+    int missed = 0;
+    int spansClear = 0;
+    for (SpanRecord span : r.model().spans()) {
+      List<Site> inSpan = zoneSites.stream().filter(l -> l.span().equals(span.id())).toList();
+      int unmatched = 0;
+      for (Site l : inSpan) {
+        boolean found = r.sites().stream().anyMatch(s -> s.span().equals(l.span())
+            && s.priority() <= l.priority() && Math.hypot(s.x() - l.x(), s.y() - l.y())
+            <= SAME_SITE_M);
+        unmatched += found ? 0 : 1;
+      }
+      missed += unmatched;
+      // never clear: a span with a delivered zone site is not reported assessed without one
+      boolean clear = span.status() == org.clearance.clearance.SpanStatus.ASSESSED
+          && r.sites().stream().noneMatch(s -> s.span().equals(span.id())
+              && !s.zone().equals("fall-in"));
+      spansClear += !inSpan.isEmpty() && clear ? 1 : 0;
+      System.out.println("crowns labelled 14: span " + span.id() + " " + span.status()
+          + ", delivered zone sites " + inSpan.size() + ", without a match " + unmatched
+          + ", points_label_distrusted " + span.setAside().labelsDistrusted() + "; "
+          + span.reason());
+    }
+    long counted = distrusted(r.model());
+    System.out.println("crowns labelled 14: delivered zone sites " + zoneSites.size()
+        + ", without a match " + missed + ", spans with them reported clear " + spansClear
+        + "; points_label_distrusted over the spans " + counted);
+    assertTrue(moved > 100, "relabelled " + moved);
+    assertEquals(0, spansClear);
+    assertTrue(counted > 0, "distrusted labels counted per span: " + counted);
+    // Known limitation, measured: the crowns labelled 14 hang on phase L1 of OV-12-OV-13, and
+    // the wire finder, which takes class 14 as wire, no longer finds L1 there: the span is
+    // INCOMPLETE (never clear) and the delivered sites near L1 have no match. Where the wire is
+    // found (the generated case, WireLabelsTest and ClearanceEngineTest) the crown is measured.
+    for (SpanRecord span : r.model().spans()) {
+      boolean hasDelivered = zoneSites.stream().anyMatch(l -> l.span().equals(span.id()));
+      if (hasDelivered && missed > 0) {
+        assertTrue(span.status() != org.clearance.clearance.SpanStatus.ASSESSED, span.id()
+            + " " + span.status() + " " + span.reason());
+      }
+    }
+  }
+
+  private static long distrusted(RunModel model) {
+    return model.spans().stream().mapToLong(s -> s.setAside().labelsDistrusted()).sum();
+  }
+
+  /** Sets class 3-5 points within {@link #RELABEL_M} in plan of a site to 14 (LAS 1.4 point
+   * formats 6-10, in place); returns how many. */
+  private static int relabel(byte[] las, List<Site> sites) {
+    ByteBuffer b = ByteBuffer.wrap(las).order(ByteOrder.LITTLE_ENDIAN);
+    int format = las[104] & 0x3F;
+    assertTrue(format >= 6, "point format " + format);
+    int offset = b.getInt(96);
+    int length = b.getShort(105) & 0xFFFF;
+    long count = b.getLong(247);
+    double sx = b.getDouble(131);
+    double sy = b.getDouble(139);
+    double ox = b.getDouble(155);
+    double oy = b.getDouble(163);
+    int moved = 0;
+    for (long i = 0; i < count; i++) {
+      int at = (int) (offset + i * length);
+      int cls = las[at + 16] & 0xFF; // classification byte of formats 6-10
+      if (cls < 3 || cls > 5) {
+        continue;
+      }
+      double x = b.getInt(at) * sx + ox;
+      double y = b.getInt(at + 4) * sy + oy;
+      for (Site s : sites) {
+        if (Math.hypot(x - s.x(), y - s.y()) <= RELABEL_M) {
+          las[at + 16] = 14;
+          moved++;
+          break;
+        }
+      }
+    }
+    return moved;
+  }
+
+  private static Run run(String name, byte[] bytes) throws IOException {
+    Path las = dir.resolve(name + ".las");
+    Files.write(las, bytes);
+    Path out = dir.resolve(name + "-run");
+    CheckInputs inputs = new CheckInputs(List.of(las), UnitsChoice.of(LinearUnit.METRE),
+        LINE_DIR.resolve("structures.csv"), List.of(LINE_DIR.resolve("line.yaml")),
+        Optional.empty(), Optional.of(PROFILE), out);
+    StringWriter console = new StringWriter();
+    new ClearanceCheck(CheckOptions.defaults(2), new PrintWriter(console)).run(inputs, "test");
+    List<String> lines = Files.readAllLines(out.resolve("sites.csv"), StandardCharsets.UTF_8);
+    List<String> header = List.of(lines.get(0).split(",", -1));
+    List<Site> sites = new ArrayList<>();
+    for (String line : lines.subList(1, lines.size())) {
+      String[] f = line.split(",", -1);
+      sites.add(new Site(f[header.indexOf("span_id")],
+          Integer.parseInt(f[header.indexOf("priority")]), f[header.indexOf("zone")],
+          Double.parseDouble(f[header.indexOf("x_m")]),
+          Double.parseDouble(f[header.indexOf("y_m")])));
+    }
+    return new Run(RunModelJson.read(out.resolve(RunModel.FILE_NAME)), sites,
+        console.toString());
+  }
+}
