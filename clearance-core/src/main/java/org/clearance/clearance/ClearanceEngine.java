@@ -39,7 +39,7 @@ public final class ClearanceEngine {
 
   /**
    * Structure exclusion around a pole, m (issue 15): a wood or steel pole is 0.25-0.45 m across
-   * and carries its hardware on arms, which {@code EngineWorker}'s arm box excludes apart; a
+   * and carries its hardware on arms, which {@code StructureZone}'s arm box excludes apart; a
    * metre around its centre holds the pole's own returns (common practice, no source). The 8 m
    * of a lattice tower would drop the vegetation along a sixth of a 100 m feeder span.
    */

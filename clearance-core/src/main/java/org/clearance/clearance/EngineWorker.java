@@ -27,22 +27,6 @@ final class EngineWorker implements Consumer<PointChunk> {
    * tree top and is most of the points.
    */
   static final double CANOPY_MIN_HEIGHT_M = 1.0;
-  /** Least reach of a structure's arm hardware along the line from its centre, m: an arm with
-   * its insulators where no conductor end was fitted (common practice, no source). Where the
-   * fitted conductors end farther out (a 3 m strain insulator at a dead-end whose arm lies on
-   * the bisector of the line's turn: 3 m + 8 m x tan(15.6 deg) = 5.2 m along at a 31 degree
-   * turn), the hardware reaches out to the farthest conductor end, plus {@link #ARM_END_MARGIN_M}. */
-  static final double ARM_ALONG_M = 5.0;
-  /** Reach of the hardware along the line beyond the farthest fitted conductor end, m: the
-   * fitted attachments lie within 0.3 m of the true ones in plan (docs/wire-finder.md), and the
-   * clamp and jumper points scatter a few centimetres about them. */
-  static final double ARM_END_MARGIN_M = 0.5;
-  /** Reach of an arm beyond its outermost conductor end, m: arm tip and clamp, and on the open
-   * corridor tile's angle tower arms 3.5 m beyond the conductors' nominal offsets (measured). */
-  static final double ARM_MARGIN_M = 4.0;
-  /** Depth of jumper loops and insulator hardware below the lowest conductor end, m. */
-  static final double ARM_BELOW_M = 3.0;
-
   /** What happened to a point in one span. */
 
   private final List<PreparedSpan> spans;
@@ -200,8 +184,10 @@ final class EngineWorker implements Consumer<PointChunk> {
         }
       }
       inTreeRegion = true;
-      if (inferredPoint && (nearStructure(p, x, y) || onCrossArm(p, s, e, z)
-          || nearOtherLinesStructure(candidates, p, x, y))) {
+      if (inferredPoint && (StructureZone.near(p, x, y, options.structureExclusion())
+          || StructureZone.onCrossArm(p, s, e, z)
+          || StructureZone.nearOtherLines(spans, candidates, p, x, y,
+              options.structureExclusion()))) {
         if (p.inBox(s, e, z)) {
           excludedStructure[sp]++;
         }
@@ -458,22 +444,6 @@ final class EngineWorker implements Consumer<PointChunk> {
   }
 
   /**
-   * Whether a point stands at a structure of another line's span among the candidates: where a
-   * feeder is built under a transmission line (docs/clearance.md, "Two lines in one run"), the
-   * tower is a structure of both lines and its steel is no vegetation for either, whatever
-   * exclusion radius the feeder's own poles need.
-   */
-  private boolean nearOtherLinesStructure(int[] candidates, PreparedSpan p, double x, double y) {
-    for (int sp : candidates) {
-      PreparedSpan q = spans.get(sp);
-      if (!q.model.span().lineId().equals(p.model.span().lineId()) && nearStructure(q, x, y)) {
-        return true;
-      }
-    }
-    return false;
-  }
-
-  /**
    * Whether every condition of the span with an energised conductor already has a minimum within
    * the keep radius in this worker (then a point farther than that cannot lower it). Once true it
    * stays true: minima only fall.
@@ -499,42 +469,6 @@ final class EngineWorker implements Consumer<PointChunk> {
       bounds[k] = new double[n];
     }
     return bounds[k];
-  }
-
-  private boolean nearStructure(PreparedSpan p, double x, double y) {
-    double r = Double.isNaN(p.model.structureExclusionM()) ? options.structureExclusion()
-        : Math.min(options.structureExclusion(), p.model.structureExclusionM());
-    double r2 = r * r;
-    double ax = p.model.span().from().x() - x;
-    double ay = p.model.span().from().y() - y;
-    double bx = p.model.span().to().x() - x;
-    double by = p.model.span().to().y() - y;
-    return ax * ax + ay * ay < r2 || bx * bx + by * by < r2;
-  }
-
-  /**
-   * Whether a point lies where a structure's cross arms, insulators and jumpers are: within
-   * {@link #ARM_ALONG_M} along the line of a structure, or out to the farthest fitted conductor
-   * end there and {@link #ARM_END_MARGIN_M} beyond (a strain insulator and the jumper end where
-   * the conductor begins), across out to {@link #ARM_MARGIN_M}
-   * beyond the outermost conductor end there on either side (a conductor not fitted, say with
-   * a gap in its points, still has its arm and insulator), and no lower than {@link #ARM_BELOW_M} below the
-   * lowest conductor end there (the arms reach past the structure disc on wide towers).
-   */
-  private static boolean onCrossArm(PreparedSpan p, double s, double e, double z) {
-    for (int end = 0; end < 2; end++) {
-      if (Double.isNaN(p.armZLo[end])) {
-        continue;
-      }
-      double along = end == 0 ? s : s - p.model.span().lengthM();
-      double half = Math.max(Math.abs(p.armELo[end]), Math.abs(p.armEHi[end])) + ARM_MARGIN_M;
-      double reach = Math.max(ARM_ALONG_M, p.armAlong[end] + ARM_END_MARGIN_M);
-      if (Math.abs(along) <= reach && Math.abs(e) <= half
-          && z >= p.armZLo[end] - ARM_BELOW_M) {
-        return true;
-      }
-    }
-    return false;
   }
 
   void flush() {
