@@ -153,6 +153,21 @@ final class PointEvidence {
    */
   static void setAside(SpanPoints p, boolean[] on, boolean[] linear, boolean[] crossing,
       SetAside wires, double floorM, double lengthM, double poleRadiusM, SetAside out) {
+    setAside(p, on, linear, crossing, wires, floorM, lengthM, poleRadiusM, null, List.of(), out);
+  }
+
+  /**
+   * As {@link #setAside(SpanPoints, boolean[], boolean[], boolean[], SetAside, double, double,
+   * double, SetAside)}, with the span's fitted conductors: in a group that is vegetation as a
+   * whole, the points on a strand of the line's own conductors ({@link ConductorStrands}) are
+   * wire, unless vegetation touches them.
+   *
+   * @param frame the span's frame (of the candidates' stations and offsets), or null
+   * @param curves the span's fitted conductors' curves (none: no strand is looked for)
+   */
+  static void setAside(SpanPoints p, boolean[] on, boolean[] linear, boolean[] crossing,
+      SetAside wires, double floorM, double lengthM, double poleRadiusM,
+      org.clearance.line.SpanFrame frame, List<ConductorCurve> curves, SetAside out) {
     int n = p.size();
     boolean[] wire = new boolean[n];
     for (int i = 0; i < n; i++) {
@@ -216,7 +231,13 @@ final class PointEvidence {
         out.addWire(p.key(i));
       }
     }
+    boolean[] own = ownConductors(p, members, linear, vegetation, grid, frame, curves);
     IntList near = new IntList();
+    for (int i = 0; i < n; i++) {
+      if (own[i] && !touched(grid, i, vegetation, near)) {
+        out.addWire(p.key(i));
+      }
+    }
     for (int i = 0; i < n; i++) {
       if (!on[i] && !(crossing[i] && !p.labelled(i))) {
         continue;
@@ -230,6 +251,36 @@ final class PointEvidence {
         out.addCrossing(p.key(i));
       }
     }
+  }
+
+  /**
+   * The points of the line's own conductors in groups that are still vegetation as a whole
+   * ({@link ConductorStrands}); they are taken out of {@code vegetation}, so that they touch no
+   * wire point, and are set aside by the caller unless vegetation touches them.
+   */
+  private static boolean[] ownConductors(SpanPoints p, int[][] members, boolean[] linear,
+      boolean[] vegetation, PointGrid grid, org.clearance.line.SpanFrame frame,
+      List<ConductorCurve> curves) {
+    int n = p.size();
+    boolean[] own = new boolean[n];
+    if (frame == null || curves.isEmpty()) {
+      return own;
+    }
+    boolean[] inGroup = new boolean[n];
+    for (int g = 0; g < n; g++) {
+      int[] m = members[g];
+      if (m == null || !vegetation[m[0]]) {
+        continue;
+      }
+      boolean[] wire = ConductorStrands.find(p, m, inGroup, linear, grid, frame, curves);
+      for (int k = 0; k < m.length; k++) {
+        own[m[k]] = wire[k];
+      }
+    }
+    for (int i = 0; i < n; i++) {
+      vegetation[i] &= !own[i];
+    }
+    return own;
   }
 
   /** True when no non-ground point stands in the group's column (plan box s0-s1, e0-e1, widened

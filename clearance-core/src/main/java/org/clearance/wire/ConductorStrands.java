@@ -1,0 +1,165 @@
+package org.clearance.wire;
+
+import java.util.List;
+import org.clearance.line.SpanFrame;
+
+/**
+ * The points of the line's own conductors inside a group that is vegetation as a whole
+ * (package-private; docs/wire-finder.md, "Points set aside"). A conductor the finder found but did
+ * not fit, or fitted over part of the span only, leaves its other points among the candidates;
+ * where a crown comes within the groups' link distance ({@link PointEvidence#LINK_M}) of them,
+ * they join the crown's group and were measured as vegetation, a few decimetres from the fitted
+ * neighbour conductors (issue 9: span minima of 0.2-0.5 m against a true 2.2-6.5 m).
+ *
+ * <p>Evidence, all of it needed: a strand of the group's points with linear evidence ({@link
+ * WirePiece#strands}) that is a wire piece ({@link WirePiece#isPiece}), of at least {@link
+ * #MIN_POINTS} points over at least {@link #MIN_RUN_M} m, running along the span (within {@link
+ * #MAX_PLAN_ANGLE_DEG} degrees in plan) and hanging like a fitted conductor of the span: its
+ * elevation less that conductor's curve is a straight line within {@link WirePiece#TOL_M}
+ * (conductors of one span hang with nearly the same catenary parameter, so they are parallel
+ * curves up to the straight line between their attachments; methods.md 2.1). The strand's points,
+ * and the group's other points on the same line (within {@link WirePiece#TOL_M} across and up,
+ * over the strand's run widened by {@link WirePiece#STRAND_HALF_LENGTH_M} at each end: a wire
+ * point beside a crown has no linear evidence of its own), are wire; every other point of the
+ * group stays vegetation. A crown's points scatter by decimetres to metres about any line, so a
+ * crown gives no such strand; a wire point with vegetation within {@link PointEvidence#TOUCH_M}
+ * is still measured (the caller's touch rule).
+ */
+final class ConductorStrands {
+
+  /** Fewest points of a strand: as an unfitted wire's group ({@link
+   * PointEvidence#MIN_LINE_POINTS}), twice a wire piece's least ({@link WirePiece#MIN_POINTS}). */
+  static final int MIN_POINTS = PointEvidence.MIN_LINE_POINTS;
+  /** Least run of a strand along the span, m: twice a wire piece's least run ({@link
+   * WirePiece#MIN_RUN_M}), more than a crown's branch lies straight (common practice, no
+   * source). */
+  static final double MIN_RUN_M = 2 * WirePiece.MIN_RUN_M;
+  /** Largest plan angle between a strand and the span, degrees: the growth step's test of a wire
+   * running along the span (docs/wire-finder.md, step 5). */
+  static final double MAX_PLAN_ANGLE_DEG = 10;
+
+  private ConductorStrands() {}
+
+  /**
+   * The group's points that lie on a strand of the line's own conductors.
+   *
+   * @param p the span's candidates
+   * @param members the group's points
+   * @param inGroup per candidate, true for the group's points (scratch, left as found)
+   * @param linear per candidate, linear evidence ({@link WireEvidence})
+   * @param grid a grid over the candidates with cells of at least the sleeve's reach
+   * @param frame the span's frame (of the candidates' stations and offsets)
+   * @param curves the span's fitted conductors
+   * @return per member of {@code members}, true for a wire point
+   */
+  static boolean[] find(SpanPoints p, int[] members, boolean[] inGroup, boolean[] linear,
+      PointGrid grid, SpanFrame frame, List<ConductorCurve> curves) {
+    boolean[] wire = new boolean[members.length];
+    if (curves.isEmpty() || members.length < MIN_POINTS) {
+      return wire;
+    }
+    for (int i : members) {
+      inGroup[i] = true;
+    }
+    int[] root = WirePiece.strands(p, members, inGroup, linear, grid);
+    for (int i : members) {
+      inGroup[i] = false;
+    }
+    double[] zc = new double[members.length];
+    for (int r = 0; r < members.length; r++) {
+      if (root[r] != r) {
+        continue;
+      }
+      int c = 0;
+      int[] strand = new int[members.length];
+      for (int k = 0; k < members.length; k++) {
+        if (root[k] == r) {
+          strand[c++] = members[k];
+        }
+      }
+      if (c < MIN_POINTS || !WirePiece.isPiece(p, strand, c)) {
+        continue;
+      }
+      double[] plan = line(p, strand, c, null, 0);
+      if (plan == null || Math.abs(plan[1]) > Math.tan(Math.toRadians(MAX_PLAN_ANGLE_DEG))
+          || plan[3] - plan[2] < MIN_RUN_M) {
+        continue;
+      }
+      for (ConductorCurve curve : curves) {
+        for (int k = 0; k < c; k++) {
+          zc[k] = curveZ(curve, frame, p.s(strand[k]), p.e(strand[k]));
+        }
+        double[] height = line(p, strand, c, zc, 1);
+        if (height == null) {
+          continue;
+        }
+        for (int k = 0; k < members.length; k++) {
+          int i = members[k];
+          double s = p.s(i);
+          if (s < plan[2] - WirePiece.STRAND_HALF_LENGTH_M
+              || s > plan[3] + WirePiece.STRAND_HALF_LENGTH_M) {
+            continue;
+          }
+          double along = curveZ(curve, frame, s, p.e(i)) + height[0] + height[1] * s;
+          wire[k] |= Math.abs(p.e(i) - plan[0] - plan[1] * s) <= WirePiece.TOL_M
+              && Math.abs(p.z(i) - along) <= WirePiece.TOL_M;
+        }
+        break;
+      }
+    }
+    return wire;
+  }
+
+  /** The fitted conductor's elevation, m, across from the point at station s, offset e. */
+  private static double curveZ(ConductorCurve curve, SpanFrame frame, double s, double e) {
+    double x = frame.x(s, e);
+    double y = frame.y(s, e);
+    return curve.z(curve.plan().station(x, y));
+  }
+
+  /**
+   * Least-squares line over the strand's stations: of the offset ({@code zc} null, {@code
+   * axis} 0), or of the elevation less {@code zc} ({@code axis} 1).
+   *
+   * @return {a, b, first station, last station} of value = a + b s, or null when a point lies
+   *     farther than {@link WirePiece#TOL_M} from it
+   */
+  private static double[] line(SpanPoints p, int[] strand, int c, double[] zc, int axis) {
+    double ms = 0;
+    double mv = 0;
+    double sMin = Double.POSITIVE_INFINITY;
+    double sMax = Double.NEGATIVE_INFINITY;
+    for (int k = 0; k < c; k++) {
+      double s = p.s(strand[k]);
+      ms += s;
+      mv += value(p, strand[k], zc, k, axis);
+      sMin = Math.min(sMin, s);
+      sMax = Math.max(sMax, s);
+    }
+    ms /= c;
+    mv /= c;
+    double ss = 0;
+    double sv = 0;
+    for (int k = 0; k < c; k++) {
+      double ds = p.s(strand[k]) - ms;
+      ss += ds * ds;
+      sv += ds * (value(p, strand[k], zc, k, axis) - mv);
+    }
+    if (!(ss > 0)) {
+      return null;
+    }
+    double b = sv / ss;
+    double a = mv - b * ms;
+    for (int k = 0; k < c; k++) {
+      if (Math.abs(value(p, strand[k], zc, k, axis) - a - b * p.s(strand[k]))
+          > WirePiece.TOL_M) {
+        return null;
+      }
+    }
+    return new double[] {a, b, sMin, sMax};
+  }
+
+  private static double value(SpanPoints p, int i, double[] zc, int k, int axis) {
+    return axis == 0 ? p.e(i) : p.z(i) - zc[k];
+  }
+}
