@@ -38,6 +38,15 @@ final class ConductorStrands {
    * running along the span (docs/wire-finder.md, step 5). */
   static final double MAX_PLAN_ANGLE_DEG = 10;
 
+  /** Reach of a crossing wire's points that a group's point is tested against, m: twice the
+   * groups' link distance, so the crossing wire's points set aside (in a group of their own)
+   * and the next point of the same wire inside a crown's group are within it. */
+  static final double CROSSING_REACH_M = 2 * PointEvidence.LINK_M;
+  /** Most passes following a crossing wire into a group: one point further per pass at the
+   * least; a crossing wire crosses a feeder's corridor (about 20 m) in fewer points than this
+   * at 1-3 points per m (common practice, no source). */
+  static final int MAX_CROSSING_PASSES = 100;
+
   private ConductorStrands() {}
 
   /**
@@ -65,18 +74,19 @@ final class ConductorStrands {
     for (int i : members) {
       inGroup[i] = false;
     }
-    double[] zc = new double[members.length];
-    for (int r = 0; r < members.length; r++) {
-      if (root[r] != r) {
-        continue;
+    java.util.Map<Integer, IntList> byRoot = new java.util.TreeMap<>();
+    for (int k = 0; k < members.length; k++) {
+      if (root[k] >= 0) {
+        byRoot.computeIfAbsent(root[k], r -> new IntList()).add(members[k]);
       }
-      int c = 0;
-      int[] strand = new int[members.length];
-      for (int k = 0; k < members.length; k++) {
-        if (root[k] == r) {
-          strand[c++] = members[k];
-        }
+    }
+    for (IntList list : byRoot.values()) {
+      int c = list.size();
+      int[] strand = new int[c];
+      for (int k = 0; k < c; k++) {
+        strand[k] = list.get(k);
       }
+      double[] zc = new double[c];
       if (c < MIN_POINTS || !WirePiece.isPiece(p, strand, c)) {
         continue;
       }
@@ -108,6 +118,88 @@ final class ConductorStrands {
       }
     }
     return wire;
+  }
+
+  /**
+   * The group's points that continue a wire crossing the span ({@link CrossingFinder}) into the
+   * group: a point is on the crossing wire when, with the crossing wire's points (and the
+   * group's points already shown to be on it) within {@link #CROSSING_REACH_M}, at least
+   * {@link WirePiece#MIN_POINTS} of them, it forms a wire piece ({@link WirePiece#isPiece}). The
+   * test is repeated from the points found, so a crossing wire is followed into a crown's group
+   * point by point; a crown's point off the wire's line breaks the piece and stays vegetation.
+   *
+   * @param p the span's candidates
+   * @param members the group's points
+   * @param known per candidate, true for a crossing wire's point; the points found are added
+   * @param grid a grid over the candidates
+   * @return per member of {@code members}, true for a point of a crossing wire
+   */
+  static boolean[] onCrossings(SpanPoints p, int[] members, boolean[] known, PointGrid grid) {
+    boolean[] out = new boolean[members.length];
+    IntList near = new IntList();
+    int[] buf = new int[64];
+    boolean grew = true;
+    for (int pass = 0; grew && pass < MAX_CROSSING_PASSES; pass++) {
+      grew = false;
+      for (int k = 0; k < members.length; k++) {
+        int i = members[k];
+        if (known[i]) {
+          continue;
+        }
+        grid.within(i, CROSSING_REACH_M, near);
+        int c = 0;
+        for (int t = 0; t < near.size(); t++) {
+          int j = near.get(t);
+          if (known[j] && j != i) {
+            if (c + 1 >= buf.length) {
+              buf = java.util.Arrays.copyOf(buf, 2 * buf.length);
+            }
+            buf[c++] = j;
+          }
+        }
+        if (c < WirePiece.MIN_POINTS) {
+          continue;
+        }
+        buf[c] = i;
+        if (WirePiece.isPiece(p, buf, c + 1)) {
+          known[i] = true;
+          out[k] = true;
+          grew = true;
+        }
+      }
+    }
+    return out;
+  }
+
+  /**
+   * The group's points on a fitted conductor's curve: within {@link WirePiece#TOL_M} of it in plan
+   * and in elevation, between its attachments. A conductor fitted over part of the span leaves
+   * its points in a coverage gap among the candidates (they were not members of its fit); beside
+   * a crown they join the crown's group.
+   *
+   * @param p the span's candidates
+   * @param members the group's points
+   * @param frame the span's frame
+   * @param curves the span's fitted conductors
+   * @return per member of {@code members}, true for a point on a curve
+   */
+  static boolean[] onCurves(SpanPoints p, int[] members, SpanFrame frame,
+      List<ConductorCurve> curves) {
+    boolean[] out = new boolean[members.length];
+    for (int k = 0; k < members.length; k++) {
+      int i = members[k];
+      double x = frame.x(p.s(i), p.e(i));
+      double y = frame.y(p.s(i), p.e(i));
+      for (ConductorCurve c : curves) {
+        double s = c.plan().station(x, y);
+        if (s >= 0 && s <= c.length() && Math.abs(c.plan().offset(x, y)) <= WirePiece.TOL_M
+            && Math.abs(p.z(i) - c.z(s)) <= WirePiece.TOL_M) {
+          out[k] = true;
+          break;
+        }
+      }
+    }
+    return out;
   }
 
   /** The fitted conductor's elevation, m, across from the point at station s, offset e. */

@@ -231,11 +231,15 @@ final class PointEvidence {
         out.addWire(p.key(i));
       }
     }
-    boolean[] own = ownConductors(p, members, linear, vegetation, grid, frame, curves);
+    byte[] own = ownWires(p, members, linear, crossing, vegetation, grid, frame, curves);
     IntList near = new IntList();
     for (int i = 0; i < n; i++) {
-      if (own[i] && !touched(grid, i, vegetation, near)) {
-        out.addWire(p.key(i));
+      if (own[i] != 0 && !touched(grid, i, vegetation, near)) {
+        if (own[i] == OWN_CONDUCTOR) {
+          out.addWire(p.key(i));
+        } else {
+          out.addCrossing(p.key(i));
+        }
       }
     }
     for (int i = 0; i < n; i++) {
@@ -253,32 +257,47 @@ final class PointEvidence {
     }
   }
 
+  /** {@link #ownWires}: a point of one of the line's own conductors. */
+  private static final byte OWN_CONDUCTOR = 1;
+  /** {@link #ownWires}: a point of a wire crossing the span. */
+  private static final byte OWN_CROSSING = 2;
+
   /**
-   * The points of the line's own conductors in groups that are still vegetation as a whole
-   * ({@link ConductorStrands}); they are taken out of {@code vegetation}, so that they touch no
-   * wire point, and are set aside by the caller unless vegetation touches them.
+   * The points of the line's own conductors ({@link ConductorStrands#find}) and of the wires
+   * crossing the span ({@link ConductorStrands#onCrossings}) in groups that are still vegetation
+   * as a whole; they are taken out of {@code vegetation}, so that they touch no wire point, and
+   * are set aside by the caller unless vegetation touches them.
+   *
+   * @return per candidate, 0, {@link #OWN_CONDUCTOR} or {@link #OWN_CROSSING}
    */
-  private static boolean[] ownConductors(SpanPoints p, int[][] members, boolean[] linear,
-      boolean[] vegetation, PointGrid grid, org.clearance.line.SpanFrame frame,
-      List<ConductorCurve> curves) {
+  private static byte[] ownWires(SpanPoints p, int[][] members, boolean[] linear,
+      boolean[] crossing, boolean[] vegetation, PointGrid grid,
+      org.clearance.line.SpanFrame frame, List<ConductorCurve> curves) {
     int n = p.size();
-    boolean[] own = new boolean[n];
-    if (frame == null || curves.isEmpty()) {
-      return own;
-    }
+    byte[] own = new byte[n];
     boolean[] inGroup = new boolean[n];
+    boolean anyCrossing = false;
+    for (boolean c : crossing) {
+      anyCrossing |= c;
+    }
+    boolean[] known = anyCrossing ? crossing.clone() : null;
     for (int g = 0; g < n; g++) {
       int[] m = members[g];
       if (m == null || !vegetation[m[0]]) {
         continue;
       }
-      boolean[] wire = ConductorStrands.find(p, m, inGroup, linear, grid, frame, curves);
+      boolean[] wire = frame == null ? new boolean[m.length]
+          : ConductorStrands.find(p, m, inGroup, linear, grid, frame, curves);
+      boolean[] onCurve = frame == null ? wire
+          : ConductorStrands.onCurves(p, m, frame, curves);
+      boolean[] across = known == null ? new boolean[m.length]
+          : ConductorStrands.onCrossings(p, m, known, grid);
       for (int k = 0; k < m.length; k++) {
-        own[m[k]] = wire[k];
+        own[m[k]] = wire[k] || onCurve[k] ? OWN_CONDUCTOR : across[k] ? OWN_CROSSING : 0;
       }
     }
     for (int i = 0; i < n; i++) {
-      vegetation[i] &= !own[i];
+      vegetation[i] &= own[i] == 0;
     }
     return own;
   }

@@ -154,4 +154,58 @@ class ConductorStrandsTest {
     assertEquals(0, count(run(humped, 32, List.of(FITTED)), 1, nextKey, SetAside.Reason.WIRE),
         "humped");
   }
+
+  @Test
+  void fewPointsOnAFittedConductorInItsCoverageGapAreWire() {
+    // regression shape (issue 9): a conductor fitted over part of the span leaves its points
+    // in a coverage gap among the candidates; 4 of them (too few for a strand) lie on its
+    // fitted curve beside a crown 1.2 m away: on the curve within 0.16 m, they are wire
+    SpanPoints p = new SpanPoints(GROUND_Z);
+    for (int k = 0; k < 4; k++) {
+      double s = 46 + 0.7 * k;
+      double z = FITTED.curve().z(s) + NOISE_M * rng.nextGaussian();
+      p.add(s, NOISE_M * rng.nextGaussian(), z, z - GROUND_Z, CandidateCollector.UNCLASSIFIED,
+          nextKey++);
+    }
+    long wireEnd = nextKey;
+    double h = FITTED.curve().z(47) - GROUND_Z;
+    crown(p, 47, 2.4, h - 1.2, 1.2, 120);
+    SetAside out = run(p, 1, List.of(FITTED));
+    assertEquals(4, count(out, 1, wireEnd, SetAside.Reason.WIRE));
+    assertEquals(0, count(out, wireEnd, nextKey, SetAside.Reason.WIRE), "the crown");
+    assertEquals(0, count(run(p, 1, List.of()), 1, nextKey, SetAside.Reason.WIRE),
+        "no fitted conductor");
+  }
+
+  @Test
+  void crossingWireIsFollowedIntoACrownsGroup() {
+    // a service line crossing the span at 70 degrees, 40 points 0.5 m apart, level 7 m up: the
+    // crossing finder named its first 24 (outside the crown); the other 16 run past a crown
+    // 1.2 m beside them, in the crown's group. They continue the crossing wire's line and are
+    // set aside as crossing; the crown is measured
+    SpanPoints p = new SpanPoints(GROUND_Z);
+    double ux = Math.cos(Math.toRadians(70));
+    double uy = Math.sin(Math.toRadians(70));
+    for (int k = 0; k < 40; k++) {
+      double t = -10 + 0.5 * k;
+      double z = 7 + NOISE_M * rng.nextGaussian();
+      p.add(50 + t * ux, t * uy, GROUND_Z + z, z, CandidateCollector.UNCLASSIFIED, nextKey++);
+    }
+    long wireEnd = nextKey;
+    // a crown centred 1.2 m + its radius off the line, beside the line's last 8 m
+    double t0 = 6;
+    crown(p, 50 + t0 * ux + 2.2 * uy, t0 * uy - 2.2 * ux, 6.0, 1.0, 120);
+    p.sort();
+    boolean[] none = new boolean[p.size()];
+    boolean[] crossing = new boolean[p.size()];
+    for (int i = 0; i < p.size(); i++) {
+      crossing[i] = p.key(i) <= 24;
+    }
+    SetAside out = SetAside.none();
+    PointEvidence.setAside(p, none, none, crossing, SetAside.none(), FLOOR_M, Double.NaN,
+        Double.NaN, FRAME, List.of(), out);
+    assertEquals(wireEnd - 1, count(out, 1, wireEnd, SetAside.Reason.CROSSING));
+    assertEquals(0, count(out, wireEnd, nextKey, SetAside.Reason.CROSSING)
+        + count(out, wireEnd, nextKey, SetAside.Reason.WIRE), "the crown");
+  }
 }

@@ -93,9 +93,16 @@ public final class UnfittedWireSweep {
       boolean high = m.distance() > truth[i] + FeederClearanceTest.TOL_M;
       onOwnWire += own ? 1 : 0;
       above += high ? 1 : 0;
+      FeederScene.Span ts = scene.spans().get(i);
+      FeederPole a = scene.poles().get(ts.from());
+      FeederPole b = scene.poles().get(ts.to());
+      org.clearance.line.SpanFrame f = org.clearance.line.SpanFrame.between(a.x(), a.y(), b.x(),
+          b.y());
       System.out.printf(Locale.ROOT, "%s %s %s: truth %.3f m, check %.3f m at (%.2f %.2f %.2f)"
-          + " on %s; set aside %s; not fitted:%s%s%n", tag, span.id(), span.status(), truth[i],
-          m.distance(), m.x(), m.y(), m.z(), what, span.setAside(), unfitted,
+          + " on %s (station %.1f m, offset %.1f m, %.1f m above ground); set aside %s;"
+          + " not fitted:%s%s%n", tag, span.id(), span.status(), truth[i],
+          m.distance(), m.x(), m.y(), m.z(), what, f.station(m.x(), m.y()),
+          f.offset(m.x(), m.y()), m.z() - scene.groundZ(m.x(), m.y()), span.setAside(), unfitted,
           own ? " OWN WIRE" : high ? " ABOVE" : "");
     }
     System.out.printf(Locale.ROOT, "%s: compared %d, set by own wire %d, above the truth %d%n",
