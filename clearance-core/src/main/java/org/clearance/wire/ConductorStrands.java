@@ -38,10 +38,12 @@ final class ConductorStrands {
    * running along the span (docs/wire-finder.md, step 5). */
   static final double MAX_PLAN_ANGLE_DEG = 10;
 
-  /** Reach of a crossing wire's points that a group's point is tested against, m: twice the
-   * groups' link distance, so the crossing wire's points set aside (in a group of their own)
-   * and the next point of the same wire inside a crown's group are within it. */
-  static final double CROSSING_REACH_M = 2 * PointEvidence.LINK_M;
+  /** Reach of a crossing wire's points that a group's point is tested against, m: the width of
+   * a feeder's wire corridor (widest offset, about 2 m, plus 8 m either side; docs/wire-finder.md,
+   * step 2), so that the crossing wire's points found on one side of the conductors define its
+   * line where it runs into a crown on the other side. Two crossing wires within this reach make
+   * no single piece and nothing is set aside (common practice, no source). */
+  static final double CROSSING_REACH_M = 20;
   /** Most passes following a crossing wire into a group: one point further per pass at the
    * least; a crossing wire crosses a feeder's corridor (about 20 m) in fewer points than this
    * at 1-3 points per m (common practice, no source). */
@@ -131,12 +133,11 @@ final class ConductorStrands {
    * @param p the span's candidates
    * @param members the group's points
    * @param known per candidate, true for a crossing wire's point; the points found are added
-   * @param grid a grid over the candidates
+   * @param knownList the same points as a list; the points found are added
    * @return per member of {@code members}, true for a point of a crossing wire
    */
-  static boolean[] onCrossings(SpanPoints p, int[] members, boolean[] known, PointGrid grid) {
+  static boolean[] onCrossings(SpanPoints p, int[] members, boolean[] known, IntList knownList) {
     boolean[] out = new boolean[members.length];
-    IntList near = new IntList();
     int[] buf = new int[64];
     boolean grew = true;
     for (int pass = 0; grew && pass < MAX_CROSSING_PASSES; pass++) {
@@ -146,11 +147,13 @@ final class ConductorStrands {
         if (known[i]) {
           continue;
         }
-        grid.within(i, CROSSING_REACH_M, near);
         int c = 0;
-        for (int t = 0; t < near.size(); t++) {
-          int j = near.get(t);
-          if (known[j] && j != i) {
+        for (int t = 0; t < knownList.size(); t++) {
+          int j = knownList.get(t);
+          double ds = p.s(j) - p.s(i);
+          double de = p.e(j) - p.e(i);
+          double dz = p.z(j) - p.z(i);
+          if (ds * ds + de * de + dz * dz <= CROSSING_REACH_M * CROSSING_REACH_M) {
             if (c + 1 >= buf.length) {
               buf = java.util.Arrays.copyOf(buf, 2 * buf.length);
             }
@@ -163,6 +166,7 @@ final class ConductorStrands {
         buf[c] = i;
         if (WirePiece.isPiece(p, buf, c + 1)) {
           known[i] = true;
+          knownList.add(i);
           out[k] = true;
           grew = true;
         }

@@ -281,6 +281,12 @@ final class PointEvidence {
       anyCrossing |= c;
     }
     boolean[] known = anyCrossing ? crossing.clone() : null;
+    IntList knownList = new IntList();
+    for (int i = 0; i < n && anyCrossing; i++) {
+      if (crossing[i]) {
+        knownList.add(i);
+      }
+    }
     for (int g = 0; g < n; g++) {
       int[] m = members[g];
       if (m == null || !vegetation[m[0]]) {
@@ -291,7 +297,7 @@ final class PointEvidence {
       boolean[] onCurve = frame == null ? wire
           : ConductorStrands.onCurves(p, m, frame, curves);
       boolean[] across = known == null ? new boolean[m.length]
-          : ConductorStrands.onCrossings(p, m, known, grid);
+          : ConductorStrands.onCrossings(p, m, known, knownList);
       for (int k = 0; k < m.length; k++) {
         own[m[k]] = wire[k] || onCurve[k] ? OWN_CONDUCTOR : across[k] ? OWN_CROSSING : 0;
       }
