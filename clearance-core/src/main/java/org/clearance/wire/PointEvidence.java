@@ -26,7 +26,9 @@ import org.clearance.io.DisjointSets;
  * more along the span, is a wire nobody fitted; so is a group that is a thin hanging line in any
  * direction ({@link WirePiece}: a crossing service line, a piece of a conductor the finder could
  * not fit), and a group, at least {@value #STRANDS_LINEAR_SHARE} of it linear, made only of such
- * lines (two unfitted conductors within the link distance of each other). On a pole line the
+ * lines (two unfitted conductors within the link distance of each other). In a group that is
+ * vegetation as a whole, the points of the line's own conductors and of crossing wires that the
+ * crown's group took in are picked out ({@link ConductorStrands}). On a pole line the
  * points within {@value #POLE_RADIUS_M} m of a pole join no group. A wire point with a point of
  * another group (vegetation) within
  * {@value #TOUCH_M} m is not set aside: where a branch touches a wire the two cannot be told
