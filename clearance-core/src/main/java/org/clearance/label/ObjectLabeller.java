@@ -392,9 +392,13 @@ public final class ObjectLabeller {
       if (root[r] != r || count[r] < LINEAR_MIN_POINTS || withShape[r] == 0) {
         continue;
       }
-      if (count[r] < MIN_OBJECT_POINTS && !isLinear(sumLinearity[r] / withShape[r],
-          (double) linearDominant[r] / withShape[r], Math.hypot(xMax[r] - xMin[r],
-          yMax[r] - yMin[r]))) {
+      if (count[r] < MIN_OBJECT_POINTS) {
+        // a piece too small to judge otherwise: linear or unjudged; not listed (a fragment of
+        // a man-made object beside it may still take that object's kind, step 6)
+        if (isLinear(sumLinearity[r] / withShape[r], (double) linearDominant[r] / withShape[r],
+            Math.hypot(xMax[r] - xMin[r], yMax[r] - yMin[r]))) {
+          kindOf[r] = ObjectKind.LINEAR;
+        }
         continue;
       }
       double height = p.hag[top[r]];
