@@ -122,6 +122,12 @@ public final class ObjectLabeller {
   static final double LINEAR_MIN_SHARE = 0.8;
   /** Least plan length of a linear object, m (the wire finder's least wire run). */
   static final double LINEAR_MIN_LENGTH_M = 10.0;
+  /** Fewest points of an object judged for the linear kind only, below {@link
+   * #MIN_OBJECT_POINTS}: a sparsely sampled wire (4 points per m) breaks at its gaps into pieces
+   * of a few tens of points (issue 9); 20 points over the least length of {@link
+   * #LINEAR_MIN_LENGTH_M} m is 2 points per m. A crown's piece is never 10 m long and 85 %
+   * linear (docs/labelling.md), so the small size costs no vegetation. */
+  static final int LINEAR_MIN_POINTS = 20;
   /** Height above ground beyond which a class-2 label is not believed and the point is looked
    * at as unclassified, m: SMRF's ground band is 0.5 m plus 1.25 m per unit of slope
    * (docs/ground.md); snow banks and kerbs stay below (common practice, no source). The
@@ -400,7 +406,16 @@ public final class ObjectLabeller {
     }
     List<LabelledObject> out = new ArrayList<>();
     for (int r = 0; r < n; r++) {
-      if (root[r] != r || count[r] < MIN_OBJECT_POINTS || withShape[r] == 0) {
+      if (root[r] != r || count[r] < LINEAR_MIN_POINTS || withShape[r] == 0) {
+        continue;
+      }
+      if (count[r] < MIN_OBJECT_POINTS) {
+        // a piece too small to judge otherwise: linear or unjudged; not listed (a fragment of
+        // a man-made object beside it may still take that object's kind, step 6)
+        if (isLinear(sumLinearity[r] / withShape[r], (double) linearDominant[r] / withShape[r],
+            Math.hypot(xMax[r] - xMin[r], yMax[r] - yMin[r]))) {
+          kindOf[r] = ObjectKind.LINEAR;
+        }
         continue;
       }
       double height = p.hag[top[r]];
@@ -428,7 +443,8 @@ public final class ObjectLabeller {
 
   /**
    * Step 6: a fragment (an object of fewer than {@link #MIN_OBJECT_POINTS} points, too few to
-   * judge by itself) takes the kind of a man-made object with a point within {@link #ATTACH_M}
+   * judge by itself) takes the kind of a man-made object other than a linear one (a fragment
+   * beside a wire may be a crown near a conductor) with a point within {@link #ATTACH_M}
    * of it when no point of a vegetation object lies that near and its lowest point floats at
    * least {@link #FLOAT_M} above ground (nothing that grows there): the top of a crane's jib cut
    * off from the rest where its middle lies on a wire and was set aside as wire.
@@ -454,7 +470,8 @@ public final class ObjectLabeller {
         ObjectKind k = kindOf[root[j]];
         if (k == ObjectKind.VEGETATION) {
           blocked[r] = true;
-        } else if (k != null && verdict[r] == null) {
+        } else if (k != null && k != ObjectKind.LINEAR && verdict[r] == null) {
+          // a fragment beside a wire may be a crown near the conductor: it stays vegetation
           verdict[r] = k;
         }
       });

@@ -26,7 +26,9 @@ import org.clearance.io.DisjointSets;
  * more along the span, is a wire nobody fitted; so is a group that is a thin hanging line in any
  * direction ({@link WirePiece}: a crossing service line, a piece of a conductor the finder could
  * not fit), and a group, at least {@value #STRANDS_LINEAR_SHARE} of it linear, made only of such
- * lines (two unfitted conductors within the link distance of each other). On a pole line the
+ * lines (two unfitted conductors within the link distance of each other). In a group that is
+ * vegetation as a whole, the points of the line's own conductors and of crossing wires that the
+ * crown's group took in are picked out ({@link ConductorStrands}). On a pole line the
  * points within {@value #POLE_RADIUS_M} m of a pole join no group. A wire point with a point of
  * another group (vegetation) within
  * {@value #TOUCH_M} m is not set aside: where a branch touches a wire the two cannot be told
@@ -154,6 +156,21 @@ final class PointEvidence {
    */
   static void setAside(SpanPoints p, boolean[] on, boolean[] linear, boolean[] crossing,
       SetAside wires, double floorM, double lengthM, double poleRadiusM, SetAside out) {
+    setAside(p, on, linear, crossing, wires, floorM, lengthM, poleRadiusM, null, List.of(), out);
+  }
+
+  /**
+   * As {@link #setAside(SpanPoints, boolean[], boolean[], boolean[], SetAside, double, double,
+   * double, SetAside)}, with the span's fitted conductors: in a group that is vegetation as a
+   * whole, the points on a strand of the line's own conductors ({@link ConductorStrands}) are
+   * wire, unless vegetation touches them.
+   *
+   * @param frame the span's frame (of the candidates' stations and offsets), or null
+   * @param curves the span's fitted conductors' curves (none: no strand is looked for)
+   */
+  static void setAside(SpanPoints p, boolean[] on, boolean[] linear, boolean[] crossing,
+      SetAside wires, double floorM, double lengthM, double poleRadiusM,
+      org.clearance.line.SpanFrame frame, List<ConductorCurve> curves, SetAside out) {
     int n = p.size();
     boolean[] wire = new boolean[n];
     for (int i = 0; i < n; i++) {
@@ -217,7 +234,17 @@ final class PointEvidence {
         out.addWire(p.key(i));
       }
     }
+    byte[] own = ownWires(p, members, linear, crossing, vegetation, grid, frame, curves);
     IntList near = new IntList();
+    for (int i = 0; i < n; i++) {
+      if (own[i] != 0 && !touched(grid, i, vegetation, near)) {
+        if (own[i] == OWN_CONDUCTOR) {
+          out.addWire(p.key(i));
+        } else {
+          out.addCrossing(p.key(i));
+        }
+      }
+    }
     for (int i = 0; i < n; i++) {
       if (!on[i] && !(crossing[i] && !p.labelled(i))) {
         continue;
@@ -232,6 +259,57 @@ final class PointEvidence {
         out.addCrossing(p.key(i));
       }
     }
+  }
+
+  /** {@link #ownWires}: a point of one of the line's own conductors. */
+  private static final byte OWN_CONDUCTOR = 1;
+  /** {@link #ownWires}: a point of a wire crossing the span. */
+  private static final byte OWN_CROSSING = 2;
+
+  /**
+   * The points of the line's own conductors ({@link ConductorStrands#find}) and of the wires
+   * crossing the span ({@link ConductorStrands#onCrossings}) in groups that are still vegetation
+   * as a whole; they are taken out of {@code vegetation}, so that they touch no wire point, and
+   * are set aside by the caller unless vegetation touches them.
+   *
+   * @return per candidate, 0, {@link #OWN_CONDUCTOR} or {@link #OWN_CROSSING}
+   */
+  private static byte[] ownWires(SpanPoints p, int[][] members, boolean[] linear,
+      boolean[] crossing, boolean[] vegetation, PointGrid grid,
+      org.clearance.line.SpanFrame frame, List<ConductorCurve> curves) {
+    int n = p.size();
+    byte[] own = new byte[n];
+    boolean[] inGroup = new boolean[n];
+    boolean anyCrossing = false;
+    for (boolean c : crossing) {
+      anyCrossing |= c;
+    }
+    boolean[] known = anyCrossing ? crossing.clone() : null;
+    IntList knownList = new IntList();
+    for (int i = 0; i < n && anyCrossing; i++) {
+      if (crossing[i]) {
+        knownList.add(i);
+      }
+    }
+    for (int g = 0; g < n; g++) {
+      int[] m = members[g];
+      if (m == null || !vegetation[m[0]]) {
+        continue;
+      }
+      boolean[] wire = frame == null ? new boolean[m.length]
+          : ConductorStrands.find(p, m, inGroup, linear, grid, frame, curves);
+      boolean[] onCurve = frame == null ? wire
+          : ConductorStrands.onCurves(p, m, frame, curves);
+      boolean[] across = known == null ? new boolean[m.length]
+          : ConductorStrands.onCrossings(p, m, known, knownList);
+      for (int k = 0; k < m.length; k++) {
+        own[m[k]] = wire[k] || onCurve[k] ? OWN_CONDUCTOR : across[k] ? OWN_CROSSING : 0;
+      }
+    }
+    for (int i = 0; i < n; i++) {
+      vegetation[i] &= own[i] == 0;
+    }
+    return own;
   }
 
   /** True when no non-ground point stands in the group's column (plan box s0-s1, e0-e1, widened

@@ -160,6 +160,12 @@ public final class WireFinder {
       return wires;
     }
 
+    /** The curves of the span's fitted conductors. */
+    private List<ConductorCurve> fittedCurves() {
+      return wires.conductors().stream().filter(c -> c.status() == WireStatus.FITTED)
+          .map(c -> c.curve().orElseThrow()).toList();
+    }
+
     /** Number of the span's wire candidates. */
     public int candidates() {
       return points.size();
@@ -186,7 +192,7 @@ public final class WireFinder {
     public void setAside(SetAside wires, SetAside out) {
       if (onWire.length == points.size()) {
         PointEvidence.setAside(points, onWire, linear, crossing, wires, floorM,
-            wires().span().lengthM(), poleRadiusM, out);
+            wires().span().lengthM(), poleRadiusM, wires().span().frame(), fittedCurves(), out);
       }
     }
   }

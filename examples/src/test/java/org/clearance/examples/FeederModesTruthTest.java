@@ -263,7 +263,7 @@ class FeederModesTruthTest {
    * The truth kind of the point at (x, y, z), m: the generated point within a millimetre in
    * each axis (a survey in US survey feet rounds to its own scale), or null (ground).
    */
-  private static TruthId.Kind kind(Map<Long, Integer> kindAt, double x, double y, double z) {
+  static TruthId.Kind kind(Map<Long, Integer> kindAt, double x, double y, double z) {
     long kx = Math.round(x * 1000);
     long ky = Math.round(y * 1000);
     long kz = Math.round(z * 1000);
@@ -281,7 +281,7 @@ class FeederModesTruthTest {
   }
 
   /** Key of a point at millimetres (as sites.csv writes it). */
-  private static long key(double x, double y, double z) {
+  static long key(double x, double y, double z) {
     return packed(Math.round(x * 1000), Math.round(y * 1000), Math.round(z * 1000));
   }
 
