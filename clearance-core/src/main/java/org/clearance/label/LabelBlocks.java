@@ -51,10 +51,11 @@ final class LabelBlocks {
     });
     long n = counters.stream().mapToLong(c -> c.size).sum();
     long later = counters.stream().mapToLong(c -> c.later).sum();
+    long multiPulse = counters.stream().mapToLong(c -> c.multiPulse).sum();
     if (n == 0) {
       return ObjectLabels.NONE;
     }
-    boolean echoes = later >= ObjectLabeller.ECHO_INFORMATIVE_SHARE * n;
+    boolean echoes = ObjectLabeller.echoesInformative(later, multiPulse, n);
     List<LabelledObject> objects = new ArrayList<>();
     List<long[]> manMade = new ArrayList<>();
     long[] counts = new long[4];

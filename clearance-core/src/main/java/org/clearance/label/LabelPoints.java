@@ -45,12 +45,16 @@ final class LabelPoints implements Consumer<PointChunk> {
   int size;
   /** Later returns (return number 2 or more) among the points added. */
   long later;
+  /** Points of pulses with several returns (number of returns 2 or more) among those added. */
+  long multiPulse;
   double[] x = new double[1024];
   double[] y = new double[1024];
   double[] z = new double[1024];
   float[] hag = new float[1024];
   /** Return number of the point within its pulse (0 when the file does not say). */
   byte[] returnNumber = new byte[1024];
+  /** Number of returns of the point's pulse (0 when the file does not say). */
+  byte[] returns = new byte[1024];
   /** What each point was labelled ({@link #OPEN}, {@link #VEGETATION_LABEL},
    * {@link #GROUND_DOUBTED}). */
   byte[] label = new byte[1024];
@@ -101,7 +105,7 @@ final class LabelPoints implements Consumer<PointChunk> {
       if (!high || setAside.reason(SetAside.key(px, py, pz)) != SetAside.Reason.NONE) {
         continue;
       }
-      add(px, py, pz, h, chunk.returnNumber()[i], kind, where);
+      add(px, py, pz, h, chunk.returnNumber()[i], chunk.numberOfReturns()[i], kind, where);
     }
   }
 
@@ -132,12 +136,20 @@ final class LabelPoints implements Consumer<PointChunk> {
     return false;
   }
 
+  /** Adds a point whose pulse had {@code n} returns, this one the last. */
   void add(double px, double py, double pz, double h, byte n, byte kind) {
-    add(px, py, pz, h, n, kind, LabelWindow.CORE);
+    add(px, py, pz, h, n, n, kind, LabelWindow.CORE);
   }
 
-  void add(double px, double py, double pz, double h, byte n, byte kind, byte where) {
+  /**
+   * Adds a point.
+   *
+   * @param n its return number (0 when the file does not say)
+   * @param of the number of returns of its pulse (0 when the file does not say)
+   */
+  void add(double px, double py, double pz, double h, byte n, byte of, byte kind, byte where) {
     later += n >= 2 ? 1 : 0;
+    multiPulse += n >= 2 || of >= 2 ? 1 : 0;
     if (countOnly) {
       size++;
       return;
@@ -149,6 +161,7 @@ final class LabelPoints implements Consumer<PointChunk> {
       z = Arrays.copyOf(z, cap);
       hag = Arrays.copyOf(hag, cap);
       returnNumber = Arrays.copyOf(returnNumber, cap);
+      returns = Arrays.copyOf(returns, cap);
       label = Arrays.copyOf(label, cap);
       zone = Arrays.copyOf(zone, cap);
     }
@@ -157,6 +170,7 @@ final class LabelPoints implements Consumer<PointChunk> {
     z[size] = pz;
     hag[size] = (float) h;
     returnNumber[size] = n;
+    returns[size] = of;
     label[size] = kind;
     zone[size] = where;
     size++;
@@ -165,7 +179,8 @@ final class LabelPoints implements Consumer<PointChunk> {
   /** Adds another collector's points. */
   void absorb(LabelPoints o) {
     for (int i = 0; i < o.size; i++) {
-      add(o.x[i], o.y[i], o.z[i], o.hag[i], o.returnNumber[i], o.label[i], o.zone[i]);
+      add(o.x[i], o.y[i], o.z[i], o.hag[i], o.returnNumber[i], o.returns[i], o.label[i],
+          o.zone[i]);
     }
   }
 }

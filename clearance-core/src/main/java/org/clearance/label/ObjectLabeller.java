@@ -101,8 +101,9 @@ public final class ObjectLabeller {
    * (common practice, no source: inside a crown a pulse returns again, on a roof or a steel
    * member it returns first; see docs/labelling.md for the measured shares). */
   static final double ECHO_VEGETATION_SHARE = 0.1;
-  /** Share of later returns among all points looked at above which the survey's echoes are
-   * read (a file with return numbers all 0 or all 1 tells nothing). */
+  /** Share of later returns, or of points of pulses with several returns, among all points
+   * looked at above which the survey's echoes are read (a file with return numbers and numbers
+   * of returns all 0 or all 1 tells nothing). */
   static final double ECHO_INFORMATIVE_SHARE = 0.05;
   /** Reach of a fragment's attachment to a man-made object, m (open tile: the cut-off top of a
    * crane's jib lies 2.5 and 4.1 m from the rest of the crane, measured). */
@@ -197,6 +198,7 @@ public final class ObjectLabeller {
     double[] z = new double[p.size];
     float[] h = new float[p.size];
     byte[] r = new byte[p.size];
+    byte[] o = new byte[p.size];
     byte[] l = new byte[p.size];
     byte[] w = new byte[p.size];
     for (int k = 0; k < p.size; k++) {
@@ -206,6 +208,7 @@ public final class ObjectLabeller {
       z[k] = p.z[i];
       h[k] = p.hag[i];
       r[k] = p.returnNumber[i];
+      o[k] = p.returns[i];
       l[k] = p.label[i];
       w[k] = p.zone[i];
     }
@@ -215,6 +218,7 @@ public final class ObjectLabeller {
     p.z = z;
     p.hag = h;
     p.returnNumber = r;
+    p.returns = o;
     p.label = l;
   }
 
@@ -223,7 +227,7 @@ public final class ObjectLabeller {
     if (n == 0) {
       return ObjectLabels.NONE;
     }
-    Judged j = judge(p, p.later >= ECHO_INFORMATIVE_SHARE * n);
+    Judged j = judge(p, echoesInformative(p.later, p.multiPulse, n));
     int[] parent = j.root();
     ObjectKind[] kindOf = j.kindOf();
     boolean echoes = j.echoes();
@@ -245,6 +249,19 @@ public final class ObjectLabeller {
     }
     return new ObjectLabels(objects, n, setAsideCount, echoes,
         new ObjectLabels.Doubted(vegetationLabels, vegetationLabelsDoubted, groundDoubted));
+  }
+
+  /**
+   * Whether the survey's echoes tell anything: at least {@link #ECHO_INFORMATIVE_SHARE} of the
+   * points looked at are later returns or come from pulses with several returns.
+   *
+   * @param later points with return number 2 or more
+   * @param multiPulse points whose pulse had several returns
+   * @param n points looked at
+   */
+  static boolean echoesInformative(long later, long multiPulse, long n) {
+    return n > 0 && (later >= ECHO_INFORMATIVE_SHARE * n
+        || multiPulse >= ECHO_INFORMATIVE_SHARE * n);
   }
 
   /**
@@ -333,6 +350,7 @@ public final class ObjectLabeller {
     Arrays.fill(xMax, Double.NEGATIVE_INFINITY);
     Arrays.fill(yMax, Double.NEGATIVE_INFINITY);
     int[] multi = new int[n];
+    int[] multiPulse = new int[n];
     double[] sumLinearity = new double[n];
     double[] sumPlanarity = new double[n];
     double[] sumScattering = new double[n];
@@ -342,6 +360,7 @@ public final class ObjectLabeller {
       int r = root[i];
       count[r]++;
       multi[r] += p.returnNumber[i] >= 2 ? 1 : 0;
+      multiPulse[r] += p.returnNumber[i] >= 2 || p.returns[i] >= 2 ? 1 : 0;
       if (top[r] < 0 || p.hag[i] > p.hag[top[r]]) {
         top[r] = i;
       }
@@ -381,6 +400,8 @@ public final class ObjectLabeller {
         upperCells[r]++;
       }
     }
+    double[] facetShare = Facets.shares(p.size, root, shape, count, withShape, planarDominant,
+        sumScattering);
     List<LabelledObject> out = new ArrayList<>();
     for (int r = 0; r < n; r++) {
       if (root[r] != r || count[r] < MIN_OBJECT_POINTS || withShape[r] == 0) {
@@ -394,20 +415,23 @@ public final class ObjectLabeller {
       double spread = upperCells[r] * SPREAD_CELL_M * SPREAD_CELL_M / height;
       double baseShare = (double) base[r] / count[r];
       double multiShare = echoes ? (double) multi[r] / count[r] : Double.NaN;
+      double pulseShare = echoes ? (double) multiPulse[r] / count[r] : Double.NaN;
       double lengthM = Math.hypot(xMax[r] - xMin[r], yMax[r] - yMin[r]);
       double linearShare = (double) linearDominant[r] / withShape[r];
       ObjectKind kind = decide(height, linearity, scattering, planarShare, spread, baseShare,
-          multiShare);
+          multiShare, pulseShare, facetShare[r]);
       if (kind == ObjectKind.VEGETATION && isLinear(linearity, linearShare, lengthM)) {
         kind = ObjectKind.LINEAR;
       }
       kindOf[r] = kind;
       roots.add(r);
       out.add(new LabelledObject(kind, count[r], p.x[top[r]], p.y[top[r]], height, linearity,
-          planarity, scattering, planarShare, spread, baseShare, multiShare));
+          planarity, scattering, planarShare, spread, baseShare, multiShare, pulseShare,
+          facetShare[r]));
     }
     return out;
   }
+
 
   /**
    * Step 6: a fragment (an object of fewer than {@link #MIN_OBJECT_POINTS} points, too few to
@@ -464,9 +488,10 @@ public final class ObjectLabeller {
         && lengthM >= LINEAR_MIN_LENGTH_M;
   }
 
-  /** The decision of step 5 (class comment). */
+  /** The decision of step 5 (class comment; the shares as {@link LabelledObject}'s). */
   static ObjectKind decide(double heightM, double linearity, double scattering,
-      double planarShare, double spreadM, double baseShare, double multiReturnShare) {
+      double planarShare, double spreadM, double baseShare, double multiReturnShare,
+      double multiPulseShare, double facetShare) {
     if (multiReturnShare >= ECHO_VEGETATION_SHARE) {
       return ObjectKind.VEGETATION;
     }
@@ -477,7 +502,8 @@ public final class ObjectLabeller {
     if (tall && (standing || lattice)) {
       return ObjectKind.MAST;
     }
-    if (planarShare >= PLANAR_MIN_SHARE && scattering <= PLANAR_MAX_SCATTERING) {
+    if (planarShare >= PLANAR_MIN_SHARE && scattering <= PLANAR_MAX_SCATTERING
+        && Facets.roofLike(facetShare, multiPulseShare)) {
       return ObjectKind.PLANAR;
     }
     return ObjectKind.VEGETATION;

@@ -91,12 +91,14 @@ class ObjectLabellerTest {
   @Test
   void laterReturnsKeepAnObjectVegetation() {
     // decide(): the echo veto overrides a mast's and a roof's shape.
-    assertEquals(ObjectKind.MAST, ObjectLabeller.decide(20, 0.7, 0.05, 0.1, 1.0, 0.5, 0.0));
+    assertEquals(ObjectKind.MAST,
+        ObjectLabeller.decide(20, 0.7, 0.05, 0.1, 1.0, 0.5, 0.0, 0.6, Double.NaN));
+    assertEquals(ObjectKind.VEGETATION, ObjectLabeller.decide(20, 0.7, 0.05, 0.1, 1.0, 0.5,
+        ObjectLabeller.ECHO_VEGETATION_SHARE, 0.6, Double.NaN));
+    assertEquals(ObjectKind.PLANAR,
+        ObjectLabeller.decide(5, 0.4, 0.01, 0.8, 10, 0, Double.NaN, Double.NaN, 0.9));
     assertEquals(ObjectKind.VEGETATION,
-        ObjectLabeller.decide(20, 0.7, 0.05, 0.1, 1.0, 0.5, ObjectLabeller.ECHO_VEGETATION_SHARE));
-    assertEquals(ObjectKind.PLANAR, ObjectLabeller.decide(5, 0.4, 0.01, 0.8, 10, 0, Double.NaN));
-    assertEquals(ObjectKind.VEGETATION,
-        ObjectLabeller.decide(5, 0.4, 0.01, 0.8, 10, 0, 0.3));
+        ObjectLabeller.decide(5, 0.4, 0.01, 0.8, 10, 0, 0.3, 0.5, 0.9));
   }
 
   @Test
