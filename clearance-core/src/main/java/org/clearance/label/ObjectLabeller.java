@@ -40,7 +40,9 @@ import org.clearance.wire.SetAside;
  *       {@link #LATTICE_MIN_LINEARITY}, scattering at most {@link #LATTICE_MAX_SCATTERING}, at
  *       least {@link #LATTICE_MIN_BASE_SHARE} of its points in the lowest quarter: a tower
  *       crane); {@link ObjectKind#PLANAR} when at least {@link #PLANAR_MIN_SHARE} of its
- *       points are planar and its mean scattering is at most {@link #PLANAR_MAX_SCATTERING}.
+ *       points are planar, its mean scattering is at most {@link #PLANAR_MAX_SCATTERING} and
+ *       it is a few flat faces stopping its pulses ({@link Facets#roofLike}: a crown is not a
+ *       roof).
  *       Where echoes are recorded, an object with {@link #ECHO_VEGETATION_SHARE} or more later
  *       returns stays vegetation whatever its shape. An object that is none of these but long
  *       and thin ({@link #isLinear}) is {@link ObjectKind#LINEAR}: a wire nobody named, or a
