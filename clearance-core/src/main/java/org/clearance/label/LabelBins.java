@@ -38,6 +38,8 @@ final class LabelBins implements Consumer<PointChunk> {
   long looked;
   /** Later returns among {@link #looked}. */
   long later;
+  /** Points of pulses with several returns among those looked at. */
+  long multiPulse;
 
   LabelBins(List<SpanFrame> frames, double regionM, GroundModel ground, SetAside setAside,
       boolean judgeVegetationLabels, PlanGrid grid, List<LabelWindow> windows,
@@ -75,26 +77,28 @@ final class LabelBins implements Consumer<PointChunk> {
         continue;
       }
       byte n = chunk.returnNumber()[i];
+      byte of = chunk.numberOfReturns()[i];
       looked++;
       later += n >= 2 ? 1 : 0;
+      multiPulse += n >= 2 || of >= 2 ? 1 : 0;
       for (int t = grid.windowsFrom(cell); t < grid.windowsTo(cell); t++) {
         int b = grid.window(t);
         byte zone = windows.get(b).zone(px, py, owner);
         if (zone != LabelWindow.OUTSIDE) {
-          add(b, px, py, pz, h, n, kind, zone);
+          add(b, px, py, pz, h, n, of, kind, zone);
         }
       }
     }
   }
 
-  private void add(int block, double px, double py, double pz, double h, byte n, byte kind,
-      byte zone) {
+  private void add(int block, double px, double py, double pz, double h, byte n, byte of,
+      byte kind, byte zone) {
     LabelPoints p = pending[block];
     if (p == null) {
       p = LabelPoints.holder(256);
       pending[block] = p;
     }
-    p.add(px, py, pz, h, n, kind, zone);
+    p.add(px, py, pz, h, n, of, kind, zone);
     pendingPoints++;
     if (p.size == LabelStore.SEGMENT_POINTS) {
       write(block);

@@ -75,10 +75,11 @@ final class LabelBlocks {
       }
       long n = bins.stream().mapToLong(b -> b.looked).sum();
       long later = bins.stream().mapToLong(b -> b.later).sum();
+      long multiPulse = bins.stream().mapToLong(b -> b.multiPulse).sum();
       if (n == 0) {
         return ObjectLabels.NONE;
       }
-      boolean echoes = later >= ObjectLabeller.ECHO_INFORMATIVE_SHARE * n;
+      boolean echoes = ObjectLabeller.echoesInformative(later, multiPulse, n);
       List<LabelledObject> objects = new ArrayList<>();
       List<long[]> manMade = new ArrayList<>();
       long[] counts = new long[4];

@@ -35,8 +35,8 @@ final class LabelPoints implements Consumer<PointChunk> {
   static final byte GROUND_DOUBTED = 2;
 
   /** Bytes a point takes in a block store ({@link #writeColumns}): x, y, z, height, return
-   * number, label, zone. */
-  static final int BYTES_PER_POINT = 3 * Double.BYTES + Float.BYTES + 3;
+   * number, number of returns, label, zone. */
+  static final int BYTES_PER_POINT = 3 * Double.BYTES + Float.BYTES + 4;
 
   private final List<SpanFrame> frames;
   private final double regionM;
@@ -47,12 +47,16 @@ final class LabelPoints implements Consumer<PointChunk> {
   int size;
   /** Later returns (return number 2 or more) among the points added. */
   long later;
+  /** Points of pulses with several returns (number of returns 2 or more) among those added. */
+  long multiPulse;
   double[] x;
   double[] y;
   double[] z;
   float[] hag;
   /** Return number of the point within its pulse (0 when the file does not say). */
   byte[] returnNumber;
+  /** Number of returns of the point's pulse (0 when the file does not say). */
+  byte[] returns;
   /** What each point was labelled ({@link #OPEN}, {@link #VEGETATION_LABEL},
    * {@link #GROUND_DOUBTED}). */
   byte[] label;
@@ -77,6 +81,7 @@ final class LabelPoints implements Consumer<PointChunk> {
     z = new double[capacity];
     hag = new float[capacity];
     returnNumber = new byte[capacity];
+    returns = new byte[capacity];
     label = new byte[capacity];
     zone = new byte[capacity];
   }
@@ -105,7 +110,8 @@ final class LabelPoints implements Consumer<PointChunk> {
       if (!looked(kind, h, setAside, px, py, pz)) {
         continue;
       }
-      add(px, py, pz, h, chunk.returnNumber()[i], kind, LabelWindow.CORE);
+      add(px, py, pz, h, chunk.returnNumber()[i], chunk.numberOfReturns()[i], kind,
+          LabelWindow.CORE);
     }
   }
 
@@ -150,12 +156,20 @@ final class LabelPoints implements Consumer<PointChunk> {
     return s >= -regionM && s <= f.length() + regionM && Math.abs(f.offset(px, py)) <= regionM;
   }
 
+  /** Adds a point whose pulse had {@code n} returns, this one the last. */
   void add(double px, double py, double pz, double h, byte n, byte kind) {
-    add(px, py, pz, h, n, kind, LabelWindow.CORE);
+    add(px, py, pz, h, n, n, kind, LabelWindow.CORE);
   }
 
-  void add(double px, double py, double pz, double h, byte n, byte kind, byte where) {
+  /**
+   * Adds a point.
+   *
+   * @param n its return number (0 when the file does not say)
+   * @param of the number of returns of its pulse (0 when the file does not say)
+   */
+  void add(double px, double py, double pz, double h, byte n, byte of, byte kind, byte where) {
     later += n >= 2 ? 1 : 0;
+    multiPulse += n >= 2 || of >= 2 ? 1 : 0;
     if (size == x.length) {
       int cap = size * 2;
       x = Arrays.copyOf(x, cap);
@@ -163,6 +177,7 @@ final class LabelPoints implements Consumer<PointChunk> {
       z = Arrays.copyOf(z, cap);
       hag = Arrays.copyOf(hag, cap);
       returnNumber = Arrays.copyOf(returnNumber, cap);
+      returns = Arrays.copyOf(returns, cap);
       label = Arrays.copyOf(label, cap);
       zone = Arrays.copyOf(zone, cap);
     }
@@ -171,6 +186,7 @@ final class LabelPoints implements Consumer<PointChunk> {
     z[size] = pz;
     hag[size] = (float) h;
     returnNumber[size] = n;
+    returns[size] = of;
     label[size] = kind;
     zone[size] = where;
     size++;
@@ -189,6 +205,7 @@ final class LabelPoints implements Consumer<PointChunk> {
     out.asFloatBuffer().put(hag, 0, size);
     out.position(out.position() + size * Float.BYTES);
     out.put(returnNumber, 0, size);
+    out.put(returns, 0, size);
     out.put(label, 0, size);
     out.put(zone, 0, size);
     out.flip();
@@ -207,10 +224,12 @@ final class LabelPoints implements Consumer<PointChunk> {
     in.asFloatBuffer().get(hag, at, n);
     in.position(in.position() + n * Float.BYTES);
     in.get(returnNumber, at, n);
+    in.get(returns, at, n);
     in.get(label, at, n);
     in.get(zone, at, n);
     for (int i = at; i < at + n; i++) {
       later += returnNumber[i] >= 2 ? 1 : 0;
+      multiPulse += returnNumber[i] >= 2 || returns[i] >= 2 ? 1 : 0;
     }
     size += n;
   }
@@ -218,7 +237,8 @@ final class LabelPoints implements Consumer<PointChunk> {
   /** Adds another collector's points. */
   void absorb(LabelPoints o) {
     for (int i = 0; i < o.size; i++) {
-      add(o.x[i], o.y[i], o.z[i], o.hag[i], o.returnNumber[i], o.label[i], o.zone[i]);
+      add(o.x[i], o.y[i], o.z[i], o.hag[i], o.returnNumber[i], o.returns[i], o.label[i],
+          o.zone[i]);
     }
   }
 }

@@ -19,10 +19,16 @@ package org.clearance.label;
  *     crown is seen from above
  * @param multiReturnShare share of its points that are later returns of their pulse (return
  *     number 2 or more; 0-1), NaN when the survey's echoes tell nothing
+ * @param multiPulseShare share of its points that come from pulses with several returns (number
+ *     of returns 2 or more, or a later return; 0-1), NaN when the survey's echoes tell nothing:
+ *     a roof stops the pulse, a crown lets it on
+ * @param facetShare share of its planar points whose normals lie in its few main facets (0-1;
+ *     a roof's faces, a wall), NaN when it does not have a planar object's shape
  */
 public record LabelledObject(ObjectKind kind, int points, double x, double y, double heightM,
     double linearity, double planarity, double scattering, double planarShare,
-    double upperSpreadM, double baseShare, double multiReturnShare) {
+    double upperSpreadM, double baseShare, double multiReturnShare, double multiPulseShare,
+    double facetShare) {
 
   /** Mean planarity less mean scattering: high for lattices, masts and sheets, low for crowns. */
   public double contrast() {

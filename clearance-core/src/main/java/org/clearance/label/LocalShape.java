@@ -9,14 +9,18 @@ import org.clearance.wire.Eigen3;
  * 2011, "Dimensionality based scale selection in 3D lidar point clouds", ISPRS Archives
  * XXXVIII-5/W12; Weinmann, Jutzi, Hinz and Mallet 2015, "Semantic point cloud interpretation
  * based on optimal neighborhoods, relevant features and efficient classifiers", ISPRS J.
- * 105:286-304, eigenvalue-based features), and the verticality |v1z| of the principal direction.
+ * 105:286-304, eigenvalue-based features), the verticality |v1z| of the principal direction,
+ * and the normal: the unit eigenvector of l3, turned upwards (nz &gt;= 0), the direction a
+ * roof's facet faces.
  *
  * @param linearity (l1 - l2) / l1, 0-1
  * @param planarity (l2 - l3) / l1, 0-1
  * @param scattering l3 / l1, 0-1
  * @param verticality |z component| of the unit principal direction, 0 (level) to 1 (vertical)
+ * @param nx x component of the unit normal (eigenvector of l3), likewise ny and nz (nz &gt;= 0)
  */
-record LocalShape(double linearity, double planarity, double scattering, double verticality) {
+record LocalShape(double linearity, double planarity, double scattering, double verticality,
+    double nx, double ny, double nz) {
 
   /** Which of the three features is largest: 0 linear, 1 planar, 2 scattered. */
   int dominant() {
@@ -38,14 +42,48 @@ record LocalShape(double linearity, double planarity, double scattering, double 
     double mx = sx / n;
     double my = sy / n;
     double mz = sz / n;
-    Eigen3.Result r = Eigen3.symmetric(sxx / n - mx * mx, sxy / n - mx * my, sxz / n - mx * mz,
-        syy / n - my * my, syz / n - my * mz, szz / n - mz * mz);
+    double cxx = sxx / n - mx * mx;
+    double cxy = sxy / n - mx * my;
+    double cxz = sxz / n - mx * mz;
+    double cyy = syy / n - my * my;
+    double cyz = syz / n - my * mz;
+    double czz = szz / n - mz * mz;
+    Eigen3.Result r = Eigen3.symmetric(cxx, cxy, cxz, cyy, cyz, czz);
     double l1 = r.l1();
     if (!(l1 > 0)) {
       return null;
     }
     double l2 = Math.max(0, r.l2());
     double l3 = Math.max(0, r.l3());
-    return new LocalShape((l1 - l2) / l1, (l2 - l3) / l1, l3 / l1, Math.abs(r.v1z()));
+    double[] normal = nullVector(cxx - r.l3(), cxy, cxz, cyy - r.l3(), cyz, czz - r.l3());
+    return new LocalShape((l1 - l2) / l1, (l2 - l3) / l1, l3 / l1, Math.abs(r.v1z()),
+        normal[0], normal[1], normal[2]);
+  }
+
+  /**
+   * The unit vector a symmetric matrix of rank 2, [[a, b, c], [b, d, e], [c, e, f]], sends to
+   * zero: the largest cross product of two of its rows (each row is orthogonal to the null
+   * vector), turned so its z component is not negative; (0, 0, 1) when the rank is lower.
+   */
+  static double[] nullVector(double a, double b, double c, double d, double e, double f) {
+    double[][] rows = {{a, b, c}, {b, d, e}, {c, e, f}};
+    double[] best = {0, 0, 1};
+    double bestNorm = 0;
+    for (int i = 0; i < 2; i++) {
+      for (int j = i + 1; j < 3; j++) {
+        double[] u = rows[i];
+        double[] v = rows[j];
+        double x = u[1] * v[2] - u[2] * v[1];
+        double y = u[2] * v[0] - u[0] * v[2];
+        double z = u[0] * v[1] - u[1] * v[0];
+        double norm = Math.sqrt(x * x + y * y + z * z);
+        if (norm > bestNorm) {
+          bestNorm = norm;
+          double sign = z < 0 ? -1 : 1;
+          best = new double[] {sign * x / norm, sign * y / norm, sign * z / norm};
+        }
+      }
+    }
+    return best;
   }
 }

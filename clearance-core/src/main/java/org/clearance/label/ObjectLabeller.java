@@ -43,7 +43,9 @@ import org.clearance.wire.SetAside;
  *       {@link #LATTICE_MIN_LINEARITY}, scattering at most {@link #LATTICE_MAX_SCATTERING}, at
  *       least {@link #LATTICE_MIN_BASE_SHARE} of its points in the lowest quarter: a tower
  *       crane); {@link ObjectKind#PLANAR} when at least {@link #PLANAR_MIN_SHARE} of its
- *       points are planar and its mean scattering is at most {@link #PLANAR_MAX_SCATTERING}.
+ *       points are planar, its mean scattering is at most {@link #PLANAR_MAX_SCATTERING} and
+ *       it is a few flat faces stopping its pulses ({@link Facets#roofLike}: a crown is not a
+ *       roof).
  *       Where echoes are recorded, an object with {@link #ECHO_VEGETATION_SHARE} or more later
  *       returns stays vegetation whatever its shape. An object that is none of these but long
  *       and thin ({@link #isLinear}) is {@link ObjectKind#LINEAR}: a wire nobody named, or a
@@ -104,8 +106,9 @@ public final class ObjectLabeller {
    * (common practice, no source: inside a crown a pulse returns again, on a roof or a steel
    * member it returns first; see docs/labelling.md for the measured shares). */
   static final double ECHO_VEGETATION_SHARE = 0.1;
-  /** Share of later returns among all points looked at above which the survey's echoes are
-   * read (a file with return numbers all 0 or all 1 tells nothing). */
+  /** Share of later returns, or of points of pulses with several returns, among all points
+   * looked at above which the survey's echoes are read (a file with return numbers and numbers
+   * of returns all 0 or all 1 tells nothing). */
   static final double ECHO_INFORMATIVE_SHARE = 0.05;
   /** Reach of a fragment's attachment to a man-made object, m (open tile: the cut-off top of a
    * crane's jib lies 2.5 and 4.1 m from the rest of the crane, measured). */
@@ -221,6 +224,7 @@ public final class ObjectLabeller {
     double[] z = new double[p.size];
     float[] h = new float[p.size];
     byte[] r = new byte[p.size];
+    byte[] o = new byte[p.size];
     byte[] l = new byte[p.size];
     byte[] w = new byte[p.size];
     for (int k = 0; k < p.size; k++) {
@@ -230,6 +234,7 @@ public final class ObjectLabeller {
       z[k] = p.z[i];
       h[k] = p.hag[i];
       r[k] = p.returnNumber[i];
+      o[k] = p.returns[i];
       l[k] = p.label[i];
       w[k] = p.zone[i];
     }
@@ -239,6 +244,7 @@ public final class ObjectLabeller {
     p.z = z;
     p.hag = h;
     p.returnNumber = r;
+    p.returns = o;
     p.label = l;
   }
 
@@ -247,7 +253,7 @@ public final class ObjectLabeller {
     if (n == 0) {
       return ObjectLabels.NONE;
     }
-    Judged j = judge(p, p.later >= ECHO_INFORMATIVE_SHARE * n);
+    Judged j = judge(p, echoesInformative(p.later, p.multiPulse, n));
     int[] parent = j.root();
     ObjectKind[] kindOf = j.kindOf();
     boolean echoes = j.echoes();
@@ -269,6 +275,19 @@ public final class ObjectLabeller {
     }
     return new ObjectLabels(objects, n, setAsideCount, echoes,
         new ObjectLabels.Doubted(vegetationLabels, vegetationLabelsDoubted, groundDoubted));
+  }
+
+  /**
+   * Whether the survey's echoes tell anything: at least {@link #ECHO_INFORMATIVE_SHARE} of the
+   * points looked at are later returns or come from pulses with several returns.
+   *
+   * @param later points with return number 2 or more
+   * @param multiPulse points whose pulse had several returns
+   * @param n points looked at
+   */
+  static boolean echoesInformative(long later, long multiPulse, long n) {
+    return n > 0 && (later >= ECHO_INFORMATIVE_SHARE * n
+        || multiPulse >= ECHO_INFORMATIVE_SHARE * n);
   }
 
   /**
@@ -356,6 +375,7 @@ public final class ObjectLabeller {
     Arrays.fill(xMax, Double.NEGATIVE_INFINITY);
     Arrays.fill(yMax, Double.NEGATIVE_INFINITY);
     int[] multi = new int[n];
+    int[] multiPulse = new int[n];
     double[] sumLinearity = new double[n];
     double[] sumPlanarity = new double[n];
     double[] sumScattering = new double[n];
@@ -365,6 +385,7 @@ public final class ObjectLabeller {
       int r = root[i];
       count[r]++;
       multi[r] += p.returnNumber[i] >= 2 ? 1 : 0;
+      multiPulse[r] += p.returnNumber[i] >= 2 || p.returns[i] >= 2 ? 1 : 0;
       if (top[r] < 0 || p.hag[i] > p.hag[top[r]]) {
         top[r] = i;
       }
@@ -404,6 +425,8 @@ public final class ObjectLabeller {
         upperCells[r]++;
       }
     }
+    double[] facetShare = Facets.shares(p.size, root, shape, count, withShape, planarDominant,
+        sumScattering);
     List<LabelledObject> out = new ArrayList<>();
     for (int r = 0; r < n; r++) {
       if (root[r] != r || count[r] < LINEAR_MIN_POINTS || withShape[r] == 0) {
@@ -426,20 +449,23 @@ public final class ObjectLabeller {
       double spread = upperCells[r] * SPREAD_CELL_M * SPREAD_CELL_M / height;
       double baseShare = (double) base[r] / count[r];
       double multiShare = echoes ? (double) multi[r] / count[r] : Double.NaN;
+      double pulseShare = echoes ? (double) multiPulse[r] / count[r] : Double.NaN;
       double lengthM = Math.hypot(xMax[r] - xMin[r], yMax[r] - yMin[r]);
       double linearShare = (double) linearDominant[r] / withShape[r];
       ObjectKind kind = decide(height, linearity, scattering, planarShare, spread, baseShare,
-          multiShare);
+          multiShare, pulseShare, facetShare[r]);
       if (kind == ObjectKind.VEGETATION && isLinear(linearity, linearShare, lengthM)) {
         kind = ObjectKind.LINEAR;
       }
       kindOf[r] = kind;
       roots.add(r);
       out.add(new LabelledObject(kind, count[r], p.x[top[r]], p.y[top[r]], height, linearity,
-          planarity, scattering, planarShare, spread, baseShare, multiShare));
+          planarity, scattering, planarShare, spread, baseShare, multiShare, pulseShare,
+          facetShare[r]));
     }
     return out;
   }
+
 
   /**
    * Step 6: a fragment (an object of fewer than {@link #MIN_OBJECT_POINTS} points, too few to
@@ -498,9 +524,10 @@ public final class ObjectLabeller {
         && lengthM >= LINEAR_MIN_LENGTH_M;
   }
 
-  /** The decision of step 5 (class comment). */
+  /** The decision of step 5 (class comment; the shares as {@link LabelledObject}'s). */
   static ObjectKind decide(double heightM, double linearity, double scattering,
-      double planarShare, double spreadM, double baseShare, double multiReturnShare) {
+      double planarShare, double spreadM, double baseShare, double multiReturnShare,
+      double multiPulseShare, double facetShare) {
     if (multiReturnShare >= ECHO_VEGETATION_SHARE) {
       return ObjectKind.VEGETATION;
     }
@@ -511,7 +538,8 @@ public final class ObjectLabeller {
     if (tall && (standing || lattice)) {
       return ObjectKind.MAST;
     }
-    if (planarShare >= PLANAR_MIN_SHARE && scattering <= PLANAR_MAX_SCATTERING) {
+    if (planarShare >= PLANAR_MIN_SHARE && scattering <= PLANAR_MAX_SCATTERING
+        && Facets.roofLike(facetShare, multiPulseShare)) {
       return ObjectKind.PLANAR;
     }
     return ObjectKind.VEGETATION;

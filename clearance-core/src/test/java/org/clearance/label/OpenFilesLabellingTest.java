@@ -68,11 +68,12 @@ class OpenFilesLabellingTest {
         setAside, false);
     System.out.println(name + ": " + labels.describe());
     for (LabelledObject o : labels.objects()) {
-      if (o.kind() != ObjectKind.VEGETATION) {
+      if (o.kind() != ObjectKind.VEGETATION || !Double.isNaN(o.facetShare())) {
         System.out.println(String.format(Locale.ROOT, "  %s %d pts h %.1f m L %.3f S %.3f"
-            + " planar share %.2f spread %.2f base %.2f later returns %.2f", o.kind(),
-            o.points(), o.heightM(), o.linearity(), o.scattering(), o.planarShare(),
-            o.upperSpreadM(), o.baseShare(), o.multiReturnShare()));
+            + " planar share %.2f spread %.2f base %.2f later returns %.2f multi-return pulses"
+            + " %.2f facets %.2f", o.kind(), o.points(), o.heightM(), o.linearity(),
+            o.scattering(), o.planarShare(), o.upperSpreadM(), o.baseShare(),
+            o.multiReturnShare(), o.multiPulseShare(), o.facetShare()));
       }
     }
     TreeMap<Integer, long[]> byClass = new TreeMap<>();

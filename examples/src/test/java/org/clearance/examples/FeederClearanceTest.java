@@ -83,16 +83,25 @@ class FeederClearanceTest {
    * 9): the neutral, fitted over 63 % of the span, left its other points in a crown's group,
    * measured as vegetation 0.504 m from a phase (seed 43, triangular framing, ground-only: span
    * P208-P209, true 2.154 m); points on a fitted conductor's curve or on a strand hanging like
-   * one are wire now, so no span minimum is set by the line's own wire.
+   * one are wire now, so no span minimum is set by the line's own wire. Regression (issue 9,
+   * "a crown is not a roof"): the smooth shell of tree 27's crown (118 first returns) was taken
+   * for a roof and its points set aside (seed 46, vertical framing, ground-only: span P204-P205
+   * minimum 9.403 m against a true 5.013 m); a roof now needs a few flat facets and, where
+   * echoes are recorded, pulses that stop on it. The same survey with every point rewritten 1 of
+   * 1 (echoes not recorded) is held too.
    */
-  @ParameterizedTest(name = "seed {0}, {1}, {2}")
-  @CsvSource({"42, VERTICAL, GROUND_ONLY", "41, TRIANGULAR, UNCLASSIFIED",
-      "43, TRIANGULAR, GROUND_ONLY"})
+  @ParameterizedTest(name = "seed {0}, {1}, {2}, single returns {3}")
+  @CsvSource({"42, VERTICAL, GROUND_ONLY, false", "41, TRIANGULAR, UNCLASSIFIED, false",
+      "43, TRIANGULAR, GROUND_ONLY, false", "46, VERTICAL, GROUND_ONLY, false",
+      "46, VERTICAL, GROUND_ONLY, true"})
   void inferredVegetationNeverLeavesAMinimumAboveTheTruth(long seed, Framing framing,
-      ClassificationMode mode) throws IOException {
+      ClassificationMode mode, boolean singleReturns) throws IOException {
     FeederOptions options = FeederOptions.defaults().withSeed(seed).withSpanCount(10)
         .withFraming(framing).withMode(mode);
     DemoCorridor.DemoFiles files = FeederFiles.write(dir.resolve("in"), options);
+    if (singleReturns) {
+      SingleReturns.rewrite(files.survey());
+    }
     Path runDir = dir.resolve("run");
     new ClearanceCheck(CheckOptions.defaults(2), new PrintWriter(new StringWriter())).run(
         new CheckInputs(List.of(files.survey()), UnitsChoice.fromFile(), files.structures(),
@@ -115,8 +124,8 @@ class FeederClearanceTest {
         continue;
       }
       double got = span.minima().get(0).distance();
-      System.out.printf(Locale.ROOT, "inferred %d %s %s %s: truth %.3f m, check %.3f m%n",
-          seed, framing, mode, span.id(), truth[i], got);
+      System.out.printf(Locale.ROOT, "inferred %d %s %s %s %s: truth %.3f m, check %.3f m%n",
+          seed, framing, mode, singleReturns ? "1/1" : "echoes", span.id(), truth[i], got);
       assertTrue(got <= truth[i] + TOL_M, span.id() + ": " + got + " > " + truth[i]);
       ConditionMinimum m = span.minima().get(0);
       assertTrue(FeederModesTruthTest.kind(kindAt, m.x(), m.y(), m.z()) != TruthId.Kind.WIRE,
