@@ -16,6 +16,14 @@ final class StructureZone {
    * the bisector of the line's turn: 3 m + 8 m x tan(15.6 deg) = 5.2 m along at a 31 degree
    * turn), the hardware reaches out to the farthest conductor end, plus {@link #ARM_END_MARGIN_M}. */
   static final double ARM_ALONG_M = 5.0;
+  /** The same on a pole line, m: a pole's arms run across the line, so along it the hardware is
+   * only the arm's depth with its insulators and ties (about 0.3 m either side of the pole,
+   * common practice, no source) and the attachments' plan error (0.3 m, docs/wire-finder.md);
+   * 1.5 m allows twice that for the scatter of the returns. A strain assembly reaching farther
+   * along is covered by the fitted conductor ends, as on towers. The tower's 5 m set aside the
+   * vegetation 4-5 m from a pole (generated feeder, seed 48, vertical framing, ground-only:
+   * span P201-P202 read 5.849 m against a true 5.543 m). */
+  static final double POLE_ARM_ALONG_M = 1.5;
   /** Reach of the hardware along the line beyond the farthest fitted conductor end, m: the
    * fitted attachments lie within 0.3 m of the true ones in plan (docs/wire-finder.md), and the
    * clamp and jumper points scatter a few centimetres about them. */
@@ -64,7 +72,8 @@ final class StructureZone {
   /**
    * Whether a point at station {@code s} and offset {@code e} of the span (m) and elevation
    * {@code z} lies where a structure's cross arms, insulators and jumpers are: within
-   * {@link #ARM_ALONG_M} along the line of a structure, or out to the farthest fitted conductor
+   * {@link #ARM_ALONG_M} along the line of a structure ({@link #POLE_ARM_ALONG_M} on a pole line:
+   * a span with its own structure exclusion), or out to the farthest fitted conductor
    * end there and {@link #ARM_END_MARGIN_M} beyond (a strain insulator and the jumper end where
    * the conductor begins), across out to {@link #ARM_MARGIN_M} beyond the outermost conductor
    * end there on either side (a conductor not fitted, say with a gap in its points, still has
@@ -78,7 +87,9 @@ final class StructureZone {
       }
       double along = end == 0 ? s : s - p.model.span().lengthM();
       double half = Math.max(Math.abs(p.armELo[end]), Math.abs(p.armEHi[end])) + ARM_MARGIN_M;
-      double reach = Math.max(ARM_ALONG_M, p.armAlong[end] + ARM_END_MARGIN_M);
+      double least = Double.isNaN(p.model.structureExclusionM()) ? ARM_ALONG_M
+          : POLE_ARM_ALONG_M;
+      double reach = Math.max(least, p.armAlong[end] + ARM_END_MARGIN_M);
       if (Math.abs(along) <= reach && Math.abs(e) <= half
           && z >= p.armZLo[end] - ARM_BELOW_M) {
         return true;
