@@ -13,8 +13,9 @@ import org.clearance.line.Span;
  * more to the span in plan and no steeper than {@value #MAX_STEEP_DEG} degrees. The span's own
  * conductors run within 10 degrees of it (docs/wire-finder.md, step 5), so nothing of them is
  * taken; a pole is vertical, a guy wire steep, a cross arm shorter than the least run, and a
- * crown neither thin nor straight. A crossing wire touching a crown joins the crown's group and
- * is not recognised: it is then measured as vegetation, which only brings a reading closer.
+ * crown neither thin nor straight. A crossing wire that passes within the link distance of a
+ * crown joins the crown's group; such a group is tested again by its line cores ({@link
+ * #lineCores}), so the wire's points away from the crown are still recognised (issue 9).
  */
 final class CrossingFinder {
 
