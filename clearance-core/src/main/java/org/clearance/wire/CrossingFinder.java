@@ -13,8 +13,9 @@ import org.clearance.line.Span;
  * more to the span in plan and no steeper than {@value #MAX_STEEP_DEG} degrees. The span's own
  * conductors run within 10 degrees of it (docs/wire-finder.md, step 5), so nothing of them is
  * taken; a pole is vertical, a guy wire steep, a cross arm shorter than the least run, and a
- * crown neither thin nor straight. A crossing wire touching a crown joins the crown's group and
- * is not recognised: it is then measured as vegetation, which only brings a reading closer.
+ * crown neither thin nor straight. A crossing wire that passes within the link distance of a
+ * crown joins the crown's group; such a group is tested again by its line cores ({@link
+ * #lineCores}), so the wire's points away from the crown are still recognised (issue 9).
  */
 final class CrossingFinder {
 
@@ -36,6 +37,11 @@ final class CrossingFinder {
   /** Largest RMS distance of the points from their line, m: the RMS threshold of a fitted
    * conductor ({@link WireFinderOptions.Quality#defaults()}). */
   static final double MAX_RMS_M = 0.15;
+
+  /** Radius of the neighbourhood of a line core's point, m: the wire evidence's sphere
+   * ({@link WireFinderOptions.Evidence#defaults()}), a few points of a wire sampled at one to
+   * three points per metre. */
+  static final double CORE_RADIUS_M = 1.5;
 
   /** Pieces of one crossing wire meet the span within this in plan, m, at angles within
    * this, degrees, and elevations within this, m: a few times the position error of a line
@@ -100,7 +106,19 @@ final class CrossingFinder {
     }
     List<IntList> lines = new ArrayList<>();
     List<Crossing> found = new ArrayList<>();
+    List<IntList> tried = new ArrayList<>();
+    boolean[] scratchIn = new boolean[n];
+    boolean[] scratchCore = new boolean[n];
+    int[] scratchParent = new int[n];
     for (IntList g : groups) {
+      Crossing whole = g.size() < MIN_POINTS ? null : crossing(p, g, span, conductors);
+      if (whole != null || g.size() < MIN_POINTS) {
+        tried.add(g);
+      } else {
+        tried.addAll(lineCores(p, g, grid, scratchIn, scratchCore, scratchParent));
+      }
+    }
+    for (IntList g : tried) {
       Crossing c = g.size() < MIN_POINTS ? null : crossing(p, g, span, conductors);
       if (c == null) {
         continue;
@@ -138,6 +156,68 @@ final class CrossingFinder {
     }
     out.sort(java.util.Comparator.comparingDouble(Crossing::stationM));
     return new Found(out, member);
+  }
+
+  /**
+   * The line cores of a group that is no crossing wire as a whole (a crossing wire joined to a
+   * crown within the link distance): its points whose neighbours in the group within {@link
+   * #CORE_RADIUS_M} (at least {@link WireFinderOptions.Evidence#MIN_NEIGHBOURS}, the point
+   * included) form a line in any direction, linearity at least {@link #MIN_LINEARITY}, joined
+   * within {@link #LINK_M} (single linkage). Each core is then tested as a group is; a crown's
+   * points give no core that passes. A crossing wire's points within the radius of the crown are
+   * no core; they are followed into the crown's group later ({@link ConductorStrands#onCrossings})
+   * and stay measured where vegetation touches them.
+   */
+  static List<IntList> lineCores(SpanPoints p, IntList g, PointGrid grid, boolean[] inGroup,
+      boolean[] core, int[] parent) {
+    for (int k = 0; k < g.size(); k++) {
+      inGroup[g.get(k)] = true;
+    }
+    IntList near = new IntList();
+    IntList nb = new IntList();
+    for (int k = 0; k < g.size(); k++) {
+      int i = g.get(k);
+      grid.within(i, CORE_RADIUS_M, near);
+      nb.clear();
+      for (int t = 0; t < near.size(); t++) {
+        if (inGroup[near.get(t)]) {
+          nb.add(near.get(t));
+        }
+      }
+      if (nb.size() < WireFinderOptions.Evidence.MIN_NEIGHBOURS) {
+        continue;
+      }
+      Eigen3.Result r = PointSpread.of(p, nb).axes();
+      core[i] = r.l1() > 0 && (r.l1() - r.l2()) / r.l1() >= MIN_LINEARITY;
+    }
+    for (int k = 0; k < g.size(); k++) {
+      int i = g.get(k);
+      parent[i] = core[i] ? i : -1;
+    }
+    for (int k = 0; k < g.size(); k++) {
+      int i = g.get(k);
+      if (!core[i]) {
+        continue;
+      }
+      grid.within(i, LINK_M, near);
+      for (int t = 0; t < near.size(); t++) {
+        if (inGroup[near.get(t)] && core[near.get(t)]) {
+          DisjointSets.union(parent, i, near.get(t));
+        }
+      }
+    }
+    java.util.Map<Integer, IntList> byRoot = new java.util.TreeMap<>();
+    for (int k = 0; k < g.size(); k++) {
+      int i = g.get(k);
+      if (core[i]) {
+        byRoot.computeIfAbsent(DisjointSets.root(parent, i), x -> new IntList()).add(i);
+      }
+    }
+    for (int k = 0; k < g.size(); k++) {
+      inGroup[g.get(k)] = false;
+      core[g.get(k)] = false;
+    }
+    return new ArrayList<>(byRoot.values());
   }
 
   /** True when two crossings are pieces of one straight wire: they meet the span at one place,

@@ -172,9 +172,10 @@ final class PointEvidence {
       SetAside wires, double floorM, double lengthM, double poleRadiusM,
       org.clearance.line.SpanFrame frame, List<ConductorCurve> curves, SetAside out) {
     int n = p.size();
+    boolean[] fitted = onFittedCurves(p, frame, curves);
     boolean[] wire = new boolean[n];
     for (int i = 0; i < n; i++) {
-      wire[i] = on[i] || crossing[i] || p.labelled(i)
+      wire[i] = on[i] || fitted[i] || crossing[i] || p.labelled(i)
           || wires.reason(p.key(i)) == SetAside.Reason.WIRE
           || Math.hypot(p.s(i), p.e(i)) < poleRadiusM
           || Math.hypot(p.s(i) - lengthM, p.e(i)) < poleRadiusM;
@@ -246,6 +247,17 @@ final class PointEvidence {
       }
     }
     for (int i = 0; i < n; i++) {
+      if (!fitted[i] || on[i] || crossing[i] || p.labelled(i)
+          || wires.reason(p.key(i)) == SetAside.Reason.WIRE) {
+        continue;
+      }
+      if (touched(grid, i, vegetation, near)) {
+        out.addTouched(p.key(i));
+      } else {
+        out.addWire(p.key(i));
+      }
+    }
+    for (int i = 0; i < n; i++) {
       if (!on[i] && !(crossing[i] && !p.labelled(i))) {
         continue;
       }
@@ -259,6 +271,25 @@ final class PointEvidence {
         out.addCrossing(p.key(i));
       }
     }
+  }
+
+  /**
+   * The candidates on a fitted conductor's curve ({@link ConductorStrands#onCurves}: within
+   * {@link WirePiece#TOL_M} in plan and elevation, between its attachments). They join no group,
+   * so that a stray point of one conductor does not join the points of another one nobody fitted
+   * into a group that is no wire (issue 9, seed 50: a neutral's point joined the eleven points of
+   * an unfitted phase 1.4 m above it); they are set aside as wire unless vegetation touches them.
+   */
+  private static boolean[] onFittedCurves(SpanPoints p, org.clearance.line.SpanFrame frame,
+      List<ConductorCurve> curves) {
+    if (frame == null || curves.isEmpty()) {
+      return new boolean[p.size()];
+    }
+    int[] all = new int[p.size()];
+    for (int i = 0; i < all.length; i++) {
+      all[i] = i;
+    }
+    return ConductorStrands.onCurves(p, all, frame, curves);
   }
 
   /** {@link #ownWires}: a point of one of the line's own conductors. */

@@ -178,6 +178,27 @@ class ConductorStrandsTest {
   }
 
   @Test
+  void strayPointOfAFittedConductorDoesNotSpoilAnUnfittedPiece() {
+    // regression shape (issue 9, generated horizontal feeder seed 50, ground-only): an unfitted
+    // conductor's 11 points over 9 m, no linear evidence on most, and one point of the fitted
+    // conductor 0.85 m above and 0.6 m beside it (on its curve within 0.16 m, outside its fit's tolerance) within
+    // the 2 m link: together no thin line, so the 11 were measured as vegetation. The point on
+    // the fitted curve joins no group now; the 11 are a wire piece on their own
+    SpanPoints p = new SpanPoints(GROUND_Z);
+    unfitted(p, 40, 49, 0.9);
+    long wireEnd = nextKey;
+    double z = FITTED.curve().z(49.8) + 0.05;
+    p.add(49.8, 0.02, z, z - GROUND_Z, CandidateCollector.UNCLASSIFIED, nextKey++);
+    SetAside out = run(p, 1, List.of(FITTED));
+    assertEquals(11, wireEnd - 1);
+    assertEquals(12, count(out, 1, nextKey, SetAside.Reason.WIRE));
+    // the same points with a crown touching the stray point: it is measured (touched)
+    crown(p, 49.8, 0.02, z - GROUND_Z - 0.9, 0.8, 150);
+    SetAside touched = run(p, 1, List.of(FITTED));
+    assertTrue(touched.reason(wireEnd) != SetAside.Reason.WIRE, "stray point by a crown");
+  }
+
+  @Test
   void crossingWireIsFollowedIntoACrownsGroup() {
     // a service line crossing the span at 70 degrees, 40 points 0.5 m apart, level 7 m up: the
     // crossing finder named its first 24 (outside the crown); the other 16 run past a crown

@@ -72,6 +72,55 @@ class CrossingFinderTest {
     assertEquals(40, members);
   }
 
+  /**
+   * Issue 9 (generated feeder, seed 47 horizontal, ground-only): the service line passed 0.5 m
+   * over a crown, joined the crown's group and was measured as vegetation. Its line cores (the
+   * points away from the crown) are a crossing; the points within 1.5 m of the crown are not
+   * taken here (they are followed into the crown later, and measured where the crown touches
+   * them); the crown alone gives none.
+   */
+  @Test
+  void aWireJoinedToACrownIsFoundFromItsLineCores() {
+    Random r = new Random(9);
+    SpanPoints p = new SpanPoints(100);
+    double angle = Math.toRadians(60);
+    // crossing wire: through (s = 40, e = 0) at 60 degrees, 109.5 m up, 2 points per metre
+    // over 24 m
+    for (int k = 0; k < 48; k++) {
+      double t = -12 + 24 * r.nextDouble();
+      p.add(40 + t * Math.cos(angle), t * Math.sin(angle), 109.5 + 0.03 * r.nextGaussian(),
+          9.5, 1);
+    }
+    int wirePoints = p.size();
+    // a crown under the wire's middle: 300 points in a ball of 1.25 m standard deviation whose
+    // centre is 3 m below the wire, so that its top reaches within 0.5-1 m of it
+    SpanPoints crown = new SpanPoints(100);
+    for (int k = 0; k < 300; k++) {
+      double z = 106.5 + 1.25 * r.nextGaussian();
+      p.add(40 + 1.25 * r.nextGaussian(), 1.25 * r.nextGaussian(), Math.min(z, 108.9), 7, 1);
+      crown.add(40 + 1.25 * r.nextGaussian(), 1.25 * r.nextGaussian(), Math.min(z, 108.9), 7,
+          1);
+    }
+    p.sort();
+    CrossingFinder.Found f = CrossingFinder.find(p, new boolean[p.size()], span(), List.of());
+    assertEquals(1, f.crossings().size(), f.crossings().toString());
+    Crossing c = f.crossings().get(0);
+    assertEquals(40, c.stationM(), 0.3);
+    assertEquals(60, c.angleDeg(), 1.0);
+    assertEquals(109.5, c.z(), 0.05);
+    int members = 0;
+    for (int i = 0; i < p.size(); i++) {
+      if (f.member()[i]) {
+        members++;
+        assertEquals(109.5, p.z(i), 0.2, "a crown point taken as the wire's");
+      }
+    }
+    assertTrue(members >= 10 && members < wirePoints, "members " + members);
+    crown.sort();
+    assertEquals(List.of(),
+        CrossingFinder.find(crown, new boolean[crown.size()], span(), List.of()).crossings());
+  }
+
   @Test
   void pointsOfTheSpansOwnWiresAreNeverACrossing() {
     SpanPoints p = new SpanPoints(100);
