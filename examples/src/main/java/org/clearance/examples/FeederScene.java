@@ -150,7 +150,7 @@ public final class FeederScene {
     ConductorType primary = type(new String[] {"Sparrow", "Raven", "Quail"}[rng.nextInt(3)]);
     ConductorType neutral = type(rng.nextBoolean() ? "Sparrow" : "Raven");
     for (Framing f : Framing.values()) {
-      framed.put(f, positionsFor(f, rng, primary, neutral));
+      framed.put(f, FeederFramings.of(f, rng, primary, neutral, options.neutral()));
     }
     positions.addAll(framed.get(Framing.HORIZONTAL));
     conductors(rng);
@@ -223,51 +223,9 @@ public final class FeederScene {
     String[] codes = {"Sparrow", "Raven", "Quail"};
     ConductorType primary = type(codes[rng.nextInt(codes.length)]);
     ConductorType neutral = type(rng.nextBoolean() ? "Sparrow" : "Raven");
-    positions.addAll(positionsFor(options.framing(), rng, primary, neutral));
+    positions.addAll(FeederFramings.of(options.framing(), rng, primary,
+        neutral, options.neutral()));
     framed.put(options.framing(), List.copyOf(positions));
-  }
-
-  /** The positions of one framing, drawn from {@code rng} (Framing, FeederScene class note). */
-  private List<Position> positionsFor(Framing framing, SplittableRandom rng,
-      ConductorType primary, ConductorType neutral) {
-    List<Position> positions = new ArrayList<>();
-    double lowest;
-    switch (framing) {
-      case HORIZONTAL: {
-        double d1 = rng.nextDouble(0.35, 0.4);
-        double s = rng.nextDouble(0.5, 0.9);
-        double far = rng.nextDouble(0.9, 1.2);
-        positions.add(new Position("A", false, primary, far, ARM_BELOW_TOP_M));
-        positions.add(new Position("B", false, primary, -d1, ARM_BELOW_TOP_M));
-        positions.add(new Position("C", false, primary, -d1 - s, ARM_BELOW_TOP_M));
-        lowest = ARM_BELOW_TOP_M;
-        break;
-      }
-      case VERTICAL: {
-        double v = rng.nextDouble(0.6, 1.0);
-        positions.add(new Position("A", false, primary, 0.3, 0.2));
-        positions.add(new Position("B", false, primary, 0.3, 0.2 + v));
-        positions.add(new Position("C", false, primary, 0.3, 0.2 + 2 * v));
-        lowest = 0.2 + 2 * v;
-        break;
-      }
-      case TRIANGULAR: {
-        double d = rng.nextDouble(0.5, 0.9);
-        double up = rng.nextDouble(0.5, 0.7);
-        positions.add(new Position("A", false, primary, d, ARM_BELOW_TOP_M));
-        positions.add(new Position("B", false, primary, 0.0, ARM_BELOW_TOP_M - up));
-        positions.add(new Position("C", false, primary, -d, ARM_BELOW_TOP_M));
-        lowest = ARM_BELOW_TOP_M;
-        break;
-      }
-      default:
-        throw new AssertionError(framing);
-    }
-    if (options.neutral()) {
-      double off = framing == Framing.VERTICAL ? 0.3 : -0.2;
-      positions.add(new Position("N", true, neutral, off, lowest + rng.nextDouble(1.0, 1.8)));
-    }
-    return List.copyOf(positions);
   }
 
   private static ConductorType type(String code) {
