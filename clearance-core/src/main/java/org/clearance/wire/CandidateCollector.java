@@ -18,7 +18,9 @@ import org.clearance.survey.PointChunk;
  * Every other point that is not ground, noise or a labelled wire (ASPRS class 2, 7, 18, 13,
  * 14), in a corridor below the candidate height or in the {@value StandingGrid#BAND_M} m band
  * around it, goes to the corridor's {@link StandingGrid}: the evidence of what stands under and
- * beside a small group of candidates ({@link PointEvidence}).
+ * beside a small group of candidates ({@link PointEvidence}). Unlabelled points below the
+ * candidate height near the conductors' offsets are kept apart as well ({@link SpanPoints#low}):
+ * a conductor sagging below that height passes through them ({@link LowWirePoints}).
  */
 final class CandidateCollector implements Consumer<PointChunk> {
   /** ASPRS class 0: created, never classified. */
@@ -95,6 +97,9 @@ final class CandidateCollector implements Consumer<PointChunk> {
           points[c].add(s, e, z[i], hag, k, SetAside.key(x[i], y[i], z[i]));
         } else if (standing) {
           points[c].standing().add(s, e, hag);
+          if (inside && open && corridor.holdsLow(e, hag)) {
+            points[c].low().add(s, e, z[i], hag, k, SetAside.key(x[i], y[i], z[i]));
+          }
         }
       }
     }

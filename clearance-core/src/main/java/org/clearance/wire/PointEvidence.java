@@ -28,7 +28,8 @@ import org.clearance.io.DisjointSets;
  * not fit), and a group, at least {@value #STRANDS_LINEAR_SHARE} of it linear, made only of such
  * lines (two unfitted conductors within the link distance of each other). In a group that is
  * vegetation as a whole, the points of the line's own conductors and of crossing wires that the
- * crown's group took in are picked out ({@link ConductorStrands}). On a pole line the
+ * crown's group took in are picked out ({@link ConductorStrands}); points below the candidate
+ * floor on a fitted curve are wire too ({@link LowWirePoints}). On a pole line the
  * points within {@value #POLE_RADIUS_M} m of a pole join no group. A wire point with a point of
  * another group (vegetation) within
  * {@value #TOUCH_M} m is not set aside: where a branch touches a wire the two cannot be told
@@ -271,6 +272,7 @@ final class PointEvidence {
         out.addCrossing(p.key(i));
       }
     }
+    LowWirePoints.setAside(p, vegetation, frame, curves, out);
   }
 
   /**

@@ -14,12 +14,23 @@ import org.clearance.line.SpanFrame;
  * @param stationMarginM how far beyond each structure points are kept, m
  * @param minHeightM lowest height above ground of an unlabelled candidate, m
  * @param zRef reference elevation for compact storage, m
+ * @param lowHalfWidthM largest |offset| of an unlabelled point kept below {@code minHeightM}
+ *     ({@link SpanPoints#low}), m, at most {@code halfWidthM}
  */
 record SpanCorridor(Span span, double halfWidthM, double stationMarginM, double minHeightM,
-    double zRef) {
+    double zRef, double lowHalfWidthM) {
 
   SpanCorridor {
     Objects.requireNonNull(span, "span");
+  }
+
+  /**
+   * True when an unlabelled point inside the corridor, at offset e and hag m above ground, is
+   * kept as a low point ({@link SpanPoints#low}): below the candidate floor, at least {@link
+   * LowWirePoints#MIN_HEIGHT_M} above ground, within {@code lowHalfWidthM} across.
+   */
+  boolean holdsLow(double e, double hag) {
+    return hag < minHeightM && hag >= LowWirePoints.MIN_HEIGHT_M && Math.abs(e) <= lowHalfWidthM;
   }
 
   SpanFrame frame() {

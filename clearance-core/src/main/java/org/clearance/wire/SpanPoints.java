@@ -32,6 +32,9 @@ final class SpanPoints {
   private long[] k = new long[INITIAL];
   private int n;
   private final StandingGrid standing = new StandingGrid();
+  /** Unlabelled points below the candidate floor near the conductors ({@link #low}), made on
+   * first use (a buffer of low points holds none of its own). */
+  private SpanPoints low;
 
   /** @param zRef reference elevation subtracted before storing, m, finite */
   SpanPoints(double zRef) {
@@ -86,6 +89,9 @@ final class SpanPoints {
     System.arraycopy(other.k, 0, k, n, other.n);
     n += other.n;
     standing.addAll(other.standing);
+    if (other.low != null) {
+      low().addAll(other.low);
+    }
   }
 
   /**
@@ -93,6 +99,9 @@ final class SpanPoints {
    * result computed from it) does not depend on the order the survey was read in.
    */
   void sort() {
+    if (low != null) {
+      low.sort();
+    }
     Integer[] order = new Integer[n];
     for (int i = 0; i < n; i++) {
       order[i] = i;
@@ -149,6 +158,19 @@ final class SpanPoints {
     }
     out.n = n;
     return out;
+  }
+
+  /**
+   * The unlabelled points (class 0 or 1) below the candidate floor, yet high enough and near
+   * enough the conductors' nominal offsets that a conductor sagging low may pass through them
+   * (mutable; {@link LowWirePoints}). They are no candidates: no wire is sought among them, and
+   * only those on a fitted conductor's curve are ever set aside. Same reference elevation.
+   */
+  SpanPoints low() {
+    if (low == null) {
+      low = new SpanPoints(zRef);
+    }
+    return low;
   }
 
   /** The highest non-ground point that is not a candidate, per plan cell (mutable). */

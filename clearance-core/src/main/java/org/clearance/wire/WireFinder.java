@@ -316,8 +316,10 @@ public final class WireFinder {
           WireFinderOptions.Collection.ATTACH_SHARE * lowest));
     }
     double g = groundAt(span.from(), heights);
+    double low = Double.isNaN(widest) ? half
+        : Math.min(half, widest + LowWirePoints.LATERAL_MARGIN_M);
     return new SpanCorridor(span, half, c.stationMarginM(), minHeight,
-        Double.isFinite(g) ? g : 0);
+        Double.isFinite(g) ? g : 0, low);
   }
 
   /** Ground elevation at a structure: the file's ground_z, else the height model's, else NaN. */
