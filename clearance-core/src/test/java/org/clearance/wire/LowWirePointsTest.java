@@ -73,21 +73,35 @@ class LowWirePointsTest {
       add(p, s, rng.nextDouble(-2, 2), GROUND_Z + rng.nextDouble(0.3, 1.4), 1000L + k);
       grass.add(1000L + k);
     }
-    // a shrub whose top reaches the neutral at station 51: a dense crown of returns
+    // a shrub whose top reaches the neutral at station 51: a dome of 0.8 m radius, 150 returns
+    // (75 per m^2); the returns of its top within 0.16 m of the curve are measured as well, as
+    // the rest of the shrub lies within 0.3 m of them
     List<Long> shrub = new ArrayList<>();
+    List<double[]> shrubAt = new ArrayList<>();
     double top = NEUTRAL.curve().z(51) - GROUND_Z;
     for (int k = 0; k < 150; k++) {
       double up = rng.nextDouble(0, 1);
       double r = 0.8 * Math.sqrt(1 - up * up);
       double a = rng.nextDouble(0, 2 * Math.PI);
-      add(p, 51 + r * Math.cos(a), r * Math.sin(a), GROUND_Z + top - 0.8 + 0.8 * up, 2000L + k);
+      double[] at = {51 + r * Math.cos(a), r * Math.sin(a), GROUND_Z + top - 0.8 + 0.8 * up};
+      add(p, at[0], at[1], at[2], 2000L + k);
       shrub.add(2000L + k);
+      shrubAt.add(at);
     }
-    // the neutral's points over the shrub: on the curve, the shrub's returns all around
-    List<Long> touchedWire = new ArrayList<>();
-    for (double s = 50; s <= 52; s += 0.5) {
-      add(p, s, 0, NEUTRAL.curve().z(s), 3000L + touchedWire.size());
-      touchedWire.add(3000L + touchedWire.size());
+    // the neutral's points over the shrub, on the curve: touched where a shrub return is within
+    // the touch distance (0.3 m), wire elsewhere
+    List<Long> overShrub = new ArrayList<>();
+    List<Boolean> touches = new ArrayList<>();
+    for (double s = 50; s <= 52; s += 0.25) {
+      double z = NEUTRAL.curve().z(s);
+      add(p, s, 0, z, 3000L + overShrub.size());
+      overShrub.add(3000L + overShrub.size());
+      boolean near = false;
+      for (double[] at : shrubAt) {
+        near |= Math.sqrt((at[0] - s) * (at[0] - s) + at[1] * at[1] + (at[2] - z) * (at[2] - z))
+            <= PointEvidence.TOUCH_M;
+      }
+      touches.add(near);
     }
     SetAside out = run(p);
     assertTrue(lowWire.size() >= 40, "low wire points " + lowWire.size());
@@ -101,11 +115,15 @@ class LowWirePointsTest {
     for (long k : shrub) {
       assertEquals(SetAside.Reason.NONE, out.reason(k), "shrub " + k);
     }
-    // stations 50.5-51.5, over the shrub's dome (0.8 m radius about station 51)
-    for (long k : touchedWire.subList(1, 4)) {
-      assertEquals(SetAside.Reason.NONE, out.reason(k), "wire over the shrub " + k);
-      assertEquals(true, out.touchedWire(k), "wire over the shrub " + k);
+    int touched = 0;
+    for (int k = 0; k < overShrub.size(); k++) {
+      long key = overShrub.get(k);
+      assertEquals(touches.get(k) ? SetAside.Reason.NONE : SetAside.Reason.WIRE,
+          out.reason(key), "wire over the shrub " + key);
+      assertEquals(touches.get(k), out.touchedWire(key), "wire over the shrub " + key);
+      touched += touches.get(k) ? 1 : 0;
     }
+    assertTrue(touched >= 3, "wire points the shrub touches: " + touched);
   }
 
   /** Without a fitted curve nothing below the floor is set aside. */
