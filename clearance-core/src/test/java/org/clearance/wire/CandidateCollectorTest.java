@@ -87,4 +87,44 @@ class CandidateCollectorTest {
     // the band point is not inside the corridor: not counted as seen
     assertEquals(6, cc.seen(0));
   }
+
+  /**
+   * Unlabelled points below the candidate floor, at least 1 m up and within 3 m across of the
+   * widest nominal offset (7 m), are kept as low points ({@link LowWirePoints}), and stand in
+   * the grid as before.
+   */
+  @Test
+  void keepsLowUnclassifiedPointsNearTheConductorsApart() {
+    SyntheticCorridor c = SyntheticCorridor.standard(SyntheticCorridor.Mode.LABELLED, 1);
+    SpanLayout layout = Fixtures.layout(c);
+    WireFinder finder = new WireFinder(Fixtures.options(false));
+    Span span = layout.spans().get(0);
+    SpanCorridor corridor = finder.corridor(span, layout.lines().get(0).spec(), c);
+    assertEquals(10, corridor.lowHalfWidthM(), 1e-12);
+    CandidateCollector cc = new CandidateCollector(List.of(corridor),
+        new CorridorIndex(List.of(corridor.corners(StandingGrid.BAND_M))), c);
+    PointChunk chunk = new PointChunk(16);
+    double[][] at = {
+      {100, 0, 4, 1}, // unclassified, 4 m up, below the 5 m floor: low
+      {101, -9.9, 1.2, 0}, // never classified, 1.2 m up, 9.9 m across: low
+      {102, 10.2, 4, 1}, // 10.2 m across, beyond 7 + 3 m: standing only
+      {103, 0, 0.8, 1}, // under 1 m: grass, standing only
+      {104, 0, 4, 5}, // vegetation label: standing only
+      {105, 0, 6, 1} // above the floor: a candidate
+    };
+    for (double[] a : at) {
+      double x = span.frame().x(a[0], a[1]);
+      double y = span.frame().y(a[0], a[1]);
+      chunk.add(x, y, c.groundZ(x, y) + a[2], (int) a[3]);
+    }
+    cc.accept(chunk);
+    SpanPoints p = cc.sorted(0);
+    assertEquals(1, p.size());
+    SpanPoints low = p.low();
+    assertEquals(2, low.size());
+    assertEquals(100, low.s(0), 1e-3);
+    assertEquals(4, low.hag(0), 1e-3);
+    assertEquals(1.2, low.hag(1), 1e-3);
+    assertEquals(4, p.standing().highestIn(99.5, 100.5, -0.5, 0.5), 1e-3);
+  }
 }
