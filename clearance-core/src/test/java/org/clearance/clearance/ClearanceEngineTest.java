@@ -268,7 +268,7 @@ class ClearanceEngineTest {
       {0.0, 0.8, 3.0, 1}, // a shrub against the pole, 0.8 m from its centre
     };
     SpanClearance r = engine.measure(points(pts), null).spans().get(0);
-    assertEquals(2, r.excludedAsStructure());
+    assertEquals(2, r.excludedAsStructure(), r.toString());
     assertEquals(3, r.pointsMeasured());
     // the nearest measured: the shrub (about 6.05 m; the pole's side 4 m up, 5 m from the wire,
     // is not vegetation); the exact distance from the kernel (geometry, no source needed)
