@@ -162,6 +162,17 @@ public final class RunModels {
     return station ? f.station(t.tree().x(), t.tree().y()) : f.offset(t.tree().x(), t.tree().y());
   }
 
+  /** Where the span's points were taken for its structures, in plain words. */
+  private static String structureZone(SpanModel model, ClearanceEngine.Options engine) {
+    if (model != null && !Double.isNaN(model.structureExclusionM())) {
+      return String.format(Locale.ROOT, "on a pole (within %.1f m of its centre and %.1f m or"
+          + " more above ground) or its arms", Math.min(engine.structureExclusion(),
+          model.structureExclusionM()), ClearanceEngine.POLE_FOOT_M);
+    }
+    return String.format(Locale.ROOT, "within %.1f m of a structure or on its arms",
+        engine.structureExclusion());
+  }
+
   private static SpanRecord span(SpanWires sw, SpanModel model, SpanClearance clearance,
       List<StructureChange> changes, ConditionSet conditions, ClearanceEngine.Options engine,
       String lineName, double coverage, SpanTemperature temperature) {
@@ -250,11 +261,11 @@ public final class RunModels {
         + clearance.excludedAsAirborne() + clearance.excludedAsObject()
         + clearance.excludedAsCrossing() > 0) {
       notes.add(String.format(Locale.ROOT, "unclassified points set aside: %d on a wire (on a "
-          + "fitted curve within its fit tolerance, or on a long linear piece), %d within %.1f m "
-          + "of a structure, %d isolated airborne (birds, noise), %d of man-made objects "
+          + "fitted curve within its fit tolerance, or on a long linear piece), %d %s, "
+          + "%d isolated airborne (birds, noise), %d of man-made objects "
           + "(mast-like or planar, docs/labelling.md), %d of wires crossing the span",
           clearance.excludedAsConductor(), clearance.excludedAsStructure(),
-          engine.structureExclusion(), clearance.excludedAsAirborne(),
+          structureZone(model, engine), clearance.excludedAsAirborne(),
           clearance.excludedAsObject(), clearance.excludedAsCrossing()));
     }
     if (clearance != null) {

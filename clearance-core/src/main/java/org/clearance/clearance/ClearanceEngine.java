@@ -38,12 +38,27 @@ public final class ClearanceEngine {
   private static final int FLUSH_POINTS = 4096;
 
   /**
-   * Structure exclusion around a pole, m (issue 15): a wood or steel pole is 0.25-0.45 m across
-   * and carries its hardware on arms, which {@code StructureZone}'s arm box excludes apart; a
-   * metre around its centre holds the pole's own returns (common practice, no source). The 8 m
-   * of a lattice tower would drop the vegetation along a sixth of a 100 m feeder span.
+   * Structure exclusion around a pole, m (issue 15, issue 9): what a pole line sets aside around
+   * a structure centre is the pole's own column, {@link #POLE_COLUMN_M}: a wood or steel pole is
+   * 0.25-0.45 m across, and the pole finder confirms a file position only within 0.2 m of the
+   * pole it locates (docs/wire-finder.md); its hardware sits on arms, which {@code
+   * StructureZone}'s arm box excludes apart. Grass, a shrub or a crown beside the pole, outside
+   * that column, is measured. It was 1 m: the grass 0.4-0.9 m from a pole then set generated
+   * feeders' span minima 6-10 cm above the truth (seed 44, vertical framing, ground-only, span
+   * P210-P211: 8.789 m against 8.692 m). The 8 m of a lattice tower would drop the vegetation
+   * along a sixth of a 100 m feeder span.
    */
-  public static final double POLE_EXCLUSION_M = 1.0;
+  public static final double POLE_EXCLUSION_M = 0.5;
+
+  /**
+   * Height above ground below which a point in a pole's column is measured, not taken for the
+   * pole, m: low vegetation stands up to about 0.5 m (the split between low and medium
+   * vegetation; common practice, no source), and at the pole's foot its returns and the pole's
+   * lowest ones cannot be told apart. Measuring both errs by at most the height between them
+   * towards a smaller distance; setting both aside set the generated feeders' minima above the
+   * truth (issue 9).
+   */
+  public static final double POLE_FOOT_M = 0.5;
 
   /**
    * Radius of a pole's own column of returns for pole-clearing zones, m: in a survey without

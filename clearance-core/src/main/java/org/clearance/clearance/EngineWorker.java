@@ -184,9 +184,9 @@ final class EngineWorker implements Consumer<PointChunk> {
         }
       }
       inTreeRegion = true;
-      if (inferredPoint && (StructureZone.near(p, x, y, options.structureExclusion())
+      if (inferredPoint && (StructureZone.near(p, x, y, hag, options.structureExclusion())
           || StructureZone.onCrossArm(p, s, e, z)
-          || StructureZone.nearOtherLines(spans, candidates, p, x, y,
+          || StructureZone.nearOtherLines(spans, candidates, p, x, y, hag,
               options.structureExclusion()))) {
         if (p.inBox(s, e, z)) {
           excludedStructure[sp]++;

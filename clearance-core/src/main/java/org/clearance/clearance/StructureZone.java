@@ -38,11 +38,20 @@ final class StructureZone {
 
   /**
    * Whether a point lies within the structure exclusion radius of either end structure of the
-   * span in plan: {@code exclusionM}, or the span's own smaller radius (a wood pole's).
+   * span in plan: {@code exclusionM}, or the span's own smaller radius (a pole's column,
+   * {@link ClearanceEngine#POLE_EXCLUSION_M}). Within a pole's column a point lower than
+   * {@link ClearanceEngine#POLE_FOOT_M} above ground is not taken for the pole: grass at the
+   * pole's foot cannot be told from the pole's lowest returns, and measuring both errs towards a
+   * smaller distance, setting both aside towards a larger one (issue 9).
+   *
+   * @param hag the point's height above ground, m (NaN: unknown, taken as above the foot)
    */
-  static boolean near(PreparedSpan p, double x, double y, double exclusionM) {
-    double r = Double.isNaN(p.model.structureExclusionM()) ? exclusionM
-        : Math.min(exclusionM, p.model.structureExclusionM());
+  static boolean near(PreparedSpan p, double x, double y, double hag, double exclusionM) {
+    boolean pole = !Double.isNaN(p.model.structureExclusionM());
+    if (pole && hag < ClearanceEngine.POLE_FOOT_M) {
+      return false;
+    }
+    double r = pole ? Math.min(exclusionM, p.model.structureExclusionM()) : exclusionM;
     double r2 = r * r;
     double ax = p.model.span().from().x() - x;
     double ay = p.model.span().from().y() - y;
@@ -58,11 +67,11 @@ final class StructureZone {
    * exclusion radius the feeder's own poles need.
    */
   static boolean nearOtherLines(List<PreparedSpan> spans, int[] candidates, PreparedSpan p,
-      double x, double y, double exclusionM) {
+      double x, double y, double hag, double exclusionM) {
     for (int sp : candidates) {
       PreparedSpan q = spans.get(sp);
       if (!q.model.span().lineId().equals(p.model.span().lineId())
-          && near(q, x, y, exclusionM)) {
+          && near(q, x, y, hag, exclusionM)) {
         return true;
       }
     }

@@ -246,6 +246,37 @@ class ClearanceEngineTest {
   }
 
   @Test
+  void aPoleSetsAsideItsColumnAboveItsFootAndNothingBesideIt() {
+    // Regression, issue 9 (generated feeder, seed 44, vertical framing, ten spans, ground-only:
+    // span P210-P211 read 8.789 m against a true 8.692 m): the grass nearest the conductor stood
+    // 0.47 m and 0.81 m from the pole centre, 0.44 and 0.39 m high, inside the 1 m a pole line
+    // then set aside. Now only the pole's column (0.5 m) above its foot (0.5 m) is the pole.
+    ConditionSet set = new ConditionSet(List.of("survey"), List.of("survey"));
+    // a feeder conductor attached 9 m above the ground (the height model: z)
+    ConductorCurve a = new ConductorCurve(SpanFrame.between(0, 0, L, 0),
+        Catenary.through(0, 9.0, L, 9.0, C));
+    SpanModel span = span(set, List.of(hangingOnly("A", a, 1)));
+    SpanModel pole = new SpanModel(span.span(), span.context(), span.conductors(),
+        ClearanceEngine.POLE_EXCLUSION_M);
+    ClearanceEngine engine = new ClearanceEngine(List.of(pole), set, (x, y, z) -> z,
+        VegetationSelector.forSurvey(new long[256], null), ClearanceEngine.Options.defaults(1));
+    double[][] pts = {
+      {0.15, 0.05, 4.0, 1}, // the pole's side, 4 m up (below its arm's box): set aside
+      {-0.1, -0.15, 2.0, 1}, // the pole's side on the far side of the centre: set aside
+      {0.47, 0.0, 0.44, 1}, // grass beside the pole, inside the old 1 m
+      {0.3, 0.25, 0.39, 1}, // grass at the pole's foot, in its column: measured
+      {0.0, 0.8, 3.0, 1}, // a shrub against the pole, 0.8 m from its centre
+    };
+    SpanClearance r = engine.measure(points(pts), null).spans().get(0);
+    assertEquals(2, r.excludedAsStructure(), r.toString());
+    assertEquals(3, r.pointsMeasured());
+    // the nearest measured: the shrub (about 6.05 m; the pole's side 4 m up, 5 m from the wire,
+    // is not vegetation); the exact distance from the kernel (geometry, no source needed)
+    assertEquals(new CatenaryDistance(a).distance(0.0, 0.8, 3.0),
+        r.minima().get(0).distance(), 1e-6);
+  }
+
+  @Test
   void vegetationInAClassNotReadIsCountedNearTheConductors() {
     // Regression, issue 10 item 3: 123 494 vegetation points delivered in class 20 (ignored
     // ground) gave "assessed and clear". Points of classes not read that may be vegetation

@@ -18,7 +18,10 @@ import java.util.Optional;
 import org.clearance.CheckInputs;
 import org.clearance.CheckOptions;
 import org.clearance.ClearanceCheck;
+import org.clearance.clearance.ConditionDistance;
 import org.clearance.clearance.ConditionMinimum;
+import org.clearance.clearance.NearPointFile;
+import org.clearance.clearance.NearPointReader;
 import org.clearance.clearance.SpanStatus;
 import org.clearance.run.RunModel;
 import org.clearance.run.RunModelJson;
@@ -73,8 +76,13 @@ class FeederModesTruthTest {
 
   @TempDir Path dir;
 
+  /** A site of sites.csv, SI: its governing point, the condition and the zone's distance there. */
   private record Site(String span, int priority, String zone, double x, double y, double z,
-      double height) {}
+      double height, String condition, double requiredM) {}
+
+  /** The same point in two runs of one survey: within this in each axis, m (a US survey feet
+   * survey stores 0.01 ft). */
+  private static final double SAME_POINT_M = 0.01;
 
   @ParameterizedTest(name = "seed {0}, {1}, {2}")
   @CsvSource({"61, HORIZONTAL, METRE", "62, TRIANGULAR, METRE", "63, VERTICAL, US_SURVEY_FOOT"})
@@ -99,11 +107,12 @@ class FeederModesTruthTest {
    * below the wire-candidate floor): seed 43, vertical framing, ground-only and unlabelled: the
    * neutral of span P208-P209 sags to 2.7-3.0 m over a dip, below the 3 m floor, and its lowest
    * points were measured as vegetation: 4 zone sites and 11 fall-in sites on the wire, minimum
-   * 1.312 m against a true 2.730 m (now wire: {@code org.clearance.wire.LowWirePoints}).
+   * 1.312 m against a true 2.730 m (now wire: {@code org.clearance.wire.LowWirePoints}). Seed 42:
+   * a labelled site held by a larger site of the inferred runs ({@link #holds}).
    */
   @Tag("slow")
   @ParameterizedTest(name = "seed {0}, {1}, {2}, 10 spans")
-  @CsvSource({"46, VERTICAL, METRE", "43, VERTICAL, METRE"})
+  @CsvSource({"46, VERTICAL, METRE", "43, VERTICAL, METRE", "42, VERTICAL, METRE"})
   void tenSpansSameFindingsInEveryClassificationMode(long seed, Framing framing,
       LinearUnit unit) throws IOException {
     check(dir, FeederOptions.defaults().withSeed(seed).withSpanCount(10).withFraming(framing)
@@ -195,8 +204,14 @@ class FeederModesTruthTest {
         if (r.sites().stream().noneMatch(s -> s.span().equals(l.span())
             && s.priority() <= l.priority()
             && Math.hypot(s.x() - l.x(), s.y() - l.y()) <= SAME_SITE_M)) {
-          missed++;
-          System.out.println(tag + ": labelled site without a match: " + l);
+          if (holds(r, l)) {
+            System.out.println(tag + ": labelled site held by a larger site of this run (its"
+                + " point measured inside the zone, the site governed farther than "
+                + SAME_SITE_M + " m away): " + l);
+          } else {
+            missed++;
+            System.out.println(tag + ": labelled site without a match: " + l);
+          }
         }
       }
       int fallIn = 0;
@@ -262,7 +277,42 @@ class FeederModesTruthTest {
         .filter(t -> !t.isEmpty()).mapToInt(Integer::parseInt).toArray();
   }
 
-  private record Run(List<Site> sites, RunModel model) {}
+  /**
+   * Whether the run measured the labelled site's governing point itself (the same survey point)
+   * inside the site's zone: no farther from the conductors in the site's condition than the
+   * zone's distance. Every point inside a zone belongs to a site of that zone or a more urgent
+   * one (SiteBuilder), so the run has a site holding it at least as urgent, even when single
+   * linkage joined it to vegetation farther on and that site's governing point lies more than
+   * {@link #SAME_SITE_M} away. Regression (issue 9): seed 42, vertical framing, ten spans,
+   * ground-only: the labelled watch site of span P204-P205 on a grass point 0.317 m high (hot
+   * 5.427 m, the zone 5.461 m) had no match: in the ground-only run the same point measured
+   * 5.425 m, but a grass point 1.39 m away measured 5.460 m (5.461 m or more in the labelled
+   * run, whose fitted curves differ by a millimetre), joined it to a larger watch site whose
+   * governing point stands 5.3 m away. The example profile's zones are nested (each based on
+   * the one before with a margin), so inside the watch distance is inside a zone at least as
+   * urgent.
+   */
+  private static boolean holds(Run r, Site l) {
+    boolean[] held = {false};
+    try {
+      NearPointReader.forEach(r.dir().resolve(NearPointFile.FILE_NAME), p -> {
+        if (p.spanId().equals(l.span()) && Math.abs(p.x() - l.x()) <= SAME_POINT_M
+            && Math.abs(p.y() - l.y()) <= SAME_POINT_M
+            && Math.abs(p.z() - l.z()) <= SAME_POINT_M) {
+          for (ConditionDistance d : p.distances()) {
+            if (d.condition().equals(l.condition()) && d.distance() <= l.requiredM()) {
+              held[0] = true;
+            }
+          }
+        }
+      });
+    } catch (IOException e) {
+      throw new java.io.UncheckedIOException(e);
+    }
+    return held[0];
+  }
+
+  private record Run(List<Site> sites, RunModel model, Path dir) {}
 
   private static Run run(Path dir, FeederOptions options, String name) throws IOException {
     DemoCorridor.DemoFiles files = FeederFiles.write(dir.resolve(name + "-in"), options);
@@ -277,20 +327,25 @@ class FeederModesTruthTest {
     int yCol = column(header, "y_");
     int zCol = column(header, "z_");
     int hCol = column(header, "veg_height_");
+    int rCol = column(header, "required_");
     double xy = header.get(xCol).endsWith("_m") ? 1 : options.unit().metres();
     double zu = header.get(zCol).endsWith("_m") ? 1 : options.unit().metres();
     double hu = header.get(hCol).endsWith("_m") ? 1 : options.unit().metres();
+    double ru = header.get(rCol).endsWith("_m") ? 1 : options.unit().metres();
     List<Site> sites = new ArrayList<>();
     for (String line : lines.subList(1, lines.size())) {
       String[] f = line.split(",", -1);
       String h = f[hCol];
+      String req = f[rCol];
       sites.add(new Site(f[header.indexOf("span_id")],
           Integer.parseInt(f[header.indexOf("priority")]), f[header.indexOf("zone")],
           xy * Double.parseDouble(f[xCol]), xy * Double.parseDouble(f[yCol]),
           zu * Double.parseDouble(f[zCol]),
-          h.isEmpty() ? Double.NaN : hu * Double.parseDouble(h)));
+          h.isEmpty() ? Double.NaN : hu * Double.parseDouble(h),
+          f[header.indexOf("condition")],
+          req.isEmpty() ? Double.NaN : ru * Double.parseDouble(req)));
     }
-    return new Run(sites, RunModelJson.read(out.resolve(RunModel.FILE_NAME)));
+    return new Run(sites, RunModelJson.read(out.resolve(RunModel.FILE_NAME)), out);
   }
 
   private static int column(List<String> header, String prefix) {

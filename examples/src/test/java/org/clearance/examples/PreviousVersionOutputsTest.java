@@ -38,14 +38,18 @@ import org.junit.jupiter.api.io.TempDir;
  * now judged a crown and measured, so that tree's top is in the canopy. Re-recorded again for
  * the wire candidates on a fitted conductor's curve (issue 9: they join no group): model.json and
  * spans.csv only, two points of the demo's FW231 (T102-T103, T111-T112) counted as wire instead
- * of airborne; sites, work list and near points unchanged.
+ * of airborne; sites, work list and near points unchanged. Re-recorded for the pole column
+ * (issue 9: a pole line sets aside only its pole's column above the foot): model.json only, the
+ * span notes name where points were taken for a structure ("within 8.0 m of a structure or on
+ * its arms", on a pole line "on a pole (within 0.5 m of its centre ...) or its arms"); every
+ * other file unchanged.
  */
 class PreviousVersionOutputsTest {
 
   /** Case, file, SHA-256 of the file as the version before issue 12 wrote it. */
   private static final List<String> RECORDED = List.of(
       "bench-corridor conductors.csv 26d23db05a0b75af08bd5e5c5a5c9f9adafe581e4c57edc2e382a37066601f6a",
-      "bench-corridor model.json 25c410f66ade5a7e0fc7644234169819ccba96e050580e8a02e80009b5dd7a58",
+      "bench-corridor model.json 0601c47fa0a3493e885773b2b589ceb6617b23b38195606cac2f0feacf6c94b8",
       "bench-corridor near-points.bin 6ecf89a4cf1f144a3c76542460808044e2cabc5e3031ac87efea6b9952787c74",
       "bench-corridor pole-points.bin 41d6f6c67c14bbdd423a7e1088cbaa41f9328f81928e7f457a61243b99682f31",
       "bench-corridor sites.csv b2699bcffa1d74db6fd490ea1e63332f31d8fda1ef9466a5e7698e0a89875c87",
@@ -55,7 +59,7 @@ class PreviousVersionOutputsTest {
       "bench-corridor uncertainty.csv 5238af81f457ae2f5026ebbc028aecc1afac525ff32ddebe46749d4982b8a2f6",
       "bench-corridor worklist.csv f00a12001b0961ac149b5e5eff43b369e6e083855fd1bf9aaa3fae691315de25",
       "demo-classified conductors.csv da054cb4cb52bd9d5afecb399c14d1a37f62ea49df40c480de950c3b7adf01c9",
-      "demo-classified model.json 8085d78915656fada4d5e0d14c7747e590198bd650d71944ebfc4aee467185f3",
+      "demo-classified model.json 6da9ebc29d81b516d9f2d105e836ff3e495a8a9fb7a5f57543cf9d5d9a05c9a3",
       "demo-classified near-points.bin 27767f8bf8b1c800fcf9bccfa63c637eb6e7457750907ad303887dfcdffd9e37",
       "demo-classified pole-points.bin 556ed98b616db13b6e3cae29d70a12577108c0d00f9475974ab152b4e54b0a2d",
       "demo-classified sites.csv 459d752e47e94be2ee07e86f65a04239214099096b65daa32bf8d52849eb9e96",
@@ -65,7 +69,7 @@ class PreviousVersionOutputsTest {
       "demo-classified uncertainty.csv c50ccdaf2d74a2c0e0e48c13169b9fe26caab23a4d070ceef702030dd1d08c3a",
       "demo-classified worklist.csv cc844749061d5f4e2672d7c9141994fceb52be28706e10e83504004db2ebcbde",
       "demo-ground-only conductors.csv 0399343de37aff7faedddd3d489843357eaabdf1f3e2d147713b8fad6ff49409",
-      "demo-ground-only model.json 1942aa5c7bc26c377f0823ba6d5a175482e63dc37a21a6f2a70b6e4394702009",
+      "demo-ground-only model.json 25ac4b8876a13fecca15f05ff64058a6c47624a3c67e6eca1d58ef71b8bcc566",
       "demo-ground-only near-points.bin a05ef44d6b93b89a9550ea904a1e99f9d058062313c9e0771ca5854ba27f1849",
       "demo-ground-only pole-points.bin 5ff32134af0bdf1e7a7f0bdeb91e64cb6ecff8a01208e39bcbabbee23529cecb",
       "demo-ground-only sites.csv 8efff0b17345e7ce142453eea4ded15a0760531661ba7865dee6213e6f991692",
