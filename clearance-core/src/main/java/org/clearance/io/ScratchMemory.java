@@ -37,12 +37,17 @@ public final class ScratchMemory {
    * @throws UncheckedIOException when the temporary file cannot be made or mapped (a full disk)
    */
   public static MappedByteBuffer map(long bytes) {
+    return map(bytes, Path.of(System.getProperty("java.io.tmpdir")));
+  }
+
+  /** {@link #map(long)} with the file in {@code folder}. */
+  static MappedByteBuffer map(long bytes, Path folder) {
     if (bytes < 1 || bytes > Integer.MAX_VALUE) {
       throw new IllegalArgumentException("scratch region size out of range: " + bytes);
     }
     Path file = null;
     try {
-      file = Files.createTempFile(PREFIX, ".bin");
+      file = Files.createTempFile(folder, PREFIX, ".bin");
       try (FileChannel ch = FileChannel.open(file, StandardOpenOption.READ,
           StandardOpenOption.WRITE, StandardOpenOption.DELETE_ON_CLOSE)) {
         MappedByteBuffer region = ch.map(FileChannel.MapMode.READ_WRITE, 0, bytes);
@@ -51,8 +56,7 @@ public final class ScratchMemory {
       }
     } catch (IOException e) {
       throw new UncheckedIOException("cannot make " + bytes + " bytes of scratch memory in "
-          + System.getProperty("java.io.tmpdir") + " (the temporary folder): " + e.getMessage(),
-          e);
+          + folder + " (the temporary folder): " + e.getMessage(), e);
     } finally {
       if (file != null) {
         try {
