@@ -2,6 +2,7 @@ package org.clearance.io;
 
 import java.io.IOException;
 import java.io.UncheckedIOException;
+import java.nio.ByteBuffer;
 import java.nio.ByteOrder;
 import java.nio.MappedByteBuffer;
 import java.nio.channels.FileChannel;
@@ -27,6 +28,8 @@ public final class ScratchMemory {
 
   /** File name prefix of the scratch files (seen only for the moment between create and open). */
   static final String PREFIX = "clearance-scratch-";
+  /** Zeros written at a time when a region is made, bytes. */
+  private static final int ZERO_CHUNK_BYTES = 1 << 16;
 
   private ScratchMemory() {}
 
@@ -50,6 +53,13 @@ public final class ScratchMemory {
       file = Files.createTempFile(folder, PREFIX, ".bin");
       try (FileChannel ch = FileChannel.open(file, StandardOpenOption.READ,
           StandardOpenOption.WRITE, StandardOpenOption.DELETE_ON_CLOSE)) {
+        // written out first: a full disk is then an I/O error here, not a fault later on a
+        // write to a mapped page the file system cannot back
+        ByteBuffer zeros = ByteBuffer.allocate((int) Math.min(bytes, ZERO_CHUNK_BYTES));
+        for (long at = 0; at < bytes; ) {
+          zeros.clear().limit((int) Math.min(zeros.capacity(), bytes - at));
+          at += ch.write(zeros, at);
+        }
         MappedByteBuffer region = ch.map(FileChannel.MapMode.READ_WRITE, 0, bytes);
         region.order(ByteOrder.nativeOrder());
         return region;
