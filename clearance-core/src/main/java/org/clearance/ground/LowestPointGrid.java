@@ -52,17 +52,21 @@ final class LowestPointGrid {
 
   /** Folds another grid of the same cell size in, cell by cell keeping the lower point. */
   void merge(LowestPointGrid other) {
+    int cells = z.tileCells() * z.tileCells();
     for (long k : other.z.tileKeys()) {
-      float[] oz = other.z.tile(k);
-      float[] ow = other.where.tile(k);
-      float[] tz = z.tileOrCreate(k);
-      float[] tw = where.tileOrCreate(k);
-      for (int i = 0; i < oz.length; i++) {
-        boolean lower = !(tz[i] <= oz[i]);
-        boolean tieWin = tz[i] == oz[i] && ow[i] < tw[i];
-        if (!Float.isNaN(oz[i]) && (lower || tieWin)) {
-          tz[i] = oz[i];
-          tw[i] = ow[i];
+      int oz = other.z.tile(k);
+      int ow = other.where.tile(k);
+      int tz = z.tileOrCreate(k);
+      int tw = where.tileOrCreate(k);
+      for (int i = 0; i < cells; i++) {
+        float ozi = other.z.cell(oz, i);
+        float tzi = z.cell(tz, i);
+        float owi = other.where.cell(ow, i);
+        boolean lower = !(tzi <= ozi);
+        boolean tieWin = tzi == ozi && owi < where.cell(tw, i);
+        if (!Float.isNaN(ozi) && (lower || tieWin)) {
+          z.setCell(tz, i, ozi);
+          where.setCell(tw, i, owi);
         }
       }
     }

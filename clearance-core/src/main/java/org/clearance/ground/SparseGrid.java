@@ -7,7 +7,9 @@ package org.clearance.ground;
  * <p>Cell {@code (col, row)} covers {@code [col * cellSize, (col + 1) * cellSize)} in x and the same
  * in y, in metres; its centre is at {@code (col + 0.5) * cellSize}. Values are floats; NaN means no
  * data. Per-point operations ({@link #accumulateMin}, {@link #accumulateMax}, {@link #value}) are
- * O(1) and allocate nothing except a new tile the first time a point falls in it.
+ * O(1) and allocate nothing except a new tile the first time a point falls in it. A raster of
+ * more than {@value TileMap#HEAP_TILES} tiles (one of the whole corridor) keeps its tiles in
+ * scratch memory outside the heap ({@link TileMap}), so the heap does not grow with the survey.
  *
  * <p>Not thread-safe while written; safe to read from many threads once writing has finished.
  */
@@ -23,7 +25,7 @@ public final class SparseGrid {
   private final int tileCells;
   private final int shift;
   private final int mask;
-  private final TileMap tiles = new TileMap();
+  private final TileMap tiles;
 
   /**
    * @param cellSize cell side, metres, finite and &gt; 0
@@ -42,6 +44,7 @@ public final class SparseGrid {
     this.tileCells = tileCells;
     this.shift = Integer.numberOfTrailingZeros(tileCells);
     this.mask = tileCells - 1;
+    this.tiles = new TileMap(tileCells * tileCells);
   }
 
   /** A grid with {@link #DEFAULT_TILE_CELLS} tiles; {@code cellSize} in metres, &gt; 0. */
@@ -84,14 +87,14 @@ public final class SparseGrid {
 
   /** The value of cell {@code (col, row)}, or NaN when it holds none. */
   public double get(int col, int row) {
-    float[] tile = tiles.get(key(col >> shift, row >> shift));
-    return tile == null ? Double.NaN : tile[((row & mask) << shift) | (col & mask)];
+    int tile = tiles.id(key(col >> shift, row >> shift));
+    return tile < 0 ? Double.NaN : tiles.cell(tile, ((row & mask) << shift) | (col & mask));
   }
 
   /** Stores {@code value} (NaN clears the cell) in cell {@code (col, row)}. */
   public void set(int col, int row, double value) {
-    float[] tile = tiles.getOrCreate(key(col >> shift, row >> shift), tileCells * tileCells);
-    tile[((row & mask) << shift) | (col & mask)] = (float) value;
+    int tile = tiles.getOrCreate(key(col >> shift, row >> shift));
+    tiles.setCell(tile, ((row & mask) << shift) | (col & mask), (float) value);
   }
 
   /**
@@ -113,13 +116,15 @@ public final class SparseGrid {
     if (other.cellSize != cellSize || other.tileCells != tileCells) {
       throw new IllegalArgumentException("grids differ in cell or tile size");
     }
+    int cells = tileCells * tileCells;
     for (long k : other.tiles.keys()) {
-      float[] src = other.tiles.get(k);
-      float[] dst = tiles.getOrCreate(k, tileCells * tileCells);
-      for (int i = 0; i < src.length; i++) {
-        float v = src[i];
-        if (!Float.isNaN(v) && (Float.isNaN(dst[i]) || (max ? v > dst[i] : v < dst[i]))) {
-          dst[i] = v;
+      int src = other.tiles.id(k);
+      int dst = tiles.getOrCreate(k);
+      for (int i = 0; i < cells; i++) {
+        float v = other.tiles.cell(src, i);
+        float d = tiles.cell(dst, i);
+        if (!Float.isNaN(v) && (Float.isNaN(d) || (max ? v > d : v < d))) {
+          tiles.setCell(dst, i, v);
         }
       }
     }
@@ -147,14 +152,15 @@ public final class SparseGrid {
   int lower(double x, double y, double value) {
     int col = checkedIndex(x);
     int row = checkedIndex(y);
-    float[] tile = tiles.getOrCreate(key(col >> shift, row >> shift), tileCells * tileCells);
+    int tile = tiles.getOrCreate(key(col >> shift, row >> shift));
     int i = ((row & mask) << shift) | (col & mask);
     float v = (float) value;
-    if (tile[i] == v) {
+    float old = tiles.cell(tile, i);
+    if (old == v) {
       return 0;
     }
-    if (!(tile[i] < v)) {
-      tile[i] = v;
+    if (!(old < v)) {
+      tiles.setCell(tile, i, v);
       return 1;
     }
     return -1;
@@ -165,11 +171,11 @@ public final class SparseGrid {
   public void accumulateMax(double x, double y, double value) {
     int col = checkedIndex(x);
     int row = checkedIndex(y);
-    float[] tile = tiles.getOrCreate(key(col >> shift, row >> shift), tileCells * tileCells);
+    int tile = tiles.getOrCreate(key(col >> shift, row >> shift));
     int i = ((row & mask) << shift) | (col & mask);
     float v = (float) value;
-    if (!(tile[i] >= v)) {
-      tile[i] = v;
+    if (!(tiles.cell(tile, i) >= v)) {
+      tiles.setCell(tile, i, v);
     }
   }
 
@@ -199,15 +205,15 @@ public final class SparseGrid {
     int tr = r0 >> shift;
     if ((c0 + 1) >> shift == tc && (r0 + 1) >> shift == tr) {
       // All four cells in one tile (most points): one lookup instead of four, same values.
-      float[] tile = tiles.get(key(tc, tr));
-      if (tile == null) {
+      int tile = tiles.id(key(tc, tr));
+      if (tile < 0) {
         return Double.NaN;
       }
       int i = ((r0 & mask) << shift) | (c0 & mask);
-      z00 = tile[i];
-      z10 = tile[i + 1];
-      z01 = tile[i + tileCells];
-      z11 = tile[i + tileCells + 1];
+      z00 = tiles.cell(tile, i);
+      z10 = tiles.cell(tile, i + 1);
+      z01 = tiles.cell(tile, i + tileCells);
+      z11 = tiles.cell(tile, i + tileCells + 1);
     } else {
       z00 = get(c0, r0);
       z10 = get(c0 + 1, r0);
@@ -278,8 +284,8 @@ public final class SparseGrid {
     int tr1 = (row0 + height - 1) >> shift;
     for (int tr = tr0; tr <= tr1; tr++) {
       for (int tc = tc0; tc <= tc1; tc++) {
-        float[] tile = tiles.get(key(tc, tr));
-        if (tile == null) {
+        int tile = tiles.id(key(tc, tr));
+        if (tile < 0) {
           continue;
         }
         int cFrom = Math.max(col0, tc << shift);
@@ -287,7 +293,7 @@ public final class SparseGrid {
         int rFrom = Math.max(row0, tr << shift);
         int rTo = Math.min(row0 + height, (tr + 1) << shift);
         for (int r = rFrom; r < rTo; r++) {
-          System.arraycopy(tile, ((r & mask) << shift) | (cFrom & mask), out,
+          tiles.copy(tile, ((r & mask) << shift) | (cFrom & mask), out,
               (r - row0) * width + (cFrom - col0), cTo - cFrom);
         }
       }
@@ -295,14 +301,31 @@ public final class SparseGrid {
     return out;
   }
 
-  /** The tile stored under {@code key}, or null; cells row-major within the tile. */
-  float[] tile(long key) {
-    return tiles.get(key);
+  /** The number of the tile stored under {@code key}, or -1; read its cells (row-major within
+   * the tile) with {@link #cell}. */
+  int tile(long key) {
+    return tiles.id(key);
   }
 
-  /** The tile stored under {@code key}, created (all NaN) when absent. */
-  float[] tileOrCreate(long key) {
-    return tiles.getOrCreate(key, tileCells * tileCells);
+  /** The number of the tile stored under {@code key}, created (all NaN) when absent. */
+  int tileOrCreate(long key) {
+    return tiles.getOrCreate(key);
+  }
+
+  /** Cell {@code i} of tile number {@code tile}. */
+  float cell(int tile, int i) {
+    return tiles.cell(tile, i);
+  }
+
+  /** Sets cell {@code i} of tile number {@code tile}. */
+  void setCell(int tile, int i, float v) {
+    tiles.setCell(tile, i, v);
+  }
+
+  /** Whether the tiles were moved out of the heap into scratch memory (a raster of more than
+   * {@value TileMap#HEAP_TILES} tiles). */
+  boolean offHeap() {
+    return tiles.offHeap();
   }
 
   /** Number of tiles allocated. */
@@ -310,7 +333,8 @@ public final class SparseGrid {
     return tiles.size();
   }
 
-  /** Approximate heap bytes held by the tiles (cells plus per-tile bookkeeping). */
+  /** Approximate bytes held by the tiles (cells plus per-tile bookkeeping), on the heap or, for a
+   * large raster, in scratch memory outside it. */
   public long memoryBytes() {
     return tiles.size() * (4L * tileCells * tileCells + TILE_OVERHEAD_BYTES);
   }
@@ -318,9 +342,11 @@ public final class SparseGrid {
   /** Number of cells holding a value (not NaN); walks every tile. */
   public long dataCellCount() {
     long n = 0;
+    int cells = tileCells * tileCells;
     for (long k : tiles.keys()) {
-      for (float v : tiles.get(k)) {
-        if (!Float.isNaN(v)) {
+      int tile = tiles.id(k);
+      for (int i = 0; i < cells; i++) {
+        if (!Float.isNaN(tiles.cell(tile, i))) {
           n++;
         }
       }

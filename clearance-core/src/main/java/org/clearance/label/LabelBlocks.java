@@ -30,8 +30,10 @@ import org.clearance.wire.SetAside;
  *
  * <p>The same pass counts the points looked at and their later returns, so that the echoes are
  * read or not for the whole survey as before. The blocks are then labelled from their stores on
- * every thread, folded in block order. The man-made points are added to the {@link SetAside}
- * after the last block, so that every block sees the same points.
+ * every thread, folded in block order; blocks run at once only as far as their estimated heap
+ * fits in a share of the heap ({@link HeapBudget}), so a dense block runs alone. The man-made
+ * points are added to the {@link SetAside} after the last block, so that every block sees the
+ * same points.
  */
 final class LabelBlocks {
 
@@ -42,6 +44,13 @@ final class LabelBlocks {
    * largest man-made object the step must recognise is a crane: a tower crane's jib or a mobile
    * crane's boom reaches 60-80 m (from memory). */
   static final double OVERLAP_M = 100.0;
+  /** Heap the labelling of one block takes per point of its window at most, bytes (computed from
+   * the arrays held at once while its objects are judged: coordinates and attributes 32, the
+   * neighbour index 44, the local shape 76, the objects' evidence 120, the roots and kinds 8). */
+  static final long BYTES_PER_POINT = 280;
+  /** Share of the heap the blocks labelled at once may take together: the rest holds the
+   * spans' models, the reading threads' chunks and the collector's room to work. */
+  static final double HEAP_SHARE = 0.6;
 
   private LabelBlocks() {}
 
@@ -88,7 +97,16 @@ final class LabelBlocks {
         order.add(b);
       }
       try {
-        OrderedParallel.forEach(order, threads, b -> labelBlock(read(store, b), echoes), r -> {
+        HeapBudget budget = new HeapBudget(
+            (long) (HEAP_SHARE * Runtime.getRuntime().maxMemory()));
+        OrderedParallel.forEach(order, threads, b -> {
+          long taken = budget.acquire(store.points(b) * BYTES_PER_POINT);
+          try {
+            return labelBlock(read(store, b), echoes);
+          } finally {
+            budget.release(taken);
+          }
+        }, r -> {
           objects.addAll(r.objects());
           manMade.add(r.manMade());
           for (int k = 0; k < counts.length; k++) {

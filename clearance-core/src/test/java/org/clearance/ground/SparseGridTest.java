@@ -190,4 +190,48 @@ class SparseGridTest {
     }
     return best;
   }
+
+  @Test
+  void aCorridorSizedGridMovesOutOfTheHeapWithTheSameCells() {
+    // Issue 12 (heap flat in survey size): past TileMap.HEAP_TILES tiles the cells move into
+    // scratch memory; every cell, block copy, merge and interpolated value must stay the same.
+    // Reference: a plain array of the same cells (computed, no source needed).
+    int width = 4 * 40;
+    int height = 4 * 10; // 400 tiles of 4 x 4 cells: more than HEAP_TILES
+    double[][] ref = new double[height][width];
+    SparseGrid grid = new SparseGrid(0.5, 4);
+    SparseGrid low = new SparseGrid(0.5, 4);
+    Random rnd = new Random(12);
+    for (int r = 0; r < height; r++) {
+      for (int c = 0; c < width; c++) {
+        ref[r][c] = (r + c) % 7 == 0 ? Double.NaN : 100 + rnd.nextInt(1000) / 8.0;
+        if (!Double.isNaN(ref[r][c])) {
+          grid.set(c, r, ref[r][c]);
+          low.accumulateMin(c * 0.5 + 0.25, r * 0.5 + 0.25, ref[r][c] - 1);
+        }
+      }
+    }
+    assertTrue(grid.offHeap(), "a grid of " + grid.tileCount() + " tiles stays on the heap");
+    assertEquals(width * height / 16, grid.tileCount());
+    for (int r = 0; r < height; r++) {
+      for (int c = 0; c < width; c++) {
+        assertEquals(ref[r][c], grid.get(c, r), 0, "cell " + c + "," + r);
+      }
+    }
+    float[] block = grid.readBlock(3, 5, 30, 9);
+    for (int r = 0; r < 9; r++) {
+      for (int c = 0; c < 30; c++) {
+        assertEquals((float) ref[5 + r][3 + c], block[r * 30 + c], 0);
+      }
+    }
+    // bilinear value at the middle of four cells holding data, by hand from the reference
+    double expected = (ref[2][1] + ref[2][2] + ref[3][1] + ref[3][2]) / 4;
+    assertEquals(expected, grid.value(1.0, 1.5), 1e-9);
+    grid.mergeMin(low);
+    for (int r = 0; r < height; r++) {
+      for (int c = 0; c < width; c++) {
+        assertEquals(Double.isNaN(ref[r][c]) ? Double.NaN : ref[r][c] - 1, grid.get(c, r), 0);
+      }
+    }
+  }
 }
