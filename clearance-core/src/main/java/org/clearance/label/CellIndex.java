@@ -6,11 +6,14 @@ import java.util.Arrays;
  * A fixed-radius neighbour search over points in 3D: cubic cells of the search radius from a
  * fixed origin, the cells numbered in (x, y, z) order and the points sorted by cell, then by
  * index, with their coordinates copied in that order. A query looks at the 27 cells around a
- * point as 9 columns of three cells, each column a contiguous run of points found by one binary
- * search, and visits the points in the same order as a cell-by-cell search would: cells in
- * (x, y, z) order, points of a cell by index. Memory: three doubles, two ints and a long a
- * point at most (two longs and an int more while it is built); at most 2^21 - 3 cells along any
- * axis.
+ * point as 9 columns of three cells, each column a contiguous run of points, and visits the
+ * points in the same order as a cell-by-cell search would: cells in (x, y, z) order, points of
+ * a cell by index. A query of one point finds each run by a binary search ({@link #within},
+ * {@link #runs}); a {@link Sweep} over every occupied cell in order finds them by nine pointers
+ * that only move forward (a neighbour column's key is the cell's key plus a constant), so the
+ * runs are found once per cell for all its points, with no search. Memory: three doubles, two
+ * ints and a long a point at most (two longs and an int more while it is built); at most
+ * 2^21 - 3 cells along any axis.
  */
 final class CellIndex {
 
@@ -27,11 +30,12 @@ final class CellIndex {
   /** Occupied cell keys, ascending, and where each cell's points start in {@link #order}. */
   private final long[] keys;
   private final int[] start;
-  /** Point indices sorted by cell, then index; their coordinates in the same order. */
-  private final int[] order;
-  private final double[] sx;
-  private final double[] sy;
-  private final double[] sz;
+  /** Point indices sorted by cell, then index ("positions"); their coordinates in the same
+   * order, read directly by the labelling's inner loops. */
+  final int[] order;
+  final double[] sx;
+  final double[] sy;
+  final double[] sz;
 
   CellIndex(double[] x, double[] y, double[] z, int n, double cell) {
     this.x = x;
@@ -127,30 +131,111 @@ final class CellIndex {
   /** Calls {@code action} with every point within {@code r} (at most the cell size) of i,
    * i itself included. */
   void within(int i, double r, Neighbour action) {
+    int[] from = new int[COLUMNS];
+    int[] to = new int[COLUMNS];
+    runs(i, from, to);
     double px = x[i];
     double py = y[i];
     double pz = z[i];
-    long cx = cellOf(px);
-    long cy = cellOf(py);
-    long cz = cellOf(pz);
     double r2 = r * r;
+    for (int k = 0; k < COLUMNS; k++) {
+      for (int t = from[k]; t < to[k]; t++) {
+        double dx = sx[t] - px;
+        double dy = sy[t] - py;
+        double dz = sz[t] - pz;
+        if (dx * dx + dy * dy + dz * dz <= r2) {
+          action.accept(order[t], dx, dy, dz);
+        }
+      }
+    }
+  }
+
+  /** Columns of three cells around a cell: x offset -1..1, then y offset -1..1. */
+  static final int COLUMNS = 9;
+
+  /**
+   * The runs of positions of the 9 columns around point i's cell, in visiting order: column k
+   * holds positions {@code from[k]} to {@code to[k] - 1} (one binary search each).
+   */
+  void runs(int i, int[] from, int[] to) {
+    long cx = cellOf(x[i]);
+    long cy = cellOf(y[i]);
+    long cz = cellOf(z[i]);
+    int k = 0;
     for (long a = cx - 1; a <= cx + 1; a++) {
       for (long b = cy - 1; b <= cy + 1; b++) {
         long low = key(a, b, cz - 1);
-        int from = Arrays.binarySearch(keys, low);
-        from = from < 0 ? -from - 1 : from;
-        int to = from;
-        while (to < keys.length && keys[to] <= low + 2) {
-          to++;
+        int f = Arrays.binarySearch(keys, low);
+        f = f < 0 ? -f - 1 : f;
+        int e = f;
+        while (e < keys.length && keys[e] <= low + 2) {
+          e++;
         }
-        for (int t = start[from]; t < start[to]; t++) {
-          double dx = sx[t] - px;
-          double dy = sy[t] - py;
-          double dz = sz[t] - pz;
-          if (dx * dx + dy * dy + dz * dz <= r2) {
-            action.accept(order[t], dx, dy, dz);
-          }
+        from[k] = start[f];
+        to[k] = start[e];
+        k++;
+      }
+    }
+  }
+
+  /** Occupied cells. */
+  int cells() {
+    return keys.length;
+  }
+
+  /** The first position of occupied cell c's points (c from 0 to {@link #cells}; the cell's
+   * points are the positions up to the next cell's first). */
+  int firstOf(int c) {
+    return start[c];
+  }
+
+  /** A sweep over the occupied cells in key order. */
+  Sweep sweep() {
+    return new Sweep();
+  }
+
+  /**
+   * The 9 column runs around each occupied cell, cells taken in key order ({@link #moveTo} with
+   * a rising cell): the same runs as {@link #runs} of any point of the cell. Each column's low
+   * key is the cell's key plus a constant (the cell coordinates have a margin of one cell on
+   * either side, so no field of the key borrows or carries), so it rises with the cell and two
+   * pointers per column only move forward: O(cells) over the whole sweep.
+   */
+  final class Sweep {
+    /** Positions of column k: {@code from[k]} to {@code to[k] - 1}, after {@link #moveTo}. */
+    final int[] from = new int[COLUMNS];
+    final int[] to = new int[COLUMNS];
+    private final int[] lowCell = new int[COLUMNS];
+    private final int[] endCell = new int[COLUMNS];
+    private final long[] offset = new long[COLUMNS];
+
+    private Sweep() {
+      int k = 0;
+      for (long a = -1; a <= 1; a++) {
+        for (long b = -1; b <= 1; b++) {
+          offset[k++] = (a << (2 * AXIS_BITS)) + (b << AXIS_BITS) - 1;
         }
+      }
+    }
+
+    /** Finds the runs around occupied cell c (not below the last cell moved to). */
+    void moveTo(int c) {
+      long key = keys[c];
+      int m = keys.length;
+      for (int k = 0; k < COLUMNS; k++) {
+        long low = key + offset[k];
+        int f = lowCell[k];
+        while (f < m && keys[f] < low) {
+          f++;
+        }
+        int e = Math.max(f, endCell[k]);
+        while (e < m && keys[e] <= low + 2) {
+          e++;
+        }
+        lowCell[k] = f;
+        endCell[k] = e;
+        from[k] = start[f];
+        to[k] = start[e];
       }
     }
   }

@@ -1,5 +1,6 @@
 package org.clearance.label;
 
+import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
@@ -12,7 +13,8 @@ import org.junit.jupiter.api.Test;
 /**
  * The neighbour search finds exactly the points a brute-force search finds (computed: every pair
  * tested), and visits them in the order the labelling's sums depend on: cells (cubes of the cell
- * size from the origin) in (x, y, z) order, then point index.
+ * size from the origin) in (x, y, z) order, then point index; the sweep over the cells finds the
+ * same runs as a query of each point.
  */
 class CellIndexTest {
 
@@ -64,5 +66,22 @@ class CellIndexTest {
     }
     // the test can fail: the points have neighbours (at 3000 points in 432 m^3, about 29 each)
     assertTrue(visited > 10L * n, "neighbours visited " + visited);
+    // the sweep, cell by cell, gives every point of a cell the runs its own query gives
+    CellIndex.Sweep sweep = index.sweep();
+    int[] from = new int[CellIndex.COLUMNS];
+    int[] to = new int[CellIndex.COLUMNS];
+    int swept = 0;
+    for (int c = 0; c < index.cells(); c++) {
+      sweep.moveTo(c);
+      for (int q = index.firstOf(c); q < index.firstOf(c + 1); q++) {
+        int i = index.order[q];
+        index.runs(i, from, to);
+        assertArrayEquals(from, sweep.from, "point " + i);
+        assertArrayEquals(to, sweep.to, "point " + i);
+        assertEquals(x[i], index.sx[q], 0.0);
+        swept++;
+      }
+    }
+    assertEquals(n, swept);
   }
 }
