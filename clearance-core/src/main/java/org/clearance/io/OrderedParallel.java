@@ -30,8 +30,8 @@ public final class OrderedParallel {
    * per thread are held at once, so memory stays that of a few items, not of the whole list.
    *
    * <p>The items are handed out in a sliding window: a worker takes the next item as soon as
-   * the results waiting for the sink (or being computed) are fewer than the window, so no
-   * thread waits for the slowest item of a batch while the sink folds in the results before it.
+   * the items being computed, waiting for the sink or being folded are fewer than the window,
+   * so no thread waits for the slowest item of a batch, nor for the sink.
    * With one thread (or one item) everything runs on the calling thread, in order.
    */
   public static <T, R> void forEach(List<T> items, int threads, Function<? super T, R> fn,
@@ -57,7 +57,7 @@ public final class OrderedParallel {
     private final int size;
     private final Object[] results;
     private final boolean[] done;
-    /** Next item to hand out, next result for the sink; guarded by {@code this}. */
+    /** Next item to hand out, items folded by the sink; guarded by {@code this}. */
     private int next;
     private int delivered;
     private Throwable failure;
@@ -119,6 +119,7 @@ public final class OrderedParallel {
             break;
           }
           sink.accept(r);
+          folded(i + 1);
         }
       } catch (RuntimeException | Error e) {
         finish(-1, null, e);
@@ -162,9 +163,13 @@ public final class OrderedParallel {
       }
       R r = (R) results[i];
       results[i] = null;
-      delivered = i + 1;
-      notifyAll();
       return r;
+    }
+
+    /** The sink has folded the results before item {@code count}: the window moves on. */
+    private synchronized void folded(int count) {
+      delivered = count;
+      notifyAll();
     }
   }
 
