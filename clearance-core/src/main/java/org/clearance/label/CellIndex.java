@@ -11,14 +11,22 @@ import java.util.Arrays;
  * a cell by index. A query of one point finds each run by a binary search ({@link #within},
  * {@link #runs}); a {@link Sweep} over every occupied cell in order finds them by nine pointers
  * that only move forward (a neighbour column's key is the cell's key plus a constant), so the
- * runs are found once per cell for all its points, with no search. Memory: three doubles, two
- * ints and a long a point at most (two longs and an int more while it is built); at most
- * 2^21 - 3 cells along any axis.
+ * runs are found once per cell for all its points, with no search. The points are put in
+ * cell order by one sort of packed (cell, index) pairs. Memory: three doubles, an int and a
+ * long a point at most, and a long more while it is built (two longs and an int for a bounding
+ * box of more than {@link #PACKED_CELLS} cells); at most 2^21 - 3 cells along any axis.
  */
 final class CellIndex {
 
   /** Bits of a cell's coordinate along one axis in its key. */
   private static final int AXIS_BITS = 21;
+  /** Bits of a point index in a packed (cell, index) pair: any int index. */
+  private static final int INDEX_BITS = 31;
+  private static final long INDEX_MASK = (1L << INDEX_BITS) - 1;
+  /** Most cells of the bounding box for the packed sort: a dense cell number then takes at
+   * most 32 bits beside the index's 31 (a block window of 1.5 km x 1.5 km x 1 km in 1 m cells
+   * is 2.3 x 10^9 cells); a larger box takes the ranks by binary search. */
+  static final double PACKED_CELLS = 0x1p32;
 
   private final double[] x;
   private final double[] y;
@@ -69,6 +77,62 @@ final class CellIndex {
     minX = ax - 1;
     minY = ay - 1;
     minZ = az - 1;
+    order = new int[n];
+    sx = new double[n];
+    sy = new double[n];
+    sz = new double[n];
+    long spanY = by - minY + 2;
+    long spanZ = bz - minZ + 2;
+    long[][] cellKeys = new long[1][];
+    int[][] cellStarts = new int[1][];
+    if (n == 0 || (double) (bx - minX + 2) * spanY * spanZ <= PACKED_CELLS) {
+      packedSort(n, spanY, spanZ, cellKeys, cellStarts);
+    } else {
+      rankedSort(n, cellKeys, cellStarts);
+    }
+    keys = cellKeys[0];
+    start = cellStarts[0];
+  }
+
+  /**
+   * Sorts the points by one sort of (dense cell number, index) pairs, the dense number counting
+   * the bounding box's cells in (x, y, z) order: cells in key order, then index.
+   */
+  private void packedSort(int n, long spanY, long spanZ, long[][] cellKeys, int[][] cellStarts) {
+    long[] packed = new long[n];
+    for (int i = 0; i < n; i++) {
+      long dense = ((cellOf(x[i]) - minX) * spanY + cellOf(y[i]) - minY) * spanZ
+          + cellOf(z[i]) - minZ;
+      packed[i] = dense << INDEX_BITS | i;
+    }
+    Arrays.sort(packed);
+    long[] k = new long[Math.max(16, n / 4)];
+    int[] first = new int[k.length + 1];
+    int m = 0;
+    for (int t = 0; t < n; t++) {
+      int i = (int) (packed[t] & INDEX_MASK);
+      if (t == 0 || packed[t] >>> INDEX_BITS != packed[t - 1] >>> INDEX_BITS) {
+        if (m == k.length) {
+          k = Arrays.copyOf(k, 2 * m);
+          first = Arrays.copyOf(first, 2 * m + 1);
+        }
+        k[m] = key(cellOf(x[i]), cellOf(y[i]), cellOf(z[i]));
+        first[m++] = t;
+      }
+      order[t] = i;
+      sx[t] = x[i];
+      sy[t] = y[i];
+      sz[t] = z[i];
+    }
+    cellKeys[0] = Arrays.copyOf(k, m);
+    int[] s = Arrays.copyOf(first, m + 1);
+    s[m] = n;
+    cellStarts[0] = s;
+  }
+
+  /** Sorts the points by a counting sort on each point's cell rank, found by binary search among
+   * the sorted keys: for a bounding box of more than {@link #PACKED_CELLS} cells. */
+  private void rankedSort(int n, long[][] cellKeys, int[][] cellStarts) {
     long[] key = new long[n];
     for (int i = 0; i < n; i++) {
       key[i] = key(cellOf(x[i]), cellOf(y[i]), cellOf(z[i]));
@@ -81,22 +145,18 @@ final class CellIndex {
         sorted[m++] = sorted[i];
       }
     }
-    keys = Arrays.copyOf(sorted, m);
+    long[] k = Arrays.copyOf(sorted, m);
     // counting sort of the points by cell rank: stable, so a cell's points stay in index order
     int[] rank = new int[n];
-    start = new int[m + 1];
+    int[] s = new int[m + 1];
     for (int i = 0; i < n; i++) {
-      rank[i] = Arrays.binarySearch(keys, key[i]);
-      start[rank[i] + 1]++;
+      rank[i] = Arrays.binarySearch(k, key[i]);
+      s[rank[i] + 1]++;
     }
     for (int c = 0; c < m; c++) {
-      start[c + 1] += start[c];
+      s[c + 1] += s[c];
     }
-    int[] at = Arrays.copyOf(start, m);
-    order = new int[n];
-    sx = new double[n];
-    sy = new double[n];
-    sz = new double[n];
+    int[] at = Arrays.copyOf(s, m);
     for (int i = 0; i < n; i++) {
       int t = at[rank[i]]++;
       order[t] = i;
@@ -104,6 +164,8 @@ final class CellIndex {
       sy[t] = y[i];
       sz[t] = z[i];
     }
+    cellKeys[0] = k;
+    cellStarts[0] = s;
   }
 
   private long cellOf(double v) {
