@@ -66,24 +66,30 @@ record LocalShape(double linearity, double planarity, double scattering, double 
    * vector), turned so its z component is not negative; (0, 0, 1) when the rank is lower.
    */
   static double[] nullVector(double a, double b, double c, double d, double e, double f) {
-    double[][] rows = {{a, b, c}, {b, d, e}, {c, e, f}};
-    double[] best = {0, 0, 1};
+    // the rows' cross products (0, 1), (0, 2), (1, 2) in that order, the first largest kept
+    double bx = 0;
+    double by = 0;
+    double bz = 1;
     double bestNorm = 0;
-    for (int i = 0; i < 2; i++) {
-      for (int j = i + 1; j < 3; j++) {
-        double[] u = rows[i];
-        double[] v = rows[j];
-        double x = u[1] * v[2] - u[2] * v[1];
-        double y = u[2] * v[0] - u[0] * v[2];
-        double z = u[0] * v[1] - u[1] * v[0];
-        double norm = Math.sqrt(x * x + y * y + z * z);
-        if (norm > bestNorm) {
-          bestNorm = norm;
-          double sign = z < 0 ? -1 : 1;
-          best = new double[] {sign * x / norm, sign * y / norm, sign * z / norm};
-        }
+    for (int pair = 0; pair < 3; pair++) {
+      double u0 = pair == 2 ? b : a;
+      double u1 = pair == 2 ? d : b;
+      double u2 = pair == 2 ? e : c;
+      double v0 = pair == 0 ? b : c;
+      double v1 = pair == 0 ? d : e;
+      double v2 = pair == 0 ? e : f;
+      double x = u1 * v2 - u2 * v1;
+      double y = u2 * v0 - u0 * v2;
+      double z = u0 * v1 - u1 * v0;
+      double norm = Math.sqrt(x * x + y * y + z * z);
+      if (norm > bestNorm) {
+        bestNorm = norm;
+        double sign = z < 0 ? -1 : 1;
+        bx = sign * x / norm;
+        by = sign * y / norm;
+        bz = sign * z / norm;
       }
     }
-    return best;
+    return new double[] {bx, by, bz};
   }
 }

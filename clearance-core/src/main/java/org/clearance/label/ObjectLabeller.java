@@ -310,41 +310,84 @@ public final class ObjectLabeller {
     return out;
   }
 
-  /** Steps 2-6 on sorted points, with the survey's echoes read or not. */
+  /**
+   * Steps 2-6 on sorted points, with the survey's echoes read or not.
+   *
+   * <p>The points are taken cell by cell ({@link CellIndex.Sweep}: the 9 column runs found once
+   * per cell), each point's neighbours in the index's order, so its sums are added in the same
+   * order, and give the same doubles, whatever order the points are taken in. Each linked pair
+   * is joined once (by its later point); a union keeps the smaller root, so every object's root
+   * is its least index whatever order the joins come in.
+   */
   static Judged judge(LabelPoints p, boolean echoes) {
     int n = p.size;
-    CellIndex index = new CellIndex(p.x, p.y, p.z, n, Math.max(RADIUS_M, LINK_M));
+    double cell = Math.max(RADIUS_M, LINK_M);
+    CellIndex index = new CellIndex(p.x, p.y, p.z, n, cell);
     LocalShape[] shape = new LocalShape[n];
     int[] parent = new int[n];
     for (int i = 0; i < n; i++) {
       parent[i] = i;
     }
-    double[] s = new double[10];
-    for (int i = 0; i < n; i++) {
-      Arrays.fill(s, 0);
-      final int me = i;
-      int[] myRoot = {i};
-      index.within(i, Math.max(RADIUS_M, LINK_M), (j, dx, dy, dz) -> {
-        if (dx * dx + dy * dy + dz * dz <= RADIUS_M * RADIUS_M) {
-          s[0]++;
-          s[1] += dx;
-          s[2] += dy;
-          s[3] += dz;
-          s[4] += dx * dx;
-          s[5] += dx * dy;
-          s[6] += dx * dz;
-          s[7] += dy * dy;
-          s[8] += dy * dz;
-          s[9] += dz * dz;
+    int[] order = index.order;
+    double[] sx = index.sx;
+    double[] sy = index.sy;
+    double[] sz = index.sz;
+    double r2 = cell * cell;
+    double radius2 = RADIUS_M * RADIUS_M;
+    double link2 = LINK_M * LINK_M;
+    CellIndex.Sweep sweep = index.sweep();
+    int[] from = sweep.from;
+    int[] to = sweep.to;
+    for (int c = 0; c < index.cells(); c++) {
+      sweep.moveTo(c);
+      for (int q = index.firstOf(c); q < index.firstOf(c + 1); q++) {
+        int i = order[q];
+        double px = sx[q];
+        double py = sy[q];
+        double pz = sz[q];
+        double s0 = 0;
+        double s1 = 0;
+        double s2 = 0;
+        double s3 = 0;
+        double s4 = 0;
+        double s5 = 0;
+        double s6 = 0;
+        double s7 = 0;
+        double s8 = 0;
+        double s9 = 0;
+        // i may have been joined already by a later point taken before it
+        int myRoot = DisjointSets.root(parent, i);
+        for (int k = 0; k < CellIndex.COLUMNS; k++) {
+          for (int t = from[k]; t < to[k]; t++) {
+            double dx = sx[t] - px;
+            double dy = sy[t] - py;
+            double dz = sz[t] - pz;
+            double d2 = dx * dx + dy * dy + dz * dz;
+            if (d2 > r2) {
+              continue;
+            }
+            if (d2 <= radius2) {
+              s0++;
+              s1 += dx;
+              s2 += dy;
+              s3 += dz;
+              s4 += dx * dx;
+              s5 += dx * dy;
+              s6 += dx * dz;
+              s7 += dy * dy;
+              s8 += dy * dz;
+              s9 += dz * dz;
+            }
+            int j = order[t];
+            // each pair once; a neighbour already in i's group needs no join
+            if (j < i && d2 <= link2 && parent[j] != myRoot) {
+              myRoot = DisjointSets.join(parent, myRoot, j);
+            }
+          }
         }
-        // each pair once (the link is symmetric; the root is the least index either way)
-        if (j < me && dx * dx + dy * dy + dz * dz <= LINK_M * LINK_M) {
-          myRoot[0] = DisjointSets.join(parent, myRoot[0], j);
+        if (s0 >= MIN_NEIGHBOURS) {
+          shape[i] = LocalShape.of((int) s0, s1, s2, s3, s4, s5, s6, s7, s8, s9);
         }
-      });
-      if (s[0] >= MIN_NEIGHBOURS) {
-        shape[i] = LocalShape.of((int) s[0], s[1], s[2], s[3], s[4], s[5], s[6], s[7], s[8],
-            s[9]);
       }
     }
     for (int i = 0; i < n; i++) {
@@ -375,23 +418,49 @@ public final class ObjectLabeller {
       count[root[i]]++;
       lowest[root[i]] = Math.min(lowest[root[i]], p.hag[i]);
     }
+    boolean anyFragment = false;
+    for (int i = 0; i < n && !anyFragment; i++) {
+      anyFragment = count[root[i]] < MIN_OBJECT_POINTS && lowest[root[i]] >= FLOAT_M;
+    }
+    if (!anyFragment) {
+      return;
+    }
     CellIndex wide = new CellIndex(p.x, p.y, p.z, n, ATTACH_M);
     ObjectKind[] verdict = new ObjectKind[n];
     boolean[] blocked = new boolean[n];
+    int[] order = wide.order;
+    int[] from = new int[CellIndex.COLUMNS];
+    int[] to = new int[CellIndex.COLUMNS];
+    double reach2 = ATTACH_M * ATTACH_M;
     for (int i = 0; i < n; i++) {
       int r = root[i];
       if (count[r] >= MIN_OBJECT_POINTS || lowest[r] < FLOAT_M || blocked[r]) {
         continue;
       }
-      wide.within(i, ATTACH_M, (j, dx, dy, dz) -> {
-        ObjectKind k = kindOf[root[j]];
-        if (k == ObjectKind.VEGETATION) {
-          blocked[r] = true;
-        } else if (k != null && k != ObjectKind.LINEAR && verdict[r] == null) {
-          // a fragment beside a wire may be a crown near the conductor: it stays vegetation
-          verdict[r] = k;
+      wide.runs(i, from, to);
+      double px = p.x[i];
+      double py = p.y[i];
+      double pz = p.z[i];
+      search:
+      for (int k = 0; k < CellIndex.COLUMNS; k++) {
+        for (int t = from[k]; t < to[k]; t++) {
+          double dx = wide.sx[t] - px;
+          double dy = wide.sy[t] - py;
+          double dz = wide.sz[t] - pz;
+          if (dx * dx + dy * dy + dz * dz > reach2) {
+            continue;
+          }
+          ObjectKind kind = kindOf[root[order[t]]];
+          if (kind == ObjectKind.VEGETATION) {
+            // blocked whatever else lies near: the rest of the search cannot change that
+            blocked[r] = true;
+            break search;
+          } else if (kind != null && kind != ObjectKind.LINEAR && verdict[r] == null) {
+            // a fragment beside a wire may be a crown near the conductor: it stays vegetation
+            verdict[r] = kind;
+          }
         }
-      });
+      }
     }
     for (int r = 0; r < n; r++) {
       if (verdict[r] != null && !blocked[r] && root[r] == r) {

@@ -22,64 +22,72 @@ public final class Eigen3 {
    * @return eigenvalues sorted from largest and the principal direction
    */
   public static Result symmetric(double a, double b, double c, double d, double e, double f) {
-    double[][] m = {{a, b, c}, {b, d, e}, {c, e, f}};
-    double[][] v = {{1, 0, 0}, {0, 1, 0}, {0, 0, 1}};
+    // row-major m[3 * row + column] and v likewise: the same arithmetic, in the same order, as
+    // two-dimensional arrays, without their row objects
+    double[] m = {a, b, c, b, d, e, c, e, f};
+    double[] v = {1, 0, 0, 0, 1, 0, 0, 0, 1};
     for (int sweep = 0; sweep < MAX_SWEEPS; sweep++) {
-      double off = m[0][1] * m[0][1] + m[0][2] * m[0][2] + m[1][2] * m[1][2];
-      double diag = m[0][0] * m[0][0] + m[1][1] * m[1][1] + m[2][2] * m[2][2];
+      double off = m[1] * m[1] + m[2] * m[2] + m[5] * m[5];
+      double diag = m[0] * m[0] + m[4] * m[4] + m[8] * m[8];
       if (off <= DIAGONAL_ENOUGH * diag || off == 0) {
         break;
       }
-      for (int p = 0; p < 2; p++) {
-        for (int q = p + 1; q < 3; q++) {
-          rotate(m, v, p, q);
-        }
-      }
+      rotate(m, v, 0, 1);
+      rotate(m, v, 0, 2);
+      rotate(m, v, 1, 2);
     }
-    int[] order = {0, 1, 2};
-    for (int i = 0; i < 2; i++) {
-      for (int j = i + 1; j < 3; j++) {
-        if (m[order[j]][order[j]] > m[order[i]][order[i]]) {
-          int t = order[i];
-          order[i] = order[j];
-          order[j] = t;
-        }
-      }
+    int o0 = 0;
+    int o1 = 1;
+    int o2 = 2;
+    // the three swaps of a selection sort from largest, as (i, j) = (0, 1), (0, 2), (1, 2)
+    if (m[4 * o1] > m[4 * o0]) {
+      int t = o0;
+      o0 = o1;
+      o1 = t;
     }
-    int k = order[0];
-    return new Result(m[order[0]][order[0]], m[order[1]][order[1]], m[order[2]][order[2]],
-        v[0][k], v[1][k], v[2][k]);
+    if (m[4 * o2] > m[4 * o0]) {
+      int t = o0;
+      o0 = o2;
+      o2 = t;
+    }
+    if (m[4 * o2] > m[4 * o1]) {
+      int t = o1;
+      o1 = o2;
+      o2 = t;
+    }
+    return new Result(m[4 * o0], m[4 * o1], m[4 * o2], v[o0], v[3 + o0], v[6 + o0]);
   }
 
   /** One Jacobi rotation zeroing m[p][q]; accumulates the eigenvectors as columns of v. */
-  private static void rotate(double[][] m, double[][] v, int p, int q) {
-    if (m[p][q] == 0) {
+  private static void rotate(double[] m, double[] v, int p, int q) {
+    double mpq = m[3 * p + q];
+    if (mpq == 0) {
       return;
     }
-    double theta = (m[q][q] - m[p][p]) / (2 * m[p][q]);
+    double theta = (m[4 * q] - m[4 * p]) / (2 * mpq);
     double t = Math.signum(theta) / (Math.abs(theta) + Math.sqrt(theta * theta + 1));
     if (theta == 0) {
       t = 1;
     }
     double cs = 1 / Math.sqrt(t * t + 1);
     double sn = t * cs;
-    for (int k = 0; k < 3; k++) {
-      double mkp = m[k][p];
-      double mkq = m[k][q];
-      m[k][p] = cs * mkp - sn * mkq;
-      m[k][q] = sn * mkp + cs * mkq;
+    for (int k = 0; k < 9; k += 3) {
+      double mkp = m[k + p];
+      double mkq = m[k + q];
+      m[k + p] = cs * mkp - sn * mkq;
+      m[k + q] = sn * mkp + cs * mkq;
     }
     for (int k = 0; k < 3; k++) {
-      double mpk = m[p][k];
-      double mqk = m[q][k];
-      m[p][k] = cs * mpk - sn * mqk;
-      m[q][k] = sn * mpk + cs * mqk;
+      double mpk = m[3 * p + k];
+      double mqk = m[3 * q + k];
+      m[3 * p + k] = cs * mpk - sn * mqk;
+      m[3 * q + k] = sn * mpk + cs * mqk;
     }
-    for (int k = 0; k < 3; k++) {
-      double vkp = v[k][p];
-      double vkq = v[k][q];
-      v[k][p] = cs * vkp - sn * vkq;
-      v[k][q] = sn * vkp + cs * vkq;
+    for (int k = 0; k < 9; k += 3) {
+      double vkp = v[k + p];
+      double vkq = v[k + q];
+      v[k + p] = cs * vkp - sn * vkq;
+      v[k + q] = sn * vkp + cs * vkq;
     }
   }
 }

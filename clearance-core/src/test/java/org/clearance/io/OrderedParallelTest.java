@@ -3,6 +3,7 @@ package org.clearance.io;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertSame;
 import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.ArrayList;
 import java.util.List;
@@ -37,6 +38,47 @@ class OrderedParallelTest {
         }));
     assertSame(boom, thrown);
     assertThrows(IllegalArgumentException.class, () -> OrderedParallel.map(List.of(1), 0, i -> i));
+  }
+
+  /** The sliding window: items computed but not yet folded stay at most
+   * {@link OrderedParallel#ITEMS_PER_WORKER} per thread, also while the sink is slow; a failure
+   * of the sink or of an item reaches the caller. */
+  @Test
+  void windowBoundsTheResultsHeld() {
+    List<Integer> items = IntStream.range(0, 60).boxed().toList();
+    for (int threads : new int[] {2, 3}) {
+      java.util.concurrent.atomic.AtomicInteger computed = new java.util.concurrent.atomic.AtomicInteger();
+      int[] folded = {0};
+      int[] most = {0};
+      List<Long> got = new ArrayList<>();
+      OrderedParallel.forEach(items, threads, i -> {
+        computed.incrementAndGet();
+        return slowSquare(i);
+      }, r -> {
+        most[0] = Math.max(most[0], computed.get() - folded[0]);
+        got.add(r);
+        slowSquare(6);
+        folded[0]++;
+      });
+      assertEquals(items.stream().map(OrderedParallelTest::slowSquare).toList(), got);
+      assertTrue(most[0] <= threads * OrderedParallel.ITEMS_PER_WORKER,
+          threads + " threads held " + most[0]);
+    }
+    IllegalStateException boom = new IllegalStateException("sink");
+    assertSame(boom, assertThrows(IllegalStateException.class, () -> OrderedParallel.forEach(
+        items, 2, i -> i, r -> {
+          if (r == 7) {
+            throw boom;
+          }
+        })));
+    IllegalStateException item = new IllegalStateException("item");
+    assertSame(item, assertThrows(IllegalStateException.class, () -> OrderedParallel.forEach(
+        items, 2, i -> {
+          if (i == 30) {
+            throw item;
+          }
+          return i;
+        }, r -> { })));
   }
 
   private static long slowSquare(int i) {

@@ -1,5 +1,6 @@
 package org.clearance.label;
 
+import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
@@ -12,12 +13,24 @@ import org.junit.jupiter.api.Test;
 /**
  * The neighbour search finds exactly the points a brute-force search finds (computed: every pair
  * tested), and visits them in the order the labelling's sums depend on: cells (cubes of the cell
- * size from the origin) in (x, y, z) order, then point index.
+ * size from the origin) in (x, y, z) order, then point index; the sweep over the cells finds the
+ * same runs as a query of each point.
  */
 class CellIndexTest {
 
   @Test
   void sameNeighboursInCellOrderAsBruteForce() {
+    check(0);
+  }
+
+  /** Three clusters 600 km apart and 1.2 km above one another: a bounding box of more than
+   * {@link CellIndex#PACKED_CELLS} cells, sorted by ranks instead of packed pairs. */
+  @Test
+  void sameNeighboursInAWideBox() {
+    check(600_000);
+  }
+
+  private static void check(double spread) {
     SplittableRandom rng = new SplittableRandom(3);
     int n = 3000;
     double[] x = new double[n];
@@ -25,9 +38,10 @@ class CellIndexTest {
     double[] z = new double[n];
     for (int i = 0; i < n; i++) {
       // projected coordinates far from the origin, negative heights too, some duplicates
-      x[i] = 512_300 + rng.nextDouble(0, 12);
-      y[i] = i % 50 == 0 && i > 0 ? y[i - 1] : -4_100_200 + rng.nextDouble(0, 9);
-      z[i] = i % 50 == 0 && i > 0 ? z[i - 1] : rng.nextDouble(-3, 4);
+      double far = spread * (i % 3);
+      x[i] = 512_300 + rng.nextDouble(0, 12) + far;
+      y[i] = i % 50 == 0 && i > 0 ? y[i - 1] : -4_100_200 + rng.nextDouble(0, 9) + far;
+      z[i] = i % 50 == 0 && i > 0 ? z[i - 1] : rng.nextDouble(-3, 4) + far / 500;
       if (i % 50 == 0 && i > 0) {
         x[i] = x[i - 1];
       }
@@ -62,7 +76,25 @@ class CellIndexTest {
       assertEquals(expected, got, "point " + i);
       visited += got.size();
     }
-    // the test can fail: the points have neighbours (at 3000 points in 432 m^3, about 29 each)
-    assertTrue(visited > 10L * n, "neighbours visited " + visited);
+    // the test can fail: the points have neighbours (at 3000 points in 432 m^3, about 29 each;
+    // a third of that in each of the three clusters of the wide box)
+    assertTrue(visited > (spread == 0 ? 10L : 5L) * n, "neighbours visited " + visited);
+    // the sweep, cell by cell, gives every point of a cell the runs its own query gives
+    CellIndex.Sweep sweep = index.sweep();
+    int[] from = new int[CellIndex.COLUMNS];
+    int[] to = new int[CellIndex.COLUMNS];
+    int swept = 0;
+    for (int c = 0; c < index.cells(); c++) {
+      sweep.moveTo(c);
+      for (int q = index.firstOf(c); q < index.firstOf(c + 1); q++) {
+        int i = index.order[q];
+        index.runs(i, from, to);
+        assertArrayEquals(from, sweep.from, "point " + i);
+        assertArrayEquals(to, sweep.to, "point " + i);
+        assertEquals(x[i], index.sx[q], 0.0);
+        swept++;
+      }
+    }
+    assertEquals(n, swept);
   }
 }
