@@ -169,8 +169,11 @@ public final class SparseGrid {
 
   /** Like {@link #accumulateMin} but keeps the highest value. */
   public void accumulateMax(double x, double y, double value) {
-    int col = checkedIndex(x);
-    int row = checkedIndex(y);
+    raise(checkedIndex(x), checkedIndex(y), value);
+  }
+
+  /** Raises cell {@code (col, row)} to {@code value} when that is higher (or the cell empty). */
+  public void raise(int col, int row, double value) {
     int tile = tiles.getOrCreate(key(col >> shift, row >> shift));
     int i = ((row & mask) << shift) | (col & mask);
     float v = (float) value;
@@ -299,6 +302,12 @@ public final class SparseGrid {
       }
     }
     return out;
+  }
+
+  /** Whether a tile holds cell {@code (col, row)}: false means the cell and every cell of its
+   * {@link #tileCells} x {@link #tileCells} tile are empty. */
+  public boolean hasTile(int col, int row) {
+    return tiles.id(key(col >> shift, row >> shift)) >= 0;
   }
 
   /** The number of the tile stored under {@code key}, or -1; read its cells (row-major within

@@ -4,6 +4,7 @@ import java.util.List;
 import java.util.Objects;
 import java.util.function.Consumer;
 import org.clearance.ground.HeightModel;
+import org.clearance.ground.SparseGrid;
 import org.clearance.line.SpanFrame;
 import org.clearance.survey.PointChunk;
 
@@ -48,8 +49,9 @@ final class CandidateCollector implements Consumer<PointChunk> {
     this.points = new SpanPoints[corridors.size()];
     this.seen = new long[corridors.size()];
     this.sortedOnce = new boolean[corridors.size()];
+    SparseGrid standing = StandingGrid.newRaster();
     for (int k = 0; k < points.length; k++) {
-      points[k] = new SpanPoints(corridors.get(k).zRef());
+      points[k] = new SpanPoints(corridors.get(k).zRef(), StandingGrid.shared(standing, k));
     }
   }
 
@@ -122,9 +124,10 @@ final class CandidateCollector implements Consumer<PointChunk> {
     return points[k];
   }
 
-  /** Drops the candidates of corridor k once its span is done, so memory falls as spans end. */
+  /** Drops the candidates of corridor k once its span is done, so memory falls as spans end
+   * (its standing grid stays, in the shared raster, outside the heap once that is large). */
   void release(int k) {
-    points[k] = new SpanPoints(corridors.get(k).zRef());
+    points[k] = new SpanPoints(corridors.get(k).zRef(), points[k].standing());
   }
 
   /** Number of survey points of any class that fell inside corridor k. */

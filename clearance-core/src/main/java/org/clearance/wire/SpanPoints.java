@@ -31,17 +31,26 @@ final class SpanPoints {
   private byte[] c = new byte[INITIAL];
   private long[] k = new long[INITIAL];
   private int n;
-  private final StandingGrid standing = new StandingGrid();
+  private final StandingGrid standing;
   /** Unlabelled points below the candidate floor near the conductors ({@link #low}), made on
    * first use (a buffer of low points holds none of its own). */
   private SpanPoints low;
 
   /** @param zRef reference elevation subtracted before storing, m, finite */
   SpanPoints(double zRef) {
+    this(zRef, new StandingGrid());
+  }
+
+  /**
+   * @param zRef reference elevation subtracted before storing, m, finite
+   * @param standing the span's grid of what stands ({@link StandingGrid#shared})
+   */
+  SpanPoints(double zRef, StandingGrid standing) {
     if (!Double.isFinite(zRef)) {
       throw new IllegalArgumentException("zRef must be finite: " + zRef);
     }
     this.zRef = zRef;
+    this.standing = java.util.Objects.requireNonNull(standing, "standing");
   }
 
   /** Adds one point: station, offset, elevation (all m), height above ground (m or NaN), class;
