@@ -18,7 +18,10 @@ import org.clearance.survey.PointChunk;
  * Every other point that is not ground, noise or a labelled wire (ASPRS class 2, 7, 18, 13,
  * 14), in a corridor below the candidate height or in the {@value StandingGrid#BAND_M} m band
  * around it, goes to the corridor's {@link StandingGrid}: the evidence of what stands under and
- * beside a small group of candidates ({@link PointEvidence}).
+ * beside a small group of candidates ({@link PointEvidence}). Points of class 0 or 1 at least the
+ * minimum height above ground in the band of {@link CrossingBand#BAND_M} around a corridor are
+ * kept apart: the clearance engine measures them, and a wire crossing the span is followed into
+ * them ({@link CrossingBand}).
  */
 final class CandidateCollector implements Consumer<PointChunk> {
   /** ASPRS class 0: created, never classified. */
@@ -36,6 +39,8 @@ final class CandidateCollector implements Consumer<PointChunk> {
   private final CorridorIndex index;
   private final HeightModel heights;
   private final SpanPoints[] points;
+  /** Per corridor, the open points in the band of {@link CrossingBand#BAND_M} around it. */
+  private final SpanPoints[] outer;
   private final long[] seen;
   private final boolean[] sortedOnce;
 
@@ -44,10 +49,12 @@ final class CandidateCollector implements Consumer<PointChunk> {
     this.index = Objects.requireNonNull(index, "index");
     this.heights = Objects.requireNonNull(heights, "heights");
     this.points = new SpanPoints[corridors.size()];
+    this.outer = new SpanPoints[corridors.size()];
     this.seen = new long[corridors.size()];
     this.sortedOnce = new boolean[corridors.size()];
     for (int k = 0; k < points.length; k++) {
       points[k] = new SpanPoints(corridors.get(k).zRef());
+      outer[k] = new SpanPoints(corridors.get(k).zRef());
     }
   }
 
@@ -78,7 +85,9 @@ final class CandidateCollector implements Consumer<PointChunk> {
         double s = f.station(x[i], y[i]);
         double e = f.offset(x[i], y[i]);
         boolean inside = corridor.contains(s, e);
-        if (!inside && !(standing && corridor.contains(s, e, StandingGrid.BAND_M))) {
+        boolean band = !inside && standing && corridor.contains(s, e, StandingGrid.BAND_M);
+        boolean beyond = !inside && open && corridor.contains(s, e, CrossingBand.BAND_M);
+        if (!inside && !band && !beyond) {
           continue;
         }
         if (inside) {
@@ -93,8 +102,13 @@ final class CandidateCollector implements Consumer<PointChunk> {
         }
         if (inside && (label || open && hag >= corridor.minHeightM())) {
           points[c].add(s, e, z[i], hag, k, SetAside.key(x[i], y[i], z[i]));
-        } else if (standing) {
+          continue;
+        }
+        if (inside || band) {
           points[c].standing().add(s, e, hag);
+        }
+        if (beyond && hag >= corridor.minHeightM()) {
+          outer[c].add(s, e, z[i], hag, k, SetAside.key(x[i], y[i], z[i]));
         }
       }
     }
@@ -104,6 +118,7 @@ final class CandidateCollector implements Consumer<PointChunk> {
   void absorb(CandidateCollector other) {
     for (int k = 0; k < points.length; k++) {
       points[k].addAll(other.points[k]);
+      outer[k].addAll(other.outer[k]);
       seen[k] += other.seen[k];
     }
   }
@@ -112,14 +127,25 @@ final class CandidateCollector implements Consumer<PointChunk> {
   SpanPoints sorted(int k) {
     if (!sortedOnce[k]) {
       points[k].sort();
+      outer[k].sort();
       sortedOnce[k] = true;
     }
     return points[k];
   }
 
+  /** The open points of the band around corridor k ({@link CrossingBand}), sorted by station
+   * (sorts in place, once: call after {@link #sorted}). */
+  SpanPoints outer(int k) {
+    if (!sortedOnce[k]) {
+      throw new IllegalStateException("outer before sorted: " + k);
+    }
+    return outer[k];
+  }
+
   /** Drops the candidates of corridor k once its span is done, so memory falls as spans end. */
   void release(int k) {
     points[k] = new SpanPoints(corridors.get(k).zRef());
+    outer[k] = new SpanPoints(corridors.get(k).zRef());
   }
 
   /** Number of survey points of any class that fell inside corridor k. */

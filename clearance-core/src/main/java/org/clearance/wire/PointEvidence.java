@@ -171,6 +171,22 @@ final class PointEvidence {
   static void setAside(SpanPoints p, boolean[] on, boolean[] linear, boolean[] crossing,
       SetAside wires, double floorM, double lengthM, double poleRadiusM,
       org.clearance.line.SpanFrame frame, List<ConductorCurve> curves, SetAside out) {
+    setAside(p, on, linear, crossing, wires, floorM, lengthM, poleRadiusM, frame, curves, null,
+        out);
+  }
+
+  /**
+   * As {@link #setAside(SpanPoints, boolean[], boolean[], boolean[], SetAside, double, double,
+   * double, org.clearance.line.SpanFrame, List, SetAside)}, with the open points of the band
+   * around the span's corridor.
+   *
+   * @param outer the open points in the band around the span's corridor ({@link CrossingBand}),
+   *     or null: the crossing wires are followed into them
+   */
+  static void setAside(SpanPoints p, boolean[] on, boolean[] linear, boolean[] crossing,
+      SetAside wires, double floorM, double lengthM, double poleRadiusM,
+      org.clearance.line.SpanFrame frame, List<ConductorCurve> curves, SpanPoints outer,
+      SetAside out) {
     int n = p.size();
     boolean[] fitted = onFittedCurves(p, frame, curves);
     boolean[] wire = new boolean[n];
@@ -237,12 +253,14 @@ final class PointEvidence {
     }
     byte[] own = ownWires(p, members, linear, crossing, vegetation, grid, frame, curves);
     IntList near = new IntList();
+    boolean[] crossed = new boolean[n];
     for (int i = 0; i < n; i++) {
       if (own[i] != 0 && !touched(grid, i, vegetation, near)) {
         if (own[i] == OWN_CONDUCTOR) {
           out.addWire(p.key(i));
         } else {
           out.addCrossing(p.key(i));
+          crossed[i] = true;
         }
       }
     }
@@ -269,7 +287,11 @@ final class PointEvidence {
         out.addWire(p.key(i));
       } else {
         out.addCrossing(p.key(i));
+        crossed[i] = true;
       }
+    }
+    if (outer != null) {
+      CrossingBand.setAside(p, crossed, vegetation, outer, out);
     }
   }
 
