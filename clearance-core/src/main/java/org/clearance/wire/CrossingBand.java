@@ -12,10 +12,11 @@ package org.clearance.wire;
  * 1, at least the candidate height above ground) of a band {@value #BAND_M} m wide around the
  * corridor apart ({@link CandidateCollector}); here the crossing wires are followed into them
  * point by point, as into a crown's group ({@link ConductorStrands#onCrossings}): a band point is
- * on a crossing wire when that wire's points within {@link ConductorStrands#CROSSING_REACH_M}
- * (at least {@link WirePiece#MIN_POINTS}; the corridor's crossing points and the band points
- * already shown to be on it) form a wire piece whose line the point continues ({@link
- * WireLine#continues}). Such a point is set aside as crossing unless vegetation lies within
+ * on a crossing wire when the wire points within {@link ConductorStrands#CROSSING_REACH_M} (at
+ * least {@link WirePiece#MIN_POINTS}; the corridor's points set aside as a crossing wire or as a
+ * wire nobody fitted, and the band points already shown to be on it) form one wire piece whose
+ * line the point continues ({@link WireLine#continues}); two wires within that reach make no
+ * piece, and nothing is set aside. Such a point is set aside as crossing unless vegetation lies within
  * {@link PointEvidence#TOUCH_M}: a band point not on the wire, or a vegetation point of the
  * corridor; then it is measured and marked touched ({@link SetAside#touchedWire}).
  *
@@ -37,7 +38,9 @@ final class CrossingBand {
    * Sets aside the band's points on the span's crossing wires.
    *
    * @param p the span's candidates
-   * @param crossed per candidate, true for a point set aside as a crossing wire's
+   * @param crossed per candidate, true for a point set aside as a crossing wire's or as a wire
+   *     nobody fitted (a group that is a wire piece or a long linear group: a crossing wire's
+   *     piece between crowns)
    * @param vegetation per candidate, true for a point measured as vegetation
    * @param outer the open points of the band (the same frame and reference elevation as p)
    * @param out where the points set aside go

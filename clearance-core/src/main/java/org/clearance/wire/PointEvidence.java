@@ -230,6 +230,9 @@ final class PointEvidence {
       piece[g] = members[g] != null && WirePiece.isPiece(p, members[g], count[g]);
     }
     boolean[] vegetation = new boolean[n];
+    // the points of wires nobody fitted set aside here: the crossing wires are followed from
+    // them into the band beyond the corridor (CrossingBand)
+    boolean[] unfitted = new boolean[n];
     for (int i = 0; i < n; i++) {
       int g = group[i];
       if (g < 0) {
@@ -238,6 +241,7 @@ final class PointEvidence {
       if (count[g] >= MIN_LINE_POINTS && lin[g] >= LINE_SHARE * count[g]
           && sMax[g] - sMin[g] >= MIN_LINE_RUN_M || piece[g]) {
         out.addWire(p.key(i));
+        unfitted[i] = true;
       } else if (count[g] <= MAX_AIRBORNE_POINTS && lowest[g] >= floorM + AIRBORNE_GAP_M
           && openBelow(p.standing(), sMin[g], sMax[g], eMin[g], eMax[g], lowest[g])) {
         out.addAirborne(p.key(i));
@@ -253,14 +257,13 @@ final class PointEvidence {
     }
     byte[] own = ownWires(p, members, linear, crossing, vegetation, grid, frame, curves);
     IntList near = new IntList();
-    boolean[] crossed = new boolean[n];
     for (int i = 0; i < n; i++) {
       if (own[i] != 0 && !touched(grid, i, vegetation, near)) {
         if (own[i] == OWN_CONDUCTOR) {
           out.addWire(p.key(i));
         } else {
           out.addCrossing(p.key(i));
-          crossed[i] = true;
+          unfitted[i] = true;
         }
       }
     }
@@ -287,11 +290,11 @@ final class PointEvidence {
         out.addWire(p.key(i));
       } else {
         out.addCrossing(p.key(i));
-        crossed[i] = true;
+        unfitted[i] = true;
       }
     }
     if (outer != null) {
-      CrossingBand.setAside(p, crossed, vegetation, outer, out);
+      CrossingBand.setAside(p, unfitted, vegetation, outer, out);
     }
   }
 
