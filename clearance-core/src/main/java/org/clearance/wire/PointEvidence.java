@@ -156,7 +156,8 @@ final class PointEvidence {
    */
   static void setAside(SpanPoints p, boolean[] on, boolean[] linear, boolean[] crossing,
       SetAside wires, double floorM, double lengthM, double poleRadiusM, SetAside out) {
-    setAside(p, on, linear, crossing, wires, floorM, lengthM, poleRadiusM, null, List.of(), out);
+    setAside(p, on, linear, crossing, wires, floorM, lengthM, poleRadiusM, null, List.of(), null,
+        out);
   }
 
   /**
@@ -167,19 +168,6 @@ final class PointEvidence {
    *
    * @param frame the span's frame (of the candidates' stations and offsets), or null
    * @param curves the span's fitted conductors' curves (none: no strand is looked for)
-   */
-  static void setAside(SpanPoints p, boolean[] on, boolean[] linear, boolean[] crossing,
-      SetAside wires, double floorM, double lengthM, double poleRadiusM,
-      org.clearance.line.SpanFrame frame, List<ConductorCurve> curves, SetAside out) {
-    setAside(p, on, linear, crossing, wires, floorM, lengthM, poleRadiusM, frame, curves, null,
-        out);
-  }
-
-  /**
-   * As {@link #setAside(SpanPoints, boolean[], boolean[], boolean[], SetAside, double, double,
-   * double, org.clearance.line.SpanFrame, List, SetAside)}, with the open points of the band
-   * around the span's corridor.
-   *
    * @param outer the open points in the band around the span's corridor ({@link CrossingBand}),
    *     or null: the crossing wires are followed into them
    */

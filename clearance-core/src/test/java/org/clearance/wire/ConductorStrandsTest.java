@@ -62,7 +62,7 @@ class ConductorStrandsTest {
     }
     SetAside out = SetAside.none();
     PointEvidence.setAside(p, none, lin, none, SetAside.none(), FLOOR_M, Double.NaN,
-        Double.NaN, FRAME, curves, out);
+        Double.NaN, FRAME, curves, null, out);
     return out;
   }
 
@@ -224,7 +224,7 @@ class ConductorStrandsTest {
     }
     SetAside out = SetAside.none();
     PointEvidence.setAside(p, none, none, crossing, SetAside.none(), FLOOR_M, Double.NaN,
-        Double.NaN, FRAME, List.of(), out);
+        Double.NaN, FRAME, List.of(), null, out);
     assertEquals(wireEnd - 1, count(out, 1, wireEnd, SetAside.Reason.CROSSING));
     assertEquals(0, count(out, wireEnd, nextKey, SetAside.Reason.CROSSING)
         + count(out, wireEnd, nextKey, SetAside.Reason.WIRE), "the crown");
@@ -263,7 +263,7 @@ class ConductorStrandsTest {
     }
     SetAside out = SetAside.none();
     PointEvidence.setAside(p, none, none, crossing, SetAside.none(), FLOOR_M, Double.NaN,
-        Double.NaN, FRAME, List.of(), out);
+        Double.NaN, FRAME, List.of(), null, out);
     assertEquals(SetAside.Reason.NONE, out.reason(beside), "the crown's point beside the wire");
     // the two wire points within 0.3 m of it are measured, the other 14 beyond the crossing
     // finder's 24 are followed into the group
