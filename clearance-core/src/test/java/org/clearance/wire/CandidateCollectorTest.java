@@ -127,4 +127,43 @@ class CandidateCollectorTest {
     assertEquals(1.2, low.hag(1), 1e-3);
     assertEquals(4, p.standing().highestIn(99.5, 100.5, -0.5, 0.5), 1e-3);
   }
+
+  /**
+   * The open points of the band beyond the corridor are kept apart ({@link CrossingBand}): the
+   * clearance engine measures them (issue 9: a crossing service line 0.1-0.5 m beyond the
+   * corridor's edge set span minima of the generated feeder).
+   */
+  @Test
+  void keepsOpenPointsOfTheBandApart() {
+    SyntheticCorridor c = SyntheticCorridor.standard(SyntheticCorridor.Mode.LABELLED, 1);
+    SpanLayout layout = Fixtures.layout(c);
+    WireFinder finder = new WireFinder(Fixtures.options(false));
+    Span span = layout.spans().get(0);
+    SpanCorridor corridor = finder.corridor(span, layout.lines().get(0).spec(), c);
+    CandidateCollector cc = new CandidateCollector(List.of(corridor),
+        new CorridorIndex(List.of(corridor.corners(CrossingBand.BAND_M))), c);
+    PointChunk chunk = new PointChunk(16);
+    double[][] at = {
+      {100, 14, 9, 1}, // inside the 15 m half-width: a candidate
+      {110, 16, 9, 1}, // unclassified, 9 m up, 1 m beyond the edge: in the band
+      {120, -19.9, 9, 0}, // never classified, 4.9 m beyond the edge: in the band
+      {130, 20.5, 9, 1}, // 5.5 m beyond the edge: nothing
+      {140, 17, 4, 1}, // in the band but below the 5 m candidate floor
+      {150, 17, 9, 5}, // high vegetation label: not an open point
+      {160, 17, 9, 14} // labelled conductor beyond the edge
+    };
+    for (double[] a : at) {
+      double x = span.frame().x(a[0], a[1]);
+      double y = span.frame().y(a[0], a[1]);
+      chunk.add(x, y, c.groundZ(x, y) + a[2], (int) a[3]);
+    }
+    cc.accept(chunk);
+    assertEquals(1, cc.sorted(0).size());
+    SpanPoints band = cc.outer(0);
+    assertEquals(2, band.size());
+    assertEquals(110, band.s(0), 1e-3);
+    assertEquals(-19.9, band.e(1), 1e-3);
+    // only points inside the corridor count as seen
+    assertEquals(1, cc.seen(0));
+  }
 }

@@ -107,12 +107,18 @@ class FeederModesTruthTest {
    * below the wire-candidate floor): seed 43, vertical framing, ground-only and unlabelled: the
    * neutral of span P208-P209 sags to 2.7-3.0 m over a dip, below the 3 m floor, and its lowest
    * points were measured as vegetation: 4 zone sites and 11 fall-in sites on the wire, minimum
-   * 1.312 m against a true 2.730 m (now wire: {@code org.clearance.wire.LowWirePoints}). Seed 42:
-   * a labelled site held by a larger site of the inferred runs ({@link #holds}).
+   * 1.312 m against a true 2.730 m (now wire: {@code org.clearance.wire.LowWirePoints}). Seed 42
+   * vertical: a labelled site held by a larger site of the inferred runs ({@link #holds}).
+   * Regression (issue 9, "the service line beyond the corridor", docs/wire-finder.md): span
+   * P206-P207, ground-only and unlabelled, minimum set by the crossing service line beyond the
+   * candidates' corridor (seeds 41 and 42 horizontal: 8.972 and 8.790 m against a true 9.886 and
+   * 9.222 m) and by its last point in a crown (seed 44 triangular: 4.888 m against 5.805 m, and a
+   * watch-zone site on it).
    */
   @Tag("slow")
   @ParameterizedTest(name = "seed {0}, {1}, {2}, 10 spans")
-  @CsvSource({"46, VERTICAL, METRE", "43, VERTICAL, METRE", "42, VERTICAL, METRE"})
+  @CsvSource({"46, VERTICAL, METRE", "43, VERTICAL, METRE", "42, VERTICAL, METRE",
+      "41, HORIZONTAL, METRE", "42, HORIZONTAL, METRE", "44, TRIANGULAR, METRE"})
   void tenSpansSameFindingsInEveryClassificationMode(long seed, Framing framing,
       LinearUnit unit) throws IOException {
     check(dir, FeederOptions.defaults().withSeed(seed).withSpanCount(10).withFraming(framing)
