@@ -33,11 +33,17 @@ final class CrownLabels {
    * or a line scatters only by its noise: 3 cm over a 1 m disc about 0.004; crowns 0.04 and more;
    * docs/labelling.md, "Thresholds and their sources"). */
   static final double MIN_SCATTERING = 0.03;
-  /** Linearity at or above which a neighbourhood is a line, whatever it scatters: the wire
-   * finder's linear-evidence threshold ({@link WireFinderOptions.Evidence#defaults}); a bundle
-   * of four at 0.45 m over 1 m reaches about 0.9 (computed: l1 = (2 m)^2 / 12, l2 = l3 =
-   * (0.225 m)^2). */
-  static final double MAX_LINEARITY = 0.8;
+  /** Linearity at or above which a neighbourhood whose principal direction runs along the span
+   * is a line, whatever it scatters: a bundle of four sub-conductors 0.45 m apart scatters like
+   * a volume over 1 m (l2 and l3 about (0.225 m)^2 against l1 about 0.25 m^2: linearity about
+   * 0.75, computed; {@code CrownLabelsTest}), a crown's neighbourhood has no direction
+   * (common practice, no source). */
+  static final double MAX_LINEARITY = 0.5;
+  /** Largest angle in plan between a line's principal direction and the span, and largest
+   * inclination, degrees: the wire finder's linear evidence ({@link
+   * WireFinderOptions.Evidence#defaults}). */
+  static final double MAX_PLAN_ANGLE_DEG = 15;
+  static final double MAX_INCLINATION_DEG = 35;
   /** Share of volume points among a labelled point's labelled neighbours that makes it a volume
    * point too: a wire point beside or inside a crown (common practice, no source). */
   static final double VOLUME_SHARE = 0.5;
@@ -84,7 +90,11 @@ final class CrownLabels {
         continue;
       }
       double linearity = (eig.l1() - eig.l2()) / eig.l1();
-      volume[i] = eig.l3() / eig.l1() > MIN_SCATTERING && linearity < MAX_LINEARITY;
+      double plan = Math.hypot(eig.v1x(), eig.v1y());
+      boolean along = Math.atan2(Math.abs(eig.v1y()), Math.abs(eig.v1x()))
+          <= Math.toRadians(MAX_PLAN_ANGLE_DEG)
+          && Math.atan2(Math.abs(eig.v1z()), plan) <= Math.toRadians(MAX_INCLINATION_DEG);
+      volume[i] = eig.l3() / eig.l1() > MIN_SCATTERING && !(linearity >= MAX_LINEARITY && along);
     }
     boolean[] demote = new boolean[n];
     int count = 0;
