@@ -12,14 +12,9 @@ import org.clearance.survey.PointChunk;
  * (package-private). One collector per reading thread; {@link #absorb} merges them.
  *
  * <p>Kept: points labelled as wires (ASPRS class 13 or 14) anywhere in a span's corridor, and
- * points never classified, unclassified or labelled vegetation (class 0, 1, 3, 4 or 5) at least
- * the corridor's minimum height above ground. A vegetation label is taken as an unclassified
- * point here (issue 9: labels trusted only as far as they are consistent): a vendor's classifier
- * that took a sparsely sampled wire for vegetation leaves its points in class 3-5, and the wire
- * is then found, and its points set aside, as in an unlabelled survey; a crown stays vegetation
- * by the evidence ({@link PointEvidence}). Every other class was given a meaning by the survey's
- * classifier (ground, building, noise, tower, ...) and is not a wire; withheld points are
- * skipped.
+ * points never classified or unclassified (class 0 or 1) at least the corridor's minimum height
+ * above ground. Every other class was given a meaning by the survey's classifier (ground,
+ * vegetation, building, noise, tower, ...) and is not a wire; withheld points are skipped.
  * Every other point that is not ground, noise or a labelled wire (ASPRS class 2, 7, 18, 13,
  * 14), in a corridor below the candidate height or in the {@value StandingGrid#BAND_M} m band
  * around it, goes to the corridor's {@link StandingGrid}: the evidence of what stands under and
@@ -30,9 +25,6 @@ final class CandidateCollector implements Consumer<PointChunk> {
   static final int NEVER_CLASSIFIED = 0;
   /** ASPRS class 1: unclassified. */
   static final int UNCLASSIFIED = 1;
-  /** ASPRS classes 3-5: low, medium and high vegetation. */
-  static final int LOW_VEGETATION = 3;
-  static final int HIGH_VEGETATION = 5;
   /** ASPRS class 2: ground. */
   static final int GROUND = 2;
   /** ASPRS class 7: low point (noise). */
@@ -76,8 +68,7 @@ final class CandidateCollector implements Consumer<PointChunk> {
       }
       int k = cls[i];
       boolean label = k == SpanPoints.SHIELD_CLASS || k == SpanPoints.CONDUCTOR_CLASS;
-      boolean open = k == NEVER_CLASSIFIED || k == UNCLASSIFIED
-          || k >= LOW_VEGETATION && k <= HIGH_VEGETATION;
+      boolean open = k == NEVER_CLASSIFIED || k == UNCLASSIFIED;
       boolean standing = !label && k != GROUND && k != LOW_NOISE && k != HIGH_NOISE;
       double hag = Double.NaN;
       boolean hagDone = false;

@@ -31,7 +31,7 @@ class CandidateCollectorTest {
       {100, 14.9, 10, 0}, // never classified, inside the half-width: kept
       {100, 15.1, 10, 13}, // labelled shield, outside the half-width
       {-2.5, 0, 10, 14}, // 2.5 m before the first structure: beyond the 2 m margin
-      {100, 0, 10, 5}, // high vegetation above the floor: kept (issue 9, a wire labelled 5)
+      {100, 0, 10, 5}, // high vegetation: classified as something else
       {100, 0, 10, 15}, // tower
       {100, 0, 10, 1} // withheld below
     };
@@ -43,7 +43,7 @@ class CandidateCollectorTest {
     chunk.flags()[at.length - 1] = PointChunk.FLAG_WITHHELD;
     cc.accept(chunk);
     SpanPoints p = cc.sorted(0);
-    assertEquals(4, p.size());
+    assertEquals(3, p.size());
     // every point of any class inside the corridor box counts as seen, withheld ones not
     assertEquals(6, cc.seen(0));
     assertEquals(14, p.cls(0), "sorted by station, then offset, elevation");
@@ -63,8 +63,7 @@ class CandidateCollectorTest {
     PointChunk chunk = new PointChunk(16);
     double[][] at = {
       {100, 0, 4, 1}, // unclassified crown, 4 m up (below the 5 m candidate floor): standing
-      {110, 0, 4, 5}, // high vegetation label below the floor: standing
-      {112, 0, 9, 5}, // high vegetation label above the floor: a candidate (issue 9)
+      {110, 0, 9, 5}, // high vegetation label above the floor: standing, not a candidate
       {120, 15.5, 9, 1}, // unclassified, in the 1 m band outside the 15 m half-width: standing
       {130, 16.5, 9, 1}, // beyond the band: nothing
       {140, 0, 3, 2}, // ground class: nothing
@@ -79,13 +78,13 @@ class CandidateCollectorTest {
     }
     cc.accept(chunk);
     SpanPoints p = cc.sorted(0);
-    assertEquals(2, p.size());
+    assertEquals(1, p.size());
     StandingGrid g = p.standing();
     assertEquals(3, g.cells());
     assertEquals(4, g.highestIn(99.5, 100.5, -0.5, 0.5), 1e-3);
-    assertEquals(4, g.highestIn(109.5, 110.5, -0.5, 0.5), 1e-3);
+    assertEquals(9, g.highestIn(109.5, 110.5, -0.5, 0.5), 1e-3);
     assertEquals(9, g.highestIn(119.5, 120.5, 15, 16), 1e-3);
     // the band point is not inside the corridor: not counted as seen
-    assertEquals(7, cc.seen(0));
+    assertEquals(6, cc.seen(0));
   }
 }
