@@ -11,18 +11,43 @@ import org.junit.jupiter.api.Test;
 /** Which survey points are kept per span while the survey streams by. */
 class CandidateCollectorTest {
 
+  /** The synthetic corridor's first span and its corridor. */
+  private static final class Scene {
+    final SyntheticCorridor c = SyntheticCorridor.standard(SyntheticCorridor.Mode.LABELLED, 1);
+    final Span span;
+    final SpanCorridor corridor;
+
+    Scene() {
+      SpanLayout layout = Fixtures.layout(c);
+      span = layout.spans().get(0);
+      corridor = new WireFinder(Fixtures.options(false))
+          .corridor(span, layout.lines().get(0).spec(), c);
+    }
+
+    /** A collector of the corridor, the index reaching {@code bandM} beyond it, m. */
+    CandidateCollector collector(double bandM) {
+      return new CandidateCollector(List.of(corridor),
+          new CorridorIndex(List.of(corridor.corners(bandM))), c);
+    }
+
+    /** Adds points {station, offset, height above ground, class} (m) to the chunk. */
+    void add(PointChunk chunk, double[][] at) {
+      for (double[] a : at) {
+        double x = span.frame().x(a[0], a[1]);
+        double y = span.frame().y(a[0], a[1]);
+        chunk.add(x, y, c.groundZ(x, y) + a[2], (int) a[3]);
+      }
+    }
+  }
+
   @Test
   void keepsWireLabelsAndHighUnclassifiedPointsInTheCorridorOnly() {
-    SyntheticCorridor c = SyntheticCorridor.standard(SyntheticCorridor.Mode.LABELLED, 1);
-    SpanLayout layout = Fixtures.layout(c);
-    WireFinder finder = new WireFinder(Fixtures.options(false));
-    Span span = layout.spans().get(0);
-    SpanCorridor corridor = finder.corridor(span, layout.lines().get(0).spec(), c);
+    Scene scene = new Scene();
+    SpanCorridor corridor = scene.corridor;
     // spec offsets up to 7 m plus the 8 m margin; unlabelled points from 0.25 x 20 m = 5 m up
     assertEquals(15, corridor.halfWidthM(), 1e-12);
     assertEquals(5, corridor.minHeightM(), 1e-12);
-    CandidateCollector cc = new CandidateCollector(List.of(corridor),
-        new CorridorIndex(List.of(corridor.corners())), c);
+    CandidateCollector cc = scene.collector(0);
     PointChunk chunk = new PointChunk(16);
     double[][] at = {
       {100, 0, 6, 1}, // unclassified, 6 m up: kept
@@ -35,11 +60,7 @@ class CandidateCollectorTest {
       {100, 0, 10, 15}, // tower
       {100, 0, 10, 1} // withheld below
     };
-    for (double[] a : at) {
-      double x = span.frame().x(a[0], a[1]);
-      double y = span.frame().y(a[0], a[1]);
-      chunk.add(x, y, c.groundZ(x, y) + a[2], (int) a[3]);
-    }
+    scene.add(chunk, at);
     chunk.flags()[at.length - 1] = PointChunk.FLAG_WITHHELD;
     cc.accept(chunk);
     SpanPoints p = cc.sorted(0);
@@ -53,13 +74,8 @@ class CandidateCollectorTest {
   /** What stands under or beside the candidates goes to the span's {@link StandingGrid}. */
   @Test
   void recordsStandingPointsThatAreNotCandidates() {
-    SyntheticCorridor c = SyntheticCorridor.standard(SyntheticCorridor.Mode.LABELLED, 1);
-    SpanLayout layout = Fixtures.layout(c);
-    WireFinder finder = new WireFinder(Fixtures.options(false));
-    Span span = layout.spans().get(0);
-    SpanCorridor corridor = finder.corridor(span, layout.lines().get(0).spec(), c);
-    CandidateCollector cc = new CandidateCollector(List.of(corridor),
-        new CorridorIndex(List.of(corridor.corners(StandingGrid.BAND_M))), c);
+    Scene scene = new Scene();
+    CandidateCollector cc = scene.collector(StandingGrid.BAND_M);
     PointChunk chunk = new PointChunk(16);
     double[][] at = {
       {100, 0, 4, 1}, // unclassified crown, 4 m up (below the 5 m candidate floor): standing
@@ -71,11 +87,7 @@ class CandidateCollectorTest {
       {160, 0, 3, 14}, // labelled conductor: a candidate, not standing
       {170, 0, 0.2, 1} // unclassified ground return: under the grid's 0.5 m floor
     };
-    for (double[] a : at) {
-      double x = span.frame().x(a[0], a[1]);
-      double y = span.frame().y(a[0], a[1]);
-      chunk.add(x, y, c.groundZ(x, y) + a[2], (int) a[3]);
-    }
+    scene.add(chunk, at);
     cc.accept(chunk);
     SpanPoints p = cc.sorted(0);
     assertEquals(1, p.size());
@@ -95,14 +107,10 @@ class CandidateCollectorTest {
    */
   @Test
   void keepsLowUnclassifiedPointsNearTheConductorsApart() {
-    SyntheticCorridor c = SyntheticCorridor.standard(SyntheticCorridor.Mode.LABELLED, 1);
-    SpanLayout layout = Fixtures.layout(c);
-    WireFinder finder = new WireFinder(Fixtures.options(false));
-    Span span = layout.spans().get(0);
-    SpanCorridor corridor = finder.corridor(span, layout.lines().get(0).spec(), c);
+    Scene scene = new Scene();
+    SpanCorridor corridor = scene.corridor;
     assertEquals(10, corridor.lowHalfWidthM(), 1e-12);
-    CandidateCollector cc = new CandidateCollector(List.of(corridor),
-        new CorridorIndex(List.of(corridor.corners(StandingGrid.BAND_M))), c);
+    CandidateCollector cc = scene.collector(StandingGrid.BAND_M);
     PointChunk chunk = new PointChunk(16);
     double[][] at = {
       {100, 0, 4, 1}, // unclassified, 4 m up, below the 5 m floor: low
@@ -112,11 +120,7 @@ class CandidateCollectorTest {
       {104, 0, 4, 5}, // vegetation label: standing only
       {105, 0, 6, 1} // above the floor: a candidate
     };
-    for (double[] a : at) {
-      double x = span.frame().x(a[0], a[1]);
-      double y = span.frame().y(a[0], a[1]);
-      chunk.add(x, y, c.groundZ(x, y) + a[2], (int) a[3]);
-    }
+    scene.add(chunk, at);
     cc.accept(chunk);
     SpanPoints p = cc.sorted(0);
     assertEquals(1, p.size());
@@ -135,13 +139,8 @@ class CandidateCollectorTest {
    */
   @Test
   void keepsOpenPointsOfTheBandApart() {
-    SyntheticCorridor c = SyntheticCorridor.standard(SyntheticCorridor.Mode.LABELLED, 1);
-    SpanLayout layout = Fixtures.layout(c);
-    WireFinder finder = new WireFinder(Fixtures.options(false));
-    Span span = layout.spans().get(0);
-    SpanCorridor corridor = finder.corridor(span, layout.lines().get(0).spec(), c);
-    CandidateCollector cc = new CandidateCollector(List.of(corridor),
-        new CorridorIndex(List.of(corridor.corners(CrossingBand.BAND_M))), c);
+    Scene scene = new Scene();
+    CandidateCollector cc = scene.collector(CrossingBand.BAND_M);
     PointChunk chunk = new PointChunk(16);
     double[][] at = {
       {100, 14, 9, 1}, // inside the 15 m half-width: a candidate
@@ -152,11 +151,7 @@ class CandidateCollectorTest {
       {150, 17, 9, 5}, // high vegetation label: not an open point
       {160, 17, 9, 14} // labelled conductor beyond the edge
     };
-    for (double[] a : at) {
-      double x = span.frame().x(a[0], a[1]);
-      double y = span.frame().y(a[0], a[1]);
-      chunk.add(x, y, c.groundZ(x, y) + a[2], (int) a[3]);
-    }
+    scene.add(chunk, at);
     cc.accept(chunk);
     assertEquals(1, cc.sorted(0).size());
     SpanPoints band = cc.outer(0);
