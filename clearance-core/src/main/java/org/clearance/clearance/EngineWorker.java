@@ -137,8 +137,9 @@ final class EngineWorker implements Consumer<PointChunk> {
         continue;
       }
       boolean read = vegetation.candidateClass(cls[i]);
-      // a crown a vendor labelled wire (issue 9): measured as an unclassified point
-      boolean relabelled = !read && relabels && WireLabels.wireClass(cls[i])
+      // a crown a vendor labelled wire, building, tower or deck (issue 9): measured as an
+      // unclassified point
+      boolean relabelled = !read && relabels && WireLabels.judgedClass(cls[i])
           && setAside.labelDistrusted(SetAside.key(xs[i], ys[i], zs[i]));
       if (!read && !relabelled && !vegetation.mayBeUnread(cls[i])) {
         continue;

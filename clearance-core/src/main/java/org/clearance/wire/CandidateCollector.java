@@ -21,7 +21,10 @@ import org.clearance.survey.PointChunk;
  * around it, goes to the corridor's {@link StandingGrid}: the evidence of what stands under and
  * beside a small group of candidates ({@link PointEvidence}). Unlabelled points below the
  * candidate height near the conductors' offsets are kept apart as well ({@link SpanPoints#low}):
- * a conductor sagging below that height passes through them ({@link LowWirePoints}).
+ * a conductor sagging below that height passes through them ({@link LowWirePoints}). Points of
+ * class 0 or 1 at least the minimum height above ground in the band of {@link CrossingBand#BAND_M}
+ * around a corridor are kept apart: the clearance engine measures them, and a wire crossing the
+ * span is followed into them ({@link CrossingBand}).
  */
 final class CandidateCollector implements Consumer<PointChunk> {
   /** ASPRS class 0: created, never classified. */
@@ -39,6 +42,8 @@ final class CandidateCollector implements Consumer<PointChunk> {
   private final CorridorIndex index;
   private final HeightModel heights;
   private final SpanPoints[] points;
+  /** Per corridor, the open points in the band of {@link CrossingBand#BAND_M} around it. */
+  private final SpanPoints[] outer;
   private final long[] seen;
   private final boolean[] sortedOnce;
 
@@ -47,11 +52,13 @@ final class CandidateCollector implements Consumer<PointChunk> {
     this.index = Objects.requireNonNull(index, "index");
     this.heights = Objects.requireNonNull(heights, "heights");
     this.points = new SpanPoints[corridors.size()];
+    this.outer = new SpanPoints[corridors.size()];
     this.seen = new long[corridors.size()];
     this.sortedOnce = new boolean[corridors.size()];
     SparseGrid standing = StandingGrid.newRaster();
     for (int k = 0; k < points.length; k++) {
       points[k] = new SpanPoints(corridors.get(k).zRef(), StandingGrid.shared(standing, k));
+      outer[k] = new SpanPoints(corridors.get(k).zRef());
     }
   }
 
@@ -82,7 +89,9 @@ final class CandidateCollector implements Consumer<PointChunk> {
         double s = f.station(x[i], y[i]);
         double e = f.offset(x[i], y[i]);
         boolean inside = corridor.contains(s, e);
-        if (!inside && !(standing && corridor.contains(s, e, StandingGrid.BAND_M))) {
+        boolean band = !inside && standing && corridor.contains(s, e, StandingGrid.BAND_M);
+        boolean beyond = !inside && open && corridor.contains(s, e, CrossingBand.BAND_M);
+        if (!inside && !band && !beyond) {
           continue;
         }
         if (inside) {
@@ -97,11 +106,16 @@ final class CandidateCollector implements Consumer<PointChunk> {
         }
         if (inside && (label || open && hag >= corridor.minHeightM())) {
           points[c].add(s, e, z[i], hag, k, SetAside.key(x[i], y[i], z[i]));
-        } else if (standing) {
+          continue;
+        }
+        if (inside || band) {
           points[c].standing().add(s, e, hag);
           if (inside && open && corridor.holdsLow(e, hag)) {
             points[c].low().add(s, e, z[i], hag, k, SetAside.key(x[i], y[i], z[i]));
           }
+        }
+        if (beyond && hag >= corridor.minHeightM()) {
+          outer[c].add(s, e, z[i], hag, k, SetAside.key(x[i], y[i], z[i]));
         }
       }
     }
@@ -111,6 +125,7 @@ final class CandidateCollector implements Consumer<PointChunk> {
   void absorb(CandidateCollector other) {
     for (int k = 0; k < points.length; k++) {
       points[k].addAll(other.points[k]);
+      outer[k].addAll(other.outer[k]);
       seen[k] += other.seen[k];
     }
   }
@@ -119,15 +134,26 @@ final class CandidateCollector implements Consumer<PointChunk> {
   SpanPoints sorted(int k) {
     if (!sortedOnce[k]) {
       points[k].sort();
+      outer[k].sort();
       sortedOnce[k] = true;
     }
     return points[k];
+  }
+
+  /** The open points of the band around corridor k ({@link CrossingBand}), sorted by station
+   * (sorts in place, once: call after {@link #sorted}). */
+  SpanPoints outer(int k) {
+    if (!sortedOnce[k]) {
+      throw new IllegalStateException("outer before sorted: " + k);
+    }
+    return outer[k];
   }
 
   /** Drops the candidates of corridor k once its span is done, so memory falls as spans end
    * (its standing grid stays, in the shared raster, outside the heap once that is large). */
   void release(int k) {
     points[k] = new SpanPoints(corridors.get(k).zRef(), points[k].standing());
+    outer[k] = new SpanPoints(corridors.get(k).zRef());
   }
 
   /** Number of survey points of any class that fell inside corridor k. */

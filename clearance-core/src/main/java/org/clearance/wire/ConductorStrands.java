@@ -124,11 +124,19 @@ final class ConductorStrands {
 
   /**
    * The group's points that continue a wire crossing the span ({@link CrossingFinder}) into the
-   * group: a point is on the crossing wire when, with the crossing wire's points (and the
-   * group's points already shown to be on it) within {@link #CROSSING_REACH_M}, at least
-   * {@link WirePiece#MIN_POINTS} of them, it forms a wire piece ({@link WirePiece#isPiece}). The
-   * test is repeated from the points found, so a crossing wire is followed into a crown's group
-   * point by point; a crown's point off the wire's line breaks the piece and stays vegetation.
+   * group: a point is on the crossing wire when the crossing wire's points (and the group's
+   * points already shown to be on it) within {@link #CROSSING_REACH_M}, at least {@link
+   * WirePiece#MIN_POINTS} of them, form a wire piece and the point continues its line ({@link
+   * WireLine#continues}: within four robust standard deviations of the piece's own residuals,
+   * the line fitted without the point). The test is repeated from the points found, so a
+   * crossing wire is followed into a crown's group point by point; a crown's point off the
+   * wire's line stays vegetation.
+   *
+   * <p>Regression (issue 9, generated triangular feeder, seed 44, ground-only, span P206-P207):
+   * the point was tested by refitting the piece with it, within 0.16 m; a crown point 0.16 m
+   * beside the service line passed, tilted the line, and the service line's last point in the
+   * crown then failed, was measured as vegetation and set the span's minimum (4.888 m against a
+   * true 5.805 m) and a watch-zone site.
    *
    * @param p the span's candidates
    * @param members the group's points
@@ -160,11 +168,8 @@ final class ConductorStrands {
             buf[c++] = j;
           }
         }
-        if (c < WirePiece.MIN_POINTS) {
-          continue;
-        }
-        buf[c] = i;
-        if (WirePiece.isPiece(p, buf, c + 1)) {
+        WireLine line = WireLine.of(p, buf, c);
+        if (line != null && line.continues(p.s(i), p.e(i), p.z(i))) {
           known[i] = true;
           knownList.add(i);
           out[k] = true;

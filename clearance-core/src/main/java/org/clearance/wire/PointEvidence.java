@@ -157,7 +157,8 @@ final class PointEvidence {
    */
   static void setAside(SpanPoints p, boolean[] on, boolean[] linear, boolean[] crossing,
       SetAside wires, double floorM, double lengthM, double poleRadiusM, SetAside out) {
-    setAside(p, on, linear, crossing, wires, floorM, lengthM, poleRadiusM, null, List.of(), out);
+    setAside(p, on, linear, crossing, wires, floorM, lengthM, poleRadiusM, null, List.of(), null,
+        out);
   }
 
   /**
@@ -168,10 +169,13 @@ final class PointEvidence {
    *
    * @param frame the span's frame (of the candidates' stations and offsets), or null
    * @param curves the span's fitted conductors' curves (none: no strand is looked for)
+   * @param outer the open points in the band around the span's corridor ({@link CrossingBand}),
+   *     or null: the crossing wires are followed into them
    */
   static void setAside(SpanPoints p, boolean[] on, boolean[] linear, boolean[] crossing,
       SetAside wires, double floorM, double lengthM, double poleRadiusM,
-      org.clearance.line.SpanFrame frame, List<ConductorCurve> curves, SetAside out) {
+      org.clearance.line.SpanFrame frame, List<ConductorCurve> curves, SpanPoints outer,
+      SetAside out) {
     int n = p.size();
     boolean[] fitted = onFittedCurves(p, frame, curves);
     boolean[] wire = new boolean[n];
@@ -215,6 +219,9 @@ final class PointEvidence {
       piece[g] = members[g] != null && WirePiece.isPiece(p, members[g], count[g]);
     }
     boolean[] vegetation = new boolean[n];
+    // the points of wires nobody fitted set aside here: the crossing wires are followed from
+    // them into the band beyond the corridor (CrossingBand)
+    boolean[] unfitted = new boolean[n];
     for (int i = 0; i < n; i++) {
       int g = group[i];
       if (g < 0) {
@@ -223,6 +230,7 @@ final class PointEvidence {
       if (count[g] >= MIN_LINE_POINTS && lin[g] >= LINE_SHARE * count[g]
           && sMax[g] - sMin[g] >= MIN_LINE_RUN_M || piece[g]) {
         out.addWire(p.key(i));
+        unfitted[i] = true;
       } else if (count[g] <= MAX_AIRBORNE_POINTS && lowest[g] >= floorM + AIRBORNE_GAP_M
           && openBelow(p.standing(), sMin[g], sMax[g], eMin[g], eMax[g], lowest[g])) {
         out.addAirborne(p.key(i));
@@ -244,6 +252,7 @@ final class PointEvidence {
           out.addWire(p.key(i));
         } else {
           out.addCrossing(p.key(i));
+          unfitted[i] = true;
         }
       }
     }
@@ -270,9 +279,13 @@ final class PointEvidence {
         out.addWire(p.key(i));
       } else {
         out.addCrossing(p.key(i));
+        unfitted[i] = true;
       }
     }
     LowWirePoints.setAside(p, vegetation, frame, curves, out);
+    if (outer != null) {
+      CrossingBand.setAside(p, unfitted, vegetation, outer, out);
+    }
   }
 
   /**

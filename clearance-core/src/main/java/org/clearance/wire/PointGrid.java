@@ -60,10 +60,15 @@ final class PointGrid {
    * m, of point i, i itself included.
    */
   void within(int i, double radius, IntList out) {
+    within(p.s(i), p.e(i), p.z(i), radius, out);
+  }
+
+  /**
+   * Collects into {@code out} (cleared first) the indices of the points within {@code radius},
+   * m, of the place at station si, offset ei, elevation zi (m).
+   */
+  void within(double si, double ei, double zi, double radius, IntList out) {
     out.clear();
-    double si = p.s(i);
-    double ei = p.e(i);
-    double zi = p.z(i);
     long reach = (long) Math.ceil(radius / cell);
     long cs = cellOf(si);
     long ce = cellOf(ei);

@@ -227,6 +227,12 @@ final class SpanPoints {
     return k == SHIELD_CLASS || k == CONDUCTOR_CLASS;
   }
 
+  /** Takes a labelled point as unclassified (ASPRS class 1): its wire label is not trusted
+   * ({@link CrownLabels}). */
+  void unlabel(int i) {
+    c[i] = (byte) CandidateCollector.UNCLASSIFIED;
+  }
+
   /** Index of the first point with station &gt;= s (points sorted), in [0, size()]. */
   int firstAtOrAfter(double station) {
     int lo = 0;

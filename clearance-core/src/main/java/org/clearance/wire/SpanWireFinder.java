@@ -86,6 +86,7 @@ final class SpanWireFinder {
           false), new boolean[0], new boolean[0]);
     }
     double length = span.lengthM();
+    CrownLabels.demote(p);
     int labelledCount = 0;
     for (int i = 0; i < p.size(); i++) {
       labelledCount += p.labelled(i) ? 1 : 0;

@@ -11,7 +11,8 @@ import java.util.Set;
 /**
  * Groups the cells of a {@link TowerGrid} into towers (package-private): connected groups of
  * cells (8-neighbourhood) that hold class-15 points, or, in a survey without any, that hold tall
- * columns of unclassified points. See {@link StructureRefiner} for the tests a column passes.
+ * columns of unclassified points. Class-15 points make a tower only where they make such a
+ * column themselves (a crown labelled tower does not). See {@link StructureRefiner} for the tests a column passes.
  */
 final class TowerFinder {
 
@@ -60,7 +61,7 @@ final class TowerFinder {
           }
         }
       }
-      StructureRefiner.Tower t = labelled ? labelledTower(group, minPoints)
+      StructureRefiner.Tower t = labelled ? labelledTower(group, minPoints, topMin)
           : columnTower(group, minPoints, topMin);
       if (t != null) {
         out.add(t);
@@ -71,17 +72,33 @@ final class TowerFinder {
     return out;
   }
 
+  /**
+   * A tower of class-15 points, when they look like one: the column tests of {@link
+   * #columnTower} on the class-15 points' slices (issue 9: labels trusted only as far as they
+   * are consistent). A crown a vendor labelled tower stands on a trunk the lidar barely sees and
+   * ends below the conductors; taken for a tower it would cut the span at the crown.
+   */
   private static StructureRefiner.Tower labelledTower(List<TowerGrid.Cell> group,
-      int minPoints) {
+      int minPoints, double topMin) {
     int n = 0;
     double sx = 0;
     double sy = 0;
+    long slices = 0;
+    long minX = Long.MAX_VALUE;
+    long maxX = Long.MIN_VALUE;
+    long minY = Long.MAX_VALUE;
+    long maxY = Long.MIN_VALUE;
     for (TowerGrid.Cell c : group) {
       n += c.towerPoints;
       sx += c.towerSumX;
       sy += c.towerSumY;
+      slices |= c.towerSlices;
+      minX = Math.min(minX, c.cx);
+      maxX = Math.max(maxX, c.cx);
+      minY = Math.min(minY, c.cy);
+      maxY = Math.max(maxY, c.cy);
     }
-    if (n < minPoints) {
+    if (n < minPoints || !column(slices, minX, maxX, minY, maxY, topMin)) {
       return null;
     }
     return new StructureRefiner.Tower(sx / n, sy / n, n, "ASPRS class 15 (tower) points",
@@ -108,18 +125,36 @@ final class TowerFinder {
       minY = Math.min(minY, c.cy);
       maxY = Math.max(maxY, c.cy);
     }
+    if (n < minPoints || !column(slices, minX, maxX, minY, maxY, topMin)) {
+      return null;
+    }
+    int top = 63 - Long.numberOfLeadingZeros(slices);
+    return new StructureRefiner.Tower(sx / n, sy / n, n,
+        "column of unclassified points from near the ground to " + top + " m", false);
+  }
+
+  /**
+   * Whether occupied slices over a group of cells make a tower's column: no wider than {@link
+   * StructureRefiner#MAX_FOOTPRINT_M}, its top at least {@code topMin}, seen from the foot
+   * ({@link StructureRefiner#FOOT_SLICE}) and at {@link StructureRefiner#FILL_SHARE} of the
+   * metres up to the top.
+   *
+   * @param slices occupied one-metre slices above ground (bit k: k to k + 1 m)
+   * @param topMin lowest top, m
+   */
+  private static boolean column(long slices, long minX, long maxX, long minY, long maxY,
+      double topMin) {
+    if (slices == 0) {
+      return false;
+    }
     double wide = TowerGrid.CELL_M * Math.max(maxX - minX + 1, maxY - minY + 1);
     int top = 63 - Long.numberOfLeadingZeros(slices);
-    if (n < minPoints || top < topMin || wide > StructureRefiner.MAX_FOOTPRINT_M) {
-      return null;
+    if (top < topMin || wide > StructureRefiner.MAX_FOOTPRINT_M) {
+      return false;
     }
     int lowest = Long.numberOfTrailingZeros(slices);
     int filled = Long.bitCount(slices);
-    if (lowest > StructureRefiner.FOOT_SLICE
-        || filled < StructureRefiner.FILL_SHARE * (top - lowest + 1)) {
-      return null;
-    }
-    return new StructureRefiner.Tower(sx / n, sy / n, n,
-        "column of unclassified points from near the ground to " + top + " m", false);
+    return lowest <= StructureRefiner.FOOT_SLICE
+        && filled >= StructureRefiner.FILL_SHARE * (top - lowest + 1);
   }
 }

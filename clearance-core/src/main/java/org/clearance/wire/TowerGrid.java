@@ -12,8 +12,8 @@ import org.clearance.survey.PointChunk;
  * Tower evidence gathered while the survey streams by (package-private): a sparse plan grid of
  * {@link #CELL_M} cells over the areas where towers are looked for (discs around the structures
  * file's positions and bands along the spans), holding per cell the ASPRS class-15 (tower) points
- * and, for points never classified or unclassified (class 0, 1), which one-metre height slices
- * above ground are occupied. One grid per reading thread; {@link #absorb} merges them.
+ * and which one-metre height slices above ground they occupy, and, for points never classified or
+ * unclassified (class 0, 1), which one-metre height slices above ground are occupied. One grid per reading thread; {@link #absorb} merges them.
  */
 final class TowerGrid implements Consumer<PointChunk> {
 
@@ -31,6 +31,8 @@ final class TowerGrid implements Consumer<PointChunk> {
     int towerPoints;
     double towerSumX;
     double towerSumY;
+    /** One-metre height slices above ground occupied by class-15 points. */
+    long towerSlices;
     long slices;
     int openPoints;
     double openSumX;
@@ -98,14 +100,17 @@ final class TowerGrid implements Consumer<PointChunk> {
       if (!inside) {
         continue;
       }
+      double hag = heights.heightAboveGround(x[i], y[i], z[i]);
       if (tower) {
         Cell c = cell(x[i], y[i]);
         c.towerPoints++;
         c.towerSumX += x[i];
         c.towerSumY += y[i];
+        if (hag >= 0 && hag < SLICES) {
+          c.towerSlices |= 1L << (int) hag;
+        }
         continue;
       }
-      double hag = heights.heightAboveGround(x[i], y[i], z[i]);
       if (!(hag >= 0 && hag < SLICES)) {
         continue;
       }
@@ -134,6 +139,7 @@ final class TowerGrid implements Consumer<PointChunk> {
       c.towerPoints += o.towerPoints;
       c.towerSumX += o.towerSumX;
       c.towerSumY += o.towerSumY;
+      c.towerSlices |= o.towerSlices;
       c.slices |= o.slices;
       c.openPoints += o.openPoints;
       c.openSumX += o.openSumX;

@@ -139,15 +139,18 @@ public final class WireFinder {
   public static final class SpanFind {
     private final SpanWires wires;
     private final SpanPoints points;
+    private final SpanPoints outer;
     private final boolean[] onWire;
     private final boolean[] linear;
     private final boolean[] crossing;
     private final double floorM;
     private final double poleRadiusM;
 
-    SpanFind(SpanWireFinder.Found found, SpanPoints points, double floorM, double poleRadiusM) {
+    SpanFind(SpanWireFinder.Found found, SpanPoints points, SpanPoints outer, double floorM,
+        double poleRadiusM) {
       this.wires = found.wires();
       this.points = points;
+      this.outer = outer;
       this.onWire = found.onWire();
       this.linear = found.linear();
       this.crossing = found.crossing();
@@ -192,7 +195,8 @@ public final class WireFinder {
     public void setAside(SetAside wires, SetAside out) {
       if (onWire.length == points.size()) {
         PointEvidence.setAside(points, onWire, linear, crossing, wires, floorM,
-            wires().span().lengthM(), poleRadiusM, wires().span().frame(), fittedCurves(), out);
+            wires().span().lengthM(), poleRadiusM, wires().span().frame(), fittedCurves(),
+            outer, out);
       }
     }
   }
@@ -201,7 +205,7 @@ public final class WireFinder {
   private static CandidateCollector collect(PointSource source, List<SpanCorridor> corridors,
       HeightModel heights) {
     CorridorIndex index = new CorridorIndex(corridors.stream()
-        .map(c -> c.corners(StandingGrid.BAND_M)).toList());
+        .map(c -> c.corners(Math.max(StandingGrid.BAND_M, CrossingBand.BAND_M))).toList());
     List<CandidateCollector> collectors = Collections.synchronizedList(new ArrayList<>());
     source.stream(() -> {
       CandidateCollector c = new CandidateCollector(corridors, index, heights);
@@ -222,7 +226,7 @@ public final class WireFinder {
       Span span, LineSpec spec, ConductorEnds arms, SpanCorridor corridor, HeightModel heights) {
     SpanPoints p = all.sorted(idx);
     return new SpanFind(finder.findWithEvidence(p, all.seen(idx), span, spec,
-        groundAt(span.from(), heights), groundAt(span.to(), heights), arms), p,
+        groundAt(span.from(), heights), groundAt(span.to(), heights), arms), p, all.outer(idx),
         corridor.minHeightM(), isPoleLine(spec) ? PointEvidence.POLE_RADIUS_M : Double.NaN);
   }
 

@@ -11,18 +11,43 @@ import org.junit.jupiter.api.Test;
 /** Which survey points are kept per span while the survey streams by. */
 class CandidateCollectorTest {
 
+  /** The synthetic corridor's first span and its corridor. */
+  private static final class Scene {
+    final SyntheticCorridor c = SyntheticCorridor.standard(SyntheticCorridor.Mode.LABELLED, 1);
+    final Span span;
+    final SpanCorridor corridor;
+
+    Scene() {
+      SpanLayout layout = Fixtures.layout(c);
+      span = layout.spans().get(0);
+      corridor = new WireFinder(Fixtures.options(false))
+          .corridor(span, layout.lines().get(0).spec(), c);
+    }
+
+    /** A collector of the corridor, the index reaching {@code bandM} beyond it, m. */
+    CandidateCollector collector(double bandM) {
+      return new CandidateCollector(List.of(corridor),
+          new CorridorIndex(List.of(corridor.corners(bandM))), c);
+    }
+
+    /** Adds points {station, offset, height above ground, class} (m) to the chunk. */
+    void add(PointChunk chunk, double[][] at) {
+      for (double[] a : at) {
+        double x = span.frame().x(a[0], a[1]);
+        double y = span.frame().y(a[0], a[1]);
+        chunk.add(x, y, c.groundZ(x, y) + a[2], (int) a[3]);
+      }
+    }
+  }
+
   @Test
   void keepsWireLabelsAndHighUnclassifiedPointsInTheCorridorOnly() {
-    SyntheticCorridor c = SyntheticCorridor.standard(SyntheticCorridor.Mode.LABELLED, 1);
-    SpanLayout layout = Fixtures.layout(c);
-    WireFinder finder = new WireFinder(Fixtures.options(false));
-    Span span = layout.spans().get(0);
-    SpanCorridor corridor = finder.corridor(span, layout.lines().get(0).spec(), c);
+    Scene scene = new Scene();
+    SpanCorridor corridor = scene.corridor;
     // spec offsets up to 7 m plus the 8 m margin; unlabelled points from 0.25 x 20 m = 5 m up
     assertEquals(15, corridor.halfWidthM(), 1e-12);
     assertEquals(5, corridor.minHeightM(), 1e-12);
-    CandidateCollector cc = new CandidateCollector(List.of(corridor),
-        new CorridorIndex(List.of(corridor.corners())), c);
+    CandidateCollector cc = scene.collector(0);
     PointChunk chunk = new PointChunk(16);
     double[][] at = {
       {100, 0, 6, 1}, // unclassified, 6 m up: kept
@@ -35,11 +60,7 @@ class CandidateCollectorTest {
       {100, 0, 10, 15}, // tower
       {100, 0, 10, 1} // withheld below
     };
-    for (double[] a : at) {
-      double x = span.frame().x(a[0], a[1]);
-      double y = span.frame().y(a[0], a[1]);
-      chunk.add(x, y, c.groundZ(x, y) + a[2], (int) a[3]);
-    }
+    scene.add(chunk, at);
     chunk.flags()[at.length - 1] = PointChunk.FLAG_WITHHELD;
     cc.accept(chunk);
     SpanPoints p = cc.sorted(0);
@@ -53,13 +74,8 @@ class CandidateCollectorTest {
   /** What stands under or beside the candidates goes to the span's {@link StandingGrid}. */
   @Test
   void recordsStandingPointsThatAreNotCandidates() {
-    SyntheticCorridor c = SyntheticCorridor.standard(SyntheticCorridor.Mode.LABELLED, 1);
-    SpanLayout layout = Fixtures.layout(c);
-    WireFinder finder = new WireFinder(Fixtures.options(false));
-    Span span = layout.spans().get(0);
-    SpanCorridor corridor = finder.corridor(span, layout.lines().get(0).spec(), c);
-    CandidateCollector cc = new CandidateCollector(List.of(corridor),
-        new CorridorIndex(List.of(corridor.corners(StandingGrid.BAND_M))), c);
+    Scene scene = new Scene();
+    CandidateCollector cc = scene.collector(StandingGrid.BAND_M);
     PointChunk chunk = new PointChunk(16);
     double[][] at = {
       {100, 0, 4, 1}, // unclassified crown, 4 m up (below the 5 m candidate floor): standing
@@ -71,11 +87,7 @@ class CandidateCollectorTest {
       {160, 0, 3, 14}, // labelled conductor: a candidate, not standing
       {170, 0, 0.2, 1} // unclassified ground return: under the grid's 0.5 m floor
     };
-    for (double[] a : at) {
-      double x = span.frame().x(a[0], a[1]);
-      double y = span.frame().y(a[0], a[1]);
-      chunk.add(x, y, c.groundZ(x, y) + a[2], (int) a[3]);
-    }
+    scene.add(chunk, at);
     cc.accept(chunk);
     SpanPoints p = cc.sorted(0);
     assertEquals(1, p.size());
@@ -95,14 +107,10 @@ class CandidateCollectorTest {
    */
   @Test
   void keepsLowUnclassifiedPointsNearTheConductorsApart() {
-    SyntheticCorridor c = SyntheticCorridor.standard(SyntheticCorridor.Mode.LABELLED, 1);
-    SpanLayout layout = Fixtures.layout(c);
-    WireFinder finder = new WireFinder(Fixtures.options(false));
-    Span span = layout.spans().get(0);
-    SpanCorridor corridor = finder.corridor(span, layout.lines().get(0).spec(), c);
+    Scene scene = new Scene();
+    SpanCorridor corridor = scene.corridor;
     assertEquals(10, corridor.lowHalfWidthM(), 1e-12);
-    CandidateCollector cc = new CandidateCollector(List.of(corridor),
-        new CorridorIndex(List.of(corridor.corners(StandingGrid.BAND_M))), c);
+    CandidateCollector cc = scene.collector(StandingGrid.BAND_M);
     PointChunk chunk = new PointChunk(16);
     double[][] at = {
       {100, 0, 4, 1}, // unclassified, 4 m up, below the 5 m floor: low
@@ -112,11 +120,7 @@ class CandidateCollectorTest {
       {104, 0, 4, 5}, // vegetation label: standing only
       {105, 0, 6, 1} // above the floor: a candidate
     };
-    for (double[] a : at) {
-      double x = span.frame().x(a[0], a[1]);
-      double y = span.frame().y(a[0], a[1]);
-      chunk.add(x, y, c.groundZ(x, y) + a[2], (int) a[3]);
-    }
+    scene.add(chunk, at);
     cc.accept(chunk);
     SpanPoints p = cc.sorted(0);
     assertEquals(1, p.size());
@@ -126,5 +130,35 @@ class CandidateCollectorTest {
     assertEquals(4, low.hag(0), 1e-3);
     assertEquals(1.2, low.hag(1), 1e-3);
     assertEquals(4, p.standing().highestIn(99.5, 100.5, -0.5, 0.5), 1e-3);
+  }
+
+  /**
+   * The open points of the band beyond the corridor are kept apart ({@link CrossingBand}): the
+   * clearance engine measures them (issue 9: a crossing service line 0.1-0.5 m beyond the
+   * corridor's edge set span minima of the generated feeder).
+   */
+  @Test
+  void keepsOpenPointsOfTheBandApart() {
+    Scene scene = new Scene();
+    CandidateCollector cc = scene.collector(CrossingBand.BAND_M);
+    PointChunk chunk = new PointChunk(16);
+    double[][] at = {
+      {100, 14, 9, 1}, // inside the 15 m half-width: a candidate
+      {110, 16, 9, 1}, // unclassified, 9 m up, 1 m beyond the edge: in the band
+      {120, -19.9, 9, 0}, // never classified, 4.9 m beyond the edge: in the band
+      {130, 20.5, 9, 1}, // 5.5 m beyond the edge: nothing
+      {140, 17, 4, 1}, // in the band but below the 5 m candidate floor
+      {150, 17, 9, 5}, // high vegetation label: not an open point
+      {160, 17, 9, 14} // labelled conductor beyond the edge
+    };
+    scene.add(chunk, at);
+    cc.accept(chunk);
+    assertEquals(1, cc.sorted(0).size());
+    SpanPoints band = cc.outer(0);
+    assertEquals(2, band.size());
+    assertEquals(110, band.s(0), 1e-3);
+    assertEquals(-19.9, band.e(1), 1e-3);
+    // only points inside the corridor count as seen
+    assertEquals(1, cc.seen(0));
   }
 }

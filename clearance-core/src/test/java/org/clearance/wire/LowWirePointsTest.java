@@ -46,7 +46,7 @@ class LowWirePointsTest {
     boolean[] on = new boolean[p.size()];
     SetAside out = SetAside.none();
     PointEvidence.setAside(p, on, on, on, SetAside.none(), FLOOR_M, 80, Double.NaN, FRAME,
-        List.of(NEUTRAL), out);
+        List.of(NEUTRAL), null, out);
     return out;
   }
 
@@ -141,7 +141,7 @@ class LowWirePointsTest {
     boolean[] none = new boolean[p.size()];
     SetAside out = SetAside.none();
     PointEvidence.setAside(p, none, none, none, SetAside.none(), FLOOR_M, 80, Double.NaN, FRAME,
-        List.of(), out);
+        List.of(), null, out);
     assertEquals(0, out.wireCount());
   }
 

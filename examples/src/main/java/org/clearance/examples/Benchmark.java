@@ -90,6 +90,7 @@ public final class Benchmark {
       case GROUND_ONLY -> "ground-only";
       case UNCLASSIFIED -> "unclassified";
       case PARTLY_LABELLED -> "partly-labelled";
+      case WIRES_AS_VEGETATION -> "wires-as-vegetation";
     };
   }
 

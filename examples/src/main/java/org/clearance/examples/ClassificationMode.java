@@ -25,7 +25,13 @@ public enum ClassificationMode {
    * other tile is labelled as {@link #FULL} (without stray labels), the rest as
    * {@link #GROUND_ONLY}.
    */
-  PARTLY_LABELLED;
+  PARTLY_LABELLED,
+  /**
+   * As {@link #FULL} (without stray labels) but every wire point (13, 14) labelled high
+   * vegetation (5), as a vendor's classifier leaves a wire it sampled too sparsely to tell from
+   * a branch (issue 9: labels trusted only as far as they are consistent).
+   */
+  WIRES_AS_VEGETATION;
 
   /** Side of the tiles of {@link #PARTLY_LABELLED}, m. */
   static final double TILE_M = 100.0;
@@ -40,6 +46,8 @@ public enum ClassificationMode {
   static final int WATER_CLASS = 9;
   /** ASPRS class 18, high noise. */
   static final int HIGH_NOISE_CLASS = 18;
+  /** ASPRS class 5, high vegetation. */
+  static final int HIGH_VEGETATION_CLASS = 5;
   /** ASPRS class 13, wire - guard (shield). */
   static final int SHIELD_CLASS = 13;
   /** ASPRS class 14, wire - conductor (phase). */
@@ -79,6 +87,9 @@ public enum ClassificationMode {
       case PARTLY_LABELLED:
         return ((long) Math.floor(x / TILE_M) + (long) Math.floor(y / TILE_M)) % 2 == 0
             ? fullClass : GROUND_ONLY.label(fullClass);
+      case WIRES_AS_VEGETATION:
+        return fullClass == SHIELD_CLASS || fullClass == CONDUCTOR_CLASS
+            ? HIGH_VEGETATION_CLASS : fullClass;
       default:
         throw new AssertionError(this);
     }

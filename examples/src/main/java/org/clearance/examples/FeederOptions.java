@@ -85,6 +85,11 @@ public record FeederOptions(
         unit, displaceM);
   }
 
+  public FeederOptions withPointDensity(double d) {
+    return new FeederOptions(seed, spanCount, d, mode, framing, neutral, crossing, unit,
+        displaceM);
+  }
+
   public FeederOptions withMode(ClassificationMode m) {
     return new FeederOptions(seed, spanCount, pointDensity, m, framing, neutral, crossing,
         unit, displaceM);

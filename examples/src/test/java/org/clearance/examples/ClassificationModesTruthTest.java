@@ -73,7 +73,12 @@ class ClassificationModesTruthTest {
       // between (vegetation in class 1 beside vegetation in class 5; once read as labelled
       // only, the class-1 vegetation was never measured).
       "11, PARTLY_LABELLED, 0, false", "23, PARTLY_LABELLED, 0, false",
-      "41, PARTLY_LABELLED, 0, false", "11, PARTLY_LABELLED, 0, true"})
+      "41, PARTLY_LABELLED, 0, false", "11, PARTLY_LABELLED, 0, true",
+      // Wires labelled vegetation (5) on the sparse scan of these runs (2 pulses per m^2): the
+      // wire finder reads only 13/14 and 0/1 and finds no conductor; no span is reported clear
+      // and no wire point is a site (check 7).
+      "11, WIRES_AS_VEGETATION, 0, false", "23, WIRES_AS_VEGETATION, 0, false",
+      "37, WIRES_AS_VEGETATION, 3, false"})
   void findingsMatchTheTruthInEveryClassificationMode(long seed, ClassificationMode mode,
       double swingDeg, boolean manMade) throws IOException {
     DemoRuns.Run run = DemoRuns.of(DemoRuns.small(seed, mode).withSurveySwing(swingDeg)
@@ -228,17 +233,51 @@ class ClassificationModesTruthTest {
         }
       }
     }
+    // 7. Wires labelled vegetation: no site of any kind on a wire point, and no span reported
+    // assessed without a site where the fully labelled run has a zone site in it. Known gap,
+    // counted: the wire finder does not read class 3-5, so it finds no conductor where the
+    // wires are labelled 5 and such spans are NOT ASSESSED (docs/labelling.md).
+    int notAssessed = 0;
+    int onWire = 0;
+    int clearWhereFullHasSites = 0;
+    if (mode == ClassificationMode.WIRES_AS_VEGETATION) {
+      DemoRuns.Run full = DemoRuns.of(DemoRuns.small(seed, ClassificationMode.FULL)
+          .withSurveySwing(swingDeg).withManMade(manMade), PROFILE);
+      List<Site> fullSites = sites(full);
+      for (SpanRecord b : spans) {
+        notAssessed += b.status() == SpanStatus.NOT_ASSESSED ? 1 : 0;
+        boolean fullZone = fullSites.stream().anyMatch(f -> f.span().equals(b.id())
+            && !f.zone().equals("fall-in"));
+        boolean zone = sites.stream().anyMatch(f -> f.span().equals(b.id())
+            && !f.zone().equals("fall-in"));
+        clearWhereFullHasSites += fullZone && !zone && b.status() == SpanStatus.ASSESSED
+            ? 1 : 0;
+        System.out.println("wires labelled 5: span " + b.id() + " " + b.status() + "; "
+            + b.reason());
+      }
+      for (Site s : sites) {
+        Integer id = kindAt.get(key(s.x(), s.y(), s.z()));
+        if (id != null && (TruthId.kind(id) == TruthId.Kind.WIRE
+            || TruthId.kind(id) == TruthId.Kind.JUMPER)) {
+          onWire++;
+          System.out.println("site on a wire point: " + s);
+        }
+      }
+    }
     String figures = String.format(Locale.ROOT, "seed %d %s swing %.0f deg: worst survey-state"
         + " minimum error %.3f m; spans %d, spans with vegetation"
         + " in a zone %d, reported without a zone site %d; trees in a zone %d, without a site"
         + " %d; zone sites %d, not on vegetation %d; fall-in sites %d, not at a tree of that"
         + " height %d; sites on man-made objects %d (man-made points %d); fully labelled zone"
-        + " sites without a match %d", seed, mode,
+        + " sites without a match %d; spans not assessed %d, sites on wire points %d, spans"
+        + " assessed without a zone site where the fully labelled run has one %d", seed, mode,
         swingDeg, worstSurvey, spans.size(), spansWithZoneVegetation.size(), falseClear,
         zoneTrees.size(), missed, zoneSites, notVegetation, fallIn, fallInWrong, onManMade,
         kindAt.values().stream().filter(i -> TruthId.kind(i) == TruthId.Kind.MAN_MADE).count(),
-        fullWithoutMatch);
+        fullWithoutMatch, notAssessed, onWire, clearWhereFullHasSites);
     System.out.println(figures);
+    assertEquals(0, onWire, figures);
+    assertEquals(0, clearWhereFullHasSites, figures);
     assertTrue(worstSurvey <= SURVEY_TOL_M, figures);
     assertEquals(0, falseClear, figures);
     assertEquals(0, missed, figures);
@@ -246,7 +285,12 @@ class ClassificationModesTruthTest {
     assertEquals(0, fallInWrong, figures);
     assertEquals(0, onManMade, figures);
     assertEquals(0, fullWithoutMatch, figures);
-    assertTrue(zoneTrees.size() >= 3, figures);
+    if (mode != ClassificationMode.WIRES_AS_VEGETATION) {
+      assertTrue(zoneTrees.size() >= 3, figures);
+    } else {
+      // no conductor found: every span NOT ASSESSED, none reported clear (the known gap)
+      assertEquals(spans.size(), notAssessed, figures);
+    }
   }
 
   /** The highest tree point within {@link #TOP_RADIUS_M} of (x, y): x, y, z, or null. */
