@@ -74,9 +74,10 @@ final class PointEvidence {
    * WirePiece#strands}): most points of a wire show linear evidence; crowns measured on the demo
    * feeders hold 10-35 % (common practice, no source). */
   static final double STRANDS_LINEAR_SHARE = 0.5;
-  /** Plan radius around a pole kept out of the groups, m: the clearance engine's pole
-   * exclusion (ClearanceEngine.POLE_EXCLUSION_M, a later package), within which no point is
-   * measured. */
+  /** Plan radius around a pole kept out of the groups, m: the pole, its arms and hardware are
+   * no wire; such points stay vegetation here, and the clearance engine (a later package) sets
+   * aside only the pole's column (ClearanceEngine.POLE_COLUMN_M) and its arms, and measures the
+   * rest (issue 9: grass and shrubs beside a pole). */
   static final double POLE_RADIUS_M = 1.0;
   /** A wire point with vegetation this near is measured, not set aside, m. */
   static final double TOUCH_M = 0.3;
