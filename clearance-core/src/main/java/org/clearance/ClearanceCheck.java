@@ -336,7 +336,7 @@ public final class ClearanceCheck {
             line.spec().nominalVoltageKv(), line.spec().altitudeM(), span.lengthM(),
             line.spec().positionVoltagesKv());
         out.add(new SpanModel(span, context, models.getOrDefault(span.id(), List.of()),
-            WireFinder.isPoleLine(line.spec()) ? ClearanceEngine.POLE_EXCLUSION_M : Double.NaN));
+            WireFinder.isPoleLine(line.spec()) ? ClearanceEngine.POLE_COLUMN_M : Double.NaN));
       }
     }
     return out;

@@ -38,19 +38,6 @@ public final class ClearanceEngine {
   private static final int FLUSH_POINTS = 4096;
 
   /**
-   * Structure exclusion around a pole, m (issue 15, issue 9): what a pole line sets aside around
-   * a structure centre is the pole's own column, {@link #POLE_COLUMN_M}: a wood or steel pole is
-   * 0.25-0.45 m across, and the pole finder confirms a file position only within 0.2 m of the
-   * pole it locates (docs/wire-finder.md); its hardware sits on arms, which {@code
-   * StructureZone}'s arm box excludes apart. Grass, a shrub or a crown beside the pole, outside
-   * that column, is measured. It was 1 m: the grass 0.4-0.9 m from a pole then set generated
-   * feeders' span minima 6-10 cm above the truth (seed 44, vertical framing, ground-only, span
-   * P210-P211: 8.789 m against 8.692 m). The 8 m of a lattice tower would drop the vegetation
-   * along a sixth of a 100 m feeder span.
-   */
-  public static final double POLE_EXCLUSION_M = 0.5;
-
-  /**
    * Height above ground below which a point in a pole's column is measured, not taken for the
    * pole, m: low vegetation stands up to about 0.5 m (the split between low and medium
    * vegetation; common practice, no source), and at the pole's foot its returns and the pole's
@@ -61,11 +48,18 @@ public final class ClearanceEngine {
   public static final double POLE_FOOT_M = 0.5;
 
   /**
-   * Radius of a pole's own column of returns for pole-clearing zones, m: in a survey without
-   * vegetation labels, points closer than this in plan to a structure centre are taken to be
-   * the pole (counted in {@code pole-points.bin}, never measured as vegetation in a cylinder). A
-   * wood pole is 0.25-0.45 m across (issue 15): half the widest plus 0.275 m for the error of
-   * the centre position (common practice, no source).
+   * Radius of a pole's own column of returns, m (issue 15, issue 9): what a pole line sets aside
+   * around a structure centre (the structure exclusion of a pole line), and, in a survey without
+   * vegetation labels, the points taken to be the pole in pole-clearing zones (counted in {@code
+   * pole-points.bin}, never measured as vegetation in a cylinder). A wood or steel pole is
+   * 0.25-0.45 m across (issue 15): half the widest plus 0.275 m for the error of the centre
+   * position (the pole finder confirms a file position only within 0.2 m of the pole it
+   * locates, docs/wire-finder.md; common practice, no source). Its hardware sits on arms, which
+   * {@code StructureZone}'s arm box excludes apart. Grass, a shrub or a crown beside the pole,
+   * outside the column, is measured. The exclusion was 1 m: the grass 0.4-0.9 m from a pole then
+   * set generated feeders' span minima 6-10 cm above the truth (seed 44, vertical framing,
+   * ground-only, span P210-P211: 8.789 m against 8.692 m). The 8 m of a lattice tower would drop
+   * the vegetation along a sixth of a 100 m feeder span.
    */
   public static final double POLE_COLUMN_M = 0.5;
 

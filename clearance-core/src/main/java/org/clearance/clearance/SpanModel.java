@@ -13,7 +13,7 @@ import org.clearance.line.Span;
  * @param structureExclusionM in a survey without vegetation labels, points closer than this in
  *     plan to the span's structure centres are taken to be the structure, m; NaN for the
  *     engine's default (a lattice tower's reach): a pole line gives
- *     {@link ClearanceEngine#POLE_EXCLUSION_M}
+ *     {@link ClearanceEngine#POLE_COLUMN_M}
  */
 public record SpanModel(Span span, SpanContext context, List<ConductorModel> conductors,
     double structureExclusionM) {

@@ -39,7 +39,7 @@ final class StructureZone {
   /**
    * Whether a point lies within the structure exclusion radius of either end structure of the
    * span in plan: {@code exclusionM}, or the span's own smaller radius (a pole's column,
-   * {@link ClearanceEngine#POLE_EXCLUSION_M}). Within a pole's column a point lower than
+   * {@link ClearanceEngine#POLE_COLUMN_M}). Within a pole's column a point lower than
    * {@link ClearanceEngine#POLE_FOOT_M} above ground is not taken for the pole: grass at the
    * pole's foot cannot be told from the pole's lowest returns, and measuring both errs towards a
    * smaller distance, setting both aside towards a larger one (issue 9).

@@ -257,7 +257,7 @@ class ClearanceEngineTest {
         Catenary.through(0, 9.0, L, 9.0, C));
     SpanModel span = span(set, List.of(hangingOnly("A", a, 1)));
     SpanModel pole = new SpanModel(span.span(), span.context(), span.conductors(),
-        ClearanceEngine.POLE_EXCLUSION_M);
+        ClearanceEngine.POLE_COLUMN_M);
     ClearanceEngine engine = new ClearanceEngine(List.of(pole), set, (x, y, z) -> z,
         VegetationSelector.forSurvey(new long[256], null), ClearanceEngine.Options.defaults(1));
     double[][] pts = {
