@@ -181,6 +181,25 @@ final class ConductorStrands {
   }
 
   /**
+   * The span's candidates on a fitted conductor's curve (as {@link #onCurves(SpanPoints, int[],
+   * SpanFrame, List)}: within {@link WirePiece#TOL_M} in plan and elevation, between its
+   * attachments). They join no group ({@link PointEvidence#setAside}), so that a stray point of
+   * one conductor does not join the points of another one nobody fitted into a group that is no
+   * wire (issue 9, seed 50: a neutral's point joined the eleven points of an unfitted phase 1.4 m
+   * above it); they are set aside as wire unless vegetation touches them.
+   */
+  static boolean[] onCurves(SpanPoints p, SpanFrame frame, List<ConductorCurve> curves) {
+    if (frame == null || curves.isEmpty()) {
+      return new boolean[p.size()];
+    }
+    int[] all = new int[p.size()];
+    for (int i = 0; i < all.length; i++) {
+      all[i] = i;
+    }
+    return onCurves(p, all, frame, curves);
+  }
+
+  /**
    * The group's points on a fitted conductor's curve: within {@link WirePiece#TOL_M} of it in plan
    * and in elevation, between its attachments. A conductor fitted over part of the span leaves
    * its points in a coverage gap among the candidates (they were not members of its fit); beside

@@ -178,7 +178,7 @@ final class PointEvidence {
       org.clearance.line.SpanFrame frame, List<ConductorCurve> curves, SpanPoints outer,
       SetAside out) {
     int n = p.size();
-    boolean[] fitted = onFittedCurves(p, frame, curves);
+    boolean[] fitted = ConductorStrands.onCurves(p, frame, curves);
     boolean[] wire = new boolean[n];
     for (int i = 0; i < n; i++) {
       wire[i] = on[i] || fitted[i] || crossing[i] || p.labelled(i)
@@ -287,25 +287,6 @@ final class PointEvidence {
     if (outer != null) {
       CrossingBand.setAside(p, unfitted, vegetation, outer, out);
     }
-  }
-
-  /**
-   * The candidates on a fitted conductor's curve ({@link ConductorStrands#onCurves}: within
-   * {@link WirePiece#TOL_M} in plan and elevation, between its attachments). They join no group,
-   * so that a stray point of one conductor does not join the points of another one nobody fitted
-   * into a group that is no wire (issue 9, seed 50: a neutral's point joined the eleven points of
-   * an unfitted phase 1.4 m above it); they are set aside as wire unless vegetation touches them.
-   */
-  private static boolean[] onFittedCurves(SpanPoints p, org.clearance.line.SpanFrame frame,
-      List<ConductorCurve> curves) {
-    if (frame == null || curves.isEmpty()) {
-      return new boolean[p.size()];
-    }
-    int[] all = new int[p.size()];
-    for (int i = 0; i < all.length; i++) {
-      all[i] = i;
-    }
-    return ConductorStrands.onCurves(p, all, frame, curves);
   }
 
   /** {@link #ownWires}: a point of one of the line's own conductors. */
